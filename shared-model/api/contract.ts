@@ -1,0 +1,30 @@
+/**
+ * The API contract: every operation Pairwright offers, listed once. The operation names are the
+ * allowlist of both transports (Electron IPC and the browser host), and the renderer's client type
+ * is derived from this record. A new capability adds its own `*Operations` record here.
+ */
+import type { z } from 'zod';
+import { campaignOperations } from './campaigns';
+import { elementOperations } from './elements';
+import type { OperationSpec } from './operation';
+import { pairOperations } from './pairs';
+
+export const operations = {
+  ...campaignOperations,
+  ...pairOperations,
+  ...elementOperations,
+} satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
+
+export type Operations = typeof operations;
+export type OperationName = keyof Operations;
+/** What a caller passes (before defaults are applied). */
+export type OperationInput<Name extends OperationName> = z.input<Operations[Name]['input']>;
+/** What a service receives (after validation and defaults). */
+export type ValidatedInput<Name extends OperationName> = z.output<Operations[Name]['input']>;
+export type OperationOutput<Name extends OperationName> = NonNullable<Operations[Name]['output']>;
+
+export const OPERATION_NAMES = Object.keys(operations) as OperationName[];
+
+export function isOperationName(name: string): name is OperationName {
+  return Object.prototype.hasOwnProperty.call(operations, name);
+}

@@ -1,0 +1,47 @@
+/** zod building blocks shared by the API areas: ids, names, element symbols, pair strings. */
+import { z } from 'zod';
+import { isMetalSymbol, METAL_SYMBOLS } from '../elements/symbols';
+
+export const idSchema = z.number({ error: 'must be a number' }).int('must be a whole number').positive('must be a positive id');
+
+export const nameSchema = z
+  .string({ error: 'must be text' })
+  .trim()
+  .min(1, 'must not be empty')
+  .max(120, 'must be at most 120 characters');
+
+export const elementSymbolSchema = z
+  .string({ error: 'must be an element symbol' })
+  .trim()
+  .refine(isMetalSymbol, { error: (issue) => `unknown element "${String(issue.input)}"; known metals: ${METAL_SYMBOLS.join(' ')}` });
+
+/** "Pt-Ni", "Pt–Ni" or "PtNi" → ["Pt","Ni"]. */
+export function splitPair(text: string): [string, string] | null {
+  const trimmed = text.trim();
+  const dashed = /^([A-Za-z]{1,2})\s*[-–—/]\s*([A-Za-z]{1,2})$/.exec(trimmed);
+  const joined = /^([A-Z][a-z]?)([A-Z][a-z]?)$/.exec(trimmed);
+  const match = dashed ?? joined;
+  if (!match) return null;
+  const norm = (s: string) => s.charAt(0).toUpperCase() + s.slice(1).toLowerCase();
+  return [norm(match[1] as string), norm(match[2] as string)];
+}
+
+export const pairTextSchema = z.string({ error: 'must be a pair like "Pt-Ni"' }).transform((text, ctx) => {
+  const parts = splitPair(text);
+  if (!parts) {
+    ctx.addIssue({ code: 'custom', message: `"${text}" is not a pair; write it as A-B, e.g. Pt-Ni` });
+    return z.NEVER;
+  }
+  const [a, b] = parts;
+  for (const symbol of parts) {
+    if (!isMetalSymbol(symbol)) {
+      ctx.addIssue({ code: 'custom', message: `unknown element "${symbol}" in pair "${text}"` });
+      return z.NEVER;
+    }
+  }
+  if (a === b) {
+    ctx.addIssue({ code: 'custom', message: `a pair needs two different elements, got ${a}-${b}` });
+    return z.NEVER;
+  }
+  return { elementA: a, elementB: b };
+});
