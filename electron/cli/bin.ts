@@ -1,0 +1,3 @@
+import { cliMain } from './main';
+
+await cliMain();

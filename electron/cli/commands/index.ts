@@ -1,0 +1,9 @@
+/** Every CLI command; an area adds its list with one line. */
+import type { CliCommand } from '../command';
+import { campaignCommands } from './campaigns';
+import { pairCommands } from './pairs';
+
+export const commands: CliCommand[] = [
+  ...campaignCommands,
+  ...pairCommands,
+];

@@ -1,0 +1,111 @@
+/**
+ * `pairwright` command line: the same operations as the app, for scripts and quick looks.
+ * Human-readable tables by default, `--json` for scripts, `--data DIR` to choose the store.
+ * Bad input → one line on stderr and exit code 2; an unexpected failure → exit code 1.
+ */
+import { readFileSync, writeFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { openStore, type Store } from '../../db/store';
+import type { OperationInput, OperationName, OperationOutput } from '../../shared-model/api/contract';
+import { defaultDataDir } from '../paths';
+import { dispatchKnown } from '../services/dispatch';
+import { CliError, type CliCommand, type CliContext, type OptionSpec } from './command';
+import { commands } from './commands/index';
+
+const GLOBAL_OPTIONS: Record<string, OptionSpec> = {
+  json: { type: 'boolean', description: 'print JSON for scripts' },
+  data: { type: 'string', description: 'folder of the store (default: the desktop app\'s data folder)' },
+  help: { type: 'boolean', short: 'h', description: 'show help' },
+};
+
+function usageLine(command: CliCommand): string {
+  return `pairwright ${command.words.join(' ')}${command.args ? ` ${command.args}` : ''}`;
+}
+
+export function helpText(selected?: CliCommand): string {
+  if (selected) {
+    const lines = [`usage: ${usageLine(selected)} [options]`, '', selected.summary, '', 'options:'];
+    for (const [name, spec] of Object.entries({ ...selected.options, ...GLOBAL_OPTIONS })) {
+      lines.push(`  --${name}${spec.type === 'string' ? ' VALUE' : ''}`.padEnd(28) + spec.description);
+    }
+    return lines.join('\n');
+  }
+  const lines = ['Pairwright command line', '', 'commands:'];
+  for (const command of commands) lines.push(`  ${usageLine(command)}`.padEnd(52) + command.summary);
+  lines.push('', 'every command takes --json (machine-readable output), --data DIR (choose the store) and --help');
+  return lines.join('\n');
+}
+
+function findCommand(argv: readonly string[]): { command: CliCommand; rest: string[] } | null {
+  const words = argv.filter((arg) => !arg.startsWith('-'));
+  let best: CliCommand | null = null;
+  for (const command of commands) {
+    const matches = command.words.every((word, index) => words[index] === word);
+    if (matches && (!best || command.words.length > best.words.length)) best = command;
+  }
+  if (!best) return null;
+  const rest = [...argv];
+  for (const word of best.words) rest.splice(rest.indexOf(word), 1);
+  return { command: best, rest };
+}
+
+export interface CliRunResult {
+  exitCode: number;
+  stdout: string;
+  stderr: string;
+}
+
+/** Runs one CLI invocation; exported so tests and the bin script share it. */
+export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = process.env): Promise<CliRunResult> {
+  const found = findCommand(argv);
+  if (!found) {
+    const wantsHelp = argv.length === 0 || argv.includes('--help') || argv.includes('-h') || argv[0] === 'help';
+    if (wantsHelp) return { exitCode: 0, stdout: helpText(), stderr: '' };
+    return { exitCode: 2, stdout: '', stderr: `pairwright: unknown command "${argv.filter((a) => !a.startsWith('-')).join(' ')}"; run pairwright --help` };
+  }
+  const { command, rest } = found;
+  let store: Store | null = null;
+  try {
+    let parsed;
+    try {
+      parsed = parseArgs({ args: rest, options: { ...command.options, ...GLOBAL_OPTIONS }, allowPositionals: true, strict: true });
+    } catch (error) {
+      throw new CliError(error instanceof Error ? error.message.split('\n')[0] ?? error.message : String(error));
+    }
+    if (parsed.values.help === true) return { exitCode: 0, stdout: helpText(command), stderr: '' };
+    const dataDir = typeof parsed.values.data === 'string' ? resolve(parsed.values.data) : defaultDataDir(env);
+    const context: CliContext = {
+      call: async <Name extends OperationName>(name: Name, input: OperationInput<Name>): Promise<OperationOutput<Name>> => {
+        store ??= openStore({ dataDir });
+        const result = await dispatchKnown({ store }, name, input);
+        if (!result.ok) throw new CliError(result.error.message);
+        return result.value;
+      },
+      readTextFile: (path) => {
+        try {
+          return readFileSync(resolve(path), 'utf8');
+        } catch (error) {
+          throw new CliError(`cannot read ${path}: ${(error as NodeJS.ErrnoException).code ?? String(error)}`);
+        }
+      },
+      writeTextFile: (path, text) => writeFileSync(resolve(path), text, 'utf8'),
+    };
+    const output = await command.run({ positionals: parsed.positionals, values: parsed.values }, context);
+    const stdout = parsed.values.json === true ? JSON.stringify(output.json, null, 2) : output.text;
+    return { exitCode: 0, stdout, stderr: '' };
+  } catch (error) {
+    if (error instanceof CliError) return { exitCode: 2, stdout: '', stderr: `pairwright: ${error.message}` };
+    const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
+    return { exitCode: 1, stdout: '', stderr: `pairwright: unexpected failure: ${detail}` };
+  } finally {
+    (store as Store | null)?.close();
+  }
+}
+
+export async function cliMain(): Promise<void> {
+  const result = await runCli(process.argv.slice(2));
+  if (result.stdout) process.stdout.write(result.stdout.endsWith('\n') ? result.stdout : `${result.stdout}\n`);
+  if (result.stderr) process.stderr.write(result.stderr.endsWith('\n') ? result.stderr : `${result.stderr}\n`);
+  process.exitCode = result.exitCode;
+}

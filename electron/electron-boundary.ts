@@ -1,0 +1,86 @@
+/**
+ * The part of Electron's API that the main process uses, as our own types. main.ts is written against
+ * this boundary so its wiring can be unit-tested with a stand-in (the Electron binary cannot be
+ * downloaded on every machine); at run time the real 'electron' module is passed in.
+ */
+export interface IpcMainInvokeEventLike {
+  senderFrame: { url: string } | null;
+  sender: { id: number };
+}
+
+export interface WebContentsLike {
+  id: number;
+  mainFrame: { url: string };
+  on(event: 'will-navigate', listener: (event: { preventDefault(): void }, url: string) => void): void;
+  on(event: 'will-attach-webview', listener: (event: { preventDefault(): void }) => void): void;
+  setWindowOpenHandler(handler: (details: { url: string }) => { action: 'deny' | 'allow' }): void;
+  printToPDF(options: { printBackground?: boolean; pageSize?: string }): Promise<Uint8Array>;
+}
+
+export interface BrowserWindowLike {
+  webContents: WebContentsLike;
+  loadFile(path: string): Promise<void>;
+  once(event: 'ready-to-show', listener: () => void): void;
+  show(): void;
+}
+
+export interface BrowserWindowOptions {
+  width: number;
+  height: number;
+  minWidth: number;
+  minHeight: number;
+  title: string;
+  show: boolean;
+  backgroundColor: string;
+  webPreferences: {
+    preload: string;
+    contextIsolation: boolean;
+    sandbox: boolean;
+    nodeIntegration: boolean;
+    nodeIntegrationInWorker: boolean;
+    webSecurity: boolean;
+    allowRunningInsecureContent: boolean;
+    webviewTag: boolean;
+    spellcheck: boolean;
+  };
+}
+
+export interface MenuItemTemplate {
+  label?: string;
+  role?: string;
+  type?: 'separator' | 'normal';
+  accelerator?: string;
+  submenu?: MenuItemTemplate[];
+  click?: () => void;
+}
+
+export interface ElectronBoundary {
+  app: {
+    whenReady(): Promise<void>;
+    getPath(name: 'userData'): string;
+    getVersion(): string;
+    on(event: 'window-all-closed' | 'activate' | 'web-contents-created', listener: (...args: never[]) => void): void;
+    quit(): void;
+    setName?(name: string): void;
+  };
+  BrowserWindow: new (options: BrowserWindowOptions) => BrowserWindowLike;
+  ipcMain: {
+    handle(channel: string, listener: (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>): void;
+  };
+  Menu: {
+    buildFromTemplate(template: MenuItemTemplate[]): unknown;
+    setApplicationMenu(menu: unknown): void;
+  };
+  shell: {
+    openExternal(url: string): Promise<void>;
+    openPath(path: string): Promise<string>;
+  };
+  dialog: {
+    showSaveDialog(window: BrowserWindowLike, options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] }): Promise<{ canceled: boolean; filePath?: string }>;
+    showMessageBox(options: { type: 'info'; title: string; message: string; detail: string }): Promise<unknown>;
+  };
+}
+
+/** IPC channel names shared by main and preload. */
+export const CALL_CHANNEL = 'pairwright:call';
+export const PRINT_CHANNEL = 'pairwright:print-to-pdf';

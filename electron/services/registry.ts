@@ -1,0 +1,15 @@
+/**
+ * Every operation's service function, keyed by operation name. The type requires one handler per
+ * operation in the contract, so a new operation does not compile until its service is registered here.
+ */
+import type { OperationName } from '../../shared-model/api/contract';
+import { campaignHandlers } from './campaigns';
+import type { HandlerMap } from './context';
+import { elementHandlers } from './elements';
+import { pairHandlers } from './pairs';
+
+export const handlers: HandlerMap<OperationName> = {
+  ...campaignHandlers,
+  ...pairHandlers,
+  ...elementHandlers,
+};

@@ -1,0 +1,32 @@
+/**
+ * Browser tier: Debian's Chromium driven by playwright-core. Skips with a printed reason where Chromium
+ * is missing on a user's machine; with CI=true a missing browser is a failure.
+ */
+import { existsSync, mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type Browser } from 'playwright-core';
+import { inCi } from './reference-tools';
+
+export const CHROMIUM_PATH = process.env.PAIRWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
+export const SCREENSHOT_DIR = join(process.cwd(), 'test-output', 'screenshots');
+
+export function browserAvailable(): boolean {
+  if (existsSync(CHROMIUM_PATH)) return true;
+  const reason = `browser tier needs Chromium at ${CHROMIUM_PATH} (apt-get install chromium); .ci/run installs it`;
+  if (inCi) throw new Error(`CI=true but ${reason}`);
+  console.warn(`[skipped] ${reason}`);
+  return false;
+}
+
+export async function launchBrowser(): Promise<Browser> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  return chromium.launch({
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+  });
+}
+
+export function screenshotPath(name: string): string {
+  return join(SCREENSHOT_DIR, `${name}.png`);
+}

@@ -1,0 +1,32 @@
+/** Starts the browser host in-process on a temporary store (a real SQLite file) for end-to-end tests. */
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { openStore, type Store } from '../../db/store';
+import { startHost, type RunningHost } from '../../electron/host';
+import { rendererDistDir } from '../../electron/paths';
+
+export interface HostFixture {
+  host: RunningHost;
+  store: Store;
+  dataDir: string;
+  stop(): Promise<void>;
+}
+
+export function tempDataDir(prefix = 'pairwright-test-'): string {
+  return mkdtempSync(join(tmpdir(), prefix));
+}
+
+export async function startTestHost(dataDir: string = tempDataDir(), port = 0): Promise<HostFixture> {
+  const store = openStore({ dataDir });
+  const host = await startHost({ context: { store }, rendererDir: rendererDistDir(), port });
+  return {
+    host,
+    store,
+    dataDir,
+    stop: async () => {
+      await host.close();
+      store.close();
+    },
+  };
+}
