@@ -1,0 +1,6 @@
+/**
+ * Version of the characterization analysis (size statistics, log-normal fit, composition checks and
+ * line-scan models). Stored beside every derived result so an old figure can be recomputed and compared.
+ * Bump it whenever a change would alter any stored number.
+ */
+export const ANALYSIS_VERSION = 'characterization-1';
