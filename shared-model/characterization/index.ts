@@ -3,6 +3,8 @@ export { ANALYSIS_VERSION } from './version';
 export { parseDiameterCsv, parseLineScanCsv, MIN_LINE_SCAN_POINTS } from './csv-import';
 export type { DiameterImport, DiameterImportOptions, LineScanData, LineScanImport, LineScanImportOptions, LineScanUnit } from './csv-import';
 export { sizeStatistics, particlesForHalfWidth } from './size-statistics';
+export { analyseSizes, DEFAULT_PRECISION_PERCENT } from './size-analysis';
+export type { SizeAnalysis, SizeAnalysisOptions } from './size-analysis';
 export type { SizeStatistics, SizePrecisionGoal } from './size-statistics';
 export { fitLogNormal, logNormalPdf } from './lognormal';
 export type { LogNormalFit } from './lognormal';
