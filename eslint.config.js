@@ -19,6 +19,10 @@ export default tseslint.config(
     },
   },
   {
+    files: ['scripts/**/*.mjs', 'bin/**/*.mjs', 'eslint.config.js'],
+    languageOptions: { globals: { process: 'readonly', console: 'readonly', URL: 'readonly' } },
+  },
+  {
     files: ['shared-model/**/*.ts'],
     rules: {
       'no-restricted-imports': [

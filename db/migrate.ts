@@ -1,10 +1,10 @@
 /**
  * Numbered SQL migrations (`db/migrations/NNNN_name.sql`), each applied in its own transaction and
  * recorded in `PRAGMA user_version`. Before the first pending migration touches an existing store, the
- * file is copied with SQLite's online backup into `backups/` beside it.
+ * file is copied (SQLite `VACUUM INTO`, a consistent snapshot) into `backups/` beside it.
  */
 import type Database from 'better-sqlite3';
-import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -47,8 +47,8 @@ function backupBeforeMigrating(db: Database.Database, dbPath: string, fromVersio
   mkdirSync(dir, { recursive: true });
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const target = join(dir, `${basename(dbPath, '.sqlite')}-v${fromVersion}-${stamp}.sqlite`);
-  db.pragma('wal_checkpoint(TRUNCATE)');
-  copyFileSync(dbPath, target);
+  // VACUUM INTO writes a consistent snapshot even while other connections use the file.
+  db.prepare('VACUUM INTO ?').run(target);
   return target;
 }
 

@@ -22,18 +22,23 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
   const [target, setTarget] = useState('alloy');
   const [notes, setNotes] = useState('');
   const { errors, general, show, clear } = useFieldErrors();
+  const choices = targetChoices(elementA, elementB);
+  const chosenTarget = choices.includes(target) ? target : 'alloy';
   const submit = async (event: FormEvent) => {
     event.preventDefault();
     if (!elementA || !elementB) {
       show({ code: 'invalid_input', message: 'choose both elements of the pair', field: 'pair' });
       return;
     }
-    const result = await call('pairs.add', { campaignId: props.campaign.id, pair: `${elementA}-${elementB}`, target, notes });
+    const result = await call('pairs.add', { campaignId: props.campaign.id, pair: `${elementA}-${elementB}`, target: chosenTarget, notes });
     if (!result.ok) {
       show(result.error);
       return;
     }
     clear();
+    setElementA('');
+    setElementB('');
+    setTarget('alloy');
     setNotes('');
     props.onAdded();
   };
@@ -41,29 +46,22 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
   return (
     <form className="card form-grid" onSubmit={submit} aria-label="Add pair" noValidate>
       <h2 className="card__title">Add a candidate pair</h2>
-      <Field label="Element A" name="pair" error={errors.pair}>
-        <select name="elementA" value={elementA} onChange={(event) => setElementA(event.target.value)}>
-          <option value="">—</option>
-          {options.map((element) => (
-            <option key={element.symbol} value={element.symbol}>
-              {element.symbol} · {element.name}
-            </option>
-          ))}
-        </select>
+      <datalist id="element-symbols">
+        {options.map((element) => (
+          <option key={element.symbol} value={element.symbol}>
+            {element.name}
+          </option>
+        ))}
+      </datalist>
+      <Field label="Element A" name="pair" error={errors.pair} hint="symbol, e.g. Pt">
+        <input name="elementA" list="element-symbols" value={elementA} onChange={(event) => setElementA(event.target.value.trim())} autoComplete="off" />
       </Field>
-      <Field label="Element B" name="elementB">
-        <select name="elementB" value={elementB} onChange={(event) => setElementB(event.target.value)}>
-          <option value="">—</option>
-          {options.map((element) => (
-            <option key={element.symbol} value={element.symbol}>
-              {element.symbol} · {element.name}
-            </option>
-          ))}
-        </select>
+      <Field label="Element B" name="elementB" hint="symbol, e.g. Ni">
+        <input name="elementB" list="element-symbols" value={elementB} onChange={(event) => setElementB(event.target.value.trim())} autoComplete="off" />
       </Field>
-      <Field label="Target architecture" name="target" error={errors.target} hint={describeArchitecture(target)}>
-        <select name="target" value={target} onChange={(event) => setTarget(event.target.value)}>
-          {targetChoices(elementA, elementB).map((choice) => (
+      <Field label="Target architecture" name="target" error={errors.target} hint={describeArchitecture(chosenTarget)}>
+        <select name="target" value={chosenTarget} onChange={(event) => setTarget(event.target.value)}>
+          {choices.map((choice) => (
             <option key={choice} value={choice}>
               {choice}
             </option>

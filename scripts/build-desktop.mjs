@@ -1,0 +1,30 @@
+// Bundles the Electron main process and preload into dist-electron/, and copies the SQL migrations beside them.
+// Used by `npm start` and `npm run dist`. The renderer is built separately by vite (dist/renderer).
+import { build } from 'esbuild';
+import { cpSync, mkdirSync, rmSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = join(dirname(fileURLToPath(import.meta.url)), '..');
+const out = join(root, 'dist-electron');
+
+export async function buildDesktop() {
+  rmSync(join(out, 'main.mjs'), { force: true });
+  mkdirSync(out, { recursive: true });
+  const common = { bundle: true, platform: 'node', target: 'node20', sourcemap: true, logLevel: 'warning', external: ['electron', 'better-sqlite3'] };
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'desktop-entry.ts')],
+    outfile: join(out, 'main.mjs'),
+    format: 'esm',
+    banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
+  });
+  await build({ ...common, entryPoints: [join(root, 'electron', 'preload.cts')], outfile: join(out, 'preload.cjs'), format: 'cjs' });
+  rmSync(join(out, 'migrations'), { recursive: true, force: true });
+  cpSync(join(root, 'db', 'migrations'), join(out, 'migrations'), { recursive: true });
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  await buildDesktop();
+  console.log(`desktop bundle written to ${out}`);
+}

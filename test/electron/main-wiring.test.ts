@@ -1,0 +1,147 @@
+/**
+ * The Electron main process wired against a stand-in for the 'electron' module (the binary cannot be
+ * downloaded on every machine). Checks the window's security settings, IPC sender validation,
+ * navigation and window.open refusal, and the app menu — with a real store behind the services.
+ */
+import { pathToFileURL } from 'node:url';
+import { afterEach, describe, expect, it } from 'vitest';
+import { openStore, type Store } from '../../db/store';
+import {
+  CALL_CHANNEL,
+  type BrowserWindowLike,
+  type BrowserWindowOptions,
+  type ElectronBoundary,
+  type IpcMainInvokeEventLike,
+  type MenuItemTemplate,
+} from '../../electron/electron-boundary';
+import { isVettedExternalLink, wireDesktopApp } from '../../electron/main';
+import { tempDataDir } from '../support/host-fixture';
+
+type Listener = (...args: never[]) => unknown;
+
+function standInElectron() {
+  const handlers = new Map<string, (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>>();
+  const webContentsListeners = new Map<string, Listener>();
+  const opened: string[] = [];
+  let windowOptions: BrowserWindowOptions | null = null;
+  let loadedFile: string | null = null;
+  let windowOpenHandler: ((details: { url: string }) => { action: string }) | null = null;
+  let menu: MenuItemTemplate[] = [];
+  const appListeners = new Map<string, Listener>();
+  class FakeWindow implements BrowserWindowLike {
+    webContents = {
+      id: 7,
+      mainFrame: { url: '' },
+      on: (event: string, listener: Listener) => void webContentsListeners.set(event, listener),
+      setWindowOpenHandler: (handler: (details: { url: string }) => { action: 'deny' | 'allow' }) => void (windowOpenHandler = handler),
+      printToPDF: async () => new Uint8Array([37, 80, 68, 70]),
+    };
+    constructor(options: BrowserWindowOptions) {
+      windowOptions = options;
+    }
+    loadFile = async (path: string) => void (loadedFile = path);
+    once = () => undefined;
+    show = () => undefined;
+  }
+  const electron: ElectronBoundary = {
+    app: {
+      whenReady: async () => undefined,
+      getPath: () => '/tmp/pairwright-user-data',
+      getVersion: () => '0.1.0',
+      on: (event: string, listener: Listener) => void appListeners.set(event, listener),
+      quit: () => undefined,
+    },
+    BrowserWindow: FakeWindow,
+    ipcMain: { handle: (channel, listener) => void handlers.set(channel, listener) },
+    Menu: { buildFromTemplate: (template) => ((menu = template), template), setApplicationMenu: () => undefined },
+    shell: { openExternal: async (url) => void opened.push(url), openPath: async () => '' },
+    dialog: { showSaveDialog: async () => ({ canceled: true }), showMessageBox: async () => ({}) },
+  };
+  return {
+    electron,
+    handlers,
+    webContentsListeners,
+    opened,
+    get windowOptions() {
+      return windowOptions;
+    },
+    get loadedFile() {
+      return loadedFile;
+    },
+    get windowOpenHandler() {
+      return windowOpenHandler;
+    },
+    get menu() {
+      return menu;
+    },
+    appListeners,
+  };
+}
+
+const RENDERER_INDEX = '/opt/Pairwright/dist/renderer/index.html';
+let store: Store | null = null;
+afterEach(() => {
+  store?.close();
+  store = null;
+});
+
+async function wired() {
+  const fake = standInElectron();
+  store = openStore({ dataDir: tempDataDir() });
+  await wireDesktopApp(fake.electron, { store }, { rendererIndex: RENDERER_INDEX, preload: '/opt/Pairwright/dist-electron/preload.cjs' });
+  return fake;
+}
+
+const trustedEvent = (): IpcMainInvokeEventLike => ({ sender: { id: 7 }, senderFrame: { url: pathToFileURL(RENDERER_INDEX).href } });
+
+describe('Electron main process wiring', () => {
+  it('opens one window with isolation, sandbox and no Node in the page', async () => {
+    const fake = await wired();
+    const prefs = fake.windowOptions?.webPreferences;
+    expect(prefs).toMatchObject({ contextIsolation: true, sandbox: true, nodeIntegration: false, webSecurity: true, webviewTag: false });
+    expect(fake.loadedFile).toBe(RENDERER_INDEX);
+  });
+
+  it('answers API calls from our own frame through the shared services', async () => {
+    const fake = await wired();
+    const call = fake.handlers.get(CALL_CHANNEL);
+    expect(call).toBeDefined();
+    const created = await call?.(trustedEvent(), 'campaigns.create', { name: 'From the window' });
+    expect(created).toMatchObject({ ok: true, value: { name: 'From the window' } });
+    const bad = await call?.(trustedEvent(), 'campaigns.create', { name: '' });
+    expect(bad).toMatchObject({ ok: false, error: { field: 'name' } });
+  });
+
+  it('refuses calls from other frames, other pages and unknown operations', async () => {
+    const fake = await wired();
+    const call = fake.handlers.get(CALL_CHANNEL);
+    const foreignPage = await call?.({ sender: { id: 7 }, senderFrame: { url: 'https://example.org/' } }, 'campaigns.list', {});
+    expect(foreignPage).toMatchObject({ ok: false, error: { code: 'forbidden' } });
+    const otherWindow = await call?.({ ...trustedEvent(), sender: { id: 99 } }, 'campaigns.list', {});
+    expect(otherWindow).toMatchObject({ ok: false, error: { code: 'forbidden' } });
+    const noFrame = await call?.({ sender: { id: 7 }, senderFrame: null }, 'campaigns.list', {});
+    expect(noFrame).toMatchObject({ ok: false, error: { code: 'forbidden' } });
+    const unknown = await call?.(trustedEvent(), 'shell.exec', {});
+    expect(unknown).toMatchObject({ ok: false, error: { code: 'unknown_operation' } });
+  });
+
+  it('refuses navigation and new windows; vetted https links go to the OS browser', async () => {
+    const fake = await wired();
+    let prevented = false;
+    const navigate = fake.webContentsListeners.get('will-navigate') as (event: { preventDefault(): void }, url: string) => void;
+    navigate({ preventDefault: () => (prevented = true) }, 'https://example.org/');
+    expect(prevented).toBe(true);
+    expect(fake.windowOpenHandler?.({ url: 'https://example.org/' })).toEqual({ action: 'deny' });
+    expect(fake.windowOpenHandler?.({ url: 'https://echa.europa.eu/information-on-chemicals' })).toEqual({ action: 'deny' });
+    expect(fake.opened).toEqual(['https://echa.europa.eu/information-on-chemicals']);
+    expect(isVettedExternalLink('http://echa.europa.eu/')).toBe(false);
+    expect(isVettedExternalLink('https://echa.europa.eu.evil.example/')).toBe(false);
+  });
+
+  it('builds the usual application menu', async () => {
+    const fake = await wired();
+    expect(fake.menu.map((item) => item.label)).toEqual(['File', 'Edit', 'View', 'Window', 'Help']);
+    const roles = fake.menu.flatMap((item) => item.submenu ?? []).map((item) => item.role).filter(Boolean);
+    expect(roles).toEqual(expect.arrayContaining(['quit', 'undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'reload', 'minimize']));
+  });
+});
