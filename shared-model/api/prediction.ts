@@ -1,0 +1,157 @@
+/**
+ * API operations of the segregation prediction (issue 3): predict one pair, rank an element set for a
+ * target, isotherms for the pair detail view, save a prediction linked to a campaign pair, list them,
+ * and the element property table with its sources.
+ */
+import { z } from 'zod';
+import { DEFAULT_THRESHOLDS, type ClassificationThresholds } from '../architecture/classify';
+import type { ColumnSource, ElementRecord } from '../elements/element-table';
+import { METAL_SYMBOLS } from '../elements/symbols';
+import { PARTICLE_SHAPES } from '../geometry/particle-sites';
+import type { Isotherm } from '../prediction/isotherm';
+import { ISOTHERM_SWEEPS } from '../prediction/isotherm';
+import type { Prediction } from '../prediction/predict';
+import { STRAIN_RULES } from '../prediction/predict';
+import { parseRankTarget, type RankTarget } from '../prediction/rank';
+import { SURFACE_FACETS } from '../prediction/segregation';
+import { DomainError } from './result';
+import { operation } from './operation';
+import { elementSymbolSchema, idSchema, pairTextSchema } from './schemas';
+
+const finite = (what: string) => z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, { error: 'must be a finite number' });
+
+export const xBSchema = finite('atomic fraction of B').refine((x) => x > 0 && x < 1, { error: 'must lie strictly between 0 and 1 (atomic fraction of B)' });
+export const diameterNmSchema = finite('nm')
+  .refine((d) => d > 0, { error: 'must be a positive diameter in nm' })
+  .refine((d) => d <= 1000, { error: 'must be at most 1000 nm' });
+export const temperatureKSchema = finite('K')
+  .refine((t) => t > 0, { error: 'must be a positive temperature in K' })
+  .refine((t) => t <= 5000, { error: 'must be at most 5000 K' });
+export const shapeSchema = z.enum(PARTICLE_SHAPES, { error: `must be one of: ${PARTICLE_SHAPES.join(', ')}` });
+export const facetSchema = z.enum(SURFACE_FACETS, { error: 'must be "111" or "100"' });
+export const strainRuleSchema = z.enum(STRAIN_RULES, { error: `must be one of: ${STRAIN_RULES.join(', ')}` });
+
+const thresholdValue = finite('threshold').refine((v) => v > 0, { error: 'must be a positive number' });
+export const thresholdsSchema = z
+  .object({
+    coreShellEnrichment: thresholdValue.refine((v) => v <= 1, { error: 'must be at most 1' }),
+    enrichedAlloyEnrichment: thresholdValue.refine((v) => v <= 1, { error: 'must be at most 1' }),
+    janusUnlikeRatio: thresholdValue,
+    intermetallicUnlikeRatio: thresholdValue,
+  })
+  .partial()
+  .transform((t): ClassificationThresholds => ({ ...DEFAULT_THRESHOLDS, ...t }))
+  .superRefine((t, ctx) => {
+    if (t.enrichedAlloyEnrichment >= t.coreShellEnrichment) {
+      ctx.addIssue({ code: 'custom', path: ['enrichedAlloyEnrichment'], message: 'must be below coreShellEnrichment' });
+    }
+    if (t.janusUnlikeRatio >= t.intermetallicUnlikeRatio) {
+      ctx.addIssue({ code: 'custom', path: ['janusUnlikeRatio'], message: 'must be below intermetallicUnlikeRatio' });
+    }
+  });
+
+export const DEFAULT_CONDITIONS = Object.freeze({ xB: 0.5, diameterNm: 3, shape: 'cuboctahedron' as const, temperatureK: 600 });
+
+export const conditionsSchema = z.object({
+  xB: xBSchema,
+  diameterNm: diameterNmSchema,
+  shape: shapeSchema.default('cuboctahedron'),
+  temperatureK: temperatureKSchema,
+  facet: facetSchema.default('111'),
+  strainRule: strainRuleSchema.default('oversized solute'),
+  thresholds: thresholdsSchema.default(() => ({ ...DEFAULT_THRESHOLDS })),
+});
+export type ConditionsInput = z.input<typeof conditionsSchema>;
+
+export const rankTargetSchema = z.string({ error: 'must be a target such as alloy, core@shell, core@shell:Pt or Janus' }).transform((text, ctx): RankTarget => {
+  try {
+    return parseRankTarget(text);
+  } catch (error) {
+    if (error instanceof DomainError) {
+      ctx.addIssue({ code: 'custom', message: error.message });
+      return z.NEVER;
+    }
+    throw error;
+  }
+});
+
+export const elementListSchema = z.union(
+  [
+    z.literal('all'),
+    z
+      .array(elementSymbolSchema, { error: 'must be a list of element symbols or "all"' })
+      .min(2, 'give at least two elements')
+      .refine((list) => new Set(list).size === list.length, { error: 'lists an element twice' }),
+  ],
+  { error: `must be "all" or a list of symbols from: ${METAL_SYMBOLS.join(' ')}` },
+);
+
+export interface RankRow {
+  rank: number;
+  score: number;
+  prediction: Prediction;
+}
+
+export interface RankResult {
+  target: string;
+  conditions: z.output<typeof conditionsSchema>;
+  rows: RankRow[];
+}
+
+export interface SavedPrediction {
+  id: number;
+  pairId: number | null;
+  pair: string;
+  modelVersion: string;
+  inputs: { elementA: string; elementB: string; conditions: z.output<typeof conditionsSchema> };
+  result: Prediction;
+  createdAt: string;
+}
+
+export interface ElementTableResult {
+  elements: ElementRecord[];
+  sources: ColumnSource[];
+}
+
+export const predictionOperations = {
+  'prediction.predict': operation<Prediction>()({
+    kind: 'query',
+    summary: 'Predict surface composition and architecture of one pair under given conditions',
+    input: z.object({ pair: pairTextSchema, conditions: conditionsSchema }),
+  }),
+  'prediction.rank': operation<RankResult>()({
+    kind: 'query',
+    summary: 'Rank every pair of an element set for a target architecture',
+    input: z.object({
+      elements: elementListSchema,
+      target: rankTargetSchema,
+      conditions: conditionsSchema,
+      limit: z.number({ error: 'must be a number' }).int('must be a whole number').min(1, 'must be at least 1').max(1000, 'must be at most 1000').optional(),
+    }),
+  }),
+  'prediction.isotherm': operation<Isotherm>()({
+    kind: 'query',
+    summary: 'Surface composition of a pair against composition, diameter or temperature',
+    input: z.object({
+      pair: pairTextSchema,
+      conditions: conditionsSchema,
+      sweep: z.enum(ISOTHERM_SWEEPS, { error: `must be one of: ${ISOTHERM_SWEEPS.join(', ')}` }),
+      points: z.number({ error: 'must be a number' }).int('must be a whole number').min(3, 'must be at least 3').max(400, 'must be at most 400').default(41),
+    }),
+  }),
+  'prediction.save': operation<SavedPrediction>()({
+    kind: 'command',
+    summary: 'Compute and store a prediction (inputs, settings, model version), optionally linked to a campaign pair',
+    input: z.object({ pair: pairTextSchema, conditions: conditionsSchema, pairId: idSchema.optional() }),
+  }),
+  'prediction.listForPair': operation<SavedPrediction[]>()({
+    kind: 'query',
+    summary: 'Stored predictions linked to a campaign pair, newest first',
+    input: z.object({ pairId: idSchema }),
+  }),
+  'elements.table': operation<ElementTableResult>()({
+    kind: 'query',
+    summary: 'Element property table with the source of each column',
+    input: z.object({}),
+  }),
+};

@@ -1,0 +1,136 @@
+/**
+ * Ranking of every pair of an element set for a target architecture. Each pair is predicted in both
+ * orders' sense at once (the prediction covers A at the surface of B and B at the surface of A); the score
+ * in [0, 1] says how well the predicted particle matches the target:
+ *   alloy:            (1 − E) · min(ρ, 1/ρ)            E enrichment, ρ unlike-neighbour ratio
+ *   core@shell (X):   E when X is the surface element, else 0
+ *   core@shell (any): E
+ *   Janus:            (1 − ρ)⁺ · (1 − E)              like atoms cluster, both elements exposed
+ *   intermetallic:    min(1, (ρ − 1)⁺) · (1 − E)
+ * Ties are broken by the pair name. The reason string comes from the prediction's dominant terms.
+ */
+import { invalid } from '../api/result';
+import { getElement } from '../elements/element-table';
+import { METAL_SYMBOLS, isMetalSymbol } from '../elements/symbols';
+import { surfaceEnrichment } from '../architecture/classify';
+import { checkConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions } from './predict';
+
+export type RankTarget =
+  | { kind: 'alloy' }
+  | { kind: 'core@shell'; shellElement?: string }
+  | { kind: 'Janus' }
+  | { kind: 'intermetallic' };
+
+export interface RankedPair {
+  rank: number;
+  score: number;
+  pair: string;
+  /** The full prediction (terms, label, confidence, flags, reason); built when first read. */
+  readonly prediction: Prediction;
+}
+
+/** Reads "alloy", "janus", "intermetallic", "core@shell", "core@shell:Pt", "shell:Pt" or "@Pt". */
+export function parseRankTarget(text: string): RankTarget {
+  const t = String(text).trim();
+  const lower = t.toLowerCase();
+  if (lower === 'alloy') return { kind: 'alloy' };
+  if (lower === 'janus') return { kind: 'Janus' };
+  if (lower === 'intermetallic') return { kind: 'intermetallic' };
+  if (lower === 'core@shell' || lower === 'core@shell any' || lower === 'core-shell') return { kind: 'core@shell' };
+  const m = /^(?:core@shell[:\s]+|shell[:\s]+|@)([A-Za-z]{1,2})$/i.exec(t);
+  if (m) {
+    const raw = m[1] as string;
+    const symbol = raw.charAt(0).toUpperCase() + raw.slice(1).toLowerCase();
+    if (!isMetalSymbol(symbol)) throw invalid('target', `unknown shell element "${raw}"`);
+    return { kind: 'core@shell', shellElement: symbol };
+  }
+  throw invalid('target', `target must be alloy, core@shell, core@shell:X (X in the shell), Janus or intermetallic; got "${t}"`);
+}
+
+export function describeRankTarget(target: RankTarget): string {
+  if (target.kind === 'core@shell') return target.shellElement ? `core@shell with ${target.shellElement} in the shell` : 'core@shell (any)';
+  return target.kind;
+}
+
+/** Score of a prediction's numbers for a target, in [0, 1]. */
+export function scoreFromNumbers(target: RankTarget, enrichedElement: string | null, enrichment: number, unlikeNeighbourRatio: number): number {
+  const e = Math.min(1, Math.max(0, enrichment));
+  const rho = unlikeNeighbourRatio;
+  switch (target.kind) {
+    case 'alloy':
+      return (1 - e) * Math.min(rho, 1 / rho);
+    case 'core@shell':
+      if (target.shellElement) return enrichedElement === target.shellElement ? e : 0;
+      return e;
+    case 'Janus':
+      return Math.max(0, 1 - rho) * (1 - e);
+    case 'intermetallic':
+      return Math.min(1, Math.max(0, rho - 1)) * (1 - e);
+  }
+}
+
+export function targetScore(target: RankTarget, p: Prediction): number {
+  return scoreFromNumbers(target, p.surfaceElement, p.enrichment, p.unlikeNeighbourRatio);
+}
+
+/** The distinct elements of a list, checked (DomainError naming `elements`). */
+export function checkElementList(elements: readonly string[] | 'all'): string[] {
+  if (elements === 'all') return [...METAL_SYMBOLS];
+  if (!Array.isArray(elements)) throw invalid('elements', 'elements must be a list of symbols or "all"');
+  const out: string[] = [];
+  for (const symbol of elements) {
+    getElement(symbol, 'elements');
+    if (!out.includes(symbol)) out.push(symbol);
+  }
+  if (out.length < 2) throw invalid('elements', 'give at least two different elements to rank');
+  return out;
+}
+
+/** Pair contexts for every unordered pair (A before B in the list order), reusable across conditions. */
+export function pairContexts(elements: readonly string[]): PairContext[] {
+  const contexts: PairContext[] = [];
+  for (let i = 0; i < elements.length; i++) {
+    for (let j = i + 1; j < elements.length; j++) contexts.push(pairContext(elements[i] as string, elements[j] as string));
+  }
+  return contexts;
+}
+
+/**
+ * Ranks precomputed pairs (fast path; conditions are checked once). Every pair's equilibrium is solved
+ * here; its full prediction record is assembled when a row's `prediction` is first read. Ties of score
+ * are broken by the pair name (stable, repeatable order).
+ */
+export function rankContexts(contexts: readonly PairContext[], target: RankTarget, conditions: PredictionConditions): RankedPair[] {
+  if (target.kind === 'core@shell' && target.shellElement !== undefined) getElement(target.shellElement, 'target');
+  const checked = checkConditions(conditions);
+  const rows: RankedPair[] = new Array(contexts.length);
+  for (let i = 0; i < contexts.length; i++) {
+    const ctx = contexts[i] as PairContext;
+    const core = predictCore(ctx, checked);
+    const { enriched, enrichment } = surfaceEnrichment(checked.xB, core.surfaceXB);
+    const enrichedElement = enriched === 'A' ? ctx.a.symbol : enriched === 'B' ? ctx.b.symbol : null;
+    let prediction: Prediction | undefined;
+    rows[i] = {
+      rank: 0,
+      score: scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio),
+      pair: ctx.pairName,
+      get prediction(): Prediction {
+        if (prediction === undefined) prediction = predictionFromCore(ctx, checked, core);
+        return prediction;
+      },
+    };
+  }
+  rows.sort((p, q) => q.score - p.score || (p.pair < q.pair ? -1 : p.pair > q.pair ? 1 : 0));
+  for (let i = 0; i < rows.length; i++) (rows[i] as RankedPair).rank = i + 1;
+  return rows;
+}
+
+/** Scores every pair of `elements` (or all 30 metals) for `target` under `conditions`, best first. */
+export function rankPairs(elements: readonly string[] | 'all', target: RankTarget | string, conditions: PredictionConditions): RankedPair[] {
+  const list = checkElementList(elements);
+  const parsed = typeof target === 'string' ? parseRankTarget(target) : target;
+  if (parsed.kind === 'core@shell' && parsed.shellElement !== undefined && !list.includes(parsed.shellElement)) {
+    throw invalid('target', `the shell element ${parsed.shellElement} is not among the elements to rank`);
+  }
+  return rankContexts(pairContexts(list), parsed, conditions);
+}
