@@ -188,6 +188,7 @@ function fmt(value: number, digits = 3): string {
   if (!Number.isFinite(value)) return String(value);
   const abs = Math.abs(value);
   if (abs !== 0 && (abs >= 1e5 || abs < 1e-3)) return value.toExponential(digits - 1);
+  if (abs >= 10 ** digits) return value.toFixed(0);
   return value.toPrecision(digits);
 }
 

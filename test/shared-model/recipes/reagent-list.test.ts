@@ -1,0 +1,121 @@
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { designBatch } from '../../../shared-model/recipes/design';
+import { batchDesignInputSchema, type BatchDesignRequest } from '../../../shared-model/recipes/design-input';
+import { prepareReagent } from '../../../shared-model/recipes/reagent';
+import { buildReagentList, inventoryMassMg, reagentListCsv } from '../../../shared-model/recipes/reagent-list';
+import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
+
+const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
+const LATTICE: Record<string, number> = { Au: 0.40782, Pt: 0.39242, Ni: 0.3524 };
+const design = (request: BatchDesignRequest) => designBatch(batchDesignInputSchema.parse(request), { catalog, latticeNm: (s) => LATTICE[s] });
+
+const ptNi: BatchDesignRequest = {
+  elementA: 'Pt',
+  elementB: 'Ni',
+  target: 'alloy',
+  route: 'co-reduction',
+  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
+  amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
+  batchVolumeMl: 50,
+  precursors: [
+    { element: 'Pt', reagentKey: 'h2ptcl6-6h2o', stockMm: 20 },
+    { element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 },
+  ],
+  reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+};
+const auPt: BatchDesignRequest = {
+  elementA: 'Au',
+  elementB: 'Pt',
+  target: 'alloy',
+  route: 'polyol',
+  size: { kind: 'alloy', diameterNm: 5, xBPct: 50 },
+  amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
+  batchVolumeMl: 20,
+  precursors: [
+    { element: 'Au', reagentKey: 'haucl4-3h2o' },
+    { element: 'Pt', reagentKey: 'h2ptcl6-6h2o' },
+  ],
+  solvent: { reagentKey: 'ethylene-glycol', volumeMl: 20 },
+  capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
+};
+
+describe('reagent list across batches', () => {
+  const b3 = design(ptNi);
+  const b4 = design(auPt);
+  const list = buildReagentList(
+    [
+      { batchId: 3, batchName: 'PtNi', reagents: b3.reagents },
+      { batchId: 4, batchName: 'AuPt', reagents: b4.reagents },
+    ],
+    [
+      { reagentKey: 'h2ptcl6-6h2o', amount: 0.05, unit: 'g', location: 'desiccator 2', lot: 'MKCD1234' },
+      { reagentKey: 'nabh4', amount: 5, unit: 'g', location: 'flammables cabinet', lot: 'BCBX9' },
+      { reagentKey: 'ethylene-glycol', amount: 10, unit: 'mL', location: 'solvent shelf', lot: '' },
+      { reagentKey: 'nicl2-6h2o', amount: 2, unit: 'mL', location: '', lot: '' },
+    ],
+    catalog,
+  );
+  const get = (key: string) => {
+    const found = list.lines.find((l) => l.key === key);
+    if (!found) throw new Error(`no line ${key}`);
+    return found;
+  };
+
+  it('sums a reagent used by two batches', () => {
+    // H2PtCl6·6H2O: 0.075 mmol (batch 3) + 0.1 mmol (batch 4) = 0.175 mmol × 517.91 = 90.63 mg
+    const line = get('h2ptcl6-6h2o');
+    expect(line.totalAmountMmol).toBeCloseTo(0.175, 10);
+    expect(line.totalMassMg).toBeCloseTo(0.175 * 517.9097, 2);
+    expect(line.batchIds).toEqual([3, 4]);
+  });
+  it('flags shortfalls against the inventory (50 mg on hand, 90.6 mg needed)', () => {
+    const line = get('h2ptcl6-6h2o');
+    expect(line.status).toBe('short');
+    expect(line.onHandMg).toBe(50);
+    expect(line.shortfallMg).toBeCloseTo(0.175 * 517.9097 - 50, 2);
+    expect(line.locations).toEqual(['desiccator 2']);
+    expect(line.lots).toEqual(['MKCD1234']);
+  });
+  it('compares liquids through their density (10 mL EG = 11.13 g < 22.26 g needed)', () => {
+    const line = get('ethylene-glycol');
+    expect(line.onHandMg).toBeCloseTo(11130, 6);
+    expect(line.totalVolumeMl).toBeCloseTo(20, 10);
+    expect(line.status).toBe('short');
+  });
+  it('enough, missing from the inventory, or not comparable', () => {
+    expect(get('nabh4').status).toBe('enough');
+    expect(get('haucl4-3h2o').status).toBe('not in inventory');
+    // a solid recorded in mL cannot be compared without a density
+    expect(get('nicl2-6h2o').status).toBe('cannot compare');
+  });
+  it('leaves make-up water out', () => {
+    expect(list.lines.some((l) => l.key === 'water')).toBe(false);
+  });
+  it('summarises hazards across the list', () => {
+    expect(list.hazardSummary.signalWord).toBe('Danger');
+    const codes = list.hazardSummary.hazards.map((h) => h.code);
+    expect(codes).toEqual(expect.arrayContaining(['H260', 'H334', 'H350', 'H373']));
+    expect(list.hazardSummary.warnings.map((w) => w.id)).toContain('chloroplatinate-sensitiser');
+  });
+  it('exports CSV that reads back', () => {
+    const csv = reagentListCsv(list);
+    const parsed = Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true });
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.meta.fields).toEqual(['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word']);
+    const row = parsed.data.find((d) => d.formula === 'H2PtCl6·6H2O');
+    expect(Number(row?.total_mass_mg)).toBeCloseTo(90.63, 1);
+    expect(row?.status).toBe('short');
+    expect(row?.batches).toBe('3; 4');
+    expect(parsed.data).toHaveLength(list.lines.length);
+  });
+});
+
+describe('inventory units', () => {
+  it('converts to mg', () => {
+    expect(inventoryMassMg({ amount: 2, unit: 'g' }, null)).toBe(2000);
+    expect(inventoryMassMg({ amount: 0.001, unit: 'kg' }, null)).toBe(1000);
+    expect(inventoryMassMg({ amount: 1, unit: 'L' }, 0.813)).toBeCloseTo(813000, 6);
+    expect(inventoryMassMg({ amount: 1, unit: 'mL' }, null)).toBeNull();
+  });
+});
