@@ -1,0 +1,158 @@
+/**
+ * Lattice Monte Carlo runs through the API: start a run (returns its id at once; the run is queued and
+ * computed off the UI thread), follow its progress, cancel it, read the stored result, export the
+ * final structure as extended XYZ, and compute the Gupta energy of any given structure.
+ *
+ * Bad input is refused here, before any work starts, with the field named: an element without Gupta
+ * parameters, T ≤ 0 or above the cap, sweeps ≤ 0 or above the cap, a size above the atom cap.
+ */
+import { z } from 'zod';
+import { DomainError } from './result';
+import { operation } from './operation';
+import { idSchema } from './schemas';
+import { CLUSTER_SHAPES } from '../clusters/shapes';
+import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../montecarlo/gupta-parameters';
+import { planSimulation, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
+import type { StructureEnergy } from '../montecarlo/gupta-energy';
+
+const guptaElementSchema = z
+  .string({ error: 'must be an element symbol' })
+  .trim()
+  .transform((s) => s.charAt(0).toUpperCase() + s.slice(1).toLowerCase())
+  .refine(isGuptaElement, {
+    error: (issue) => `${String(issue.input)} has no tight-binding parameters; the simulation supports ${GUPTA_ELEMENTS.join(', ')}`,
+  });
+
+const positiveNumber = (what: string) => z.number({ error: `must be a number (${what})` });
+
+export const simulationSpecSchema = z
+  .object({
+    elementA: guptaElementSchema,
+    elementB: guptaElementSchema,
+    xB: positiveNumber('atomic fraction of B').gt(0, 'must be above 0').lt(1, 'must be below 1'),
+    shape: z.enum(CLUSTER_SHAPES, { error: `must be one of: ${CLUSTER_SHAPES.join(', ')}` }),
+    shells: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+    diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
+    temperatureK: positiveNumber('K')
+      .gt(0, 'must be above 0 K')
+      .max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
+    sweeps: z
+      .number({ error: 'must be a whole number' })
+      .int('must be a whole number')
+      .min(1, 'must be at least 1')
+      .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
+    anneal: z
+      .object({
+        startTemperatureK: positiveNumber('K').gt(0, 'must be above 0 K').max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
+        sweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
+      })
+      .nullish(),
+    seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
+    progressEverySweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+  })
+  .superRefine((value, ctx) => {
+    // The model's own checks (pair of different metals, one size given, atom and attempt caps).
+    try {
+      planSimulation(value as SimulationSpec);
+    } catch (error) {
+      if (error instanceof DomainError) {
+        ctx.addIssue({ code: 'custom', path: (error.field ?? 'spec').split('.'), message: error.message });
+        return;
+      }
+      throw error;
+    }
+  });
+
+export type SimulationSpecInput = z.input<typeof simulationSpecSchema>;
+
+export const SIMULATION_STATUSES = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
+export type SimulationStatus = (typeof SIMULATION_STATUSES)[number];
+
+/** A run as listed: inputs, state and headline numbers (no traces or occupations). */
+export interface SimulationRunSummary {
+  id: number;
+  status: SimulationStatus;
+  spec: SimulationSpec;
+  label: string;
+  engineVersion: string;
+  /** Planned size, known before the run starts. */
+  atoms: number;
+  totalSweeps: number;
+  /** Latest progress report while queued/running (null before the first). */
+  progress: SimulationProgress | null;
+  /** Architecture label once done. */
+  architecture: string | null;
+  surfaceXB: number | null;
+  error: string | null;
+  createdAt: string;
+  startedAt: string | null;
+  finishedAt: string | null;
+}
+
+/** A run with its full result (when done). */
+export interface SimulationRun extends SimulationRunSummary {
+  result: SimulationResult | null;
+  /** Progress history kept while running (for the live traces). */
+  progressHistory: SimulationProgress[];
+}
+
+export interface SimulationOptions {
+  elements: readonly string[];
+  shapes: readonly string[];
+  limits: typeof SIMULATION_LIMITS;
+  mixingRule: string;
+  engineVersion: string;
+}
+
+export interface XyzExport {
+  fileName: string;
+  content: string;
+}
+
+export const simulationOperations = {
+  'simulation.options': operation<SimulationOptions>()({
+    kind: 'query',
+    summary: 'Supported metals, shapes, limits and the unlike-pair rule of the lattice Monte Carlo',
+    input: z.object({}),
+  }),
+  'simulation.start': operation<SimulationRunSummary>()({
+    kind: 'command',
+    summary: 'Queue a lattice Monte Carlo run; returns its id at once (progress by events or simulation.status)',
+    input: simulationSpecSchema,
+  }),
+  'simulation.status': operation<SimulationRunSummary>()({
+    kind: 'query',
+    summary: 'State and latest progress of a run',
+    input: z.object({ id: idSchema }),
+  }),
+  'simulation.cancel': operation<SimulationRunSummary>()({
+    kind: 'command',
+    summary: 'Cancel a queued or running run',
+    input: z.object({ id: idSchema }),
+  }),
+  'simulation.get': operation<SimulationRun>()({
+    kind: 'query',
+    summary: 'A stored run with its inputs and result',
+    input: z.object({ id: idSchema }),
+  }),
+  'simulation.list': operation<SimulationRunSummary[]>()({
+    kind: 'query',
+    summary: 'Stored runs, newest first',
+    input: z.object({ limit: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(500, 'must be at most 500').default(100) }),
+  }),
+  'simulation.exportXyz': operation<XyzExport>()({
+    kind: 'query',
+    summary: 'Final structure of a finished run as extended XYZ',
+    input: z.object({ id: idSchema }),
+  }),
+  'simulation.energy': operation<StructureEnergy>()({
+    kind: 'query',
+    summary: 'Gupta energy of a given structure (extended XYZ text, Å)',
+    input: z.object({
+      xyz: z.string({ error: 'must be the text of an XYZ file' }).min(1, 'must not be empty').max(20_000_000, 'must be at most 20 MB'),
+      cutoffAngstrom: positiveNumber('Å').gt(0, 'must be above 0 Å').optional(),
+    }),
+  }),
+};
+
+export { MIXING_RULE_DESCRIPTION };
