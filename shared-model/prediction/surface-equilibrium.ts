@@ -79,8 +79,9 @@ export function solveSurfaceEquilibrium(input: EquilibriumInput): EquilibriumRes
       t = Math.log(yNext) - Math.log1p(-yNext);
     }
     const xNext = lo + width * yNext;
-    // converged: x_s moved by less than 1e-12 of itself and of its complement (or not at all)
-    const done = xNext === x || Math.abs(xNext - x) <= 1e-12 * Math.min(xNext, 1 - xNext);
+    // converged: x_s and x_c moved by less than 1e-12 of themselves and of their complements (or not at all)
+    const step = Math.abs(xNext - x);
+    const done = step === 0 || (step <= 1e-12 * Math.min(xNext, 1 - xNext) && step * r <= 1e-12 * Math.min(xc, 1 - xc));
     y = yNext;
     x = xNext;
     if (done) break;
