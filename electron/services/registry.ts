@@ -3,13 +3,17 @@
  * operation in the contract, so a new operation does not compile until its service is registered here.
  */
 import type { OperationName } from '../../shared-model/api/contract';
+import { batchHandlers } from './batches';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
+import { outcomeAnalysisHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
 
 export const handlers: HandlerMap<OperationName> = {
+  ...outcomeAnalysisHandlers,
   ...campaignHandlers,
   ...pairHandlers,
   ...elementHandlers,
+  ...batchHandlers,
 };

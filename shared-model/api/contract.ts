@@ -4,15 +4,19 @@
  * is derived from this record. A new capability adds its own `*Operations` record here.
  */
 import type { z } from 'zod';
+import { batchOperations } from './batches';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
+import { outcomeAnalysisOperations } from './outcomes';
 import { pairOperations } from './pairs';
 
 export const operations = {
+  ...outcomeAnalysisOperations,
   ...campaignOperations,
   ...pairOperations,
   ...elementOperations,
+  ...batchOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
 export type Operations = typeof operations;

@@ -12,7 +12,7 @@ import type { ConfusionMatrix } from '../characterization/confusion';
 import type { LineScanAnalysis } from '../characterization/line-scan-fit';
 import type { SizeAnalysis } from '../characterization/size-analysis';
 import { operation } from './operation';
-import { elementSymbolSchema, idSchema } from './schemas';
+import { elementSymbolSchema, idSchema, pairTextSchema } from './schemas';
 
 export interface SizeRecord extends SizeAnalysis {
   id: number;
@@ -142,6 +142,24 @@ export interface CampaignConfusion {
   unmatched: number;
 }
 
+/** A size import analysed without storing it (the CLI `sizes` command, previews in the view). */
+export interface SizePreview extends SizeAnalysis {
+  diametersNm: number[];
+  column: { number: number; name: string | null };
+  importNotes: string[];
+}
+
+/** A line scan read and fitted without storing it (the CLI `linescan` command, previews in the view). */
+export interface LineScanPreview {
+  points: LineScanPoint[];
+  unit: 'counts' | 'atPercent';
+  columns: { position: string; a: string; b: string };
+  importNotes: string[];
+  /** Lattice constants (nm) used for monolayers: the shell metal's own (fcc-equivalent for non-fcc metals). */
+  latticeNm: Record<string, number>;
+  analysis: LineScanAnalysis;
+}
+
 const MAX_CSV_CHARS = 5_000_000;
 const csvTextSchema = z
   .string({ error: 'must be the text of a CSV file' })
@@ -163,6 +181,38 @@ export const compositionMeasurementSchema = z.object({
   lines: z.string({ error: 'must be text' }).trim().max(200, 'must be at most 200 characters').optional(),
 });
 
+const sizeImportFields = {
+  csvText: csvTextSchema,
+  column: columnSchema.optional(),
+  decimalSeparator: decimalSchema,
+  targetDiameterNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').nullable().optional(),
+  precisionPercent: z.number({ error: 'must be a number' }).positive('must be greater than 0').max(50, 'must be at most 50 %').default(2),
+};
+
+const lineScanImportFields = {
+  csvText: csvTextSchema,
+  positionColumn: columnSchema.optional(),
+  aColumn: columnSchema.optional(),
+  bColumn: columnSchema.optional(),
+  unit: z.enum(['auto', 'counts', 'atPercent'], { error: 'must be auto, counts or atPercent' }).default('auto'),
+  decimalSeparator: decimalSchema,
+  probeSigmaNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').max(50, 'must be at most 50 nm').nullable().default(null),
+};
+
+/** Analyses that store nothing: usable without a batch (CLI `sizes` / `linescan`). */
+export const outcomeAnalysisOperations = {
+  'outcomes.previewSizes': operation<SizePreview>()({
+    kind: 'query',
+    summary: 'Read particle diameters from CSV text and analyse them, storing nothing',
+    input: z.object(sizeImportFields),
+  }),
+  'outcomes.previewLineScan': operation<LineScanPreview>()({
+    kind: 'query',
+    summary: 'Read an EDX line scan from CSV text and fit the four models, storing nothing',
+    input: z.object({ pair: pairTextSchema, ...lineScanImportFields }),
+  }),
+};
+
 export const outcomeOperations = {
   'outcomes.get': operation<BatchOutcome>()({
     kind: 'query',
@@ -172,15 +222,7 @@ export const outcomeOperations = {
   'outcomes.recordSizes': operation<SizeRecord>()({
     kind: 'command',
     summary: 'Import TEM particle diameters (CSV text) for a batch and analyse them',
-    input: z.object({
-      batchId: idSchema,
-      csvText: csvTextSchema,
-      column: columnSchema.optional(),
-      decimalSeparator: decimalSchema,
-      sourceFile: sourceFileSchema,
-      targetDiameterNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').nullable().optional(),
-      precisionPercent: z.number({ error: 'must be a number' }).positive('must be greater than 0').max(50, 'must be at most 50 %').default(2),
-    }),
+    input: z.object({ batchId: idSchema, sourceFile: sourceFileSchema, ...sizeImportFields }),
   }),
   'outcomes.removeSizes': operation<{ removed: number }>()({
     kind: 'command',
@@ -202,15 +244,9 @@ export const outcomeOperations = {
     summary: 'Import an EDX line scan (CSV: position nm, A, B), fit the four models and choose by BIC',
     input: z.object({
       batchId: idSchema,
-      csvText: csvTextSchema,
       name: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters').default(''),
-      positionColumn: columnSchema.optional(),
-      aColumn: columnSchema.optional(),
-      bColumn: columnSchema.optional(),
-      unit: z.enum(['auto', 'counts', 'atPercent'], { error: 'must be auto, counts or atPercent' }).default('auto'),
-      decimalSeparator: decimalSchema,
-      probeSigmaNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').max(50, 'must be at most 50 nm').nullable().default(null),
       sourceFile: sourceFileSchema,
+      ...lineScanImportFields,
     }),
   }),
   'outcomes.refitLineScan': operation<LineScanRecord>()({
