@@ -3,7 +3,6 @@
  * operation in the contract, so a new operation does not compile until its service is registered here.
  */
 import type { OperationName } from '../../shared-model/api/contract';
-import { batchHandlers } from './batches';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
 import { outcomeAnalysisHandlers } from './outcomes';
@@ -15,5 +14,4 @@ export const handlers: HandlerMap<OperationName> = {
   ...campaignHandlers,
   ...pairHandlers,
   ...elementHandlers,
-  ...batchHandlers,
 };

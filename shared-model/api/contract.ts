@@ -4,7 +4,6 @@
  * is derived from this record. A new capability adds its own `*Operations` record here.
  */
 import type { z } from 'zod';
-import { batchOperations } from './batches';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
@@ -16,7 +15,6 @@ export const operations = {
   ...campaignOperations,
   ...pairOperations,
   ...elementOperations,
-  ...batchOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
 export type Operations = typeof operations;

@@ -1,7 +1,6 @@
 /** Every CLI command; an area adds its list with one line. */
 import type { CliCommand } from '../command';
 import { outcomeCommands } from './outcomes';
-import { batchCommands } from './batches';
 import { campaignCommands } from './campaigns';
 import { pairCommands } from './pairs';
 
@@ -9,5 +8,4 @@ export const commands: CliCommand[] = [
   ...outcomeCommands,
   ...campaignCommands,
   ...pairCommands,
-  ...batchCommands,
 ];
