@@ -86,8 +86,8 @@ interface Kernel {
 
 interface KernelState {
   offsets: Int32Array;
-  neighbours: Int32Array;
-  distanceClass: Uint16Array;
+  /** Per neighbour entry: (neighbour index << 8) | (distance class << 1). */
+  packed: Int32Array;
   positions: Float64Array;
   farSq: number;
   species: Uint8Array;
@@ -105,8 +105,11 @@ interface KernelState {
   totals: Float64Array;
 }
 
+/** Most distinct neighbour distances the packed layout holds (fcc shapes have 5, the Mackay icosahedron 13). */
+export const MAX_DISTANCE_CLASSES = 127;
+
 function createKernel(state: KernelState): Kernel {
-  const { offsets, neighbours, distanceClass, positions, farSq, species, surface, density, sqrtDensity, dRho, dPhi, listA, listB, slot, rng, totals } = state;
+  const { offsets, packed, positions, farSq, species, surface, density, sqrtDensity, dRho, dPhi, listA, listB, slot, rng, totals } = state;
   const atoms = species.length;
   let maxDegree = 0;
   for (let i = 0; i < atoms; i++) maxDegree = Math.max(maxDegree, offsets[i + 1]! - offsets[i]!);
@@ -114,6 +117,7 @@ function createKernel(state: KernelState): Kernel {
   const touchedSite = new Int32Array(2 * maxDegree + 2);
   const touchedDensity = new Float64Array(2 * maxDegree + 2);
   const touchedSqrt = new Float64Array(2 * maxDegree + 2);
+  /** Sites touched by the last trial; −1 after a far trial, whose sites are N(i), i, N(j), j in order. */
   let touched = 0;
 
   function delta(i: number, j: number): number {
@@ -123,16 +127,17 @@ function createKernel(state: KernelState): Kernel {
     const ry = positions[3 * i + 1]! - positions[3 * j + 1]!;
     const rz = positions[3 * i + 2]! - positions[3 * j + 2]!;
     if (rx * rx + ry * ry + rz * rz >= farSq) {
+      // Far: no site neighbours both, so each touched density changes by one term; one pass per atom.
       let sum = 0;
       for (let e = offsets[i]!, end = offsets[i + 1]!; e < end; e++) {
-        const k = neighbours[e]!;
-        const idx = distanceClass[e]! * 2 + species[k]!;
+        const p = packed[e]!;
+        const k = p >> 8;
+        const idx = (p & 255) + species[k]!;
         const d = dRho[idx]!;
         sum += d;
         const nr = density[k]! + d;
         const root = Math.sqrt(nr);
         dE += dPhi[idx]! + sqrtDensity[k]! - root;
-        touchedSite[t] = k;
         touchedDensity[t] = nr;
         touchedSqrt[t] = root;
         t++;
@@ -140,20 +145,19 @@ function createKernel(state: KernelState): Kernel {
       let nr = density[i]! + sum;
       let root = Math.sqrt(nr);
       dE += sqrtDensity[i]! - root;
-      touchedSite[t] = i;
       touchedDensity[t] = nr;
       touchedSqrt[t] = root;
       t++;
       sum = 0;
       for (let e = offsets[j]!, end = offsets[j + 1]!; e < end; e++) {
-        const k = neighbours[e]!;
-        const idx = distanceClass[e]! * 2 + species[k]!;
+        const p = packed[e]!;
+        const k = p >> 8;
+        const idx = (p & 255) + species[k]!;
         const d = dRho[idx]!;
         sum += d;
         const nk = density[k]! - d;
         const rk = Math.sqrt(nk);
         dE += sqrtDensity[k]! - rk - dPhi[idx]!;
-        touchedSite[t] = k;
         touchedDensity[t] = nk;
         touchedSqrt[t] = rk;
         t++;
@@ -161,19 +165,18 @@ function createKernel(state: KernelState): Kernel {
       nr = density[j]! - sum;
       root = Math.sqrt(nr);
       dE += sqrtDensity[j]! - root;
-      touchedSite[t] = j;
       touchedDensity[t] = nr;
       touchedSqrt[t] = root;
-      t++;
-      touched = t;
+      touched = -1;
       return dE;
     }
     // Near: i turns A → B, j turns B → A; the i–j pair is A–B before and after and is skipped.
     let sumI = 0;
     for (let e = offsets[i]!, end = offsets[i + 1]!; e < end; e++) {
-      const k = neighbours[e]!;
+      const p = packed[e]!;
+      const k = p >> 8;
       if (k === j) continue;
-      const idx = distanceClass[e]! * 2 + species[k]!;
+      const idx = (p & 255) + species[k]!;
       const d = dRho[idx]!;
       pending[k] = pending[k]! + d;
       sumI += d;
@@ -182,9 +185,10 @@ function createKernel(state: KernelState): Kernel {
     pending[i] = pending[i]! + sumI;
     let sumJ = 0;
     for (let e = offsets[j]!, end = offsets[j + 1]!; e < end; e++) {
-      const k = neighbours[e]!;
+      const p = packed[e]!;
+      const k = p >> 8;
       if (k === i) continue;
-      const idx = distanceClass[e]! * 2 + species[k]!;
+      const idx = (p & 255) + species[k]!;
       const d = dRho[idx]!;
       pending[k] = pending[k]! - d;
       sumJ -= d;
@@ -194,10 +198,10 @@ function createKernel(state: KernelState): Kernel {
     // Embedding change −(√ρ' − √ρ) of every touched site once (pending is cleared as it is read).
     for (let pass = 0; pass < 2; pass++) {
       const centre = pass === 0 ? i : j;
-      let p = pending[centre]!;
-      if (p !== 0) {
+      let q = pending[centre]!;
+      if (q !== 0) {
         pending[centre] = 0;
-        const nr = density[centre]! + p;
+        const nr = density[centre]! + q;
         const root = Math.sqrt(nr);
         dE += sqrtDensity[centre]! - root;
         touchedSite[t] = centre;
@@ -206,11 +210,11 @@ function createKernel(state: KernelState): Kernel {
         t++;
       }
       for (let e = offsets[centre]!, end = offsets[centre + 1]!; e < end; e++) {
-        const k = neighbours[e]!;
-        p = pending[k]!;
-        if (p === 0) continue;
+        const k = packed[e]! >> 8;
+        q = pending[k]!;
+        if (q === 0) continue;
         pending[k] = 0;
-        const nr = density[k]! + p;
+        const nr = density[k]! + q;
         const root = Math.sqrt(nr);
         dE += sqrtDensity[k]! - root;
         touchedSite[t] = k;
@@ -221,6 +225,36 @@ function createKernel(state: KernelState): Kernel {
     }
     touched = t;
     return dE;
+  }
+
+  /** Writes the densities of the last trial (i A → B, j B → A) back. */
+  function commit(i: number, j: number): void {
+    if (touched < 0) {
+      let t = 0;
+      for (let e = offsets[i]!, end = offsets[i + 1]!; e < end; e++) {
+        const k = packed[e]! >> 8;
+        density[k] = touchedDensity[t]!;
+        sqrtDensity[k] = touchedSqrt[t]!;
+        t++;
+      }
+      density[i] = touchedDensity[t]!;
+      sqrtDensity[i] = touchedSqrt[t]!;
+      t++;
+      for (let e = offsets[j]!, end = offsets[j + 1]!; e < end; e++) {
+        const k = packed[e]! >> 8;
+        density[k] = touchedDensity[t]!;
+        sqrtDensity[k] = touchedSqrt[t]!;
+        t++;
+      }
+      density[j] = touchedDensity[t]!;
+      sqrtDensity[j] = touchedSqrt[t]!;
+    } else {
+      for (let k = 0; k < touched; k++) {
+        const site = touchedSite[k]!;
+        density[site] = touchedDensity[k]!;
+        sqrtDensity[site] = touchedSqrt[k]!;
+      }
+    }
   }
 
   function run(attempts: number, beta: number): number {
@@ -263,11 +297,7 @@ function createKernel(state: KernelState): Kernel {
         c = (c + t) | 0;
         if ((t >>> 0) / 4294967296 >= Math.exp(-dE * beta)) continue;
       }
-      for (let k = 0; k < touched; k++) {
-        const site = touchedSite[k]!;
-        density[site] = touchedDensity[k]!;
-        sqrtDensity[site] = touchedSqrt[k]!;
-      }
+      commit(i, j);
       species[i] = 1;
       species[j] = 0;
       listA[slotI] = j;
@@ -360,10 +390,13 @@ export class SwapEngine {
     const rng = new Int32Array(4);
     for (let k = 0; k < 4; k++) rng[k] = Math.floor(random.next() * 4294967296) | 0;
     this.totals[2] = surfaceB;
+    if (classes > MAX_DISTANCE_CLASSES) throw new RangeError(`the engine handles at most ${MAX_DISTANCE_CLASSES} distinct neighbour distances, this structure has ${classes}`);
+    if (n >= 1 << 23) throw new RangeError(`the engine handles fewer than ${1 << 23} sites`);
+    const packed = new Int32Array(list.neighbours.length);
+    for (let e = 0; e < packed.length; e++) packed[e] = (list.neighbours[e]! << 8) | (list.distanceClass[e]! << 1);
     this.kernel = createKernel({
       offsets: list.offsets,
-      neighbours: list.neighbours,
-      distanceClass: list.distanceClass,
+      packed,
       positions,
       farSq: (2 * list.cutoffAngstrom) ** 2,
       species: this.species,
