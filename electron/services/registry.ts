@@ -8,10 +8,12 @@ import type { HandlerMap } from './context';
 import { outcomeAnalysisHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
+import { predictionHandlers } from './prediction';
 
 export const handlers: HandlerMap<OperationName> = {
   ...outcomeAnalysisHandlers,
   ...campaignHandlers,
   ...pairHandlers,
+  ...predictionHandlers,
   ...elementHandlers,
 };

@@ -9,11 +9,13 @@ import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
 import { outcomeAnalysisOperations } from './outcomes';
 import { pairOperations } from './pairs';
+import { predictionOperations } from './prediction';
 
 export const operations = {
   ...outcomeAnalysisOperations,
   ...campaignOperations,
   ...pairOperations,
+  ...predictionOperations,
   ...elementOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 

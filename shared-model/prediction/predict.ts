@@ -270,7 +270,7 @@ function toTerms(t: SegregationTerms): PredictionTerms {
 const signed = (value: number) => `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(2)} eV`;
 
 function buildReason(surfaceElement: string | null, other: string, enrichment: number, terms: PredictionTerms, mixingKj: number, gap: boolean, ratio: number): string {
-  const mixing = `ΔHmix ${mixingKj >= 0 ? '+' : '−'}${Math.abs(mixingKj).toFixed(0)} kJ/mol${gap ? ' (miscibility gap)' : mixingKj < 0 ? ' (mixing favoured)' : ' (demixing tendency)'}`;
+  const mixing = `ΔHmix ${mixingKj >= 0 ? '+' : '−'}${Math.abs(mixingKj).toFixed(1)} kJ/mol${gap ? ' (miscibility gap)' : mixingKj < 0 ? ' (mixing favoured)' : ' (demixing tendency)'}`;
   const order = ratio > 1.05 ? `, unlike neighbours ×${ratio.toFixed(2)}` : ratio < 0.95 ? `, like neighbours cluster (unlike ×${ratio.toFixed(2)})` : '';
   if (surfaceElement === null) return `no surface enrichment; ${mixing}${order}`;
   const words: Record<'surfaceEnergy' | 'chemical' | 'elastic', [string, string]> = {

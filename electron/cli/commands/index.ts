@@ -3,9 +3,11 @@ import type { CliCommand } from '../command';
 import { outcomeCommands } from './outcomes';
 import { campaignCommands } from './campaigns';
 import { pairCommands } from './pairs';
+import { predictionCommands } from './prediction';
 
 export const commands: CliCommand[] = [
   ...outcomeCommands,
   ...campaignCommands,
   ...pairCommands,
+  ...predictionCommands,
 ];

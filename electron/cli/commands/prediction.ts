@@ -1,0 +1,128 @@
+/**
+ * `pairwright elements`, `pairwright predict A-B`, `pairwright rank --elements … --target …`:
+ * the segregation prediction from the command line (same services as the app).
+ */
+import type { ConditionsInput } from '../../../shared-model/api/prediction';
+import type { Prediction } from '../../../shared-model/prediction/predict';
+import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
+import { formatTable } from '../table';
+
+const CONDITION_OPTIONS: Record<string, OptionSpec> = {
+  xB: { type: 'string', description: 'atomic fraction of the second element B, 0 < xB < 1 (default 0.5)' },
+  'diameter-nm': { type: 'string', description: 'particle diameter in nm (default 3)' },
+  shape: { type: 'string', description: 'cuboctahedron, icosahedron, "truncated octahedron" or sphere (default cuboctahedron)' },
+  'temperature-k': { type: 'string', description: 'synthesis or annealing temperature in K (default 600)' },
+  facet: { type: 'string', description: 'surface facet of the segregation terms: 111 (default) or 100' },
+  'strain-rule': { type: 'string', description: '"oversized solute" (default) or "any solute"' },
+};
+
+function conditionsFrom(args: ParsedArgs): ConditionsInput {
+  const shape = optionalString(args, 'shape');
+  const facet = optionalString(args, 'facet');
+  const strainRule = optionalString(args, 'strain-rule');
+  return {
+    xB: optionalNumber(args, 'xB') ?? 0.5,
+    diameterNm: optionalNumber(args, 'diameter-nm') ?? 3,
+    temperatureK: optionalNumber(args, 'temperature-k') ?? 600,
+    ...(shape !== undefined ? { shape: shape as ConditionsInput['shape'] } : {}),
+    ...(facet !== undefined ? { facet: facet as ConditionsInput['facet'] } : {}),
+    ...(strainRule !== undefined ? { strainRule: strainRule as ConditionsInput['strainRule'] } : {}),
+  };
+}
+
+const percent = (x: number) => `${(100 * x).toFixed(1)} %`;
+const ev = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(3)} eV`;
+
+function describePrediction(p: Prediction): string {
+  return [
+    `${p.pair} at xB = ${p.xB} (${percent(p.xB)} ${p.elementB}), ${p.diameterNm} nm ${p.shape}, ${p.temperatureK} K, (${p.facet}) terms`,
+    `  architecture      ${p.architecture} (confidence ${p.confidence.toFixed(2)})`,
+    `  surface element   ${p.surfaceElement ?? 'none'}: ${percent(p.surfaceFraction)} of ${p.surfaceSites} surface sites (${p.atoms} atoms); enrichment E = ${p.enrichment.toFixed(3)}`,
+    `  core              ${percent(p.coreXB)} ${p.elementB}`,
+    `  terms             surface energy ${ev(p.terms.surfaceEnergy)}, chemical ${ev(p.terms.chemical)}, elastic ${ev(p.terms.elastic)} (negative favours ${p.surfaceElement ?? p.elementB} outside)`,
+    `  dilute limits     ${p.elementB} in ${p.elementA}: ${ev(p.segregation.bInA.total)}; ${p.elementA} in ${p.elementB}: ${ev(p.segregation.aInB.total)}`,
+    `  mixing            ΔHmix ${p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical ${p.mixingChemicalKjPerMol.toFixed(1)}, elastic ${p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×${p.unlikeNeighbourRatio.toFixed(2)}`,
+    `  why               ${p.reason}`,
+    ...p.flags.map((flag) => `  note              ${flag}`),
+    `  model ${p.modelVersion}, classifier ${p.classifierVersion}`,
+  ].join('\n');
+}
+
+export const predictionCommands: CliCommand[] = [
+  {
+    words: ['elements'],
+    args: '',
+    summary: 'The element property table (structure, lattice, cohesive energy, radii, surface energy, moduli, Miedema parameters) with sources',
+    options: {},
+    run: async (_args, context) => {
+      const table = await context.call('elements.table', {});
+      const text =
+        formatTable(table.elements, [
+          { header: 'el', value: (e) => e.symbol },
+          { header: 'structure', value: (e) => e.cell.structure },
+          { header: 'a/Å', value: (e) => e.latticeConstantAngstrom, align: 'right' },
+          { header: 'Ecoh/eV', value: (e) => e.cohesiveEnergyEv, align: 'right' },
+          { header: 'r12/Å', value: (e) => e.metallicRadiusAngstrom, align: 'right' },
+          { header: 'γ/J m⁻²', value: (e) => e.surfaceEnergyJPerM2, align: 'right' },
+          { header: 'χ', value: (e) => e.electronegativityPauling, align: 'right' },
+          { header: 'B/GPa', value: (e) => e.bulkModulusGpa, align: 'right' },
+          { header: 'G/GPa', value: (e) => e.shearModulusGpa, align: 'right' },
+          { header: 'M/g mol⁻¹', value: (e) => e.atomicMass, align: 'right' },
+          { header: 'φ*/V', value: (e) => e.miedema?.phiStarV, align: 'right' },
+          { header: 'nws^1/3', value: (e) => e.miedema?.nws13, align: 'right' },
+          { header: 'V^2/3', value: (e) => e.miedema?.v23Cm2, align: 'right' },
+          { header: 'ox.', value: (e) => e.oxidationStates.map((s) => `+${s}`).join(' ') },
+        ]) +
+        '\n\nsources:\n' +
+        table.sources.map((s) => `  ${s.column} [${s.unit}]: ${s.source}${s.fromMemory ? ' (values from memory)' : ''}`).join('\n');
+      return { json: table, text };
+    },
+  },
+  {
+    words: ['predict'],
+    args: '<A-B>',
+    summary: 'Predict the surface composition and architecture of one pair, e.g. predict Ag-Pd --xB 0.5 --diameter-nm 3 --temperature-k 600',
+    options: CONDITION_OPTIONS,
+    run: async (args, context) => {
+      const prediction = await context.call('prediction.predict', { pair: requirePositional(args, 0, 'A-B'), conditions: conditionsFrom(args) });
+      return { json: prediction, text: describePrediction(prediction) };
+    },
+  },
+  {
+    words: ['rank'],
+    args: '',
+    summary: 'Rank every pair of an element set for a target: rank --elements Pt,Pd,Au,Ag,Ni,Cu,Co --target alloy',
+    options: {
+      ...CONDITION_OPTIONS,
+      elements: { type: 'string', description: 'comma-separated symbols, or "all" (default all)' },
+      target: { type: 'string', description: 'alloy, core@shell, core@shell:X (X in the shell), Janus or intermetallic (default alloy)' },
+      limit: { type: 'string', description: 'print only the best N pairs' },
+    },
+    run: async (args, context) => {
+      const list = optionalString(args, 'elements') ?? 'all';
+      const elements = list.trim().toLowerCase() === 'all' ? ('all' as const) : list.split(',').map((s) => s.trim()).filter((s) => s !== '');
+      const limit = optionalNumber(args, 'limit');
+      if (limit !== undefined && (!Number.isInteger(limit) || limit < 1)) throw new CliError(`--limit must be a whole number ≥ 1, got ${limit}`);
+      const result = await context.call('prediction.rank', {
+        elements,
+        target: optionalString(args, 'target') ?? 'alloy',
+        conditions: conditionsFrom(args),
+        ...(limit !== undefined ? { limit } : {}),
+      });
+      const text =
+        `target: ${result.target}; xB ${result.conditions.xB}, ${result.conditions.diameterNm} nm ${result.conditions.shape}, ${result.conditions.temperatureK} K\n` +
+        formatTable(result.rows, [
+          { header: '#', value: (r) => r.rank, align: 'right' },
+          { header: 'pair', value: (r) => r.prediction.pair },
+          { header: 'score', value: (r) => r.score.toFixed(3), align: 'right' },
+          { header: 'architecture', value: (r) => r.prediction.architecture },
+          { header: 'conf.', value: (r) => r.prediction.confidence.toFixed(2), align: 'right' },
+          { header: 'surface', value: (r) => r.prediction.surfaceElement ?? '-' },
+          { header: 'E', value: (r) => r.prediction.enrichment.toFixed(2), align: 'right' },
+          { header: 'ΔHmix kJ/mol', value: (r) => r.prediction.mixingEnthalpyKjPerMol.toFixed(1), align: 'right' },
+          { header: 'why', value: (r) => r.prediction.reason },
+        ]);
+      return { json: result, text };
+    },
+  },
+];

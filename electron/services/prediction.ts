@@ -1,0 +1,34 @@
+/** Segregation prediction services: predict, rank, isotherms, stored predictions, element table. */
+import { insertPrediction, listPredictionsForPair } from '../../db/repositories/predictions';
+import type { predictionOperations } from '../../shared-model/api/prediction';
+import { ELEMENT_COLUMN_SOURCES, ELEMENT_RECORDS } from '../../shared-model/elements/element-table';
+import { computeIsotherm } from '../../shared-model/prediction/isotherm';
+import { predictPair, type Prediction } from '../../shared-model/prediction/predict';
+import { describeRankTarget, rankPairs } from '../../shared-model/prediction/rank';
+import type { HandlerMap } from './context';
+
+/** A plain copy (the lazily built `reason` becomes a data property) that any transport can carry. */
+function plain(prediction: Prediction): Prediction {
+  return { ...prediction, flags: [...prediction.flags] };
+}
+
+export const predictionHandlers: HandlerMap<keyof typeof predictionOperations> = {
+  'prediction.predict': (input) => plain(predictPair(input.pair.elementA, input.pair.elementB, input.conditions)),
+  'prediction.rank': (input) => {
+    const rows = rankPairs(input.elements, input.target, input.conditions);
+    const kept = input.limit === undefined ? rows : rows.slice(0, input.limit);
+    return {
+      target: describeRankTarget(input.target),
+      conditions: input.conditions,
+      rows: kept.map((row) => ({ rank: row.rank, score: row.score, prediction: plain(row.prediction) })),
+    };
+  },
+  'prediction.isotherm': (input) => computeIsotherm(input.pair.elementA, input.pair.elementB, input.conditions, input.sweep, input.points),
+  'prediction.save': (input, { store }) => {
+    const { elementA, elementB } = input.pair;
+    const result = plain(predictPair(elementA, elementB, input.conditions));
+    return insertPrediction(store.db, { pairId: input.pairId ?? null, inputs: { elementA, elementB, conditions: input.conditions }, result });
+  },
+  'prediction.listForPair': (input, { store }) => listPredictionsForPair(store.db, input.pairId),
+  'elements.table': () => ({ elements: ELEMENT_RECORDS.map((record) => ({ ...record })), sources: [...ELEMENT_COLUMN_SOURCES] }),
+};

@@ -1,0 +1,56 @@
+/** `pairwright elements`, `predict` and `rank` run as child processes. */
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import type { ElementTableResult, RankResult } from '../../shared-model/api/prediction';
+import type { Prediction } from '../../shared-model/prediction/predict';
+import { runPairwright, runPairwrightJson } from '../support/cli';
+import { tempDataDir } from '../support/host-fixture';
+
+const data = ['--data', join(tempDataDir('pairwright-cli-prediction-'), 'store')];
+
+describe('pairwright prediction commands', () => {
+  it('elements --json lists 30 metals with sources', () => {
+    const out = runPairwrightJson<ElementTableResult>(['elements', ...data]);
+    expect(out.elements).toHaveLength(30);
+    expect(out.elements.find((e) => e.symbol === 'Pt')?.surfaceEnergyJPerM2).toBe(2.489); // Tyson & Miller (1977), from memory
+    expect(out.sources.length).toBeGreaterThanOrEqual(9);
+  });
+
+  it('predict Ag-Pd --json gives the promised fields', () => {
+    const p = runPairwrightJson<Prediction>(['predict', 'Ag-Pd', '--xB', '0.5', '--diameter-nm', '3', '--shape', 'cuboctahedron', '--temperature-k', '600', ...data]);
+    for (const key of ['pair', 'surfaceElement', 'surfaceFraction', 'enrichment', 'architecture', 'confidence', 'terms', 'mixingEnthalpyKjPerMol', 'atoms', 'surfaceSites', 'reason']) {
+      expect(p, key).toHaveProperty(key);
+    }
+    expect(p.surfaceElement).toBe('Ag');
+    expect(Object.keys(p.terms).sort()).toEqual(['chemical', 'elastic', 'surfaceEnergy', 'total']);
+  });
+
+  it('rank --elements … --target alloy --json ranks the 21 pairs', () => {
+    const out = runPairwrightJson<RankResult>(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'alloy', ...data]);
+    expect(out.rows).toHaveLength(21);
+    expect(out.rows[0]?.rank).toBe(1);
+    expect(out.target).toBe('alloy');
+  });
+
+  it('human output for predict names the surface element and the terms', () => {
+    const run = runPairwright(['predict', 'Pt-Au', '--xB', '0.3', ...data]);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/surface element\s+Au/);
+    expect(run.stdout).toMatch(/surface energy/);
+  });
+
+  it.each([
+    [['predict', 'Ag-Pd', '--xB', '1.5'], /conditions\.xB/],
+    [['predict', 'Ag-Ag'], /two different elements/],
+    [['predict', 'Ag-Xx'], /unknown element "Xx"/],
+    [['predict', 'Ag-Pd', '--diameter-nm', 'abc'], /--diameter-nm must be a number/],
+    [['predict', 'Ag-Pd', '--temperature-k=-3'], /conditions\.temperatureK/],
+    [['rank', '--elements', 'Pt,Qq'], /unknown element "Qq"/],
+    [['rank', '--target', 'hollow'], /target/],
+  ])('bad input %j → one line, exit code 2', (args, message) => {
+    const run = runPairwright([...args, ...data]);
+    expect(run.status).toBe(2);
+    expect(run.stderr.trim().split('\n')).toHaveLength(1);
+    expect(run.stderr).toMatch(message);
+  });
+});
