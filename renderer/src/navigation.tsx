@@ -5,6 +5,8 @@
 import type { ComponentType } from 'react';
 import { ComingView } from './components/ComingView';
 import { CampaignsView } from './views/CampaignsView';
+import { CandidatesView } from './views/CandidatesView';
+import { DescriptorMapView } from './views/DescriptorMapView';
 
 export interface ViewEntry {
   id: string;
@@ -21,8 +23,8 @@ const coming = (title: string, description: string): ComponentType =>
 
 export const VIEWS: ViewEntry[] = [
   { id: 'campaigns', label: 'Campaigns', group: 'Workspace', component: CampaignsView, ready: true },
-  { id: 'candidates', label: 'Candidates', group: 'Predict', component: coming('Candidates', 'rank every pair for your target architecture with the surface-energy, chemical and strain terms behind each prediction.'), ready: false },
-  { id: 'descriptor-map', label: 'Descriptor map', group: 'Predict', component: coming('Descriptor map', 'plot pairs by two descriptors, coloured by predicted architecture, with your logged outcomes on top.'), ready: false },
+  { id: 'candidates', label: 'Candidates', group: 'Predict', component: CandidatesView, ready: true },
+  { id: 'descriptor-map', label: 'Descriptor map', group: 'Predict', component: DescriptorMapView, ready: true },
   { id: 'simulation', label: 'Simulation', group: 'Predict', component: coming('Simulation', 'run a lattice Monte Carlo of one particle with a many-body potential and compare it with the analytic prediction.'), ready: false },
   { id: 'batch-design', label: 'Batch design', group: 'Plan', component: coming('Batch design', 'turn a target particle into reagent amounts, kinetic checks and hazard cautions.'), ready: false },
   { id: 'reagents', label: 'Reagents', group: 'Plan', component: coming('Reagents', 'total the reagents of planned batches against your inventory, with a hazard summary.'), ready: false },

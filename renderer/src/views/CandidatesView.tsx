@@ -1,0 +1,197 @@
+/**
+ * Candidates: every pair of an element set scored for a target architecture, recomputed as the user
+ * types (the model runs here, in the page; it is the same shared-model code the API runs). Sortable,
+ * filterable table; ↑/↓ move through the rows, Enter opens the pair detail with its isotherms.
+ */
+import { useMemo, useState, type KeyboardEvent } from 'react';
+import { DomainError } from '../../../shared-model/api/result';
+import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
+import type { Prediction } from '../../../shared-model/prediction/predict';
+import { describeRankTarget, rankPairs, type RankTarget } from '../../../shared-model/prediction/rank';
+import { Banner } from '../components/Banner';
+import { Field } from '../components/Field';
+import { PairDetail } from './PairDetail';
+import { ConditionsBar, parseElementList, useConditions } from './prediction-conditions';
+
+interface Row {
+  rank: number;
+  score: number;
+  p: Prediction;
+}
+
+type SortKey = 'rank' | 'pair' | 'architecture' | 'confidence' | 'surface' | 'enrichment' | 'surfaceEnergy' | 'chemical' | 'elastic' | 'mixing';
+
+const COLUMNS: Array<{ key: SortKey; label: string; numeric: boolean; value: (r: Row) => number | string }> = [
+  { key: 'rank', label: '#', numeric: true, value: (r) => r.rank },
+  { key: 'pair', label: 'pair', numeric: false, value: (r) => r.p.pair },
+  { key: 'architecture', label: 'predicted', numeric: false, value: (r) => r.p.architecture },
+  { key: 'confidence', label: 'confidence', numeric: true, value: (r) => r.p.confidence },
+  { key: 'surface', label: 'at surface', numeric: false, value: (r) => r.p.surfaceElement ?? '' },
+  { key: 'enrichment', label: 'E', numeric: true, value: (r) => r.p.enrichment },
+  { key: 'surfaceEnergy', label: 'γ term, eV', numeric: true, value: (r) => r.p.terms.surfaceEnergy },
+  { key: 'chemical', label: 'chemical, eV', numeric: true, value: (r) => r.p.terms.chemical },
+  { key: 'elastic', label: 'elastic, eV', numeric: true, value: (r) => r.p.terms.elastic },
+  { key: 'mixing', label: 'ΔHmix, kJ/mol', numeric: true, value: (r) => r.p.mixingEnthalpyKjPerMol },
+];
+
+const TARGET_KINDS = ['alloy', 'core@shell any', 'core@shell with', 'Janus', 'intermetallic'] as const;
+type TargetKind = (typeof TARGET_KINDS)[number];
+
+function toTarget(kind: TargetKind, shell: string): RankTarget {
+  switch (kind) {
+    case 'alloy':
+      return { kind: 'alloy' };
+    case 'core@shell any':
+      return { kind: 'core@shell' };
+    case 'core@shell with':
+      return { kind: 'core@shell', shellElement: shell };
+    case 'Janus':
+      return { kind: 'Janus' };
+    case 'intermetallic':
+      return { kind: 'intermetallic' };
+  }
+}
+
+const fmt = (x: number, digits = 2) => (x >= 0 ? '+' : '−') + Math.abs(x).toFixed(digits);
+
+export function CandidatesView() {
+  const conditionsState = useConditions();
+  const [elementsText, setElementsText] = useState('Pt, Pd, Au, Ag, Ni, Cu, Co');
+  const [targetKind, setTargetKind] = useState<TargetKind>('alloy');
+  const [shell, setShell] = useState('Pt');
+  const [filter, setFilter] = useState('');
+  const [sort, setSort] = useState<{ key: SortKey; direction: 1 | -1 }>({ key: 'rank', direction: 1 });
+  const [cursor, setCursor] = useState(0);
+  const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
+  const conditions = conditionsState.conditions;
+
+  const ranking = useMemo((): { rows: Row[]; errors: Record<string, string>; target: string } => {
+    if (conditions === null) return { rows: [], errors: {}, target: '' };
+    try {
+      const target = toTarget(targetKind, shell);
+      const ranked = rankPairs(parseElementList(elementsText), target, conditions);
+      return { rows: ranked.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction })), errors: {}, target: describeRankTarget(target) };
+    } catch (error) {
+      if (!(error instanceof DomainError)) throw error;
+      const field = error.field === 'target' ? 'shell' : 'elements';
+      return { rows: [], errors: { [field]: error.message }, target: '' };
+    }
+  }, [conditions, elementsText, targetKind, shell]);
+
+  const visible = useMemo(() => {
+    const needle = filter.trim().toLowerCase();
+    const kept = needle === '' ? ranking.rows : ranking.rows.filter((r) => `${r.p.pair} ${r.p.architecture} ${r.p.surfaceElement ?? ''}`.toLowerCase().includes(needle));
+    const column = COLUMNS.find((c) => c.key === sort.key) ?? COLUMNS[0];
+    if (!column) return kept;
+    return [...kept].sort((x, y) => {
+      const a = column.value(x);
+      const b = column.value(y);
+      const order = typeof a === 'number' && typeof b === 'number' ? a - b : String(a).localeCompare(String(b));
+      return sort.direction * order || x.rank - y.rank;
+    });
+  }, [ranking.rows, filter, sort]);
+
+  const active = Math.min(cursor, Math.max(0, visible.length - 1));
+  const onKey = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (event.key === 'ArrowDown') setCursor(Math.min(visible.length - 1, active + 1));
+    else if (event.key === 'ArrowUp') setCursor(Math.max(0, active - 1));
+    else if (event.key === 'Home') setCursor(0);
+    else if (event.key === 'End') setCursor(Math.max(0, visible.length - 1));
+    else if (event.key === 'Enter') {
+      const row = visible[active];
+      if (row) setOpen({ a: row.p.elementA, b: row.p.elementB });
+    } else if (event.key === 'Escape') setOpen(null);
+    else return;
+    event.preventDefault();
+  };
+  const sortBy = (key: SortKey) => setSort((current) => ({ key, direction: current.key === key ? (current.direction === 1 ? -1 : 1) : key === 'rank' || key === 'pair' ? 1 : -1 }));
+
+  return (
+    <div className="stack" data-testid="candidates-view">
+      <div className="view__header">
+        <h1>Candidates</h1>
+        <p className="muted">
+          Which element goes to the surface of each pair, how much, and why — Miedema mixing, Wynblatt–Ku segregation terms and a Langmuir–McLean surface/core balance for a
+          particle of this size. Recomputed as you type.
+        </p>
+      </div>
+      <div className="card">
+        <div className="form-grid" role="group" aria-label="Pairs and target">
+          <Field label="Elements" name="elements" error={ranking.errors.elements} hint={`symbols, or "all" (${METAL_SYMBOLS.length} metals)`} wide>
+            <input name="elements" value={elementsText} onChange={(e) => setElementsText(e.target.value)} autoComplete="off" />
+          </Field>
+          <Field label="Target" name="target">
+            <select name="target" value={targetKind} onChange={(e) => setTargetKind(e.target.value as TargetKind)}>
+              {TARGET_KINDS.map((kind) => (
+                <option key={kind} value={kind}>
+                  {kind === 'core@shell with' ? 'core@shell with … in the shell' : kind}
+                </option>
+              ))}
+            </select>
+          </Field>
+          {targetKind === 'core@shell with' ? (
+            <Field label="Shell element" name="shell" error={ranking.errors.shell}>
+              <input name="shell" value={shell} onChange={(e) => setShell(e.target.value.trim())} autoComplete="off" />
+            </Field>
+          ) : null}
+          <Field label="Filter" name="filter" hint="pair, element or label">
+            <input name="filter" value={filter} onChange={(e) => setFilter(e.target.value)} autoComplete="off" />
+          </Field>
+        </div>
+        <ConditionsBar state={conditionsState} />
+      </div>
+      {conditions === null ? <Banner tone="error">Fix the highlighted condition to see the ranking.</Banner> : null}
+      <div className="card">
+        <h2 className="card__title">
+          {ranking.target ? `Best for ${ranking.target}` : 'Ranking'} <span className="muted small">({visible.length} of {ranking.rows.length} pairs; ↑/↓ to move, Enter to open)</span>
+        </h2>
+        <div style={{ maxHeight: 480, overflow: 'auto' }} tabIndex={0} onKeyDown={onKey} role="region" aria-label="Ranked pairs, use arrow keys" data-testid="ranking-region">
+          <table className="data-table" aria-label="Ranked candidates" aria-rowcount={visible.length}>
+            <thead>
+              <tr>
+                {COLUMNS.map((c) => (
+                  <th key={c.key} scope="col" aria-sort={sort.key === c.key ? (sort.direction === 1 ? 'ascending' : 'descending') : 'none'}>
+                    <button type="button" className="button--quiet" onClick={() => sortBy(c.key)}>
+                      {c.label}
+                      {sort.key === c.key ? (sort.direction === 1 ? ' ▲' : ' ▼') : ''}
+                    </button>
+                  </th>
+                ))}
+                <th scope="col">why</th>
+              </tr>
+            </thead>
+            <tbody>
+              {visible.map((row, index) => (
+                <tr
+                  key={row.p.pair}
+                  aria-selected={index === active}
+                  style={index === active ? { background: 'rgba(59, 130, 246, 0.14)', cursor: 'pointer' } : { cursor: 'pointer' }}
+                  data-pair={row.p.pair}
+                  onClick={() => {
+                    setCursor(index);
+                    setOpen({ a: row.p.elementA, b: row.p.elementB });
+                  }}
+                >
+                  <td>{row.rank}</td>
+                  <th scope="row" className="pair-symbol">
+                    {row.p.pair}
+                  </th>
+                  <td>{row.p.architecture}</td>
+                  <td>{row.p.confidence.toFixed(2)}</td>
+                  <td>{row.p.surfaceElement ?? '—'}</td>
+                  <td>{row.p.enrichment.toFixed(2)}</td>
+                  <td>{fmt(row.p.terms.surfaceEnergy)}</td>
+                  <td>{fmt(row.p.terms.chemical)}</td>
+                  <td>{fmt(row.p.terms.elastic)}</td>
+                  <td>{fmt(row.p.mixingEnthalpyKjPerMol, 1)}</td>
+                  <td className="notes-cell small">{row.p.reason}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </div>
+      {open && conditions ? <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,195 @@
+/**
+ * Descriptor map: every pair of an element set placed by two chosen descriptors, coloured by its
+ * predicted architecture (legend in words). Computed in the page with the shared model, so it follows
+ * the conditions as they are typed. Clicking a point opens the pair detail.
+ */
+import { useMemo, useState } from 'react';
+import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from 'recharts';
+import { DomainError } from '../../../shared-model/api/result';
+import { describeArchitecture, type ArchitectureKind } from '../../../shared-model/architecture/labels';
+import { DESCRIPTOR_KEYS, DESCRIPTOR_LABELS, relativeDifference, type DescriptorKey } from '../../../shared-model/prediction/descriptors';
+import { recordProperty } from '../../../shared-model/elements/element-table';
+import { predictWithContext } from '../../../shared-model/prediction/predict';
+import { checkElementList, pairContexts } from '../../../shared-model/prediction/rank';
+import { Banner } from '../components/Banner';
+import { Field } from '../components/Field';
+import { PairDetail } from './PairDetail';
+import { ConditionsBar, parseElementList, useConditions } from './prediction-conditions';
+
+type AxisKey = DescriptorKey | 'segregationBinA' | 'segregationAinB' | 'enrichment' | 'unlikeNeighbourRatio';
+
+const AXES: Array<{ key: AxisKey; label: string }> = [
+  ...DESCRIPTOR_KEYS.map((key) => ({ key: key as AxisKey, label: DESCRIPTOR_LABELS[key] })),
+  { key: 'segregationBinA', label: 'segregation enthalpy of dilute B at the surface of A, eV' },
+  { key: 'segregationAinB', label: 'segregation enthalpy of dilute A at the surface of B, eV' },
+  { key: 'enrichment', label: 'predicted surface enrichment E' },
+  { key: 'unlikeNeighbourRatio', label: 'unlike neighbours relative to random' },
+];
+
+const KIND_COLOURS: Record<string, string> = {
+  alloy: '#2563eb',
+  'surface-enriched alloy': '#0891b2',
+  'core@shell': '#c2410c',
+  Janus: '#7c3aed',
+  intermetallic: '#15803d',
+  unknown: '#6b7280',
+};
+
+interface Point {
+  x: number;
+  y: number;
+  pair: string;
+  elementA: string;
+  elementB: string;
+  label: string;
+  kind: ArchitectureKind;
+}
+
+const RELATIVE_PROPERTIES = {
+  cohesiveEnergy: 'cohesiveEnergyEv',
+  metallicRadius: 'metallicRadiusAngstrom',
+  surfaceEnergy: 'surfaceEnergyJPerM2',
+  electronegativity: 'electronegativityPauling',
+  bulkModulus: 'bulkModulusGpa',
+  shearModulus: 'shearModulusGpa',
+  latticeConstant: 'fccEquivalentLatticeAngstrom',
+} as const;
+
+export function DescriptorMapView() {
+  const conditionsState = useConditions();
+  const [elementsText, setElementsText] = useState('all');
+  const [xKey, setXKey] = useState<AxisKey>('surfaceEnergy');
+  const [yKey, setYKey] = useState<AxisKey>('metallicRadius');
+  const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
+  const conditions = conditionsState.conditions;
+
+  const result = useMemo((): { points: Point[]; error: string | null } => {
+    if (conditions === null) return { points: [], error: null };
+    try {
+      const contexts = pairContexts(checkElementList(parseElementList(elementsText)));
+      const points = contexts.map((ctx): Point => {
+        const p = predictWithContext(ctx, conditions);
+        const value = (key: AxisKey): number => {
+          switch (key) {
+            case 'mixingEnthalpyKjPerMol':
+              return p.mixingEnthalpyKjPerMol;
+            case 'mixingChemicalKjPerMol':
+              return p.mixingChemicalKjPerMol;
+            case 'mixingElasticKjPerMol':
+              return p.mixingElasticKjPerMol;
+            case 'segregationBinA':
+              return p.segregation.bInA.total;
+            case 'segregationAinB':
+              return p.segregation.aInB.total;
+            case 'enrichment':
+              return p.enrichment;
+            case 'unlikeNeighbourRatio':
+              return p.unlikeNeighbourRatio;
+            default: {
+              const property = RELATIVE_PROPERTIES[key];
+              return relativeDifference(recordProperty(ctx.a, property), recordProperty(ctx.b, property));
+            }
+          }
+        };
+        return { x: value(xKey), y: value(yKey), pair: p.pair, elementA: p.elementA, elementB: p.elementB, label: p.architecture, kind: p.architectureKind };
+      });
+      return { points, error: null };
+    } catch (error) {
+      if (!(error instanceof DomainError)) throw error;
+      return { points: [], error: error.message };
+    }
+  }, [conditions, elementsText, xKey, yKey]);
+
+  const groups = useMemo(() => {
+    const byKind = new Map<ArchitectureKind, Point[]>();
+    for (const point of result.points) {
+      const list = byKind.get(point.kind) ?? [];
+      list.push(point);
+      byKind.set(point.kind, list);
+    }
+    return [...byKind.entries()];
+  }, [result.points]);
+
+  const axisLabel = (key: AxisKey) => AXES.find((a) => a.key === key)?.label ?? key;
+  const legendWords = (kind: ArchitectureKind, count: number) =>
+    `${kind === 'core@shell' ? 'core@shell (one element covers the other)' : `${kind}: ${describeArchitecture(kind)}`} — ${count}`;
+
+  return (
+    <div className="stack" data-testid="descriptor-map-view">
+      <div className="view__header">
+        <h1>Descriptor map</h1>
+        <p className="muted">Pairs placed by two descriptors (B relative to A for element properties), coloured by the predicted architecture at the conditions below.</p>
+      </div>
+      <div className="card">
+        <div className="form-grid" role="group" aria-label="Map axes">
+          <Field label="Elements" name="elements" error={result.error ?? undefined} hint='symbols, or "all"' wide>
+            <input name="elements" value={elementsText} onChange={(e) => setElementsText(e.target.value)} autoComplete="off" />
+          </Field>
+          <Field label="x axis" name="xAxis">
+            <select name="xAxis" value={xKey} onChange={(e) => setXKey(e.target.value as AxisKey)}>
+              {AXES.map((a) => (
+                <option key={a.key} value={a.key}>
+                  {a.label}
+                </option>
+              ))}
+            </select>
+          </Field>
+          <Field label="y axis" name="yAxis">
+            <select name="yAxis" value={yKey} onChange={(e) => setYKey(e.target.value as AxisKey)}>
+              {AXES.map((a) => (
+                <option key={a.key} value={a.key}>
+                  {a.label}
+                </option>
+              ))}
+            </select>
+          </Field>
+        </div>
+        <ConditionsBar state={conditionsState} />
+      </div>
+      {conditions === null ? <Banner tone="error">Fix the highlighted condition to see the map.</Banner> : null}
+      <div className="card" data-testid="descriptor-chart">
+        <h2 className="card__title">
+          {result.points.length} pairs <span className="muted small">(click a point for its detail)</span>
+        </h2>
+        <ResponsiveContainer width="100%" height={460}>
+          <ScatterChart margin={{ left: 16, right: 24, top: 8, bottom: 32 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis dataKey="x" type="number" name={axisLabel(xKey)} label={{ value: axisLabel(xKey), position: 'insideBottom', offset: -16 }} tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()} />
+            <YAxis dataKey="y" type="number" name={axisLabel(yKey)} width={64} tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()} />
+            <ZAxis range={[50, 50]} />
+            <Tooltip
+              cursor={{ strokeDasharray: '3 3' }}
+              content={({ payload }) => {
+                const point = payload?.[0]?.payload as Point | undefined;
+                if (!point) return null;
+                return (
+                  <div className="card small">
+                    <strong>{point.pair}</strong>: {point.label}
+                    <br />
+                    x = {point.x.toPrecision(3)}, y = {point.y.toPrecision(3)}
+                  </div>
+                );
+              }}
+            />
+            <Legend verticalAlign="top" height={48} />
+            {groups.map(([kind, points]) => (
+              <Scatter
+                key={kind}
+                name={legendWords(kind, points.length)}
+                data={points}
+                fill={KIND_COLOURS[kind] ?? '#6b7280'}
+                isAnimationActive={false}
+                onClick={(data: unknown) => {
+                  const point = (data as { payload?: Point }).payload;
+                  if (point) setOpen({ a: point.elementA, b: point.elementB });
+                }}
+              />
+            ))}
+          </ScatterChart>
+        </ResponsiveContainer>
+        <p className="small muted">Logged outcomes of the campaign will be drawn on top once outcomes are recorded.</p>
+      </div>
+      {open && conditions ? <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,159 @@
+/**
+ * One pair in detail: the prediction at the chosen conditions with its terms, and how the surface
+ * composition changes with composition, diameter and temperature (isotherm charts). Saves the prediction
+ * to the store, linked to the current campaign's pair when there is one.
+ */
+import { useMemo, useState } from 'react';
+import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { describeArchitecture } from '../../../shared-model/architecture/labels';
+import { computeIsotherm, type IsothermSweep } from '../../../shared-model/prediction/isotherm';
+import { predictPair, type PredictionConditions } from '../../../shared-model/prediction/predict';
+import { call } from '../api/client';
+import { useQuery } from '../api/hooks';
+import { useAppState } from '../app-state';
+import { Banner } from '../components/Banner';
+
+const pct = (x: number) => `${(100 * x).toFixed(1)} %`;
+const ev = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(3)} eV`;
+
+function IsothermChart(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; sweep: IsothermSweep }) {
+  const { elementA, elementB, conditions, sweep } = props;
+  const data = useMemo(
+    () =>
+      computeIsotherm(elementA, elementB, conditions, sweep, 41).points.map((p) => ({
+        x: sweep === 'xB' ? 100 * p.x : p.x,
+        surface: 100 * p.surfaceXB,
+        core: 100 * p.coreXB,
+        overall: 100 * p.xB,
+      })),
+    [elementA, elementB, conditions, sweep],
+  );
+  const xLabel = sweep === 'xB' ? `overall at.% ${elementB}` : sweep === 'diameter' ? 'diameter, nm' : 'temperature, K';
+  const marker = sweep === 'xB' ? 100 * conditions.xB : sweep === 'diameter' ? conditions.diameterNm : conditions.temperatureK;
+  return (
+    <figure style={{ margin: 0 }} aria-label={`${elementB} at the surface vs ${xLabel}`} data-testid={`isotherm-${sweep}`}>
+      <figcaption className="small">
+        at.% {elementB} in the surface layer and in the core vs {xLabel}
+      </figcaption>
+      <ResponsiveContainer width="100%" height={220}>
+        <LineChart data={data} margin={{ left: 8, right: 16, top: 8, bottom: 16 }}>
+          <CartesianGrid strokeDasharray="3 3" />
+          <XAxis
+            dataKey="x"
+            type="number"
+            scale={sweep === 'diameter' ? 'log' : 'linear'}
+            domain={['dataMin', 'dataMax']}
+            tickFormatter={(v: number) => (sweep === 'diameter' ? String(Number(v.toPrecision(2))) : v.toFixed(0))}
+            label={{ value: xLabel, position: 'insideBottom', offset: -8 }}
+          />
+          <YAxis domain={[0, 100]} unit="%" width={48} />
+          <Tooltip formatter={(value) => `${Number(value).toFixed(1)} %`} labelFormatter={(v) => `${xLabel} ${Number(v).toPrecision(3)}`} />
+          <Legend verticalAlign="top" height={24} />
+          <ReferenceLine x={marker} stroke="#888" strokeDasharray="4 4" />
+          <Line type="monotone" dataKey="surface" name={`surface ${elementB}`} stroke="#c2410c" dot={false} strokeWidth={2} isAnimationActive={false} />
+          <Line type="monotone" dataKey="core" name={`core ${elementB}`} stroke="#1d4ed8" dot={false} strokeWidth={2} isAnimationActive={false} />
+          {sweep !== 'xB' ? <Line type="monotone" dataKey="overall" name="overall" stroke="#6b7280" dot={false} strokeDasharray="2 2" isAnimationActive={false} /> : null}
+        </LineChart>
+      </ResponsiveContainer>
+    </figure>
+  );
+}
+
+export function PairDetail(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; onClose?: () => void }) {
+  const { elementA, elementB, conditions } = props;
+  const p = useMemo(() => predictPair(elementA, elementB, conditions), [elementA, elementB, conditions]);
+  const { campaignId, revision, bumpRevision } = useAppState();
+  const pairs = useQuery('pairs.list', campaignId === null ? null : { campaignId }, `pairs-${campaignId}-${revision}`);
+  const linked = (pairs.data ?? []).find((x) => (x.elementA === elementA && x.elementB === elementB) || (x.elementA === elementB && x.elementB === elementA)) ?? null;
+  const saved = useQuery('prediction.listForPair', linked ? { pairId: linked.id } : null, `saved-${linked?.id}-${revision}`);
+  const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
+
+  const save = async () => {
+    const result = await call('prediction.save', {
+      pair: `${elementA}-${elementB}`,
+      conditions: { ...conditions },
+      ...(linked ? { pairId: linked.id } : {}),
+    });
+    if (!result.ok) {
+      setMessage({ tone: 'error', text: result.error.message });
+      return;
+    }
+    setMessage({ tone: 'info', text: linked ? `saved as prediction ${result.value.id} for pair ${linked.elementA}-${linked.elementB} of this campaign` : `saved as prediction ${result.value.id} (no campaign pair to link)` });
+    bumpRevision();
+  };
+
+  return (
+    <section className="card pair-detail" aria-label={`Pair detail ${p.pair}`}>
+      <div className="view__header">
+        <h2 className="card__title">
+          {p.pair}: <span data-testid="detail-architecture">{p.architecture}</span> <span className="muted small">({describeArchitecture(p.architecture)})</span>
+        </h2>
+        {props.onClose ? (
+          <button type="button" className="button--quiet" onClick={props.onClose}>
+            Close
+          </button>
+        ) : null}
+      </div>
+      <p>
+        {p.surfaceElement ? (
+          <>
+            <strong>{p.surfaceElement}</strong> goes to the surface: {pct(p.surfaceFraction)} of {p.surfaceSites} surface sites ({p.atoms} atoms), enrichment E ={' '}
+            {p.enrichment.toFixed(2)}; the core holds {pct(p.coreXB)} {elementB}.
+          </>
+        ) : (
+          <>No surface enrichment.</>
+        )}{' '}
+        Confidence {p.confidence.toFixed(2)}.
+      </p>
+      <p className="muted">{p.reason}</p>
+      <table className="data-table" aria-label="Segregation terms">
+        <thead>
+          <tr>
+            <th scope="col">term (eV; negative favours the element at the surface)</th>
+            <th scope="col">at these conditions ({p.surfaceElement ?? elementB})</th>
+            <th scope="col">
+              dilute {elementB} in {elementA}
+            </th>
+            <th scope="col">
+              dilute {elementA} in {elementB}
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {(['surfaceEnergy', 'chemical', 'elastic', 'total'] as const).map((key) => (
+            <tr key={key}>
+              <th scope="row">{key === 'surfaceEnergy' ? 'surface energy' : key === 'chemical' ? 'chemical (regular solution)' : key === 'elastic' ? 'elastic strain' : 'total'}</th>
+              <td>{ev(p.terms[key])}</td>
+              <td>{ev(p.segregation.bInA[key])}</td>
+              <td>{ev(p.segregation.aInB[key])}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="small muted">
+        Miedema ΔHmix {p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical {p.mixingChemicalKjPerMol.toFixed(1)}, elastic {p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×
+        {p.unlikeNeighbourRatio.toFixed(2)} of random{p.miscibilityGap ? ', inside the miscibility gap' : ''}. ({p.facet}) facet, strain rule “{p.strainRule}”, model {p.modelVersion}.
+      </p>
+      {p.flags.length > 0 ? (
+        <ul className="small">
+          {p.flags.map((flag) => (
+            <li key={flag}>{flag}</li>
+          ))}
+        </ul>
+      ) : null}
+      <div style={{ display: 'grid', gridTemplateColumns: 'repeat(auto-fit, minmax(320px, 1fr))', gap: 16 }}>
+        <IsothermChart elementA={elementA} elementB={elementB} conditions={conditions} sweep="xB" />
+        <IsothermChart elementA={elementA} elementB={elementB} conditions={conditions} sweep="diameter" />
+        <IsothermChart elementA={elementA} elementB={elementB} conditions={conditions} sweep="temperature" />
+      </div>
+      <div className="form-actions">
+        <button type="button" className="button--primary" onClick={save}>
+          Save prediction{linked ? ` to ${linked.elementA}-${linked.elementB}` : ''}
+        </button>
+        {linked && saved.data ? <span className="small muted">{saved.data.length} saved for this campaign pair</span> : null}
+        {!linked ? <span className="small muted">{campaignId === null ? 'no campaign selected' : 'this pair is not in the current campaign'}: saved unlinked</span> : null}
+      </div>
+      {message ? <Banner tone={message.tone}>{message.text}</Banner> : null}
+    </section>
+  );
+}

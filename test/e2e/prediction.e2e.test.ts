@@ -1,0 +1,127 @@
+/**
+ * A user in Debian's Chromium ranks candidates, types a bad composition, sorts, moves through the table
+ * with the keyboard, opens a pair, saves its prediction to a campaign pair, and looks at the descriptor map.
+ * Screenshots go to test-output/screenshots/.
+ */
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { startTestHost, tempDataDir, type HostFixture } from '../support/host-fixture';
+
+const available = browserAvailable();
+
+describe.skipIf(!available)('prediction views in the browser host', () => {
+  let browser: Browser;
+  let fixture: HostFixture;
+  let page: Page;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    fixture = await startTestHost(tempDataDir('pairwright-e2e-prediction-'));
+    page = await browser.newPage({ viewport: { width: 1500, height: 1000 } });
+    page.setDefaultTimeout(10000);
+    page.on('pageerror', (error) => {
+      throw error;
+    });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await fixture?.stop();
+  });
+
+  const rows = () => page.locator('table[aria-label="Ranked candidates"] tbody tr');
+  const input = (name: string) => page.locator(`[data-testid="candidates-view"] [name="${name}"]`);
+
+  it('ranks the 21 pairs of the seven default metals', async () => {
+    await page.goto(fixture.host.url);
+    await page.locator('[data-view="candidates"]').click();
+    await expect.poll(() => rows().count()).toBe(21);
+    await page.screenshot({ path: screenshotPath('candidates'), fullPage: true });
+  });
+
+  it('shows a bad composition beside its field and recomputes as soon as it is fixed', async () => {
+    await input('atPercentB').fill('150');
+    await expect.poll(() => page.locator('[data-error-for="atPercentB"]').textContent()).toMatch(/between 0 and 100/);
+    expect(await rows().count()).toBe(0);
+    await page.screenshot({ path: screenshotPath('candidates-bad-composition'), fullPage: true });
+    await input('atPercentB').fill('30');
+    await expect.poll(() => rows().count()).toBe(21);
+    await input('elements').fill('Pt, Pd, Xx');
+    await expect.poll(() => page.locator('[data-error-for="elements"]').textContent()).toMatch(/unknown element "Xx"/);
+    await input('elements').fill('Pt, Pd, Au, Ag, Ni, Cu, Co');
+    await expect.poll(() => rows().count()).toBe(21);
+  });
+
+  it('targets core@shell with Au in the shell: Au-covered pairs first', async () => {
+    await input('target').selectOption('core@shell with');
+    await input('shell').fill('Au');
+    await expect.poll(async () => (await rows().first().locator('td').nth(3).textContent())?.trim()).toBe('Au');
+  });
+
+  it('sorts by a column and filters', async () => {
+    await page.getByRole('button', { name: /^confidence/ }).click();
+    await expect.poll(() => page.locator('th[aria-sort="descending"]').count()).toBe(1);
+    await input('filter').fill('Ag');
+    await expect.poll(() => rows().count()).toBe(6);
+    for (const text of await rows().locator('th').allTextContents()) expect(text).toContain('Ag');
+    await input('filter').fill('');
+    await expect.poll(() => rows().count()).toBe(21);
+  });
+
+  it('moves with the arrow keys and opens a pair with Enter: isotherm charts and terms', async () => {
+    await page.locator('[data-testid="ranking-region"]').focus();
+    await page.keyboard.press('ArrowDown');
+    await page.keyboard.press('ArrowDown');
+    const third = (await rows().nth(2).getAttribute('data-pair')) ?? '';
+    expect(await rows().nth(2).getAttribute('aria-selected')).toBe('true');
+    await page.keyboard.press('Enter');
+    const detail = page.getByRole('region', { name: `Pair detail ${third}` });
+    await expect.poll(() => detail.isVisible()).toBe(true);
+    await expect.poll(() => detail.locator('[data-testid="isotherm-xB"] svg .recharts-line').count()).toBeGreaterThan(0);
+    await expect.poll(() => detail.locator('[data-testid="isotherm-diameter"] svg .recharts-line').count()).toBeGreaterThan(0);
+    expect(await detail.getByRole('table', { name: 'Segregation terms' }).textContent()).toMatch(/surface energy/);
+    await page.screenshot({ path: screenshotPath('candidates-pair-detail'), fullPage: true });
+  });
+
+  it('saves a prediction linked to the campaign pair', async () => {
+    // a campaign with the pair Pt-Ni, selected as the current campaign
+    await page.locator('[data-view="campaigns"]').click();
+    await page.locator('form[aria-label="New campaign"] input[name="name"]').fill('Cathode screen');
+    await page.getByRole('button', { name: 'Create campaign' }).click();
+    const form = page.getByRole('form', { name: 'Add pair' });
+    await form.locator('input[name="elementA"]').fill('Pt');
+    await form.locator('input[name="elementB"]').fill('Ni');
+    await form.getByRole('button', { name: 'Add pair' }).click();
+    await expect.poll(() => page.locator('table[aria-label="Candidate pairs"] tbody tr').count()).toBe(1);
+
+    await page.locator('[data-view="candidates"]').click();
+    await expect.poll(() => rows().count()).toBeGreaterThan(0);
+    await input('target').selectOption('alloy');
+    await input('filter').fill('Pt-Ni');
+    await expect.poll(() => rows().count()).toBe(1);
+    await rows().first().click();
+    const detail = page.getByRole('region', { name: 'Pair detail Pt-Ni' });
+    await detail.getByRole('button', { name: /Save prediction to Pt-Ni/ }).click();
+    await expect.poll(() => detail.getByRole('status').textContent()).toMatch(/saved as prediction \d+ for pair Pt-Ni/);
+    const stored = fixture.store.db.prepare('SELECT pair_id, model_version, inputs_json FROM predictions').all() as Array<{ pair_id: number; model_version: string; inputs_json: string }>;
+    expect(stored).toHaveLength(1);
+    expect(stored[0]?.pair_id).toBeGreaterThan(0);
+    expect(JSON.parse(stored[0]?.inputs_json ?? '{}')).toMatchObject({ elementA: 'Pt', elementB: 'Ni', conditions: { xB: 0.5, diameterNm: 3, temperatureK: 600 } }); // the view opens with its default conditions
+    await expect.poll(() => detail.textContent()).toMatch(/1 saved for this campaign pair/);
+  });
+
+  it('descriptor map: a point per pair, coloured by architecture with a legend in words', async () => {
+    await page.locator('[data-view="descriptor-map"]').click();
+    const chart = page.locator('[data-testid="descriptor-chart"]');
+    await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(435);
+    const legend = (await chart.locator('.recharts-legend-wrapper').textContent()) ?? '';
+    expect(legend).toMatch(/core@shell \(one element covers the other\)/);
+    await page.locator('[data-testid="descriptor-map-view"] [name="elements"]').fill('Pt, Pd, Au, Ag');
+    await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
+    await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('-2');
+    await expect.poll(() => page.locator('[data-testid="descriptor-map-view"] [data-error-for="diameterNm"]').textContent()).toMatch(/positive/);
+    await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('3');
+    await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
+    await page.screenshot({ path: screenshotPath('descriptor-map'), fullPage: true });
+  });
+});
