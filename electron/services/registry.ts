@@ -9,6 +9,7 @@ import { outcomeAnalysisHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
 import { predictionHandlers } from './prediction';
+import { simulationHandlers } from './simulation';
 
 export const handlers: HandlerMap<OperationName> = {
   ...outcomeAnalysisHandlers,
@@ -16,4 +17,5 @@ export const handlers: HandlerMap<OperationName> = {
   ...pairHandlers,
   ...predictionHandlers,
   ...elementHandlers,
+  ...simulationHandlers,
 };

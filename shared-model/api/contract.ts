@@ -10,6 +10,7 @@ import type { OperationSpec } from './operation';
 import { outcomeAnalysisOperations } from './outcomes';
 import { pairOperations } from './pairs';
 import { predictionOperations } from './prediction';
+import { simulationOperations } from './simulation';
 
 export const operations = {
   ...outcomeAnalysisOperations,
@@ -17,6 +18,7 @@ export const operations = {
   ...pairOperations,
   ...predictionOperations,
   ...elementOperations,
+  ...simulationOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
 export type Operations = typeof operations;

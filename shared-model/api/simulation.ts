@@ -25,43 +25,54 @@ const guptaElementSchema = z
 
 const positiveNumber = (what: string) => z.number({ error: `must be a number (${what})` });
 
-export const simulationSpecSchema = z
-  .object({
-    elementA: guptaElementSchema,
-    elementB: guptaElementSchema,
-    xB: positiveNumber('atomic fraction of B').gt(0, 'must be above 0').lt(1, 'must be below 1'),
-    shape: z.enum(CLUSTER_SHAPES, { error: `must be one of: ${CLUSTER_SHAPES.join(', ')}` }),
-    shells: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
-    diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
-    temperatureK: positiveNumber('K')
-      .gt(0, 'must be above 0 K')
-      .max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
-    sweeps: z
-      .number({ error: 'must be a whole number' })
-      .int('must be a whole number')
-      .min(1, 'must be at least 1')
-      .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
-    anneal: z
-      .object({
-        startTemperatureK: positiveNumber('K').gt(0, 'must be above 0 K').max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
-        sweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
-      })
-      .nullish(),
-    seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
-    progressEverySweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
-  })
-  .superRefine((value, ctx) => {
-    // The model's own checks (pair of different metals, one size given, atom and attempt caps).
-    try {
-      planSimulation(value as SimulationSpec);
-    } catch (error) {
-      if (error instanceof DomainError) {
-        ctx.addIssue({ code: 'custom', path: (error.field ?? 'spec').split('.'), message: error.message });
-        return;
-      }
-      throw error;
+const specShape = {
+  elementA: guptaElementSchema,
+  elementB: guptaElementSchema,
+  xB: positiveNumber('atomic fraction of B').gt(0, 'must be above 0').lt(1, 'must be below 1'),
+  shape: z.enum(CLUSTER_SHAPES, { error: `must be one of: ${CLUSTER_SHAPES.join(', ')}` }),
+  shells: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+  diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
+  temperatureK: positiveNumber('K')
+    .gt(0, 'must be above 0 K')
+    .max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
+  sweeps: z
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
+  anneal: z
+    .object({
+      startTemperatureK: positiveNumber('K').gt(0, 'must be above 0 K').max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
+      sweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
+    })
+    .nullish(),
+  seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
+  progressEverySweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+};
+
+/** The model's own checks (a pair of different metals, one size given, atom and attempt caps), field named. */
+function checkPlan(value: SimulationSpec, ctx: z.RefinementCtx): void {
+  try {
+    planSimulation(value);
+  } catch (error) {
+    if (error instanceof DomainError) {
+      ctx.addIssue({ code: 'custom', path: (error.field ?? 'spec').split('.'), message: error.message });
+      return;
     }
-  });
+    throw error;
+  }
+}
+
+export const simulationSpecSchema = z.object(specShape).superRefine((value, ctx) => checkPlan(value as SimulationSpec, ctx));
+
+/** Start input: the run's inputs plus an optional campaign pair it belongs to and a label. */
+export const simulationStartSchema = z
+  .object({
+    ...specShape,
+    pairId: idSchema.nullish(),
+    label: z.string({ error: 'must be text' }).trim().max(200, 'must be at most 200 characters').default(''),
+  })
+  .superRefine((value, ctx) => checkPlan(value as SimulationSpec, ctx));
 
 export type SimulationSpecInput = z.input<typeof simulationSpecSchema>;
 
@@ -74,6 +85,8 @@ export interface SimulationRunSummary {
   status: SimulationStatus;
   spec: SimulationSpec;
   label: string;
+  /** Campaign pair the run belongs to, if any. */
+  pairId: number | null;
   engineVersion: string;
   /** Planned size, known before the run starts. */
   atoms: number;
@@ -117,8 +130,8 @@ export const simulationOperations = {
   }),
   'simulation.start': operation<SimulationRunSummary>()({
     kind: 'command',
-    summary: 'Queue a lattice Monte Carlo run; returns its id at once (progress by events or simulation.status)',
-    input: simulationSpecSchema,
+    summary: 'Queue a lattice Monte Carlo run; returns its id at once (progress by polling simulation.status)',
+    input: simulationStartSchema,
   }),
   'simulation.status': operation<SimulationRunSummary>()({
     kind: 'query',

@@ -4,10 +4,12 @@ import { outcomeCommands } from './outcomes';
 import { campaignCommands } from './campaigns';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
+import { simulationCommands } from './simulation';
 
 export const commands: CliCommand[] = [
   ...outcomeCommands,
   ...campaignCommands,
   ...pairCommands,
   ...predictionCommands,
+  ...simulationCommands,
 ];

@@ -1,0 +1,92 @@
+/**
+ * Simulation service: lattice Monte Carlo runs queued in worker threads (electron/workers), stored in
+ * the workspace (migration 0003), re-opened, exported as extended XYZ; and the Gupta energy of a
+ * given structure.
+ */
+import { getRun, listRuns } from '../../db/repositories/simulation';
+import { DomainError } from '../../shared-model/api/result';
+import { MIXING_RULE_DESCRIPTION, type simulationOperations } from '../../shared-model/api/simulation';
+import { CLUSTER_SHAPES } from '../../shared-model/clusters/shapes';
+import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
+import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
+import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
+import { ENGINE_VERSION, rebuildGeometry, SIMULATION_LIMITS, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
+import { queueFor } from '../workers/montecarlo-queue';
+import type { HandlerMap } from './context';
+
+export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> = {
+  'simulation.options': () => ({
+    elements: GUPTA_ELEMENTS,
+    shapes: CLUSTER_SHAPES,
+    limits: SIMULATION_LIMITS,
+    mixingRule: MIXING_RULE_DESCRIPTION,
+    engineVersion: ENGINE_VERSION,
+  }),
+
+  'simulation.start': (input, { store }) => {
+    const { pairId, label, ...rest } = input;
+    const spec: SimulationSpec = {
+      elementA: rest.elementA,
+      elementB: rest.elementB,
+      xB: rest.xB,
+      shape: rest.shape,
+      shells: rest.shells,
+      diameterNm: rest.diameterNm,
+      temperatureK: rest.temperatureK,
+      sweeps: rest.sweeps,
+      anneal: rest.anneal ?? null,
+      seed: rest.seed,
+      progressEverySweeps: rest.progressEverySweeps,
+    };
+    for (const key of Object.keys(spec) as (keyof SimulationSpec)[]) if (spec[key] === undefined) delete spec[key];
+    return queueFor(store).enqueue(spec, label, pairId ?? null);
+  },
+
+  'simulation.status': ({ id }, { store }) => queueFor(store).summary(id),
+
+  'simulation.cancel': ({ id }, { store }) => queueFor(store).cancel(id),
+
+  'simulation.get': ({ id }, { store }) => {
+    const queue = queueFor(store);
+    queue.expireSilent();
+    const run = getRun(store.db, id);
+    run.progressHistory = queue.history(id);
+    return run;
+  },
+
+  'simulation.list': ({ limit }, { store }) => {
+    queueFor(store).expireSilent();
+    return listRuns(store.db, limit);
+  },
+
+  'simulation.exportXyz': ({ id }, { store }) => {
+    const run = getRun(store.db, id);
+    if (run.status !== 'done' || !run.result) throw new DomainError('conflict', `run ${id} is ${run.status}; only a finished run has a final structure`, 'id');
+    const result = run.result;
+    const geometry = rebuildGeometry(run.spec);
+    if (result.finalOccupation.length !== geometry.atoms) {
+      throw new DomainError('internal', `run ${id} stored ${result.finalOccupation.length} occupations for ${geometry.atoms} sites; the geometry builder changed since (engine ${run.engineVersion})`);
+    }
+    const symbols = Array.from(result.finalOccupation, (c) => (c === 'B' ? result.elementB : result.elementA));
+    const content = writeExtendedXyz(
+      { symbols, positions: geometry.positions },
+      {
+        energy: result.energyEv,
+        pair: `${result.elementA}-${result.elementB}`,
+        xB: result.xB,
+        shape: result.geometry.shape,
+        shells: result.geometry.shells,
+        temperatureK: run.spec.temperatureK,
+        sweeps: run.spec.sweeps,
+        seed: run.spec.seed,
+        cutoffAngstrom: result.geometry.cutoffAngstrom,
+        architecture: result.architecture,
+        engine: result.engineVersion,
+        run: id,
+      },
+    );
+    return { fileName: `pairwright-run-${id}-${result.elementA}${result.elementB}.xyz`, content };
+  },
+
+  'simulation.energy': ({ xyz, cutoffAngstrom }) => totalEnergy(readExtendedXyz(xyz), cutoffAngstrom === undefined ? {} : { cutoffAngstrom }),
+};
