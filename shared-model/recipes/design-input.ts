@@ -89,7 +89,8 @@ export type AmountTarget = z.infer<typeof amountSchema>;
 export const seedsSchema = z
   .object({
     metal: metalSymbol,
-    diameterNm: positive('seed diameter', 'nm'),
+    /** Seed diameter; filled from the seed batch when `seedBatchId` is given. */
+    diameterNm: positive('seed diameter', 'nm').optional(),
     /** Seed concentration as particles per mL … */
     particlesPerMl: positive('seed concentration', 'particles/mL').optional(),
     /** … or as the metal-atom concentration of the seed dispersion (mM). */
@@ -99,8 +100,10 @@ export const seedsSchema = z
     seedBatchId: z.number().int().positive().optional(),
   })
   .superRefine((value, ctx) => {
+    if (value.seedBatchId !== undefined) return;
+    if (value.diameterNm === undefined) ctx.addIssue({ code: 'custom', path: ['diameterNm'], message: 'give the seed diameter (nm), or the seed batch it comes from' });
     if (value.particlesPerMl === undefined && value.metalMm === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['particlesPerMl'], message: 'give the seed concentration, as particles/mL or as metal mM' });
+      ctx.addIssue({ code: 'custom', path: ['particlesPerMl'], message: 'give the seed concentration, as particles/mL or as metal mM, or the seed batch' });
     }
   });
 export type SeedsInput = z.infer<typeof seedsSchema>;

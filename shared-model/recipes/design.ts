@@ -262,9 +262,12 @@ export function designBatch(input: BatchDesignInput, context: DesignContext): Ba
     if (input.size.kind !== 'core-shell') {
       throw invalid('size.kind', 'seed-mediated growth puts a shell on the seeds: give the size as "core-shell" with the shell thickness or monolayers');
     }
-    if (input.size.coreDiameterNm !== undefined && Math.abs(input.size.coreDiameterNm - seeds.diameterNm) > 0.01 * seeds.diameterNm) {
+    if (input.size.coreDiameterNm !== undefined && seeds.diameterNm !== undefined && Math.abs(input.size.coreDiameterNm - seeds.diameterNm) > 0.01 * seeds.diameterNm) {
       throw invalid('size.coreDiameterNm', `the core is the seed (${seeds.diameterNm} nm); change seeds.diameterNm instead of the core diameter`);
     }
+    if (seeds.diameterNm === undefined) throw invalid('seeds.diameterNm', 'give the seed diameter (nm), or the seed batch it comes from');
+    if (seeds.particlesPerMl === undefined && seeds.metalMm === undefined) throw invalid('seeds.particlesPerMl', 'give the seed concentration, as particles/mL or as metal mM');
+    const seedDiameterNm = seeds.diameterNm;
     if (seeds.volumeMl > input.batchVolumeMl) throw invalid('seeds.volumeMl', `seed volume ${seeds.volumeMl} mL exceeds the batch volume ${input.batchVolumeMl} mL`);
     coreElement = seeds.metal;
     shellElement = seeds.metal === elementA ? elementB : elementA;
@@ -273,7 +276,7 @@ export function designBatch(input: BatchDesignInput, context: DesignContext): Ba
       throw invalid(`precursors.${seedPrecursor.index}.element`, `the seeds provide the ${coreElement}; list only the ${shellElement} precursor`);
     }
     requirePrecursor(shellElement);
-    geometry = coreShellParticle(seeds.diameterNm, shellSpecFrom(input.size), lattice(coreElement), lattice(shellElement), coreElement === elementA ? 'A' : 'B');
+    geometry = coreShellParticle(seedDiameterNm, shellSpecFrom(input.size), lattice(coreElement), lattice(shellElement), coreElement === elementA ? 'A' : 'B');
     const atomsPerSeed = geometry.coreAtoms;
     const seedsPerMl = seeds.particlesPerMl ?? seedsPerMlFromMetal(seeds.metalMm as number, atomsPerSeed);
     particles = seedsPerMl * seeds.volumeMl;

@@ -1,0 +1,153 @@
+/**
+ * A user in Debian's Chromium designs batches (errors beside the fields, nothing saved until valid), saves
+ * them, totals their reagents against the inventory, exports CSV and looks at the print layout.
+ * Screenshots go to test-output/screenshots/.
+ */
+import { readFileSync } from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { startTestHost, type HostFixture } from '../support/host-fixture';
+
+const available = browserAvailable();
+
+describe.skipIf(!available)('batch design and reagents in the browser host', () => {
+  let browser: Browser;
+  let fixture: HostFixture;
+  let page: Page;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    fixture = await startTestHost();
+    page = await browser.newPage({ viewport: { width: 1500, height: 1000 }, acceptDownloads: true });
+    page.setDefaultTimeout(8000);
+    page.on('pageerror', (error) => {
+      throw error;
+    });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await fixture?.stop();
+  });
+
+  const count = (table: string) => (fixture.store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
+  const form = () => page.getByRole('form', { name: 'Batch design' });
+
+  it('computes the example batch with checks and hazards', async () => {
+    await page.goto(`${fixture.host.url}#/batch-design`);
+    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Batch design');
+    await expect.poll(() => form().locator('select[name="precursorA"] option').count()).toBeGreaterThan(1);
+    await form().getByRole('button', { name: 'Compute' }).click();
+    // 4 nm Pt75Ni25: 2396.8 atoms (hand-worked in test/shared-model/recipes/particle.test.ts)
+    await expect.poll(() => page.getByTestId('atoms-per-particle').textContent()).toContain('2,397');
+    expect(await page.locator('[data-check="reduction-order"]').count()).toBeGreaterThan(0);
+    expect(await page.locator('tr[data-hcode="H260"]').textContent()).toContain('In contact with water releases flammable gases which may ignite spontaneously');
+    expect(await page.getByTestId('signal-word').first().textContent()).toBe('Danger');
+    expect(await page.getByTestId('standing-caution').first().textContent()).toContain('never replace');
+    expect(await page.locator('[data-warning="borohydride-hydrolysis"]').textContent()).toMatch(/mL H2 at 25 °C, 1 atm/);
+    await page.screenshot({ path: screenshotPath('batch-design-ptni'), fullPage: true });
+  });
+
+  it('shows bad input beside the field and saves nothing', async () => {
+    await form().locator('input[name="size.xBPct"]').fill('120');
+    await form().getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.locator('[data-error-for="size.xBPct"]').textContent()).toMatch(/between 0 and 100 at\.%/);
+    await form().locator('input[name="name"]').fill('should not exist');
+    await form().getByRole('button', { name: 'Save as planned batch' }).click();
+    await expect.poll(() => page.locator('[data-error-for="size.xBPct"]').textContent()).toMatch(/between 0 and 100/);
+    await form().locator('input[name="size.xBPct"]').fill('25');
+    await form().locator('select[name="reducer"]').selectOption('');
+    await form().getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.locator('[data-error-for="reducer"]').textContent()).toMatch(/choose a reducer/);
+    await form().locator('select[name="precursorB"]').selectOption('');
+    await form().locator('select[name="reducer"]').selectOption('nabh4');
+    await form().getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.locator('[data-error-for="precursors"]').textContent()).toMatch(/choose a Ni precursor/);
+    await page.screenshot({ path: screenshotPath('batch-design-errors'), fullPage: true });
+    expect(count('batches')).toBe(0);
+  });
+
+  it('saves two batches and lists them', async () => {
+    await form().getByRole('button', { name: 'Reset to example' }).click();
+    await form().locator('input[name="name"]').fill('PtNi-01 4 nm alloy');
+    await form().getByRole('button', { name: 'Save as planned batch' }).click();
+    await expect.poll(() => page.locator('tr[data-batch="PtNi-01 4 nm alloy"]').count()).toBe(1);
+    await form().locator('input[name="amount"]').fill('0.3');
+    await form().locator('input[name="name"]').fill('PtNi-02 scale-up');
+    await form().getByRole('button', { name: 'Save as planned batch' }).click();
+    await expect.poll(() => page.locator('tr[data-batch="PtNi-02 scale-up"]').count()).toBe(1);
+    expect(count('batches')).toBe(2);
+  });
+
+  it('warns of galvanic replacement for a gold shell on silver seeds', async () => {
+    await form().locator('input[name="elementA"]').fill('Ag');
+    await form().locator('input[name="elementB"]').fill('Au');
+    await form().locator('select[name="route"]').selectOption('seed-mediated');
+    await form().locator('select[name="target"]').selectOption('Ag@Au');
+    await form().locator('input[name="shell"]').fill('2');
+    await form().locator('input[name="seeds.diameterNm"]').fill('20');
+    await form().locator('input[name="seeds.particlesPerMl"]').fill('1e11');
+    await form().locator('input[name="seeds.volumeMl"]').fill('5');
+    await form().locator('select[name="precursorB"]').selectOption('haucl4-3h2o');
+    await form().locator('input[name="stockB"]').fill('10');
+    await form().locator('select[name="reducer"]').selectOption('ascorbic-acid');
+    await form().locator('input[name="reducer.excess"]').fill('4');
+    await form().getByRole('button', { name: 'Compute' }).click();
+    const galvanic = page.locator('[data-check="galvanic-replacement"]');
+    await expect.poll(() => galvanic.textContent()).toMatch(/3\.00 Ag atoms dissolve per Au atom/);
+    expect(await galvanic.getAttribute('data-severity')).toBe('warning');
+    await page.screenshot({ path: screenshotPath('batch-design-galvanic'), fullPage: true });
+  });
+
+  it('totals the reagents of chosen batches against the inventory, with shortfalls, CSV and print layout', async () => {
+    await page.locator('[data-view="reagents"]').click();
+    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Reagents');
+    await page.getByRole('checkbox', { name: /PtNi-01/ }).check();
+    await page.getByRole('checkbox', { name: /PtNi-02/ }).check();
+    const ptRow = page.locator('tr[data-reagent="h2ptcl6-6h2o"]');
+    await expect.poll(() => ptRow.getAttribute('data-status')).toBe('not in inventory');
+    const inventory = page.getByRole('form', { name: 'Add to inventory' });
+    await inventory.locator('select[name="reagentKey"]').selectOption('h2ptcl6-6h2o');
+    await inventory.locator('input[name="amount"]').fill('-5');
+    await inventory.getByRole('button', { name: 'Add to inventory' }).click();
+    await expect.poll(() => page.locator('[data-error-for="amount"]').textContent()).toMatch(/≥ 0/);
+    await inventory.locator('input[name="amount"]').fill('100');
+    await inventory.locator('select[name="unit"]').selectOption('mg');
+    await inventory.locator('input[name="location"]').fill('desiccator 2');
+    await inventory.getByRole('button', { name: 'Add to inventory' }).click();
+    // 0.075 + 0.225 mmol × 517.91 g/mol = 155.4 mg needed, 100 mg on hand
+    await expect.poll(() => ptRow.getAttribute('data-status')).toBe('short');
+    expect(await ptRow.getAttribute('class')).toContain('row--short');
+    expect(await page.locator('[aria-label="Hazard summary across the list"] tr[data-hcode="H334"]').count()).toBe(1);
+    await page.screenshot({ path: screenshotPath('reagents-list'), fullPage: true });
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV' }).click()]);
+    const csv = readFileSync((await download.path()) as string, 'utf8');
+    expect(csv.split('\n')[0]).toContain('reagent,formula,roles,total_mmol,total_mass_mg');
+    expect(csv).toMatch(/Chloroplatinic acid hexahydrate,H2PtCl6·6H2O/);
+
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('nav.sidebar').isVisible()).toBe(false);
+    expect(await page.getByRole('form', { name: 'Add to inventory' }).isVisible()).toBe(false);
+    expect(await ptRow.isVisible()).toBe(true);
+    await page.screenshot({ path: screenshotPath('reagents-print'), fullPage: true });
+    await page.emulateMedia({ media: 'screen' });
+  });
+
+  it('refuses an unparseable formula in the catalog beside the field', async () => {
+    await page.locator('.catalog-editor > summary').click();
+    const editor = page.getByRole('form', { name: 'Catalog reagent' });
+    await editor.locator('input[name="key"]').fill('bad-salt');
+    await editor.locator('input[name="name"]').fill('Bad salt');
+    await editor.locator('input[name="formula"]').fill('K2PdCl4)');
+    await editor.locator('input[name="metalSymbol"]').fill('Pd');
+    await editor.locator('input[name="oxidationState"]').fill('2');
+    await editor.locator('select[name="coupleId"]').selectOption('PdCl4/Pd');
+    await editor.getByRole('button', { name: 'Add reagent' }).click();
+    await expect.poll(() => page.locator('[data-error-for="formula"]').textContent()).toMatch(/not a chemical formula/);
+    await editor.locator('input[name="formula"]').fill('K2PdCl4');
+    await editor.getByRole('button', { name: 'Add reagent' }).click();
+    await expect.poll(() => editor.locator('.banner--info').textContent()).toMatch(/326\.4/);
+    await page.screenshot({ path: screenshotPath('reagents-catalog'), fullPage: true });
+  });
+});
