@@ -3,6 +3,7 @@
  * operation in the contract, so a new operation does not compile until its service is registered here.
  */
 import type { OperationName } from '../../shared-model/api/contract';
+import { batchHandlers } from './batches';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
 import { outcomeAnalysisHandlers } from './outcomes';
@@ -17,5 +18,6 @@ export const handlers: HandlerMap<OperationName> = {
   ...pairHandlers,
   ...predictionHandlers,
   ...elementHandlers,
+  ...batchHandlers,
   ...simulationHandlers,
 };

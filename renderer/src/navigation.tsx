@@ -4,7 +4,9 @@
  */
 import type { ComponentType } from 'react';
 import { ComingView } from './components/ComingView';
+import { BatchDesignView } from './views/BatchDesignView';
 import { CampaignsView } from './views/CampaignsView';
+import { ReagentsView } from './views/ReagentsView';
 import { CandidatesView } from './views/CandidatesView';
 import { DescriptorMapView } from './views/DescriptorMapView';
 
@@ -26,7 +28,7 @@ export const VIEWS: ViewEntry[] = [
   { id: 'candidates', label: 'Candidates', group: 'Predict', component: CandidatesView, ready: true },
   { id: 'descriptor-map', label: 'Descriptor map', group: 'Predict', component: DescriptorMapView, ready: true },
   { id: 'simulation', label: 'Simulation', group: 'Predict', component: coming('Simulation', 'run a lattice Monte Carlo of one particle with a many-body potential and compare it with the analytic prediction.'), ready: false },
-  { id: 'batch-design', label: 'Batch design', group: 'Plan', component: coming('Batch design', 'turn a target particle into reagent amounts, kinetic checks and hazard cautions.'), ready: false },
-  { id: 'reagents', label: 'Reagents', group: 'Plan', component: coming('Reagents', 'total the reagents of planned batches against your inventory, with a hazard summary.'), ready: false },
+  { id: 'batch-design', label: 'Batch design', group: 'Plan', component: BatchDesignView, ready: true },
+  { id: 'reagents', label: 'Reagents', group: 'Plan', component: ReagentsView, ready: true },
   { id: 'results', label: 'Results', group: 'Learn', component: coming('Results', 'log TEM sizes, EDX compositions and line scans, and compare outcomes with predictions.'), ready: false },
 ];

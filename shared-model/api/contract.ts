@@ -4,6 +4,7 @@
  * is derived from this record. A new capability adds its own `*Operations` record here.
  */
 import type { z } from 'zod';
+import { batchOperations } from './batches';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
@@ -18,6 +19,7 @@ export const operations = {
   ...pairOperations,
   ...predictionOperations,
   ...elementOperations,
+  ...batchOperations,
   ...simulationOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
