@@ -79,6 +79,21 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     expect(count('batches')).toBe(2);
   });
 
+  it('records lots and stock dates of a saved batch; an old borohydride stock is flagged', async () => {
+    await page.locator('tr[data-batch="PtNi-01 4 nm alloy"]').getByRole('button', { name: 'Open' }).click();
+    await expect.poll(() => page.getByTestId('opened-batch').textContent()).toContain('PtNi-01');
+    await page.getByLabel('Lot of Sodium borohydride').fill('BCBX9');
+    const fiveHoursAgo = new Date(Date.now() - 5 * 3600_000);
+    const local = new Date(fiveHoursAgo.getTime() - fiveHoursAgo.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
+    await page.getByLabel('Stock of Sodium borohydride prepared').fill(local);
+    await page.getByRole('button', { name: 'Save lots and dates' }).click();
+    // NaBH4 stock limit 0.5 h (catalog, common practice: made fresh)
+    await expect.poll(() => page.locator('tr[data-record="nabh4"] td.stale').textContent()).toMatch(/make it fresh/);
+    expect(count('batch_lots')).toBe(1);
+    expect(count('batch_stocks')).toBe(1);
+    await page.screenshot({ path: screenshotPath('batch-design-records'), fullPage: true });
+  });
+
   it('warns of galvanic replacement for a gold shell on silver seeds', async () => {
     await form().locator('input[name="elementA"]').fill('Ag');
     await form().locator('input[name="elementB"]').fill('Au');

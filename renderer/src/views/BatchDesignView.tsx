@@ -251,6 +251,79 @@ function Section(props: { title: string; children: ReactNode }) {
   );
 }
 
+/** Lots and stock-solution dates of a saved batch (what makes it reproducible); amounts stay as saved. */
+function BatchRecords(props: { batch: SavedBatch; onSaved: (batch: SavedBatch) => void }) {
+  const reagents = props.batch.design.reagents.filter((r) => r.role !== 'seeds' && r.massMg !== null);
+  const localInput = (iso: string) => {
+    const date = new Date(iso);
+    const offset = date.getTimezoneOffset() * 60_000;
+    return new Date(date.getTime() - offset).toISOString().slice(0, 16);
+  };
+  const [lots, setLots] = useState<Record<string, string>>(() => Object.fromEntries(props.batch.lots.map((l) => [l.reagentKey, l.lot])));
+  const [dates, setDates] = useState<Record<string, string>>(() => Object.fromEntries(props.batch.stockAges.map((s) => [s.reagentKey, localInput(s.preparedAt)])));
+  const [error, setError] = useState<ApiError | null>(null);
+  const save = async () => {
+    const stocks = Object.entries(dates)
+      .filter(([, value]) => value.trim() !== '')
+      .map(([reagentKey, value]) => {
+        const time = new Date(value);
+        return { reagentKey, preparedAt: Number.isNaN(time.getTime()) ? value : time.toISOString() };
+      });
+    const result = await call('batches.record', {
+      id: props.batch.id,
+      lots: Object.entries(lots).map(([reagentKey, lot]) => ({ reagentKey, lot })),
+      stocks,
+    });
+    if (!result.ok) {
+      setError(result.error);
+      return;
+    }
+    setError(null);
+    props.onSaved(result.value);
+  };
+  const ages = new Map(props.batch.stockAges.map((s) => [s.reagentKey, s]));
+  return (
+    <section className="card" aria-label="Lots and stock solutions">
+      <h2 className="card__title">Lots and stock solutions of batch #{props.batch.id}</h2>
+      <table className="data-table">
+        <thead>
+          <tr>
+            <th>Reagent</th>
+            <th>Lot</th>
+            <th>Stock prepared</th>
+            <th>Age</th>
+          </tr>
+        </thead>
+        <tbody>
+          {reagents.map((r) => {
+            const age = ages.get(r.key);
+            return (
+              <tr key={r.key} data-record={r.key}>
+                <td>{r.name}</td>
+                <td>
+                  <input aria-label={`Lot of ${r.name}`} value={lots[r.key] ?? ''} onChange={(e) => setLots((s) => ({ ...s, [r.key]: e.target.value }))} />
+                </td>
+                <td>
+                  <input type="datetime-local" aria-label={`Stock of ${r.name} prepared`} value={dates[r.key] ?? ''} onChange={(e) => setDates((s) => ({ ...s, [r.key]: e.target.value }))} />
+                </td>
+                <td className={age?.stale ? 'stale' : undefined}>
+                  {age ? `${formatNumber(age.ageHours, 3)} h${age.freshnessHours !== null ? ` (limit ${formatNumber(age.freshnessHours, 3)} h)` : ''}${age.stale ? ' — make it fresh' : ''}` : ''}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+      <div className="form-actions">
+        <button type="button" onClick={() => void save()}>
+          Save lots and dates
+        </button>
+      </div>
+      {error ? <Banner tone="error">{error.message}</Banner> : null}
+    </section>
+  );
+}
+
 function SavedBatches(props: { batches: BatchSummary[]; onOpen: (id: number) => void; onUseAsSeeds: (batch: BatchSummary) => void; onChanged: () => void }) {
   const [error, setError] = useState<string | null>(null);
   const [measuring, setMeasuring] = useState<number | null>(null);
@@ -669,6 +742,7 @@ export function BatchDesignView() {
               {opened.lots.length > 0 ? ` Lots: ${opened.lots.map((l) => `${l.reagentKey} ${l.lot}`).join(', ')}.` : ''}
             </Banner>
           ) : null}
+          {opened ? <BatchRecords key={`${opened.id}:${opened.updatedAt}`} batch={opened} onSaved={setOpened} /> : null}
           {design ? <BatchResult design={design} /> : <p className="card muted">Compute a batch to see atoms, particles, reagent amounts, checks and hazards.</p>}
           <section className="card" aria-label="Saved batches">
             <h2 className="card__title">Saved batches</h2>
