@@ -139,6 +139,8 @@ export interface PairContext {
   pairName: string;
   /** Strain energies that enter under each strain rule. */
   strainByRule: Readonly<Record<StrainRule, { bInA: number; aInB: number }>>;
+  /** Last composition-dependent part computed for this pair (memo; see `predictCore`). */
+  lastComposition: CompositionPart | null;
   /** Dilute-limit terms per facet and strain rule (filled on first use). */
   diluteCache: Map<string, { bInA: PredictionTerms; aInB: PredictionTerms }>;
 }
@@ -189,6 +191,7 @@ export function pairContext(elementA: string, elementB: string): PairContext {
       'oversized solute': { bInA: rB > rA ? strainBinAEv : 0, aInB: rB > rA ? 0 : strainAinBEv },
     },
     diluteCache: new Map(),
+    lastComposition: null,
   };
 }
 
@@ -307,7 +310,25 @@ export interface PredictionCore {
 }
 
 /** The numbers of a prediction (no labels, strings or term breakdown): the hot path of ranking. */
-export function predictCore(ctx: PairContext, c: Required<PredictionConditions>): PredictionCore {
+/** The size-independent part of a prediction: depends on composition, temperature, facet and strain rule. */
+interface CompositionPart {
+  xB: number;
+  temperatureK: number;
+  facet: SurfaceFacet;
+  strainRule: StrainRule;
+  kT: number;
+  mixing: ReturnType<typeof miedemaFromConstants>;
+  omegaChemEv: number;
+  latticeNm: number;
+  strain: { bInA: number; aInB: number };
+  k: SegregationCoefficients;
+  ratio: number;
+  gap: boolean;
+}
+
+function compositionPart(ctx: PairContext, c: Required<PredictionConditions>): CompositionPart {
+  const last = ctx.lastComposition;
+  if (last !== null && last.xB === c.xB && last.temperatureK === c.temperatureK && last.facet === c.facet && last.strainRule === c.strainRule) return last;
   const xB = c.xB;
   const kT = BOLTZMANN_EV_PER_K * c.temperatureK;
   const mixing = miedemaFromConstants(ctx.miedema, xB, 'solid');
@@ -325,21 +346,44 @@ export function predictCore(ctx: PairContext, c: Required<PredictionConditions>)
     strainBinAEv: strain.bInA,
     strainAinBEv: strain.aInB,
   });
-  const sites = particleSiteCounts(c.diameterNm, latticeNm, c.shape);
-  const solved = solveSurfaceEquilibrium({ xB, surfaceShare: sites.surfaceSites / sites.atoms, kTEv: kT, c0: k.c0, cS: k.cS, cC: k.cC });
   const tendency = mixingTendency(omegaChem, omegaTotal, xB, kT);
-  return {
+  const part: CompositionPart = {
+    xB,
+    temperatureK: c.temperatureK,
+    facet: c.facet,
+    strainRule: c.strainRule,
     kT,
     mixing,
     omegaChemEv: omegaChem,
     latticeNm,
     strain,
     k,
+    ratio: tendency.ratio,
+    gap: tendency.gap,
+  };
+  // one-entry memo: ranking over several sizes at one composition reuses it (pure values, frozen inputs)
+  ctx.lastComposition = part;
+  return part;
+}
+
+/** The numbers of a prediction (no labels, strings or term breakdown): the hot path of ranking. */
+export function predictCore(ctx: PairContext, c: Required<PredictionConditions>): PredictionCore {
+  const part = compositionPart(ctx, c);
+  const k = part.k;
+  const sites = particleSiteCounts(c.diameterNm, part.latticeNm, c.shape);
+  const solved = solveSurfaceEquilibrium({ xB: c.xB, surfaceShare: sites.surfaceSites / sites.atoms, kTEv: part.kT, c0: k.c0, cS: k.cS, cC: k.cC });
+  return {
+    kT: part.kT,
+    mixing: part.mixing,
+    omegaChemEv: part.omegaChemEv,
+    latticeNm: part.latticeNm,
+    strain: part.strain,
+    k,
     sites,
     surfaceXB: solved.surfaceXB,
     coreXB: solved.coreXB,
-    unlikeNeighbourRatio: tendency.ratio,
-    miscibilityGap: tendency.gap,
+    unlikeNeighbourRatio: part.ratio,
+    miscibilityGap: part.gap,
   };
 }
 

@@ -13,7 +13,7 @@ import { invalid } from '../api/result';
 import { getElement } from '../elements/element-table';
 import { METAL_SYMBOLS, isMetalSymbol } from '../elements/symbols';
 import { surfaceEnrichment } from '../architecture/classify';
-import { checkConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions } from './predict';
+import { checkConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions, type PredictionCore } from './predict';
 
 export type RankTarget =
   | { kind: 'alloy' }
@@ -27,6 +27,28 @@ export interface RankedPair {
   pair: string;
   /** The full prediction (terms, label, confidence, flags, reason); built when first read. */
   readonly prediction: Prediction;
+}
+
+/** A ranked row; its full prediction is assembled from the solved numbers on first read. */
+class RankedRow implements RankedPair {
+  rank = 0;
+  #prediction: Prediction | undefined;
+  constructor(
+    readonly score: number,
+    readonly pair: string,
+    private readonly ctx: PairContext,
+    private readonly conditions: Required<PredictionConditions>,
+    private readonly core: PredictionCore,
+  ) {}
+
+  get prediction(): Prediction {
+    if (this.#prediction === undefined) this.#prediction = predictionFromCore(this.ctx, this.conditions, this.core);
+    return this.#prediction;
+  }
+
+  toJSON(): { rank: number; score: number; pair: string; prediction: Prediction } {
+    return { rank: this.rank, score: this.score, pair: this.pair, prediction: this.prediction };
+  }
 }
 
 /** Reads "alloy", "janus", "intermetallic", "core@shell", "core@shell:Pt", "shell:Pt" or "@Pt". */
@@ -103,25 +125,16 @@ export function pairContexts(elements: readonly string[]): PairContext[] {
 export function rankContexts(contexts: readonly PairContext[], target: RankTarget, conditions: PredictionConditions): RankedPair[] {
   if (target.kind === 'core@shell' && target.shellElement !== undefined) getElement(target.shellElement, 'target');
   const checked = checkConditions(conditions);
-  const rows: RankedPair[] = new Array(contexts.length);
+  const rows: RankedRow[] = new Array(contexts.length);
   for (let i = 0; i < contexts.length; i++) {
     const ctx = contexts[i] as PairContext;
     const core = predictCore(ctx, checked);
     const { enriched, enrichment } = surfaceEnrichment(checked.xB, core.surfaceXB);
     const enrichedElement = enriched === 'A' ? ctx.a.symbol : enriched === 'B' ? ctx.b.symbol : null;
-    let prediction: Prediction | undefined;
-    rows[i] = {
-      rank: 0,
-      score: scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio),
-      pair: ctx.pairName,
-      get prediction(): Prediction {
-        if (prediction === undefined) prediction = predictionFromCore(ctx, checked, core);
-        return prediction;
-      },
-    };
+    rows[i] = new RankedRow(scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio), ctx.pairName, ctx, checked, core);
   }
   rows.sort((p, q) => q.score - p.score || (p.pair < q.pair ? -1 : p.pair > q.pair ? 1 : 0));
-  for (let i = 0; i < rows.length; i++) (rows[i] as RankedPair).rank = i + 1;
+  for (let i = 0; i < rows.length; i++) (rows[i] as RankedRow).rank = i + 1;
   return rows;
 }
 

@@ -30,18 +30,17 @@ export interface EquilibriumResult {
   iterations: number;
 }
 
-const MAX_ITERATIONS = 200;
-
-function logOdds(x: number): number {
-  return Math.log(x) - Math.log1p(-x);
-}
+const MAX_ITERATIONS = 100;
 
 /**
- * Solves the surface/core equilibrium; pure, allocation only for the result. Unknown: the position y of
- * x_s inside its bracket [lo, hi], Newton steps in t = ln(y/(1 − y)). Both ends of the bracket are
- * logarithmic singularities of h (x_s → 0 or 1, or x_c → 0 or 1), so h is close to linear in t over the
- * whole line and Newton converges in a few steps from the middle; a step that leaves the current
- * bracket of y falls back to bisection.
+ * Solves the surface/core equilibrium; pure, allocation only for the result.
+ *
+ * Unknown: the position of x_s inside its bracket [lo, hi], x_s = lo + w·y = hi − w·ȳ (w = hi − lo,
+ * ȳ = 1 − y), with Newton steps in t = ln(y/ȳ). Both ends of the bracket are logarithmic singularities of
+ * h (x_s → 0 or 1, or the core x_c → 0 or 1), so h is close to linear in t over the whole line and Newton
+ * converges in a few steps. y and ȳ are both computed from t, and x_s, 1 − x_s, x_c, 1 − x_c each from the
+ * end of the bracket it is small at, so a root a hair's breadth from an end (a core depleted to 1e-16)
+ * keeps full relative precision. A step that leaves the bracket of t falls back to bisection.
  */
 export function solveSurfaceEquilibrium(input: EquilibriumInput): EquilibriumResult {
   const { xB, surfaceShare: f, kTEv, c0, cS, cC } = input;
@@ -49,43 +48,62 @@ export function solveSurfaceEquilibrium(input: EquilibriumInput): EquilibriumRes
   const inv = 1 / kTEv;
   const coreShare = 1 - f;
   const r = f / coreShare; // −dx_c/dx_s
-  // interval of x_s where x_c = (xB − f·x_s)/(1 − f) stays in [0, 1]
-  const lo = f > 0 ? Math.max(0, (xB - coreShare) / f) : 0;
-  const hi = f > 0 ? Math.min(1, xB / f) : 1;
-  const width = hi - lo;
-  let yLo = 0;
-  let yHi = 1;
-  let y = 0.5;
+  // ends of the bracket, with the fractions there written exactly
+  const saturates = f > 0 && xB - coreShare > 0; // at lo the core is pure B
+  const depletes = f > 0 && xB < f; // at hi the core holds no B
+  const lo = saturates ? (xB - coreShare) / f : 0;
+  const hi = depletes ? xB / f : 1;
+  const oneMinusLo = 1 - lo;
+  const oneMinusHi = depletes ? 1 - hi : 0;
+  const coreAtLo = saturates ? 1 : xB / coreShare; // x_c when x_s = lo
+  const oneMinusCoreAtLo = saturates ? 0 : 1 - coreAtLo;
+  const coreAtHi = depletes ? 0 : (xB - f) / coreShare; // x_c when x_s = hi
+  const oneMinusCoreAtHi = depletes ? 1 : 1 - coreAtHi;
+  const w = hi - lo;
+  const rw = r * w;
+
+  let tLo = Number.NEGATIVE_INFINITY;
+  let tHi = Number.POSITIVE_INFINITY;
   let t = 0;
-  let x = lo + width * y;
+  let xs = 0.5;
+  let xc = xB;
   let iterations = 0;
   for (; iterations < MAX_ITERATIONS; iterations++) {
-    const xcRaw = (xB - f * x) / coreShare;
-    const xc = xcRaw < 0 ? 0 : xcRaw > 1 ? 1 : xcRaw;
-    const h = logOdds(x) - logOdds(xc) + (c0 + cS * x + cC * xc) * inv;
-    if (Number.isNaN(h)) throw new Error(`surface equilibrium: log-odds undefined at x_s=${x}, x_c=${xc} (xB=${xB}, Ns/N=${f})`);
-    if (h === 0) break;
-    if (h < 0) yLo = y;
-    else yHi = y;
-    if (yHi - yLo <= 1e-15) break;
-    const slopeX = 1 / (x * (1 - x)) + r / (xc * (1 - xc)) + (cS - cC * r) * inv;
-    const slopeT = slopeX * width * y * (1 - y);
-    const tNext = t - h / slopeT;
-    let yNext = 1 / (1 + Math.exp(-tNext));
-    if (yNext > yLo && yNext < yHi && Number.isFinite(tNext)) {
-      t = tNext;
+    let y: number;
+    let yBar: number;
+    if (t >= 0) {
+      const e = Math.exp(-t);
+      y = 1 / (1 + e);
+      yBar = e / (1 + e);
     } else {
-      yNext = 0.5 * (yLo + yHi);
-      t = Math.log(yNext) - Math.log1p(-yNext);
+      const e = Math.exp(t);
+      y = e / (1 + e);
+      yBar = 1 / (1 + e);
     }
-    const xNext = lo + width * yNext;
-    // converged: x_s and x_c moved by less than 1e-12 of themselves and of their complements (or not at all)
-    const step = Math.abs(xNext - x);
-    const done = step === 0 || (step <= 1e-12 * Math.min(xNext, 1 - xNext) && step * r <= 1e-12 * Math.min(xc, 1 - xc));
-    y = yNext;
-    x = xNext;
-    if (done) break;
+    const upper = y > 0.5;
+    xs = upper ? hi - w * yBar : lo + w * y;
+    const xsBar = upper ? oneMinusHi + w * yBar : oneMinusLo - w * y;
+    xc = upper ? coreAtHi + rw * yBar : coreAtLo - rw * y;
+    const xcBar = upper ? oneMinusCoreAtHi - rw * yBar : oneMinusCoreAtLo + rw * y;
+    const h = Math.log(xs) - Math.log(xsBar) - Math.log(xc) + Math.log(xcBar) + (c0 + cS * xs + cC * xc) * inv;
+    if (Number.isNaN(h)) throw new Error(`surface equilibrium: log-odds undefined at x_s=${xs}, x_c=${xc} (xB=${xB}, Ns/N=${f})`);
+    if (h === 0) break;
+    if (h < 0) tLo = t;
+    else tHi = t;
+    const slope = (1 / (xs * xsBar) + r / (xc * xcBar) + (cS - cC * r) * inv) * w * y * yBar;
+    let next = t - h / slope;
+    // converged: a Newton step this small resolves y and ȳ to full relative precision
+    if (Math.abs(next - t) <= 1e-12) break;
+    if (!(next > tLo && next < tHi)) {
+      if (Number.isFinite(tLo) && Number.isFinite(tHi)) next = 0.5 * (tLo + tHi);
+      else if (Number.isFinite(tLo)) next = tLo + Math.max(1, Math.abs(tLo));
+      else next = tHi - Math.max(1, Math.abs(tHi));
+    }
+    const step = Math.abs(next - t);
+    t = next;
+    // t resolves ȳ and y to relative precision |Δt|
+    if (step <= 1e-12 || tHi - tLo <= 1e-12 * Math.max(1, Math.abs(t))) break;
+    if (!Number.isFinite(t)) break;
   }
-  const xcRaw = (xB - f * x) / coreShare;
-  return { surfaceXB: x, coreXB: xcRaw < 0 ? 0 : xcRaw > 1 ? 1 : xcRaw, iterations };
+  return { surfaceXB: xs, coreXB: xc < 0 ? 0 : xc > 1 ? 1 : xc, iterations };
 }

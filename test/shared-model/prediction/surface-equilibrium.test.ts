@@ -79,6 +79,16 @@ describe('Langmuir–McLean surface/core equilibrium with mass balance', () => {
     expect(empty.surfaceXB).toBeLessThan(1e-12);
   });
 
+  it('keeps full precision when the core is depleted to ~1e-16 (a strongly segregating dilute solute)', () => {
+    // coefficients of a Pb-in-Cr-like case at 1.5 nm, 600 K (ΔH ≈ −2.3 eV): the core keeps ~1e-16 of B
+    const input = { xB: 0.05, surfaceShare: 0.63, kTEv: 0.0517, c0: -2.28, cS: -0.88, cC: 2.73 };
+    const out = solveSurfaceEquilibrium(input);
+    expect(out.coreXB).toBeGreaterThan(0);
+    expect(out.coreXB).toBeLessThan(1e-12);
+    expect(Math.abs(residual(input, out.surfaceXB, out.coreXB))).toBeLessThan(1e-6);
+    expect(out.iterations).toBeLessThan(20);
+  });
+
   it('T → ∞: no enrichment (x_s → x)', () => {
     const out = solveSurfaceEquilibrium({ xB: 0.3, surfaceShare: 0.4, kTEv: 1e9, c0: -0.5, cS: 0.2, cC: 0.1 });
     expect(out.surfaceXB).toBeCloseTo(0.3, 8);
