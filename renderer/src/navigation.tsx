@@ -9,6 +9,7 @@ import { CampaignsView } from './views/CampaignsView';
 import { ReagentsView } from './views/ReagentsView';
 import { CandidatesView } from './views/CandidatesView';
 import { DescriptorMapView } from './views/DescriptorMapView';
+import { SimulationView } from './views/SimulationView';
 
 export interface ViewEntry {
   id: string;
@@ -27,7 +28,7 @@ export const VIEWS: ViewEntry[] = [
   { id: 'campaigns', label: 'Campaigns', group: 'Workspace', component: CampaignsView, ready: true },
   { id: 'candidates', label: 'Candidates', group: 'Predict', component: CandidatesView, ready: true },
   { id: 'descriptor-map', label: 'Descriptor map', group: 'Predict', component: DescriptorMapView, ready: true },
-  { id: 'simulation', label: 'Simulation', group: 'Predict', component: coming('Simulation', 'run a lattice Monte Carlo of one particle with a many-body potential and compare it with the analytic prediction.'), ready: false },
+  { id: 'simulation', label: 'Simulation', group: 'Predict', component: SimulationView, ready: true },
   { id: 'batch-design', label: 'Batch design', group: 'Plan', component: BatchDesignView, ready: true },
   { id: 'reagents', label: 'Reagents', group: 'Plan', component: ReagentsView, ready: true },
   { id: 'results', label: 'Results', group: 'Learn', component: coming('Results', 'log TEM sizes, EDX compositions and line scans, and compare outcomes with predictions.'), ready: false },

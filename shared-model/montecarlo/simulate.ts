@@ -52,7 +52,7 @@ export interface SimulationSpec {
   sweeps: number;
   anneal?: AnnealSchedule | null | undefined;
   seed: number;
-  /** Progress callback period (sweeps); default: about 100 reports per run. */
+  /** Progress callback period (sweeps); default: about 200 reports per run, at least one per 2 × 10⁵ attempts. */
   progressEverySweeps?: number | undefined;
   thresholds?: ClassificationThresholds | undefined;
 }
@@ -260,7 +260,8 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   const initialEnergy = engine.energyEv;
   const annealSweeps = spec.anneal ? spec.anneal.sweeps : 0;
   const totalSweeps = plan.totalSweeps;
-  const every = spec.progressEverySweeps ?? Math.max(1, Math.round(totalSweeps / 100));
+  // Default report period: about 200 reports per run, but at least one per 2 × 10⁵ attempts (~0.2 s) for live traces.
+  const every = spec.progressEverySweeps ?? Math.max(1, Math.min(Math.round(totalSweeps / 200), Math.round(200_000 / n)));
   const orderEvery = Math.max(1, Math.floor(spec.sweeps / 200));
 
   const energyTrace = new Float64Array(totalSweeps);

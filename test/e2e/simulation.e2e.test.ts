@@ -1,0 +1,108 @@
+/**
+ * A user in Debian's Chromium runs a lattice Monte Carlo: bad input is refused beside the field, a run
+ * shows progress with live traces and can be cancelled, a finished run shows its result beside the
+ * analytic prediction with the particle picture, exports extended XYZ, and re-opens after a reload.
+ * Screenshots go to test-output/screenshots/.
+ */
+import { readFileSync } from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { queueFor } from '../../electron/workers/montecarlo-queue';
+import { readExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
+import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { startTestHost, type HostFixture } from '../support/host-fixture';
+
+const available = browserAvailable();
+
+describe.skipIf(!available)('simulation in the browser host', () => {
+  let browser: Browser;
+  let fixture: HostFixture;
+  let page: Page;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    fixture = await startTestHost();
+    page = await browser.newPage({ viewport: { width: 1500, height: 1100 }, acceptDownloads: true });
+    page.setDefaultTimeout(15_000);
+    page.on('pageerror', (error) => {
+      throw error;
+    });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    if (fixture) await queueFor(fixture.store).close();
+    await fixture?.stop();
+  });
+
+  const runs = () => (fixture.store.db.prepare('SELECT count(*) AS n FROM simulation_runs').get() as { n: number }).n;
+  const form = () => page.getByRole('form', { name: 'New simulation' });
+  const setField = async (name: string, value: string) => form().locator(`input[name="${name}"]`).fill(value);
+
+  it('refuses bad input beside the field and stores nothing', async () => {
+    await page.goto(`${fixture.host.url}#/simulation`);
+    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Simulation');
+    await expect.poll(() => form().locator('select[name="elementA"] option').count()).toBe(10);
+    await setField('temperatureK', '0');
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.locator('[data-error-for="temperatureK"]').textContent()).toMatch(/above 0 K/);
+    await setField('temperatureK', '600');
+    await setField('sweeps', '0');
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.locator('[data-error-for="sweeps"]').textContent()).toMatch(/at least 1/);
+    await setField('sweeps', '100');
+    await setField('shells', '40');
+    await expect.poll(() => page.getByTestId('sim-plan').textContent()).toMatch(/limit is 50000 atoms/);
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.locator('[data-error-for="shells"]').textContent()).toMatch(/limit is 50000 atoms/);
+    await page.screenshot({ path: screenshotPath('simulation-errors'), fullPage: true });
+    expect(runs()).toBe(0);
+  });
+
+  it('shows progress of a long run with live traces, and Cancel stops it', async () => {
+    await setField('shells', '7');
+    await setField('sweeps', '60000');
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.getByTestId('sim-progress').isVisible()).toBe(true);
+    await expect.poll(async () => Number(await page.getByTestId('sim-progress').getAttribute('aria-valuenow')), { timeout: 30_000 }).toBeGreaterThan(0);
+    await expect.poll(() => page.getByTestId('sim-traces').isVisible(), { timeout: 30_000 }).toBe(true);
+    // The window stays responsive while the worker computes: the form still reacts.
+    await setField('seed', '42');
+    expect(await form().locator('input[name="seed"]').inputValue()).toBe('42');
+    await page.screenshot({ path: screenshotPath('simulation-running'), fullPage: true });
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    await expect.poll(() => page.getByTestId('sim-status').textContent(), { timeout: 20_000 }).toBe('cancelled');
+  });
+
+  it('runs a small particle to the end and shows the result beside the prediction, with the picture', async () => {
+    await setField('shells', '4');
+    await setField('sweeps', '400');
+    await setField('seed', '7');
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.getByTestId('sim-status').textContent(), { timeout: 60_000 }).toBe('done');
+    await expect.poll(() => page.getByTestId('sim-architecture').textContent()).toMatch(/Ag|alloy/);
+    expect(await page.getByTestId('sim-prediction-architecture').textContent()).toBeTruthy();
+    expect(await page.getByTestId('radial-profile').locator('.recharts-xAxis .recharts-cartesian-axis-tick').count()).toBe(5); // centre, S−3 … surface
+    expect(await page.getByTestId('particle-cross-section').locator('circle').count()).toBeGreaterThan(10);
+    expect(await page.getByTestId('particle-surface').locator('circle').count()).toBeGreaterThan(50);
+    expect(await page.getByTestId('particle-legend').textContent()).toMatch(/Ag.*Pd/);
+    await page.screenshot({ path: screenshotPath('simulation-result'), fullPage: true });
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export extended XYZ' }).click()]);
+    expect(download.suggestedFilename()).toMatch(/^pairwright-run-\d+-AgPd\.xyz$/);
+    const path = await download.path();
+    const frame = readExtendedXyz(readFileSync(path, 'utf8'));
+    expect(frame.symbols).toHaveLength(309);
+    expect(new Set(frame.symbols)).toEqual(new Set(['Ag', 'Pd']));
+  });
+
+  it('re-opens stored runs after a reload', async () => {
+    await page.reload();
+    await expect.poll(() => page.locator('table[aria-label="Simulation runs"] tbody tr').count()).toBe(2);
+    await page.locator('table[aria-label="Simulation runs"] tbody tr').first().click();
+    await expect.poll(() => page.getByTestId('sim-status').textContent()).toBe('done');
+    await expect.poll(() => page.getByTestId('particle-surface').isVisible()).toBe(true);
+    await page.locator('table[aria-label="Simulation runs"] tbody tr').nth(1).click();
+    await expect.poll(() => page.getByTestId('sim-status').textContent()).toBe('cancelled');
+    await page.screenshot({ path: screenshotPath('simulation-reopened'), fullPage: true });
+  });
+});
