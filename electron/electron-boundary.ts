@@ -3,6 +3,12 @@
  * this boundary so its wiring can be unit-tested with a stand-in (the Electron binary cannot be
  * downloaded on every machine); at run time the real 'electron' module is passed in.
  */
+export interface IpcMainEventLike {
+  senderFrame: { url: string } | null;
+  sender: { id: number };
+  returnValue: unknown;
+}
+
 export interface IpcMainInvokeEventLike {
   senderFrame: { url: string } | null;
   sender: { id: number };
@@ -66,6 +72,7 @@ export interface ElectronBoundary {
   BrowserWindow: new (options: BrowserWindowOptions) => BrowserWindowLike;
   ipcMain: {
     handle(channel: string, listener: (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>): void;
+    on(channel: string, listener: (event: IpcMainEventLike) => void): void;
   };
   Menu: {
     buildFromTemplate(template: MenuItemTemplate[]): unknown;
@@ -84,3 +91,5 @@ export interface ElectronBoundary {
 /** IPC channel names shared by main and preload. */
 export const CALL_CHANNEL = 'pairwright:call';
 export const PRINT_CHANNEL = 'pairwright:print-to-pdf';
+/** Synchronous request from the preload for the allowlist of operation names. */
+export const OPERATIONS_CHANNEL = 'pairwright:operations';

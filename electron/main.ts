@@ -6,12 +6,13 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { isOperationName } from '../shared-model/api/contract';
+import { isOperationName, OPERATION_NAMES } from '../shared-model/api/contract';
 import { fail } from '../shared-model/api/result';
 import type { ServiceContext } from './services/context';
 import { dispatch } from './services/dispatch';
 import {
   CALL_CHANNEL,
+  OPERATIONS_CHANNEL,
   PRINT_CHANNEL,
   type BrowserWindowLike,
   type ElectronBoundary,
@@ -96,6 +97,10 @@ export async function wireDesktopApp(electron: ElectronBoundary, context: Servic
       shell.openExternal(url).catch((error: unknown) => console.error('[pairwright] could not open link:', error));
     }
     return { action: 'deny' };
+  });
+
+  ipcMain.on(OPERATIONS_CHANNEL, (event) => {
+    event.returnValue = isTrustedSender(event, window, paths.rendererIndex) ? [...OPERATION_NAMES] : [];
   });
 
   ipcMain.handle(CALL_CHANNEL, async (event, name, input) => {

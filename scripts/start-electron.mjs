@@ -18,7 +18,9 @@ function fail(message) {
 function electronBinary() {
   let electronPackage;
   try {
-    electronPackage = require.resolve('electron/package.json');
+    // PAIRWRIGHT_ELECTRON_DIR points at another electron package folder (tests use an empty one).
+    const override = process.env.PAIRWRIGHT_ELECTRON_DIR;
+    electronPackage = override ? require.resolve(join(override, 'package.json')) : require.resolve('electron/package.json');
   } catch {
     return { error: 'Electron is not installed. It is an optional dependency whose install downloads the Electron binary; that download failed or was skipped on this machine.' };
   }

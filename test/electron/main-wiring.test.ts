@@ -8,19 +8,23 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { openStore, type Store } from '../../db/store';
 import {
   CALL_CHANNEL,
+  OPERATIONS_CHANNEL,
   type BrowserWindowLike,
+  type IpcMainEventLike,
   type BrowserWindowOptions,
   type ElectronBoundary,
   type IpcMainInvokeEventLike,
   type MenuItemTemplate,
 } from '../../electron/electron-boundary';
 import { isVettedExternalLink, wireDesktopApp } from '../../electron/main';
+import { OPERATION_NAMES } from '../../shared-model/api/contract';
 import { tempDataDir } from '../support/host-fixture';
 
 type Listener = (...args: never[]) => unknown;
 
 function standInElectron() {
   const handlers = new Map<string, (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>>();
+  const syncHandlers = new Map<string, (event: IpcMainEventLike) => void>();
   const webContentsListeners = new Map<string, Listener>();
   const opened: string[] = [];
   let windowOptions: BrowserWindowOptions | null = null;
@@ -52,7 +56,10 @@ function standInElectron() {
       quit: () => undefined,
     },
     BrowserWindow: FakeWindow,
-    ipcMain: { handle: (channel, listener) => void handlers.set(channel, listener) },
+    ipcMain: {
+      handle: (channel, listener) => void handlers.set(channel, listener),
+      on: (channel, listener) => void syncHandlers.set(channel, listener),
+    },
     Menu: { buildFromTemplate: (template) => ((menu = template), template), setApplicationMenu: () => undefined },
     shell: { openExternal: async (url) => void opened.push(url), openPath: async () => '' },
     dialog: { showSaveDialog: async () => ({ canceled: true }), showMessageBox: async () => ({}) },
@@ -60,6 +67,7 @@ function standInElectron() {
   return {
     electron,
     handlers,
+    syncHandlers,
     webContentsListeners,
     opened,
     get windowOptions() {
@@ -123,6 +131,17 @@ describe('Electron main process wiring', () => {
     expect(noFrame).toMatchObject({ ok: false, error: { code: 'forbidden' } });
     const unknown = await call?.(trustedEvent(), 'shell.exec', {});
     expect(unknown).toMatchObject({ ok: false, error: { code: 'unknown_operation' } });
+  });
+
+  it('gives the preload the allowlist only when our own frame asks', async () => {
+    const fake = await wired();
+    const ask = fake.syncHandlers.get(OPERATIONS_CHANNEL);
+    const trusted = { ...trustedEvent(), returnValue: undefined as unknown };
+    ask?.(trusted);
+    expect(trusted.returnValue).toEqual(OPERATION_NAMES);
+    const foreign = { sender: { id: 7 }, senderFrame: { url: 'https://example.org/' }, returnValue: undefined as unknown };
+    ask?.(foreign);
+    expect(foreign.returnValue).toEqual([]);
   });
 
   it('refuses navigation and new windows; vetted https links go to the OS browser', async () => {
