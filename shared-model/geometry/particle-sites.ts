@@ -11,8 +11,7 @@
  * N is kept as a real number (the expected count) so the results vary smoothly with the diameter.
  */
 import { invalid } from '../api/result';
-import { atomsInSphere, monolayerThicknessNm } from './fcc';
-import { magicClusterAtoms, magicClusterSurfaceAtoms, truncatedOctahedronAtoms, truncatedOctahedronSurfaceAtoms } from './magic-numbers';
+import { monolayerThicknessNm } from './fcc';
 
 export const PARTICLE_SHAPES = ['cuboctahedron', 'icosahedron', 'truncated octahedron', 'sphere'] as const;
 export type ParticleShape = (typeof PARTICLE_SHAPES)[number];
@@ -73,9 +72,11 @@ interface ClusterFamily {
   guess: (atoms: number) => number;
 }
 
+// The families below evaluate the same closed forms as magic-numbers.ts without its argument checks (whole
+// k ≥ first is guaranteed here); the tests check both agree at every magic size.
 const MACKAY: ClusterFamily = {
-  atoms: magicClusterAtoms,
-  surface: magicClusterSurfaceAtoms,
+  atoms: mackayAtoms,
+  surface: (n) => 10 * n * n + 2,
   first: 1,
   real: mackayAtoms,
   slope: mackayAtomsSlope,
@@ -83,8 +84,8 @@ const MACKAY: ClusterFamily = {
 };
 
 const TRUNCATED_OCTAHEDRON: ClusterFamily = {
-  atoms: truncatedOctahedronAtoms,
-  surface: truncatedOctahedronSurfaceAtoms,
+  atoms: octaAtoms,
+  surface: (l) => (30 * l - 60) * l + 32,
   first: 2,
   real: octaAtoms,
   slope: octaAtomsSlope,
@@ -118,7 +119,8 @@ export function particleSiteCounts(diameterNm: number, latticeNm: number, shape:
   if (typeof latticeNm !== 'number' || !Number.isFinite(latticeNm) || latticeNm <= 0) {
     throw invalid('latticeNm', `lattice constant must be a positive number of nm, got ${String(latticeNm)}`);
   }
-  const atoms = atomsInSphere(diameterNm, latticeNm);
+  // atoms of a sphere at bulk fcc density, (π/6)d³·4/a³ (as atomsInSphere in fcc.ts)
+  const atoms = ((Math.PI / 6) * diameterNm * diameterNm * diameterNm * 4) / (latticeNm * latticeNm * latticeNm);
   if (atoms < 2) {
     throw invalid('diameterNm', `a ${diameterNm} nm particle holds fewer than 2 atoms (${atoms.toFixed(2)}); a pair needs a larger diameter`);
   }
