@@ -4,7 +4,7 @@
  * the conditions as they are typed. Clicking a point opens the pair detail.
  */
 import { useMemo, useState } from 'react';
-import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from 'recharts';
+import { CartesianGrid, LabelList, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from 'recharts';
 import { DomainError } from '../../../shared-model/api/result';
 import { describeArchitecture, type ArchitectureKind } from '../../../shared-model/architecture/labels';
 import { DESCRIPTOR_KEYS, DESCRIPTOR_LABELS, relativeDifference, type DescriptorKey } from '../../../shared-model/prediction/descriptors';
@@ -18,12 +18,25 @@ import { ConditionsBar, parseElementList, useConditions } from './prediction-con
 
 type AxisKey = DescriptorKey | 'segregationBinA' | 'segregationAinB' | 'enrichment' | 'unlikeNeighbourRatio';
 
-const AXES: Array<{ key: AxisKey; label: string }> = [
-  ...DESCRIPTOR_KEYS.map((key) => ({ key: key as AxisKey, label: DESCRIPTOR_LABELS[key] })),
-  { key: 'segregationBinA', label: 'segregation enthalpy of dilute B at the surface of A, eV' },
-  { key: 'segregationAinB', label: 'segregation enthalpy of dilute A at the surface of B, eV' },
-  { key: 'enrichment', label: 'predicted surface enrichment E' },
-  { key: 'unlikeNeighbourRatio', label: 'unlike neighbours relative to random' },
+const SHORT: Record<DescriptorKey, string> = {
+  cohesiveEnergy: 'Δ cohesive energy (rel.)',
+  metallicRadius: 'Δ metallic radius (rel.)',
+  surfaceEnergy: 'Δ surface energy (rel.)',
+  electronegativity: 'Δ electronegativity (rel.)',
+  bulkModulus: 'Δ bulk modulus (rel.)',
+  shearModulus: 'Δ shear modulus (rel.)',
+  latticeConstant: 'Δ lattice constant (rel.)',
+  mixingEnthalpyKjPerMol: 'ΔHmix, kJ/mol',
+  mixingChemicalKjPerMol: 'ΔHmix chemical, kJ/mol',
+  mixingElasticKjPerMol: 'ΔHmix elastic, kJ/mol',
+};
+
+const AXES: Array<{ key: AxisKey; short: string; label: string }> = [
+  ...DESCRIPTOR_KEYS.map((key) => ({ key: key as AxisKey, short: SHORT[key], label: DESCRIPTOR_LABELS[key] })),
+  { key: 'segregationBinA', short: 'ΔH_seg B in A, eV', label: 'segregation enthalpy of dilute B at the surface of A, eV' },
+  { key: 'segregationAinB', short: 'ΔH_seg A in B, eV', label: 'segregation enthalpy of dilute A at the surface of B, eV' },
+  { key: 'enrichment', short: 'surface enrichment E', label: 'predicted surface enrichment E' },
+  { key: 'unlikeNeighbourRatio', short: 'unlike neighbours / random', label: 'unlike neighbours relative to random' },
 ];
 
 const KIND_COLOURS: Record<string, string> = {
@@ -128,8 +141,8 @@ export function DescriptorMapView() {
           <Field label="x axis" name="xAxis">
             <select name="xAxis" value={xKey} onChange={(e) => setXKey(e.target.value as AxisKey)}>
               {AXES.map((a) => (
-                <option key={a.key} value={a.key}>
-                  {a.label}
+                <option key={a.key} value={a.key} title={a.label}>
+                  {a.short}
                 </option>
               ))}
             </select>
@@ -137,8 +150,8 @@ export function DescriptorMapView() {
           <Field label="y axis" name="yAxis">
             <select name="yAxis" value={yKey} onChange={(e) => setYKey(e.target.value as AxisKey)}>
               {AXES.map((a) => (
-                <option key={a.key} value={a.key}>
-                  {a.label}
+                <option key={a.key} value={a.key} title={a.label}>
+                  {a.short}
                 </option>
               ))}
             </select>
@@ -152,10 +165,17 @@ export function DescriptorMapView() {
           {result.points.length} pairs <span className="muted small">(click a point for its detail)</span>
         </h2>
         <ResponsiveContainer width="100%" height={460}>
-          <ScatterChart margin={{ left: 16, right: 24, top: 8, bottom: 32 }}>
+          <ScatterChart margin={{ left: 24, right: 24, top: 16, bottom: 32 }}>
             <CartesianGrid strokeDasharray="3 3" />
             <XAxis dataKey="x" type="number" name={axisLabel(xKey)} label={{ value: axisLabel(xKey), position: 'insideBottom', offset: -16 }} tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()} />
-            <YAxis dataKey="y" type="number" name={axisLabel(yKey)} width={64} tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()} />
+            <YAxis
+              dataKey="y"
+              type="number"
+              name={axisLabel(yKey)}
+              width={72}
+              label={{ value: axisLabel(yKey), angle: -90, position: 'insideLeft', style: { textAnchor: 'middle' } }}
+              tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()}
+            />
             <ZAxis range={[50, 50]} />
             <Tooltip
               cursor={{ strokeDasharray: '3 3' }}
@@ -183,7 +203,9 @@ export function DescriptorMapView() {
                   const point = (data as { payload?: Point }).payload;
                   if (point) setOpen({ a: point.elementA, b: point.elementB });
                 }}
-              />
+              >
+                {result.points.length <= 60 ? <LabelList dataKey="pair" position="top" fontSize={11} /> : null}
+              </Scatter>
             ))}
           </ScatterChart>
         </ResponsiveContainer>
