@@ -6,7 +6,7 @@ import type { OperationName } from '../../shared-model/api/contract';
 import { batchHandlers } from './batches';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
-import { outcomeAnalysisHandlers } from './outcomes';
+import { outcomeAnalysisHandlers, outcomeHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
 import { predictionHandlers } from './prediction';
@@ -14,6 +14,7 @@ import { simulationHandlers } from './simulation';
 
 export const handlers: HandlerMap<OperationName> = {
   ...outcomeAnalysisHandlers,
+  ...outcomeHandlers,
   ...campaignHandlers,
   ...pairHandlers,
   ...predictionHandlers,

@@ -6,6 +6,7 @@ import type { ComponentType } from 'react';
 import { ComingView } from './components/ComingView';
 import { BatchDesignView } from './views/BatchDesignView';
 import { CampaignsView } from './views/CampaignsView';
+import { ResultsView } from './views/ResultsView';
 import { ReagentsView } from './views/ReagentsView';
 import { CandidatesView } from './views/CandidatesView';
 import { DescriptorMapView } from './views/DescriptorMapView';
@@ -31,5 +32,5 @@ export const VIEWS: ViewEntry[] = [
   { id: 'simulation', label: 'Simulation', group: 'Predict', component: SimulationView, ready: true },
   { id: 'batch-design', label: 'Batch design', group: 'Plan', component: BatchDesignView, ready: true },
   { id: 'reagents', label: 'Reagents', group: 'Plan', component: ReagentsView, ready: true },
-  { id: 'results', label: 'Results', group: 'Learn', component: coming('Results', 'log TEM sizes, EDX compositions and line scans, and compare outcomes with predictions.'), ready: false },
+  { id: 'results', label: 'Results', group: 'Learn', component: ResultsView, ready: true },
 ];

@@ -8,13 +8,14 @@ import { batchOperations } from './batches';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
-import { outcomeAnalysisOperations } from './outcomes';
+import { outcomeAnalysisOperations, outcomeOperations } from './outcomes';
 import { pairOperations } from './pairs';
 import { predictionOperations } from './prediction';
 import { simulationOperations } from './simulation';
 
 export const operations = {
   ...outcomeAnalysisOperations,
+  ...outcomeOperations,
   ...campaignOperations,
   ...pairOperations,
   ...predictionOperations,

@@ -62,6 +62,9 @@ function checkFraction(field: string, value: number): void {
   if (!(Number.isFinite(value) && value >= 0 && value <= 1)) throw invalid(field, `${field} must be an atomic fraction between 0 and 1, got ${value}`);
 }
 
+/** Fractions typed as at.% (48 → 0.48) carry binary rounding; a deviation equal to the uncertainty is not beyond it. */
+const ROUNDING_SLACK = 1e-9;
+
 const pct = (x: number) => `${(x * 100).toFixed(1)} at.%`;
 
 export function compareComposition(input: CompositionInput): CompositionComparison {
@@ -78,7 +81,7 @@ export function compareComposition(input: CompositionInput): CompositionComparis
     if (deviation === null) comment = 'no nominal composition to compare with';
     else if (m.uncertaintyXB === null) comment = `differs from nominal by ${pct(deviation)}; no uncertainty stated, so it cannot be judged`;
     else {
-      flagged = Math.abs(deviation) > m.uncertaintyXB;
+      flagged = Math.abs(deviation) > m.uncertaintyXB + ROUNDING_SLACK;
       comment = flagged
         ? `${elementB} ${deviation > 0 ? 'above' : 'below'} nominal by ${pct(Math.abs(deviation))}, beyond the stated ±${pct(m.uncertaintyXB)}`
         : `within ±${pct(m.uncertaintyXB)} of nominal`;
@@ -117,7 +120,7 @@ export function compareComposition(input: CompositionInput): CompositionComparis
       if (e.uncertaintyXB === null || b.uncertaintyXB === null) continue;
       const combined = Math.hypot(e.uncertaintyXB, b.uncertaintyXB);
       const difference = e.xB - b.xB;
-      if (Math.abs(difference) > combined) {
+      if (Math.abs(difference) > combined + ROUNDING_SLACK) {
         warnings.push({
           code: 'edx-vs-bulk',
           message: `${e.method} (${pct(e.xB)} ${elementB}) and ${b.method} (${pct(b.xB)}) differ by ${pct(Math.abs(difference))}, beyond their combined uncertainty ±${pct(combined)}: check line choice, grid signal, or whether the analysed particles represent the batch`,

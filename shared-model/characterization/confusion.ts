@@ -82,3 +82,13 @@ export function confusionMatrix(pairs: readonly PredictionOutcomePair[], extraLa
     perLabel,
   };
 }
+
+export type LabelAgreement = 'agree' | 'same kind' | 'disagree';
+
+/** Exact label match → agree; same kind (e.g. core@shell the other way round) → same kind; else disagree. */
+export function labelAgreement(predicted: ArchitectureLabel, observed: ArchitectureLabel): LabelAgreement {
+  const p = normalise(predicted);
+  const o = normalise(observed);
+  if (p.label === o.label) return 'agree';
+  return p.kind === o.kind && p.kind !== 'other' ? 'same kind' : 'disagree';
+}

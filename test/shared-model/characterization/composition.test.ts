@@ -63,3 +63,10 @@ describe('X-ray line overlaps', () => {
     expect(suggestedLine('Ni', 'Cu')?.line).toBe('Kα');
   });
 });
+
+describe('composition edge', () => {
+  it('a deviation exactly equal to the uncertainty is within it (0.48 vs 0.50 ± 0.02)', () => {
+    const r = compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 0.5, measurements: [{ method: 'ICP-OES', xB: 0.48, uncertaintyXB: 0.02 }] });
+    expect(r.rows[0]!.flagged).toBe(false);
+  });
+});

@@ -88,7 +88,8 @@ describe('line-scan model fits on synthetic scans', () => {
     // The reported uncertainties should be honest: 3 SD should cover nearly every error.
     expect(radiusCovered / total).toBeGreaterThanOrEqual(0.9);
     expect(shellCovered / shellTrials).toBeGreaterThanOrEqual(0.9);
-  });
+    // About 7 s on an idle 2-core machine; the generous limit only guards against a loaded one.
+  }, 120_000);
 
   it('reports the chosen model with the pair labels, monolayers and a suggestion', () => {
     const analysis = fitLineScan(syntheticScan(spec('B@A', 1), 30, 5), OPTIONS);

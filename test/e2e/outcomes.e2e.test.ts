@@ -1,0 +1,148 @@
+/**
+ * A user in Debian's Chromium records what characterization showed for a made Au–Pd batch: pastes TEM
+ * diameters (first with a typo), records composition with a Cu grid, imports an EDX line scan, confirms the
+ * suggested architecture and reads the campaign's prediction-vs-outcome table and confusion matrix.
+ * Screenshots go to test-output/screenshots/.
+ */
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dispatch } from '../../electron/services/dispatch';
+import type { SavedBatch } from '../../shared-model/api/batches';
+import type { Campaign } from '../../shared-model/api/campaigns';
+import type { CandidatePair } from '../../shared-model/api/pairs';
+import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { startTestHost, type HostFixture } from '../support/host-fixture';
+import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
+
+const available = browserAvailable();
+
+describe.skipIf(!available)('results in the browser host', () => {
+  let browser: Browser;
+  let fixture: HostFixture;
+  let page: Page;
+
+  async function api<T>(name: string, input: unknown): Promise<T> {
+    const result = await dispatch({ store: fixture.store }, name, input);
+    if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
+    return result.value as T;
+  }
+  const countRows = (table: string) => (fixture.store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    fixture = await startTestHost();
+    // The planning side (campaign, pair, prediction, saved batch) is set up through the API.
+    const campaign = await api<Campaign>('campaigns.create', { name: 'Au-Pd screen' });
+    const pair = await api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
+    await api('prediction.save', { pair: 'Au-Pd', conditions: { xB: 0.5, diameterNm: 10, temperatureK: 300 }, pairId: pair.id });
+    await api<SavedBatch>('batches.save', {
+      name: 'AuPd 10 nm',
+      campaignId: campaign.id,
+      pairId: pair.id,
+      design: {
+        elementA: 'Au',
+        elementB: 'Pd',
+        target: 'alloy',
+        route: 'co-reduction',
+        size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
+        amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
+        batchVolumeMl: 50,
+        precursors: [
+          { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
+          { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
+        ],
+        reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+      },
+    });
+    page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
+    page.setDefaultTimeout(10000);
+    page.on('pageerror', (error) => {
+      throw error;
+    });
+    await page.goto(fixture.host.url);
+    await page.evaluate((id) => window.localStorage.setItem('pairwright.campaignId', String(id)), campaign.id);
+    await page.reload();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await fixture?.stop();
+  });
+
+  it('opens the Results view on the campaign\'s batch', async () => {
+    await page.locator('[data-view="results"]').click();
+    await expect.poll(() => page.getByTestId('batch-heading').textContent()).toMatch(/AuPd 10 nm: Au–Pd, target alloy, 10 nm, 50.0 at.% Pd/);
+    expect(await page.locator('[data-testid="predicted-label"]').textContent()).toMatch(/analytic/);
+  });
+
+  it('shows a malformed row beside the field and stores nothing', async () => {
+    const form = page.getByRole('form', { name: 'Import sizes' });
+    await form.locator('textarea[name="csvText"]').fill('diameter\n9.6\n10.1\n1O.4\n10.8\n');
+    await form.getByRole('button', { name: 'Import sizes' }).click();
+    await expect.poll(() => form.locator('[data-error-for="csvText"]').textContent()).toBe('line 4: "1O.4" in column "diameter" is not a number');
+    expect(countRows('outcome_size_imports')).toBe(0);
+  });
+
+  it('imports diameters and shows statistics with the histogram and fitted curve', async () => {
+    const form = page.getByRole('form', { name: 'Import sizes' });
+    const diameters = [9.6, 10.1, 10.4, 10.8, 9.2, 11.3, 10.0, 9.9, 10.6, 12.1, 9.4, 10.2, 10.7, 9.8, 11.0];
+    await form.locator('textarea[name="csvText"]').fill(`diameter;area\n${diameters.map((d) => `${String(d).replace('.', ',')};1`).join('\n')}\n`);
+    await form.getByRole('button', { name: 'Import sizes' }).click();
+    await expect.poll(() => page.locator('[data-stat="n"]').textContent()).toBe('15');
+    // Charts draw after their container is measured: poll.
+    await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-reference-area').count()).toBeGreaterThan(2);
+    await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-line-curve').count()).toBe(1);
+    expect(countRows('outcome_diameters')).toBe(15);
+    await page.locator('[aria-label="TEM sizes"]').screenshot({ path: screenshotPath('results-sizes') });
+  });
+
+  it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async () => {
+    const form = page.getByRole('form', { name: 'Record composition' });
+    await form.locator('input[name="xB-0"]').fill('48');
+    await form.locator('input[name="uncertainty-0"]').fill('2');
+    await form.locator('input[name="xB-1"]').fill('150');
+    await form.getByRole('button', { name: 'Record composition' }).click();
+    await expect.poll(() => form.locator('[data-error-for="measurements.1.xB"]').textContent()).toMatch(/at most 1/);
+    await form.locator('input[name="xB-1"]').fill('39');
+    await form.locator('input[name="uncertainty-1"]').fill('4');
+    await form.locator('input[name="gridMetal"]').fill('Cu');
+    await form.getByRole('button', { name: 'Record composition' }).click();
+    await expect.poll(() => page.locator('[data-testid="composition-table"] tr[data-flagged="true"]').count()).toBe(1);
+    expect(await page.getByTestId('composition-warning-grid-metal').count()).toBe(0);
+  });
+
+  it('imports a line scan, shows each model fit and the chosen one, and confirms the suggestion', async () => {
+    const scan = syntheticScan(
+      { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
+      20,
+      11,
+    );
+    const csv = `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]!.toFixed(2)},${scan.signalB[i]!.toFixed(2)}`).join('\n')}`;
+    const form = page.getByRole('form', { name: 'Import line scan' });
+    await form.locator('textarea[name="lineScanCsv"]').fill(csv);
+    await form.locator('input[name="scanName"]').fill('particle 1');
+    await form.getByRole('button', { name: 'Import and fit' }).click();
+    await expect.poll(() => page.getByTestId('chosen-model').textContent()).toMatch(/Pd@Au/);
+    expect(await page.locator('table[aria-label="Line-scan models"] tbody tr').count()).toBe(4);
+    await page.getByLabel('Model fits shown').selectOption('all');
+    // Two data series plus A and B fits of four models.
+    await expect.poll(() => page.locator('[data-testid="line-scan-chart"] .recharts-line').count()).toBe(10);
+    await page.locator('[aria-label="EDX line scans"]').screenshot({ path: screenshotPath('results-line-scan') });
+    await page.getByRole('button', { name: 'Confirm suggestion' }).click();
+    await expect.poll(() => page.getByTestId('observed-label').textContent()).toMatch(/Pd@Au \(confirmed suggestion\)/);
+    expect(countRows('outcome_line_scan_points')).toBe(51);
+    await page.screenshot({ path: screenshotPath('results-batch'), fullPage: true });
+  });
+
+  it('shows the campaign table and the confusion heat-map with counts in the cells', async () => {
+    await page.getByRole('button', { name: 'Per campaign' }).click();
+    const row = page.locator('table[aria-label="Prediction vs outcome table"] tr[data-batch="AuPd 10 nm"]');
+    await expect.poll(() => row.textContent()).toMatch(/Pd@Au/);
+    await expect.poll(() => page.getByTestId('agreement-summary').textContent()).toMatch(/1 batch compared/);
+    const cells = page.locator('[data-testid="confusion-heatmap"] [data-cell]');
+    await expect.poll(() => cells.count()).toBeGreaterThan(0);
+    const texts = await cells.locator('text').allTextContents();
+    expect(texts.map(Number).reduce((s, v) => s + v, 0)).toBe(1);
+    expect(await page.locator('[data-cell^="Pd@Au|"] text').textContent()).toBe('1');
+    await page.screenshot({ path: screenshotPath('results-campaign'), fullPage: true });
+  });
+});
