@@ -75,7 +75,9 @@ export interface SwapStatistics {
 /**
  * The Metropolis loop. Written as one closure over typed arrays with the local energy change inlined
  * (two paths: sites more than two cutoffs apart share no neighbour and need one pass each; otherwise
- * density changes are accumulated first so a shared neighbour is embedded once).
+ * density changes are accumulated first so a shared neighbour is embedded once). A closure rather than
+ * module functions over a state object: V8 specialises the first closure of a process to its arrays
+ * (measured ~1.3× faster), and a run gets a fresh worker thread.
  */
 interface Kernel {
   /** Runs `attempts` attempts at inverse temperature `beta` (1/eV); returns accepted moves. */
