@@ -63,7 +63,7 @@ describe('pairwright linescan', () => {
     const text = runPairwright(['linescan', file, '--pair', 'Au-Pd', ...data]);
     expect(text.status).toBe(0);
     expect(text.stdout).toMatch(/chosen: Pd@Au/);
-  });
+  }, 60_000);
 
   it('refuses a missing --pair and an unknown element', () => {
     const file = join(dir, 'scan.csv');
@@ -71,5 +71,95 @@ describe('pairwright linescan', () => {
     const run = runPairwright(['linescan', file, '--pair', 'Au-Xx', ...data]);
     expect(run.status).toBe(2);
     expect(run.stderr).toMatch(/unknown element "Xx"/);
-  });
+  }, 60_000);
+});
+
+describe('pairwright outcomes add / show / list / confusion', () => {
+  it('records sizes, composition, a line scan and the confirmed architecture on a batch', async () => {
+    const storeDir = join(dir, 'store-add');
+    // The planning side (campaign, pair, saved batch) is set up in-process on the same store.
+    const { openStore } = await import('../../db/store');
+    const { dispatch } = await import('../../electron/services/dispatch');
+    const store = openStore({ dataDir: storeDir });
+    const call = async <T>(name: string, input: unknown): Promise<T> => {
+      const result = await dispatch({ store }, name, input);
+      if (!result.ok) throw new Error(result.error.message);
+      return result.value as T;
+    };
+    const campaign = await call<{ id: number }>('campaigns.create', { name: 'CLI screen' });
+    const pair = await call<{ id: number }>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd' });
+    const batch = await call<{ id: number }>('batches.save', {
+      name: 'AuPd cli',
+      campaignId: campaign.id,
+      pairId: pair.id,
+      design: {
+        elementA: 'Au',
+        elementB: 'Pd',
+        target: 'alloy',
+        route: 'co-reduction',
+        size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
+        amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
+        batchVolumeMl: 50,
+        precursors: [
+          { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
+          { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
+        ],
+        reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+      },
+    });
+    store.close();
+    const storeArgs = ['--data', storeDir];
+
+    const scanFile = join(dir, 'add-scan.csv');
+    const scan = syntheticScan(
+      { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
+      20,
+      43,
+    );
+    writeFileSync(scanFile, `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]},${scan.signalB[i]}`).join('\n')}\n`);
+    const sizes = join(dir, 'add-sizes.csv');
+    writeFileSync(sizes, '9.6\n10.1\n10.4\n10.8\n9.2\n11.3\n');
+    const badScan = join(dir, 'short-scan.csv');
+    writeFileSync(badScan, Array.from({ length: 14 }, (_, i) => `${i},${50 + i},${40 + i}`).join('\n'));
+    // A bad line-scan file stops the whole command before anything is stored.
+    const refused = runPairwright(['outcomes', 'add', String(batch.id), '--sizes', sizes, '--linescan', badScan, ...storeArgs]);
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toMatch(/shorter than the particle/);
+    const empty = runPairwrightJson<{ sizes: unknown[] }>(['outcomes', 'show', String(batch.id), ...storeArgs]);
+    expect(empty.sizes).toEqual([]);
+
+    const out = runPairwrightJson<{ added: string[]; outcome: { sizes: { statistics: { n: number } }[]; observed: { label: string; decision: string }; compositions: { comparison: { rows: { flagged: boolean | null }[] } }[] } }>([
+      'outcomes',
+      'add',
+      String(batch.id),
+      '--sizes',
+      sizes,
+      '--linescan',
+      scanFile,
+      '--icp',
+      '48±2',
+      '--edx',
+      '39±4',
+      '--grid',
+      'Cu',
+      '--confirm',
+      '--file',
+      '/data/tem/img_001.dm4',
+      ...storeArgs,
+    ]);
+    expect(out.added).toEqual(['sizes', 'composition', 'line scan', 'observed (confirmed)', 'files']);
+    expect(out.outcome.sizes[0]?.statistics.n).toBe(6);
+    expect(out.outcome.observed).toMatchObject({ label: 'Pd@Au', decision: 'confirmed' });
+    expect(out.outcome.compositions[0]?.comparison.rows.map((r) => r.flagged)).toEqual([false, true]);
+
+    const rows = runPairwrightJson<{ observed: string; predicted: string | null }[]>(['outcomes', 'list', 'CLI screen', ...storeArgs]);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]?.observed).toBe('Pd@Au');
+    const confusion = runPairwright(['outcomes', 'confusion', 'CLI screen', ...storeArgs]);
+    expect(confusion.status).toBe(0);
+    // No prediction was saved for this pair, so nothing can be compared yet.
+    expect(confusion.stdout).toMatch(/no batch has both an observed architecture and a prediction yet/);
+    expect(runPairwright(['outcomes', 'add', String(batch.id), '--icp', 'about half', ...storeArgs]).stderr).toMatch(/--icp must be at.% of B/);
+    // Seven child processes; generous limit for a loaded machine.
+  }, 180_000);
 });

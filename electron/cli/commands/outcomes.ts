@@ -2,10 +2,12 @@
  * Outcome commands: `sizes` and `linescan` analyse a CSV file and store nothing; `outcomes …` record
  * results on a batch.
  */
-import type { LineScanPreview, SizePreview } from '../../../shared-model/api/outcomes';
+import type { BatchOutcome, CampaignConfusion, LineScanPreview, OutcomeRow, SizePreview } from '../../../shared-model/api/outcomes';
+import type { CompositionMeasurement } from '../../../shared-model/characterization/composition';
 import type { Estimate, LineScanModelFit } from '../../../shared-model/characterization/line-scan-fit';
 import { CliError, optionalNumber, optionalString, requirePositional, requireString, type CliCommand, type ParsedArgs } from '../command';
 import { formatTable } from '../table';
+import { resolveCampaign } from './campaigns';
 
 function columnOption(args: ParsedArgs, name: string): string | number | undefined {
   const value = optionalString(args, name);
@@ -136,6 +138,61 @@ function lineScanText(preview: LineScanPreview): string {
   return lines.join('\n');
 }
 
+function batchIdArg(args: ParsedArgs): number {
+  const text = requirePositional(args, 0, 'batch id');
+  if (!/^\d+$/.test(text) || Number(text) === 0) throw new CliError(`<batch id> must be a whole number, got "${text}"`);
+  return Number(text);
+}
+
+/** "48±2", "48+-2" or "48" (at.% of B, optional ± at.%) → fractions. */
+export function parseAtPercent(text: string, option: string): { xB: number; uncertaintyXB: number | null } {
+  const match = /^\s*([0-9]+(?:[.,][0-9]+)?)\s*(?:(?:±|\+-|\+\/-)\s*([0-9]+(?:[.,][0-9]+)?))?\s*$/.exec(text);
+  if (!match) throw new CliError(`--${option} must be at.% of B with an optional uncertainty, e.g. 48±2, got "${text}"`);
+  const value = Number((match[1] as string).replace(',', '.'));
+  const uncertainty = match[2] !== undefined ? Number(match[2].replace(',', '.')) : null;
+  return { xB: value / 100, uncertaintyXB: uncertainty === null ? null : uncertainty / 100 };
+}
+
+function outcomeText(o: BatchOutcome): string {
+  const lines = [`batch ${o.batchId} "${o.batchName}": ${o.elementA}-${o.elementB}, target ${o.targetLabel ?? '–'}`];
+  const size = o.sizes[o.sizes.length - 1];
+  if (size) lines.push(`sizes: n = ${size.statistics.n}, mean ${f(size.statistics.meanNm)} ± ${f(size.statistics.sdNm)} nm, CV ${f(size.statistics.cvPercent)} %`);
+  const composition = o.compositions[o.compositions.length - 1];
+  if (composition) {
+    for (const row of composition.comparison.rows) lines.push(`composition ${row.method}: ${(row.xB * 100).toFixed(1)} at.% ${o.elementB} — ${row.comment}`);
+    for (const warning of composition.comparison.warnings) lines.push(`warning: ${warning.message}`);
+  }
+  for (const scan of o.lineScans) lines.push(`line scan ${scan.id}${scan.name ? ` "${scan.name}"` : ''}: ${scan.analysis.chosenModel} (${scan.analysis.evidence})`);
+  if (o.predictions.length > 0) lines.push(`predicted: ${o.predictions.map((p) => `${p.label} (${p.source})`).join(', ')}`);
+  if (o.suggestion) lines.push(`suggested: ${o.suggestion.label}`);
+  lines.push(`observed: ${o.observed ? `${o.observed.label} (${o.observed.decision})` : 'not recorded'}`);
+  if (o.notes) lines.push(`notes: ${o.notes}`);
+  for (const file of o.files) lines.push(`file: ${file.path} (${file.kind})`);
+  return lines.join('\n');
+}
+
+const rowTable = (rows: readonly OutcomeRow[]): string =>
+  formatTable(rows, [
+    { header: 'batch', value: (r) => r.batchId, align: 'right' },
+    { header: 'name', value: (r) => r.batchName },
+    { header: 'pair', value: (r) => `${r.elementA}-${r.elementB}` },
+    { header: 'predicted', value: (r) => r.predicted ?? '' },
+    { header: 'simulated', value: (r) => r.simulated ?? '' },
+    { header: 'observed', value: (r) => r.observed ?? '' },
+    { header: 'agreement', value: (r) => r.agreement ?? '' },
+    { header: 'mean nm', value: (r) => (r.meanDiameterNm === null ? '' : r.meanDiameterNm.toFixed(2)), align: 'right' },
+    { header: 'line scan', value: (r) => r.lineScanModel ?? '' },
+  ]);
+
+function confusionText(c: CampaignConfusion): string {
+  const m = c.matrix;
+  if (m.labels.length === 0) return `no batch has both an observed architecture and a ${c.against} yet`;
+  const width = Math.max(10, ...m.labels.map((l) => l.length)) + 2;
+  const header = `${'observed \\ ' + (c.against === 'prediction' ? 'predicted' : 'simulated')}`.padEnd(width + 12) + m.labels.map((l) => l.padStart(width)).join('');
+  const body = m.labels.map((label, i) => label.padEnd(width + 12) + (m.counts[i] as number[]).map((n) => String(n).padStart(width)).join(''));
+  return [header, ...body, `exact agreement ${m.exactAgreement}/${m.total}, same kind ${m.kindAgreement}/${m.total}`].join('\n');
+}
+
 export const outcomeCommands: CliCommand[] = [
   {
     words: ['sizes'],
@@ -187,6 +244,144 @@ export const outcomeCommands: CliCommand[] = [
         probeSigmaNm: optionalNumber(args, 'probe-sigma') ?? null,
       });
       return { json: lineScanJson(preview), text: lineScanText(preview) };
+    },
+  },
+  {
+    words: ['outcomes', 'add'],
+    args: '<batch id>',
+    summary: 'Record characterization of a made batch: sizes CSV, composition, line-scan CSV, observed architecture, notes, file paths',
+    options: {
+      sizes: { type: 'string', description: 'CSV of particle diameters (nm)' },
+      column: { type: 'string', description: 'diameter column (name or number)' },
+      decimal: { type: 'string', description: 'decimal separator of the CSV files: auto (default), "." or ","' },
+      target: { type: 'string', description: 'target diameter, nm (default: the batch design)' },
+      precision: { type: 'string', description: 'wanted ± precision of the mean, % (default 2)' },
+      linescan: { type: 'string', description: 'CSV of an EDX line scan (position nm, A, B)' },
+      'probe-sigma': { type: 'string', description: 'probe σ in nm when known (fitted otherwise)' },
+      nominal: { type: 'string', description: 'nominal at.% of B (default: the batch design)' },
+      icp: { type: 'string', description: 'bulk analysis, at.% of B with uncertainty, e.g. 48±2' },
+      'icp-method': { type: 'string', description: 'ICP-OES (default) or ICP-MS' },
+      edx: { type: 'string', description: 'EDX at.% of B with uncertainty, e.g. 39±4' },
+      'edx-mode': { type: 'string', description: 'particle (default) or area' },
+      'edx-lines': { type: 'string', description: 'X-ray lines used, e.g. "Au L, Pd K"' },
+      grid: { type: 'string', description: 'TEM grid metal, e.g. Cu' },
+      observed: { type: 'string', description: 'observed architecture label (override), e.g. Pd@Au' },
+      confirm: { type: 'boolean', description: 'confirm the architecture suggested by the line scan' },
+      reason: { type: 'string', description: 'reason for the observed label' },
+      notes: { type: 'string', description: 'free-text notes' },
+      file: { type: 'string', multiple: true, description: 'path of an original image or spectrum (repeatable)' },
+    },
+    run: async (args, context) => {
+      const batchId = batchIdArg(args);
+      if (args.values.confirm === true && optionalString(args, 'observed') !== undefined) throw new CliError('give either --confirm or --observed, not both');
+      const sizesPath = optionalString(args, 'sizes');
+      const scanPath = optionalString(args, 'linescan');
+      const sizesText = sizesPath !== undefined ? context.readTextFile(sizesPath) : null;
+      const scanText = scanPath !== undefined ? context.readTextFile(scanPath) : null;
+      const measurements: CompositionMeasurement[] = [];
+      const icp = optionalString(args, 'icp');
+      if (icp !== undefined) {
+        const method = optionalString(args, 'icp-method') ?? 'ICP-OES';
+        if (method !== 'ICP-OES' && method !== 'ICP-MS') throw new CliError(`--icp-method must be ICP-OES or ICP-MS, got "${method}"`);
+        measurements.push({ method, ...parseAtPercent(icp, 'icp') });
+      }
+      const edx = optionalString(args, 'edx');
+      if (edx !== undefined) {
+        const mode = optionalString(args, 'edx-mode') ?? 'particle';
+        if (mode !== 'particle' && mode !== 'area') throw new CliError(`--edx-mode must be particle or area, got "${mode}"`);
+        const lines = optionalString(args, 'edx-lines');
+        measurements.push({ method: mode === 'particle' ? 'EDX particle' : 'EDX area', ...parseAtPercent(edx, 'edx'), ...(lines ? { lines } : {}) });
+      }
+      const nominalText = optionalString(args, 'nominal');
+      const grid = optionalString(args, 'grid');
+
+      // Check the batch and both files before storing anything, so a bad file leaves no partial record.
+      const before = await context.call('outcomes.get', { batchId });
+      const sizeInput = {
+        column: columnOption(args, 'column'),
+        decimalSeparator: decimalOption(args),
+        targetDiameterNm: optionalNumber(args, 'target') ?? before.targetDiameterNm,
+        precisionPercent: optionalNumber(args, 'precision') ?? 2,
+      };
+      const probeSigmaNm = optionalNumber(args, 'probe-sigma') ?? null;
+      if (sizesText !== null) await context.call('outcomes.previewSizes', { csvText: sizesText, ...sizeInput });
+      if (scanText !== null) await context.call('outcomes.previewLineScan', { pair: `${before.elementA}-${before.elementB}`, csvText: scanText, probeSigmaNm });
+
+      const added: string[] = [];
+      if (sizesText !== null) {
+        await context.call('outcomes.recordSizes', { batchId, csvText: sizesText, sourceFile: sizesPath ?? null, ...sizeInput });
+        added.push('sizes');
+      }
+      if (measurements.length > 0 || nominalText !== undefined || grid !== undefined) {
+        await context.call('outcomes.recordComposition', {
+          batchId,
+          ...(nominalText !== undefined ? { nominalXB: parseAtPercent(nominalText, 'nominal').xB } : {}),
+          measurements,
+          gridMetal: grid ?? null,
+        });
+        added.push('composition');
+      }
+      if (scanText !== null) {
+        await context.call('outcomes.importLineScan', { batchId, csvText: scanText, sourceFile: scanPath ?? null, probeSigmaNm });
+        added.push('line scan');
+      }
+      const reason = optionalString(args, 'reason') ?? '';
+      if (args.values.confirm === true) {
+        const now = await context.call('outcomes.get', { batchId });
+        if (!now.suggestion) throw new CliError('--confirm needs a line scan to suggest an architecture; give --observed LABEL instead');
+        await context.call('outcomes.setObserved', { batchId, label: now.suggestion.label, decision: 'confirmed', reason });
+        added.push('observed (confirmed)');
+      }
+      const observed = optionalString(args, 'observed');
+      if (observed !== undefined) {
+        await context.call('outcomes.setObserved', { batchId, label: observed, decision: 'override', reason });
+        added.push('observed');
+      }
+      const notes = optionalString(args, 'notes');
+      if (notes !== undefined) {
+        await context.call('outcomes.setNotes', { batchId, notes });
+        added.push('notes');
+      }
+      const files = args.values.file;
+      for (const path of Array.isArray(files) ? files : []) {
+        if (typeof path === 'string') await context.call('outcomes.addFile', { batchId, path, kind: /\.(msa|emsa|spx|eds|txt)$/i.test(path) ? 'spectrum' : 'image' });
+      }
+      if (Array.isArray(files) && files.length > 0) added.push('files');
+      if (added.length === 0) throw new CliError('nothing to add: give --sizes, --linescan, --icp, --edx, --observed, --confirm, --notes or --file');
+      const outcome = await context.call('outcomes.get', { batchId });
+      return { json: { added, outcome }, text: `recorded ${added.join(', ')}\n${outcomeText(outcome)}` };
+    },
+  },
+  {
+    words: ['outcomes', 'show'],
+    args: '<batch id>',
+    summary: 'What is recorded for a batch',
+    options: {},
+    run: async (args, context) => {
+      const outcome = await context.call('outcomes.get', { batchId: batchIdArg(args) });
+      return { json: outcome, text: outcomeText(outcome) };
+    },
+  },
+  {
+    words: ['outcomes', 'list'],
+    args: '<campaign>',
+    summary: 'Prediction vs outcome for every batch of a campaign',
+    options: {},
+    run: async (args, context) => {
+      const campaign = await resolveCampaign(context, requirePositional(args, 0, 'campaign'));
+      const rows = await context.call('outcomes.listByCampaign', { campaignId: campaign.id });
+      return { json: rows, text: rowTable(rows) };
+    },
+  },
+  {
+    words: ['outcomes', 'confusion'],
+    args: '<campaign>',
+    summary: 'Confusion matrix of predicted (or --simulation) vs observed architectures',
+    options: { simulation: { type: 'boolean', description: 'compare with the simulations instead of the analytic predictions' } },
+    run: async (args, context) => {
+      const campaign = await resolveCampaign(context, requirePositional(args, 0, 'campaign'));
+      const confusion = await context.call('outcomes.confusion', { campaignId: campaign.id, against: args.values.simulation === true ? 'simulation' : 'prediction' });
+      return { json: confusion, text: confusionText(confusion) };
     },
   },
 ];
