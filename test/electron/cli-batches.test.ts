@@ -19,6 +19,10 @@ interface RecipeJson {
 
 const PT_NI = ['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '25', '--total-metal', '0.1', '--volume', '50', '--precursor', 'Pt=h2ptcl6-6h2o@20', '--precursor', 'Ni=nicl2-6h2o@20', '--reducer', 'nabh4', '--excess', '5', '--reducer-stock', '100'];
 
+// Each child process starts Node with tsx; under a full parallel test run that takes seconds, so the tests
+// that spawn several get a longer timeout than the 30 s default.
+const SLOW = 180_000;
+
 describe('pairwright recipe / reagents / catalog', () => {
   it('designs a batch with the contract JSON fields', () => {
     const data = tempDataDir();
@@ -60,7 +64,7 @@ describe('pairwright recipe / reagents / catalog', () => {
     expect(list.stdout).toMatch(/PtNi B\s+Pt-Ni\s+alloy\s+co-reduction/);
     const moved = runPairwright(['batches', 'status', String(first.batchId), 'made', '--data', data]);
     expect(moved.stdout).toContain('is made');
-  });
+  }, SLOW);
 
   it('lists the catalog as JSON', () => {
     const catalog = runPairwrightJson<CatalogReagent[]>(['catalog', '--data', tempDataDir()]);
@@ -85,5 +89,5 @@ describe('pairwright recipe / reagents / catalog', () => {
       expect(run.stderr.trim().split('\n')).toHaveLength(1);
       expect(run.stderr).toMatch(message);
     }
-  });
+  }, SLOW);
 });
