@@ -519,7 +519,9 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     stepNm,
     sigmaMinNm: Math.max(cellNm / 2, 0.01),
     sigmaMaxNm,
-    radiusMinNm: Math.max(stepNm, 2 * cellNm),
+    // A particle much smaller than its half-maximum extent would need a probe wider than the particle;
+    // the bound keeps wrong models from collapsing into a blurred point.
+    radiusMinNm: Math.max(stepNm, 2 * cellNm, 0.3 * r0),
     radiusMaxNm: rangeNm / 2,
     scaleNm: r0,
     phiA: new Float64Array(n),

@@ -47,6 +47,9 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
   const ticks = labels.map((_, i) => i);
   return (
     <div className="heatmap-wrap" data-testid="confusion-heatmap">
+      <p className="muted small">
+        Rows: observed architecture. Columns: {props.predictedLabel}. Green cells agree, red cells disagree; the number is the count of batches.
+      </p>
       <ScatterChart width={width} height={height} margin={MARGIN}>
         <CartesianGrid strokeDasharray="0" stroke="none" />
         <XAxis
@@ -57,7 +60,6 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           interval={0}
           tickFormatter={(i: number) => labels[i] ?? ''}
           height={X_AXIS_PX}
-          label={{ value: `${props.predictedLabel} (columns)`, position: 'insideBottom' }}
         />
         <YAxis
           type="number"
@@ -67,7 +69,6 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           interval={0}
           tickFormatter={(i: number) => labels[n - 1 - i] ?? ''}
           width={Y_AXIS_PX}
-          label={{ value: 'observed (rows)', angle: -90, position: 'insideLeft' }}
         />
         <Scatter data={cells} shape={shape} isAnimationActive={false} />
       </ScatterChart>

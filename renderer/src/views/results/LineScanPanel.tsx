@@ -108,6 +108,7 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
                 {m.label}
                 {m.label === a.chosenModel ? ' ✓' : ''}
                 {m.model === 'Janus' && m.janusALow !== null ? <span className="muted small"> ({m.janusALow ? a.elementA : a.elementB} on the low side)</span> : null}
+                {m.atBounds.length > 0 ? <span className="muted small" title="a parameter on its bound has no meaningful uncertainty"> (on bound: {m.atBounds.join(', ')})</span> : null}
               </td>
               <td>{fixed(m.deltaBic, 1)}</td>
               <td>{fixed(m.bicWeight, 3)}</td>

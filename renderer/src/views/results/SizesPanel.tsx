@@ -19,22 +19,24 @@ function SizeChart(props: { record: SizeRecord }) {
   const top = Math.max(1, ...histogram.bins.map((b) => b.count), ...curve.map((c) => c.expectedCount)) * 1.1;
   // Bins drawn as rectangles on the numeric diameter axis, the fitted density (scaled to counts) as a line.
   return (
-    <div className="chart-box" data-testid="size-histogram">
-      <ResponsiveContainer width="100%" height="100%">
-        <ComposedChart data={curve} margin={{ top: 10, right: 20, bottom: 20, left: 0 }}>
-          <CartesianGrid strokeDasharray="3 3" />
-          <XAxis dataKey="diameterNm" type="number" domain={[from, to]} tickFormatter={(v: number) => v.toFixed(1)} label={{ value: 'diameter (nm)', position: 'insideBottom', offset: -10 }} />
-          <YAxis domain={[0, Math.ceil(top)]} allowDecimals={false} label={{ value: 'particles', angle: -90, position: 'insideLeft' }} />
-          <Tooltip formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))} labelFormatter={(v) => `${Number(v).toFixed(2)} nm`} />
-          <Legend verticalAlign="top" />
-          {histogram.bins.map((b) =>
-            b.count > 0 ? <ReferenceArea key={b.fromNm} x1={b.fromNm} x2={b.toNm} y1={0} y2={b.count} fill="#7a9cc6" fillOpacity={0.75} stroke="#4f74a3" ifOverflow="visible" /> : null,
-          )}
-          <Line dataKey="expectedCount" name="log-normal fit (ML)" stroke="#b5462c" dot={false} strokeWidth={2} isAnimationActive={false} />
-        </ComposedChart>
-      </ResponsiveContainer>
+    <>
+      <div className="chart-box" data-testid="size-histogram">
+        <ResponsiveContainer width="100%" height="100%">
+          <ComposedChart data={curve} margin={{ top: 10, right: 20, bottom: 20, left: 0 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis dataKey="diameterNm" type="number" domain={[from, to]} tickFormatter={(v: number) => v.toFixed(1)} label={{ value: 'diameter (nm)', position: 'insideBottom', offset: -10 }} />
+            <YAxis domain={[0, Math.ceil(top)]} allowDecimals={false} label={{ value: 'particles', angle: -90, position: 'insideLeft' }} />
+            <Tooltip formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))} labelFormatter={(v) => `${Number(v).toFixed(2)} nm`} />
+            <Legend verticalAlign="top" />
+            {histogram.bins.map((b) =>
+              b.count > 0 ? <ReferenceArea key={b.fromNm} x1={b.fromNm} x2={b.toNm} y1={0} y2={b.count} fill="#7a9cc6" fillOpacity={0.75} stroke="#4f74a3" ifOverflow="visible" /> : null,
+            )}
+            <Line dataKey="expectedCount" name="log-normal fit (ML)" stroke="#b5462c" dot={false} strokeWidth={2} isAnimationActive={false} />
+          </ComposedChart>
+        </ResponsiveContainer>
+      </div>
       <p className="muted small">Bars: particles per {num(histogram.binWidthNm, 2)} nm bin. Line: fitted log-normal density × n × bin width.</p>
-    </div>
+    </>
   );
 }
 
