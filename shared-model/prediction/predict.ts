@@ -96,6 +96,8 @@ export interface Prediction {
   mixingElasticKjPerMol: number;
   /** Unlike-neighbour fraction relative to a random alloy (see file comment). */
   unlikeNeighbourRatio: number;
+  /** Warren–Cowley short-range order parameter of the first shell, α = 1 − unlikeNeighbourRatio. */
+  warrenCowleyAlpha: number;
   /** Whether the regular-solution miscibility gap contains the composition at this temperature. */
   miscibilityGap: boolean;
   atoms: number;
@@ -451,6 +453,7 @@ export function predictionFromCore(ctx: PairContext, c: Required<PredictionCondi
     mixingChemicalKjPerMol: mixing.chemicalKjPerMol,
     mixingElasticKjPerMol: mixing.elasticKjPerMol,
     unlikeNeighbourRatio: tendency.ratio,
+    warrenCowleyAlpha: 1 - tendency.ratio,
     miscibilityGap: tendency.gap,
     atoms: Math.round(sites.atoms),
     surfaceSites: Math.round(sites.surfaceSites),

@@ -176,6 +176,10 @@ describe('predictPair: classification settings and confidence', () => {
     const ptSn = predictPair('Pt', 'Sn', BASE);
     expect(ptSn.unlikeNeighbourRatio).toBeGreaterThan(1.35);
     expect(ptSn.architecture).toBe('intermetallic');
+    // Warren–Cowley α = 1 − (unlike fraction / random unlike fraction): negative for ordering, positive for clustering
+    expect(ptSn.warrenCowleyAlpha).toBeCloseTo(1 - ptSn.unlikeNeighbourRatio, 12);
+    expect(ptSn.warrenCowleyAlpha).toBeLessThan(0);
+    expect(predictPair('Ni', 'Ag', BASE).warrenCowleyAlpha).toBeGreaterThan(0);
   });
 });
 
