@@ -106,12 +106,14 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     const stored = fixture.store.db.prepare('SELECT pair_id, model_version, inputs_json FROM predictions').all() as Array<{ pair_id: number; model_version: string; inputs_json: string }>;
     expect(stored).toHaveLength(1);
     expect(stored[0]?.pair_id).toBeGreaterThan(0);
-    expect(JSON.parse(stored[0]?.inputs_json ?? '{}')).toMatchObject({ elementA: 'Pt', elementB: 'Ni', conditions: { xB: 0.5, diameterNm: 3, temperatureK: 600 } }); // the view opens with its default conditions
+    expect(JSON.parse(stored[0]?.inputs_json ?? '{}')).toMatchObject({ elementA: 'Pt', elementB: 'Ni', conditions: { xB: 0.3, diameterNm: 3, temperatureK: 600 } }); // the conditions typed earlier are kept
     await expect.poll(() => detail.textContent()).toMatch(/1 saved for this campaign pair/);
   });
 
   it('descriptor map: a point per pair, coloured by architecture with a legend in words', async () => {
     await page.locator('[data-view="descriptor-map"]').click();
+    // the conditions typed in Candidates carry over
+    expect(await page.locator('[data-testid="descriptor-map-view"] [name="atPercentB"]').inputValue()).toBe('30');
     const chart = page.locator('[data-testid="descriptor-chart"]');
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(435);
     const legend = (await chart.locator('.recharts-legend-wrapper').textContent()) ?? '';

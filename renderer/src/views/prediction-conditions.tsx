@@ -2,9 +2,10 @@
  * The conditions bar shared by the prediction views: composition (at.% of B), diameter, shape,
  * temperature, facet. Values are kept as typed text; `conditions` is null while a field does not parse,
  * and `errors` holds the message for the field at fault (shown under it). Range checks are the model's
- * own (DomainError naming the field), so the UI and the API say the same thing.
+ * own (DomainError naming the field), so the UI and the API say the same thing. The typed values are
+ * kept for the browser tab (sessionStorage), so both prediction views and the pair detail share them.
  */
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { DomainError } from '../../../shared-model/api/result';
 import { PARTICLE_SHAPES, type ParticleShape } from '../../../shared-model/geometry/particle-sites';
 import { checkConditions, type PredictionConditions } from '../../../shared-model/prediction/predict';
@@ -30,10 +31,50 @@ function parseNumber(text: string): number {
 /** Field names of the model (xB, diameterNm, temperatureK) → the inputs of this bar. */
 export const CONDITION_FIELD_ALIASES: Record<string, string> = { xB: 'atPercentB', diameterNm: 'diameterNm', temperatureK: 'temperatureK', shape: 'shape', facet: 'facet' };
 
-export function useConditions(initial = { atPercentB: '50', diameterNm: '3', temperatureK: '600' }): ConditionsState {
-  const [text, setTextState] = useState(initial);
-  const [shape, setShape] = useState<ParticleShape>('cuboctahedron');
-  const [facet, setFacet] = useState<SurfaceFacet>('111');
+const STORAGE_KEY = 'pairwright.predictionConditions';
+
+interface StoredConditions {
+  text: { atPercentB: string; diameterNm: string; temperatureK: string };
+  shape: ParticleShape;
+  facet: SurfaceFacet;
+}
+
+const DEFAULTS: StoredConditions = { text: { atPercentB: '50', diameterNm: '3', temperatureK: '600' }, shape: 'cuboctahedron', facet: '111' };
+
+/** The conditions last typed in this tab (shared by the prediction views), or the defaults. */
+function rememberedConditions(): StoredConditions {
+  const raw = window.sessionStorage.getItem(STORAGE_KEY);
+  if (raw === null) return DEFAULTS;
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(raw);
+  } catch (error) {
+    if (error instanceof SyntaxError) return DEFAULTS; // a damaged entry: start from the defaults
+    throw error;
+  }
+  const value = parsed as Partial<StoredConditions> | null;
+  const text = value?.text;
+  if (
+    !text ||
+    typeof text.atPercentB !== 'string' ||
+    typeof text.diameterNm !== 'string' ||
+    typeof text.temperatureK !== 'string' ||
+    !(PARTICLE_SHAPES as readonly string[]).includes(String(value?.shape)) ||
+    (value?.facet !== '111' && value?.facet !== '100')
+  ) {
+    return DEFAULTS;
+  }
+  return { text: { atPercentB: text.atPercentB, diameterNm: text.diameterNm, temperatureK: text.temperatureK }, shape: value.shape as ParticleShape, facet: value.facet };
+}
+
+export function useConditions(): ConditionsState {
+  const [initial] = useState(rememberedConditions);
+  const [text, setTextState] = useState(initial.text);
+  const [shape, setShape] = useState<ParticleShape>(initial.shape);
+  const [facet, setFacet] = useState<SurfaceFacet>(initial.facet);
+  useEffect(() => {
+    window.sessionStorage.setItem(STORAGE_KEY, JSON.stringify({ text, shape, facet } satisfies StoredConditions));
+  }, [text, shape, facet]);
   const { conditions, errors } = useMemo(() => {
     const atPercent = parseNumber(text.atPercentB);
     const diameterNm = parseNumber(text.diameterNm);
