@@ -55,14 +55,16 @@ describe.skipIf(!available)('results in the browser host', () => {
       },
     });
     page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
-    page.setDefaultTimeout(10000);
+    // Generous: the whole suite runs browsers and fits side by side on two cores.
+    page.setDefaultTimeout(30000);
     page.on('pageerror', (error) => {
       throw error;
     });
     await page.goto(fixture.host.url);
     await page.evaluate((id) => window.localStorage.setItem('pairwright.campaignId', String(id)), campaign.id);
     await page.reload();
-  });
+    await page.locator('[data-view="results"]').waitFor({ timeout: 60000 });
+  }, 120_000);
   afterAll(async () => {
     await browser?.close();
     await fixture?.stop();
