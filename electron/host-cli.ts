@@ -5,6 +5,7 @@ import { parseArgs } from 'node:util';
 import { openStore } from '../db/store';
 import { startHost } from './host';
 import { defaultDataDir, rendererDistDir } from './paths';
+import { shutdownServices } from './services/lifecycle';
 
 function parsePort(text: string | undefined): number {
   if (text === undefined) return 5178;
@@ -32,10 +33,8 @@ async function main(): Promise<void> {
   const stop = (): void => {
     host
       .close()
-      .then(() => {
-        store.close();
-        process.exit(0);
-      })
+      .then(() => shutdownServices(store))
+      .then(() => process.exit(0))
       .catch((error: unknown) => {
         console.error('error while stopping:', error);
         process.exit(1);

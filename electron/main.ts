@@ -10,6 +10,7 @@ import { isOperationName, OPERATION_NAMES } from '../shared-model/api/contract';
 import { fail } from '../shared-model/api/result';
 import type { ServiceContext } from './services/context';
 import { dispatch } from './services/dispatch';
+import { shutdownServices } from './services/lifecycle';
 import {
   CALL_CHANNEL,
   OPERATIONS_CHANNEL,
@@ -144,8 +145,9 @@ export async function wireDesktopApp(electron: ElectronBoundary, context: Servic
   );
 
   app.on('window-all-closed', () => {
-    context.store.close();
-    app.quit();
+    shutdownServices(context.store)
+      .catch((error: unknown) => console.error('[pairwright] error while closing:', error))
+      .finally(() => app.quit());
   });
   window.once('ready-to-show', () => window.show());
   await window.loadFile(paths.rendererIndex);

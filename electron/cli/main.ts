@@ -10,6 +10,7 @@ import { openStore, type Store } from '../../db/store';
 import type { OperationInput, OperationName, OperationOutput } from '../../shared-model/api/contract';
 import { defaultDataDir } from '../paths';
 import { dispatchKnown } from '../services/dispatch';
+import { shutdownServices } from '../services/lifecycle';
 import { CliError, type CliCommand, type CliContext, type OptionSpec } from './command';
 import { commands } from './commands/index';
 
@@ -99,7 +100,8 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
     const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
     return { exitCode: 1, stdout: '', stderr: `pairwright: unexpected failure: ${detail}` };
   } finally {
-    (store as Store | null)?.close();
+    const opened = store as Store | null;
+    if (opened) await shutdownServices(opened);
   }
 }
 

@@ -242,3 +242,11 @@ export function queueFor(store: Store): MonteCarloQueue {
   }
   return queue;
 }
+
+/** Stops the queue of a store if one was started (runs end as cancelled); a no-op otherwise. */
+export async function closeQueueOf(store: Store): Promise<void> {
+  const queue = queues.get(store);
+  if (!queue) return;
+  queues.delete(store);
+  await queue.close();
+}

@@ -32,6 +32,7 @@ function standInElectron() {
   let windowOpenHandler: ((details: { url: string }) => { action: string }) | null = null;
   let menu: MenuItemTemplate[] = [];
   const appListeners = new Map<string, Listener>();
+  let quitCalls = 0;
   class FakeWindow implements BrowserWindowLike {
     webContents = {
       id: 7,
@@ -53,7 +54,7 @@ function standInElectron() {
       getPath: () => '/tmp/pairwright-user-data',
       getVersion: () => '0.1.0',
       on: (event: string, listener: Listener) => void appListeners.set(event, listener),
-      quit: () => undefined,
+      quit: () => void (quitCalls += 1),
     },
     BrowserWindow: FakeWindow,
     ipcMain: {
@@ -83,6 +84,9 @@ function standInElectron() {
       return menu;
     },
     appListeners,
+    get quitCalls() {
+      return quitCalls;
+    },
   };
 }
 
@@ -155,6 +159,16 @@ describe('Electron main process wiring', () => {
     expect(fake.opened).toEqual(['https://echa.europa.eu/information-on-chemicals']);
     expect(isVettedExternalLink('http://echa.europa.eu/')).toBe(false);
     expect(isVettedExternalLink('https://echa.europa.eu.evil.example/')).toBe(false);
+  });
+
+  it('closing the last window stops background jobs, closes the store and quits', async () => {
+    const fake = await wired();
+    const openStoreHandle = store;
+    const closeAll = fake.appListeners.get('window-all-closed') as () => void;
+    closeAll();
+    await expect.poll(() => fake.quitCalls).toBe(1);
+    expect(openStoreHandle?.db.open).toBe(false);
+    store = null;
   });
 
   it('builds the usual application menu', async () => {

@@ -1,0 +1,14 @@
+/**
+ * Orderly shutdown shared by the desktop app, the browser host and the CLI: stop background jobs
+ * (Monte Carlo workers end their runs as cancelled, with a reason stored), then close the store.
+ */
+import type { Store } from '../../db/store';
+import { closeQueueOf } from '../workers/montecarlo-queue';
+
+export async function shutdownServices(store: Store): Promise<void> {
+  try {
+    await closeQueueOf(store);
+  } finally {
+    store.close();
+  }
+}
