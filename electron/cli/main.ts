@@ -33,7 +33,11 @@ export function helpText(selected?: CliCommand): string {
     return lines.join('\n');
   }
   const lines = ['Pairwright command line', '', 'commands:'];
-  for (const command of commands) lines.push(`  ${usageLine(command)}`.padEnd(52) + command.summary);
+  for (const command of commands) {
+    const usage = `  ${usageLine(command)}`;
+    // Long usages get their summary on the next line so the columns stay readable.
+    lines.push(usage.length < 50 ? usage.padEnd(52) + command.summary : `${usage}\n${' '.repeat(52)}${command.summary}`);
+  }
   lines.push('', 'every command takes --json (machine-readable output), --data DIR (choose the store) and --help');
   return lines.join('\n');
 }

@@ -1,17 +1,17 @@
-/** Every CLI command; an area adds its list with one line. */
+/** Every CLI command, in the order of the work (help lists them so); an area adds its list with one line. */
 import type { CliCommand } from '../command';
-import { outcomeCommands } from './outcomes';
 import { batchCommands } from './batches';
 import { campaignCommands } from './campaigns';
+import { outcomeCommands } from './outcomes';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
 import { simulationCommands } from './simulation';
 
 export const commands: CliCommand[] = [
-  ...outcomeCommands,
   ...campaignCommands,
   ...pairCommands,
-  ...batchCommands,
   ...predictionCommands,
   ...simulationCommands,
+  ...batchCommands,
+  ...outcomeCommands,
 ];
