@@ -1,10 +1,15 @@
 /**
  * A user in Debian's Chromium ranks candidates, types a bad composition, sorts, moves through the table
- * with the keyboard, opens a pair, saves its prediction to a campaign pair, and looks at the descriptor map.
+ * with the keyboard, opens a pair, saves its prediction to a campaign pair, looks at the descriptor map,
+ * with the campaign's logged outcomes drawn on it once batches have an observed architecture.
  * Screenshots go to test-output/screenshots/.
  */
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dispatch } from '../../electron/services/dispatch';
+import type { SavedBatch } from '../../shared-model/api/batches';
+import type { Campaign } from '../../shared-model/api/campaigns';
+import type { CandidatePair } from '../../shared-model/api/pairs';
 import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
 import { startTestHost, tempDataDir, type HostFixture } from '../support/host-fixture';
 
@@ -28,6 +33,12 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await browser?.close();
     await fixture?.stop();
   });
+
+  async function api<T>(name: string, input: unknown): Promise<T> {
+    const result = await dispatch({ store: fixture.store }, name, input);
+    if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
+    return result.value as T;
+  }
 
   const rows = () => page.locator('table[aria-label="Ranked candidates"] tbody tr');
   const input = (name: string) => page.locator(`[data-testid="candidates-view"] [name="${name}"]`);
@@ -125,5 +136,69 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('3');
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
     await page.screenshot({ path: screenshotPath('descriptor-map'), fullPage: true });
+  });
+
+  it('descriptor map: the campaign\'s logged outcomes are drawn as squares coloured by the observed architecture', async () => {
+    const view = page.locator('[data-testid="descriptor-map-view"]');
+    const chart = page.locator('[data-testid="descriptor-chart"]');
+    // The campaign made in the test above has a pair but no batch yet.
+    await expect.poll(() => page.getByTestId('outcome-overlay-note').textContent()).toBe('No logged outcomes in this campaign yet.');
+    expect(await chart.locator('[data-testid="outcome-marker"]').count()).toBe(0);
+
+    // Two made Au-Pd batches with an observed architecture, recorded through the API (as the Results view does).
+    const campaigns = await api<Campaign[]>('campaigns.list', {});
+    const campaign = campaigns.find((c) => c.name === 'Cathode screen');
+    if (!campaign) throw new Error('campaign "Cathode screen" missing');
+    const pair = await api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
+    const design = {
+      elementA: 'Au',
+      elementB: 'Pd',
+      target: 'alloy',
+      route: 'co-reduction',
+      size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
+      amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
+      batchVolumeMl: 50,
+      precursors: [
+        { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
+        { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
+      ],
+      reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+    };
+    const first = await api<SavedBatch>('batches.save', { name: 'AuPd-1', campaignId: campaign.id, pairId: pair.id, design });
+    const second = await api<SavedBatch>('batches.save', { name: 'AuPd-2', campaignId: campaign.id, pairId: pair.id, design });
+    await api<SavedBatch>('batches.save', { name: 'AuPd-3 not characterised', campaignId: campaign.id, pairId: pair.id, design });
+    await api('outcomes.setObserved', { batchId: first.id, label: 'Au@Pd', decision: 'override', reason: 'EDX line scan: Pd at the rim' });
+    await api('outcomes.setObserved', { batchId: second.id, label: 'alloy', decision: 'override' });
+
+    // Leave the view and come back: it reads the campaign's outcomes again.
+    await page.locator('[data-view="candidates"]').click();
+    await page.locator('[data-view="descriptor-map"]').click();
+    await view.locator('[name="elements"]').fill('Pt, Pd, Au, Ag');
+    await expect.poll(() => chart.locator('[data-testid="outcome-marker"]').count()).toBe(2); // the batch without an observed label is not drawn
+    const legend = (await chart.locator('.recharts-legend-wrapper').textContent()) ?? '';
+    expect(legend).toContain('logged outcome: observed core@shell — 1');
+    expect(legend).toContain('logged outcome: observed alloy — 1');
+    expect(legend).toMatch(/core@shell \(one element covers the other\)/); // the prediction legend stays
+    expect(await page.getByTestId('outcome-overlay-note').textContent()).toMatch(/2 logged outcomes of this campaign, coloured by the observed architecture/);
+
+    // Both squares sit on the Au-Pd point, nested, each in the colour of its own observed kind.
+    const markers = chart.locator('[data-testid="outcome-marker"]');
+    const strokes = new Set([await markers.nth(0).getAttribute('stroke'), await markers.nth(1).getAttribute('stroke')]);
+    expect(strokes.size).toBe(2);
+    const boxes = [await markers.nth(0).boundingBox(), await markers.nth(1).boundingBox()];
+    if (!boxes[0] || !boxes[1]) throw new Error('outcome markers have no box');
+    const centre = (b: { x: number; y: number; width: number; height: number }) => [b.x + b.width / 2, b.y + b.height / 2];
+    expect(centre(boxes[0])[0]).toBeCloseTo(centre(boxes[1])[0] ?? 0, 0);
+    expect(centre(boxes[0])[1]).toBeCloseTo(centre(boxes[1])[1] ?? 0, 0);
+
+    // Hovering the outline names the batch, the observed and the predicted label.
+    const outer = boxes[0].width > boxes[1].width ? markers.nth(0) : markers.nth(1);
+    const outerBox = boxes[0].width > boxes[1].width ? boxes[0] : boxes[1];
+    const outerName = await outer.getAttribute('data-batch');
+    await page.mouse.move(outerBox.x + 1, outerBox.y + outerBox.height / 2);
+    const tooltip = page.getByTestId('outcome-tooltip');
+    await expect.poll(() => tooltip.textContent()).toMatch(new RegExp(`batch ${outerName}`));
+    expect(await tooltip.textContent()).toMatch(outerName === 'AuPd-1' ? /observed Au@Pd, predicted at planning/ : /observed alloy, predicted at planning/);
+    await page.screenshot({ path: screenshotPath('descriptor-map-outcomes'), fullPage: true });
   });
 });

@@ -1,16 +1,21 @@
 /**
  * Descriptor map: every pair of an element set placed by two chosen descriptors, coloured by its
  * predicted architecture (legend in words). Computed in the page with the shared model, so it follows
- * the conditions as they are typed. Clicking a point opens the pair detail.
+ * the conditions as they are typed. Clicking a point opens the pair detail. The current campaign's
+ * logged outcomes (batches with an observed architecture) are drawn on top of their pair's point as
+ * square outlines coloured by the OBSERVED architecture, one square per batch.
  */
 import { useMemo, useState } from 'react';
 import { CartesianGrid, LabelList, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from 'recharts';
 import { DomainError } from '../../../shared-model/api/result';
-import { describeArchitecture, type ArchitectureKind } from '../../../shared-model/architecture/labels';
+import type { OutcomeRow } from '../../../shared-model/api/outcomes';
+import { describeArchitecture, parseArchitecture, type ArchitectureKind } from '../../../shared-model/architecture/labels';
 import { DESCRIPTOR_KEYS, DESCRIPTOR_LABELS, relativeDifference, type DescriptorKey } from '../../../shared-model/prediction/descriptors';
 import { recordProperty } from '../../../shared-model/elements/element-table';
 import { predictWithContext } from '../../../shared-model/prediction/predict';
 import { checkElementList, pairContexts } from '../../../shared-model/prediction/rank';
+import { useQuery } from '../api/hooks';
+import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { PairDetail } from './PairDetail';
@@ -46,6 +51,8 @@ const KIND_COLOURS: Record<string, string> = {
   Janus: '#7c3aed',
   intermetallic: '#15803d',
   unknown: '#6b7280',
+  hollow: '#be185d',
+  other: '#a16207',
 };
 
 interface Point {
@@ -57,6 +64,44 @@ interface Point {
   label: string;
   kind: ArchitectureKind;
 }
+
+/** A batch of the campaign with an observed architecture, placed at its pair's point on the map. */
+interface OutcomePoint {
+  x: number;
+  y: number;
+  outcome: true;
+  batchName: string;
+  pair: string;
+  elementA: string;
+  elementB: string;
+  observed: string;
+  observedKind: ArchitectureKind;
+  predicted: string | null;
+  /** 0 for the first batch of a pair, 1 for the second …: nested squares stay visible. */
+  stack: number;
+}
+
+/** Square outline drawn around a pair's point; larger for each further batch of the same pair. */
+function OutcomeSquare(props: { cx?: number; cy?: number; payload?: OutcomePoint }) {
+  const { cx, cy, payload } = props;
+  if (cx === undefined || cy === undefined || !payload) return null;
+  const half = 8 + 4 * payload.stack;
+  return (
+    <rect
+      x={cx - half}
+      y={cy - half}
+      width={2 * half}
+      height={2 * half}
+      fill="none"
+      stroke={KIND_COLOURS[payload.observedKind] ?? '#6b7280'}
+      strokeWidth={2.5}
+      data-testid="outcome-marker"
+      data-batch={payload.batchName}
+    />
+  );
+}
+
+const pairKey = (a: string, b: string) => (a < b ? `${a}|${b}` : `${b}|${a}`);
 
 const RELATIVE_PROPERTIES = {
   cohesiveEnergy: 'cohesiveEnergyEv',
@@ -75,6 +120,8 @@ export function DescriptorMapView() {
   const [yKey, setYKey] = useState<AxisKey>('metallicRadius');
   const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
   const conditions = conditionsState.conditions;
+  const { campaignId, revision } = useAppState();
+  const outcomeRows = useQuery('outcomes.listByCampaign', campaignId === null ? null : { campaignId }, `map-outcomes-${campaignId}-${revision}`);
 
   const result = useMemo((): { points: Point[]; error: string | null } => {
     if (conditions === null) return { points: [], error: null };
@@ -122,6 +169,29 @@ export function DescriptorMapView() {
     }
     return [...byKind.entries()];
   }, [result.points]);
+
+  const overlay = useMemo(() => {
+    const logged = (outcomeRows.data ?? []).filter((row): row is OutcomeRow & { observed: string } => row.observed !== null);
+    const onMap = new Map(result.points.map((point) => [pairKey(point.elementA, point.elementB), point]));
+    const stacks = new Map<string, number>();
+    const points: OutcomePoint[] = [];
+    const offMap: string[] = [];
+    for (const row of logged) {
+      const key = pairKey(row.elementA, row.elementB);
+      const point = onMap.get(key);
+      if (!point) {
+        offMap.push(`${row.batchName} (${row.elementA}-${row.elementB})`);
+        continue;
+      }
+      const stack = stacks.get(key) ?? 0;
+      stacks.set(key, stack + 1);
+      const observedKind = parseArchitecture(row.observed)?.kind ?? 'other';
+      points.push({ x: point.x, y: point.y, outcome: true, batchName: row.batchName, pair: point.pair, elementA: point.elementA, elementB: point.elementB, observed: row.observed, observedKind, predicted: row.predicted, stack });
+    }
+    const byKind = new Map<ArchitectureKind, OutcomePoint[]>();
+    for (const point of points) byKind.set(point.observedKind, [...(byKind.get(point.observedKind) ?? []), point]);
+    return { logged: logged.length, groups: [...byKind.entries()], offMap };
+  }, [outcomeRows.data, result.points]);
 
   const axisLabel = (key: AxisKey) => AXES.find((a) => a.key === key)?.label ?? key;
   const legendWords = (kind: ArchitectureKind, count: number) =>
@@ -180,8 +250,19 @@ export function DescriptorMapView() {
             <Tooltip
               cursor={{ strokeDasharray: '3 3' }}
               content={({ payload }) => {
-                const point = payload?.[0]?.payload as Point | undefined;
+                const point = payload?.[0]?.payload as Point | OutcomePoint | undefined;
                 if (!point) return null;
+                if ('outcome' in point) {
+                  return (
+                    <div className="card small" data-testid="outcome-tooltip">
+                      <strong>batch {point.batchName}</strong> ({point.pair})
+                      <br />
+                      observed {point.observed}, predicted at planning {point.predicted ?? '(none recorded)'}
+                      <br />
+                      map prediction at these conditions: {result.points.find((p) => p.pair === point.pair)?.label ?? '–'}
+                    </div>
+                  );
+                }
                 return (
                   <div className="card small">
                     <strong>{point.pair}</strong>: {point.label}
@@ -207,9 +288,34 @@ export function DescriptorMapView() {
                 {result.points.length <= 60 ? <LabelList dataKey="pair" position="top" fontSize={11} /> : null}
               </Scatter>
             ))}
+            {overlay.groups.map(([kind, points]) => (
+              <Scatter
+                key={`outcome-${kind}`}
+                name={`logged outcome: observed ${kind} — ${points.length}`}
+                data={points}
+                fill={KIND_COLOURS[kind] ?? '#6b7280'}
+                legendType="square"
+                shape={OutcomeSquare}
+                isAnimationActive={false}
+                onClick={(data: unknown) => {
+                  const point = (data as { payload?: OutcomePoint }).payload;
+                  if (point) setOpen({ a: point.elementA, b: point.elementB });
+                }}
+              />
+            ))}
           </ScatterChart>
         </ResponsiveContainer>
-        <p className="small muted">Logged outcomes of the campaign will be drawn on top once outcomes are recorded.</p>
+        <p className="small muted" data-testid="outcome-overlay-note">
+          {campaignId === null
+            ? 'No campaign chosen: choose one in Campaigns to see its logged outcomes here.'
+            : outcomeRows.error
+              ? `Logged outcomes could not be read: ${outcomeRows.error.message}`
+              : overlay.logged === 0
+                ? 'No logged outcomes in this campaign yet.'
+                : `Squares: ${overlay.logged} logged outcome${overlay.logged === 1 ? '' : 's'} of this campaign, coloured by the observed architecture (dots keep the predicted colours); hover a square for batch, observed and predicted label.${
+                    overlay.offMap.length > 0 ? ` Not on this map (pair outside the element set): ${overlay.offMap.join(', ')}.` : ''
+                  }`}
+        </p>
       </div>
       {open && conditions ? <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} /> : null}
     </div>
