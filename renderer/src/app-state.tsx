@@ -1,5 +1,23 @@
-/** App-wide selection: the campaign the user is working in (remembered between sessions). */
+/**
+ * App-wide selection: the campaign the user is working in (remembered between sessions), a revision
+ * counter other views reload on, and hand-offs between views (a simulation requested from a pair's
+ * detail, consumed once by the Simulation view).
+ */
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
+import type { ParticleShape } from '../../shared-model/geometry/particle-sites';
+
+/** A lattice Monte Carlo run asked for from another view: the Simulation form opens with these values. */
+export interface SimulationRequest {
+  elementA: string;
+  elementB: string;
+  /** Atomic fraction of elementB. */
+  xB: number;
+  diameterNm: number;
+  shape: ParticleShape;
+  temperatureK: number;
+  /** Where the request came from, in words ("pair detail of Pt-Ni"). */
+  source: string;
+}
 
 interface AppState {
   campaignId: number | null;
@@ -7,6 +25,14 @@ interface AppState {
   /** Bumped whenever data changes in a way other views should reload for. */
   revision: number;
   bumpRevision: () => void;
+  /** Switches to another view by its id in navigation.tsx (through the #/<id> address the shell follows). */
+  navigate: (viewId: string) => void;
+  /** A simulation asked for by another view, waiting for the Simulation view to take it. */
+  pendingSimulation: SimulationRequest | null;
+  /** Stores the request and opens the Simulation view. */
+  requestSimulation: (request: SimulationRequest) => void;
+  /** Called by the Simulation view once it has copied the request into its form. */
+  clearPendingSimulation: () => void;
 }
 
 const AppStateContext = createContext<AppState | null>(null);
@@ -21,13 +47,29 @@ function rememberedCampaign(): number | null {
 export function AppStateProvider(props: { children: ReactNode }) {
   const [campaignId, setCampaignId] = useState<number | null>(rememberedCampaign);
   const [revision, setRevision] = useState(0);
+  const [pendingSimulation, setPendingSimulation] = useState<SimulationRequest | null>(null);
   const selectCampaign = useCallback((id: number | null) => {
     setCampaignId(id);
     if (id === null) window.localStorage.removeItem(STORAGE_KEY);
     else window.localStorage.setItem(STORAGE_KEY, String(id));
   }, []);
   const bumpRevision = useCallback(() => setRevision((value) => value + 1), []);
-  const value = useMemo(() => ({ campaignId, selectCampaign, revision, bumpRevision }), [campaignId, selectCampaign, revision, bumpRevision]);
+  const navigate = useCallback((viewId: string) => {
+    // The shell listens to hashchange and switches views; it ignores ids it does not know.
+    window.location.hash = `#/${viewId}`;
+  }, []);
+  const requestSimulation = useCallback(
+    (request: SimulationRequest) => {
+      setPendingSimulation(request);
+      navigate('simulation');
+    },
+    [navigate],
+  );
+  const clearPendingSimulation = useCallback(() => setPendingSimulation(null), []);
+  const value = useMemo(
+    () => ({ campaignId, selectCampaign, revision, bumpRevision, navigate, pendingSimulation, requestSimulation, clearPendingSimulation }),
+    [campaignId, selectCampaign, revision, bumpRevision, navigate, pendingSimulation, requestSimulation, clearPendingSimulation],
+  );
   return <AppStateContext.Provider value={value}>{props.children}</AppStateContext.Provider>;
 }
 

@@ -1,7 +1,8 @@
 /**
  * A user in Debian's Chromium runs a lattice Monte Carlo: bad input is refused beside the field, a run
  * shows progress with live traces and can be cancelled, a finished run shows its result beside the
- * analytic prediction with the particle picture, exports extended XYZ, and re-opens after a reload.
+ * analytic prediction with the particle picture, exports extended XYZ, and re-opens after a reload; a
+ * pair's detail in Candidates hands its pair and conditions to the form, and that run is stored as asked.
  * Screenshots go to test-output/screenshots/.
  */
 import { readFileSync } from 'node:fs';
@@ -104,5 +105,52 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     await page.locator('table[aria-label="Simulation runs"] tbody tr').nth(1).click();
     await expect.poll(() => page.getByTestId('sim-status').textContent()).toBe('cancelled');
     await page.screenshot({ path: screenshotPath('simulation-reopened'), fullPage: true });
+  });
+  it('takes a pair and its conditions from the pair detail in Candidates, once, and runs them', async () => {
+    const candidate = (name: string) => page.locator(`[data-testid="candidates-view"] [name="${name}"]`);
+    const rows = () => page.locator('table[aria-label="Ranked candidates"] tbody tr');
+    await page.locator('[data-view="candidates"]').click();
+    await candidate('atPercentB').fill('25');
+    await candidate('diameterNm').fill('2.5');
+    await candidate('shape').selectOption('icosahedron');
+    await candidate('temperatureK').fill('700');
+    // A pair with a metal outside the Gupta table: the button is there but disabled, and says why.
+    await candidate('filter').fill('Pt-Co');
+    await expect.poll(() => rows().count()).toBe(1);
+    await rows().first().click();
+    const coButton = page.getByRole('region', { name: 'Pair detail Pt-Co' }).getByRole('button', { name: 'Simulate this pair' });
+    expect(await coButton.isDisabled()).toBe(true);
+    expect(await coButton.getAttribute('title')).toMatch(/^Co has no Gupta .*parameters; the simulation supports Ni, Cu/);
+
+    await candidate('filter').fill('Pt-Ni');
+    await expect.poll(() => rows().count()).toBe(1);
+    await rows().first().click();
+    await page.getByRole('region', { name: 'Pair detail Pt-Ni' }).getByRole('button', { name: 'Simulate this pair' }).click();
+
+    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Simulation');
+    expect(page.url()).toMatch(/#\/simulation$/);
+    await expect.poll(() => form().locator('select[name="elementA"]').inputValue()).toBe('Pt');
+    expect(await form().locator('select[name="elementB"]').inputValue()).toBe('Ni');
+    expect(await form().locator('input[name="xB"]').inputValue()).toBe('0.25');
+    expect(await form().locator('select[name="shape"]').inputValue()).toBe('icosahedron');
+    expect(await form().locator('input[name="sizeMode"]').nth(1).isChecked()).toBe(true); // size given by diameter
+    expect(await form().locator('input[name="diameterNm"]').inputValue()).toBe('2.5');
+    expect(await form().locator('input[name="temperatureK"]').inputValue()).toBe('700');
+    expect(await page.getByTestId('sim-prefilled').textContent()).toMatch(/^Filled in from the pair detail of Pt-Ni/);
+    await expect.poll(() => page.getByTestId('sim-plan').textContent()).toMatch(/atoms, .* sweeps/);
+    await page.screenshot({ path: screenshotPath('simulate-from-pair'), fullPage: true });
+
+    // Run it (short): the stored spec is the pair detail's.
+    await setField('sweeps', '100');
+    await form().getByRole('button', { name: 'Run' }).click();
+    await expect.poll(() => page.getByTestId('sim-status').textContent(), { timeout: 60_000 }).toBe('done');
+    const stored = fixture.store.db.prepare('SELECT inputs_json FROM simulation_runs ORDER BY id DESC LIMIT 1').get() as { inputs_json: string };
+    expect(JSON.parse(stored.inputs_json)).toMatchObject({ elementA: 'Pt', elementB: 'Ni', xB: 0.25, shape: 'icosahedron', diameterNm: 2.5, temperatureK: 700, sweeps: 100 });
+
+    // The hand-off is taken once: opening Simulation again starts from the usual form.
+    await page.locator('[data-view="candidates"]').click();
+    await page.locator('[data-view="simulation"]').click();
+    await expect.poll(() => form().locator('select[name="elementA"]').inputValue()).toBe('Ag');
+    expect(await page.getByTestId('sim-prefilled').count()).toBe(0);
   });
 });

@@ -1,11 +1,13 @@
 /**
  * One pair in detail: the prediction at the chosen conditions with its terms, and how the surface
  * composition changes with composition, diameter and temperature (isotherm charts). Saves the prediction
- * to the store, linked to the current campaign's pair when there is one.
+ * to the store, linked to the current campaign's pair when there is one, and hands the pair with its
+ * conditions to the Simulation view (lattice Monte Carlo) when both metals have Gupta parameters.
  */
 import { useMemo, useState } from 'react';
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { describeArchitecture } from '../../../shared-model/architecture/labels';
+import { GUPTA_ELEMENTS, isGuptaElement } from '../../../shared-model/montecarlo/gupta-parameters';
 import { computeIsotherm, type IsothermSweep } from '../../../shared-model/prediction/isotherm';
 import { predictPair, type PredictionConditions } from '../../../shared-model/prediction/predict';
 import { call } from '../api/client';
@@ -62,7 +64,7 @@ function IsothermChart(props: { elementA: string; elementB: string; conditions: 
 export function PairDetail(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; onClose?: () => void }) {
   const { elementA, elementB, conditions } = props;
   const p = useMemo(() => predictPair(elementA, elementB, conditions), [elementA, elementB, conditions]);
-  const { campaignId, revision, bumpRevision } = useAppState();
+  const { campaignId, revision, bumpRevision, requestSimulation } = useAppState();
   const pairs = useQuery('pairs.list', campaignId === null ? null : { campaignId }, `pairs-${campaignId}-${revision}`);
   const linked = (pairs.data ?? []).find((x) => (x.elementA === elementA && x.elementB === elementB) || (x.elementA === elementB && x.elementB === elementA)) ?? null;
   const saved = useQuery('prediction.listForPair', linked ? { pairId: linked.id } : null, `saved-${linked?.id}-${revision}`);
@@ -81,6 +83,22 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
     setMessage({ tone: 'info', text: linked ? `saved as prediction ${result.value.id} for pair ${linked.elementA}-${linked.elementB} of this campaign` : `saved as prediction ${result.value.id} (no campaign pair to link)` });
     bumpRevision();
   };
+
+  const withoutParameters = [elementA, elementB].filter((symbol) => !isGuptaElement(symbol));
+  const simulateTitle =
+    withoutParameters.length === 0
+      ? `Open the Simulation view with ${elementA}-${elementB}, ${pct(conditions.xB)} ${elementB}, ${conditions.diameterNm} nm ${conditions.shape}, ${conditions.temperatureK} K`
+      : `${withoutParameters.join(' and ')} ${withoutParameters.length === 1 ? 'has' : 'have'} no Gupta (second-moment tight-binding) parameters; the simulation supports ${GUPTA_ELEMENTS.join(', ')}`;
+  const simulate = () =>
+    requestSimulation({
+      elementA,
+      elementB,
+      xB: conditions.xB,
+      diameterNm: conditions.diameterNm,
+      shape: conditions.shape,
+      temperatureK: conditions.temperatureK,
+      source: `the pair detail of ${elementA}-${elementB}`,
+    });
 
   return (
     <section className="card pair-detail" aria-label={`Pair detail ${p.pair}`}>
@@ -150,6 +168,10 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
         <button type="button" className="button--primary" onClick={save}>
           Save prediction{linked ? ` to ${linked.elementA}-${linked.elementB}` : ''}
         </button>
+        <button type="button" onClick={simulate} disabled={withoutParameters.length > 0} title={simulateTitle} data-testid="simulate-pair">
+          Simulate this pair
+        </button>
+        {withoutParameters.length > 0 ? <span className="small muted">no simulation: {simulateTitle.split(';')[0]}</span> : null}
         {linked && saved.data ? <span className="small muted">{saved.data.length} saved for this campaign pair</span> : null}
         {!linked ? <span className="small muted">{campaignId === null ? 'no campaign selected' : 'this pair is not in the current campaign'}: saved unlinked</span> : null}
       </div>

@@ -4,10 +4,13 @@
  * annealing schedule), seed and length; Run queues it; a progress bar with live energy and surface
  * composition traces follows it; Cancel stops it. The result: surface composition, radial profile,
  * Warren–Cowley order, the architecture label beside the analytic prediction, a picture of the
- * particle and an extended XYZ export. Stored runs can be re-opened from the list.
+ * particle and an extended XYZ export. Stored runs can be re-opened from the list. A pair's detail in
+ * the prediction views can hand its pair and conditions over (app state `pendingSimulation`): the form
+ * takes them once and says where they came from.
  */
 import { useEffect, useMemo, useState, type FormEvent } from 'react';
 import { Bar, BarChart, CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import type { ParticleShape } from '../../../shared-model/geometry/particle-sites';
 import type { SimulationRun, SimulationRunSummary } from '../../../shared-model/api/simulation';
 import { describeArchitecture } from '../../../shared-model/architecture/labels';
 import { CLUSTER_SHAPES, type ClusterShape } from '../../../shared-model/clusters/shapes';
@@ -15,6 +18,7 @@ import { planSimulation, type SimulationProgress, type SimulationResult, type Si
 import { predictPair } from '../../../shared-model/prediction/predict';
 import { call } from '../api/client';
 import { useFieldErrors, useQuery } from '../api/hooks';
+import { useAppState, type SimulationRequest } from '../app-state';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { ParticlePicture } from './simulation/ParticlePicture';
@@ -71,8 +75,45 @@ function specFromForm(form: FormState) {
   };
 }
 
+const CLUSTER_SHAPE_OF: Record<ParticleShape, ClusterShape> = {
+  cuboctahedron: 'cuboctahedron',
+  icosahedron: 'icosahedron',
+  'truncated octahedron': 'truncated-octahedron',
+  sphere: 'sphere',
+};
+
+/** Short decimal text for a number from another view (0.30000000000000004 → "0.3"). */
+const decimalText = (x: number) => String(Number(x.toPrecision(6)));
+
+/** The form with a request from another view copied in; size by diameter, run length and seed kept. */
+function formFromRequest(current: FormState, request: SimulationRequest): FormState {
+  return {
+    ...current,
+    elementA: request.elementA,
+    elementB: request.elementB,
+    xB: decimalText(request.xB),
+    shape: CLUSTER_SHAPE_OF[request.shape],
+    sizeMode: 'diameter',
+    diameterNm: decimalText(request.diameterNm),
+    temperatureK: decimalText(request.temperatureK),
+  };
+}
+
+function describeRequest(request: SimulationRequest): string {
+  return `Filled in from ${request.source}: ${request.elementA}-${request.elementB}, x(${request.elementB}) = ${decimalText(request.xB)}, ${decimalText(request.diameterNm)} nm ${request.shape}, ${decimalText(request.temperatureK)} K. Check the sweeps and seed, then Run.`;
+}
+
 function RunForm(props: { elements: readonly string[]; mixingRule: string; onStarted: (run: SimulationRunSummary) => void }) {
   const [form, setForm] = useState<FormState>(INITIAL);
+  const [prefilled, setPrefilled] = useState<string | null>(null);
+  const { pendingSimulation, clearPendingSimulation } = useAppState();
+  // A request from a pair's detail is taken once: copied into the form, then cleared from the app state.
+  useEffect(() => {
+    if (pendingSimulation === null) return;
+    setForm((current) => formFromRequest(current, pendingSimulation));
+    setPrefilled(describeRequest(pendingSimulation));
+    clearPendingSimulation();
+  }, [pendingSimulation, clearPendingSimulation]);
   const { errors, general, show, clear } = useFieldErrors();
   const set = <K extends keyof FormState>(key: K, value: FormState[K]) => setForm((f) => ({ ...f, [key]: value }));
   // Instant feedback: the planned size, or the first problem, computed in the page with the same model checks.
@@ -111,6 +152,11 @@ function RunForm(props: { elements: readonly string[]; mixingRule: string; onSta
   return (
     <form className="card form-grid sim-form" onSubmit={submit} aria-label="New simulation" noValidate data-testid="sim-form">
       <h2 className="card__title">New run</h2>
+      {prefilled ? (
+        <p className="small" style={{ gridColumn: '1 / -1', margin: 0 }} data-testid="sim-prefilled">
+          {prefilled}
+        </p>
+      ) : null}
       {element('elementA', 'Element A')}
       {element('elementB', 'Element B')}
       <Field label={`x(${form.elementB}), atomic fraction`} name="xB" error={errors.xB} hint="0 < xB < 1">
