@@ -9,6 +9,7 @@ import { batchDesignInputSchema } from '../../shared-model/recipes/design-input'
 import { prepareReagent } from '../../shared-model/recipes/reagent';
 import { buildReagentList, reagentListCsv } from '../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
+import { ptNi } from '../support/sample-batches';
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -29,21 +30,7 @@ function time(label: string, repeats: number, runs: number, fn: () => void): voi
 
 export async function run(): Promise<void> {
   const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
-  const input = batchDesignInputSchema.parse({
-    elementA: 'Pt',
-    elementB: 'Ni',
-    target: 'alloy',
-    route: 'co-reduction',
-    size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
-    amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-    batchVolumeMl: 50,
-    precursors: [
-      { element: 'Pt', reagentKey: 'h2ptcl6-6h2o', stockMm: 20 },
-      { element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 },
-    ],
-    reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-    capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
-  });
+  const input = batchDesignInputSchema.parse({ ...ptNi, capping: { reagentKey: 'pvp', molPerMolMetal: 10 } });
   time(`prepare catalog (${REAGENT_SEED.length} reagents, mf-parser)`, 20, 7, () => {
     REAGENT_SEED.map((r) => prepareReagent(r));
   });

@@ -12,6 +12,7 @@ import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
 import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
 import { startTestHost, type HostFixture } from '../support/host-fixture';
+import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
 
 const available = browserAvailable();
@@ -39,20 +40,7 @@ describe.skipIf(!available)('results in the browser host', () => {
       name: 'AuPd 10 nm',
       campaignId: campaign.id,
       pairId: pair.id,
-      design: {
-        elementA: 'Au',
-        elementB: 'Pd',
-        target: 'alloy',
-        route: 'co-reduction',
-        size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
-        amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-        batchVolumeMl: 50,
-        precursors: [
-          { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
-          { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
-        ],
-        reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-      },
+      design: auPd,
     });
     page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
     // Generous: the whole suite runs browsers and fits side by side on two cores.

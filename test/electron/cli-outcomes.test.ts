@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { fitLogNormal } from '../../shared-model/characterization/lognormal';
 import { runPairwright, runPairwrightJson } from '../support/cli';
 import { tempDataDir } from '../support/host-fixture';
+import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
 
 const dir = tempDataDir('pairwright-cli-outcomes-');
@@ -92,20 +93,7 @@ describe('pairwright outcomes add / show / list / confusion', () => {
       name: 'AuPd cli',
       campaignId: campaign.id,
       pairId: pair.id,
-      design: {
-        elementA: 'Au',
-        elementB: 'Pd',
-        target: 'alloy',
-        route: 'co-reduction',
-        size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
-        amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-        batchVolumeMl: 50,
-        precursors: [
-          { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
-          { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
-        ],
-        reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-      },
+      design: auPd,
     });
     store.close();
     const storeArgs = ['--data', storeDir];

@@ -5,10 +5,10 @@ import type { ServiceContext } from '../../electron/services/context';
 import { dispatch } from '../../electron/services/dispatch';
 import type { CatalogReagent, SavedBatch } from '../../shared-model/api/batches';
 import type { BatchDesign } from '../../shared-model/recipes/design';
-import type { BatchDesignRequest } from '../../shared-model/recipes/design-input';
 import type { ReagentList } from '../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
 import { tempDataDir } from '../support/host-fixture';
+import { ptNi } from '../support/sample-batches';
 
 let store: Store;
 let context: ServiceContext;
@@ -24,21 +24,6 @@ async function ok<T>(name: string, input: unknown): Promise<T> {
   return result.value as T;
 }
 const count = (table: string) => (store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
-
-const ptNi: BatchDesignRequest = {
-  elementA: 'Pt',
-  elementB: 'Ni',
-  target: 'alloy',
-  route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
-  amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-  batchVolumeMl: 50,
-  precursors: [
-    { element: 'Pt', reagentKey: 'h2ptcl6-6h2o', stockMm: 20 },
-    { element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 },
-  ],
-  reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-};
 
 describe('catalog', () => {
   it('is seeded once from the built-in reagents', async () => {

@@ -7,8 +7,8 @@ import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { BatchOutcome, CampaignConfusion, CompositionRecord, LineScanRecord, OutcomeRow, SizeRecord } from '../../shared-model/api/outcomes';
 import type { CandidatePair } from '../../shared-model/api/pairs';
-import type { BatchDesignRequest } from '../../shared-model/recipes/design-input';
 import { tempDataDir } from '../support/host-fixture';
+import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
 
 let store: Store;
@@ -30,21 +30,6 @@ async function failure(name: string, input: unknown): Promise<{ code: string; me
   return result.error;
 }
 const count = (table: string) => (store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
-
-const auPd: BatchDesignRequest = {
-  elementA: 'Au',
-  elementB: 'Pd',
-  target: 'alloy',
-  route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
-  amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-  batchVolumeMl: 50,
-  precursors: [
-    { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
-    { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
-  ],
-  reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-};
 
 async function campaignWithBatch(): Promise<{ campaign: Campaign; pair: CandidatePair; batch: SavedBatch }> {
   const campaign = await ok<Campaign>('campaigns.create', { name: 'Au-Pd screen' });

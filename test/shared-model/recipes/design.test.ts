@@ -5,6 +5,7 @@ import { batchDesignInputSchema, type BatchDesignRequest } from '../../../shared
 import { seedsFromBatch, seedBatchMetal } from '../../../shared-model/recipes/lineage';
 import { prepareReagent } from '../../../shared-model/recipes/reagent';
 import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
+import { ptNi } from '../../support/sample-batches';
 
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 // Kittel, Introduction to Solid State Physics, 8th ed. (from memory)
@@ -26,21 +27,6 @@ function fieldOf(request: BatchDesignRequest, extra: Partial<DesignContext> = {}
   }
   return undefined;
 }
-
-const ptNi: BatchDesignRequest = {
-  elementA: 'Pt',
-  elementB: 'Ni',
-  target: 'alloy',
-  route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
-  amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-  batchVolumeMl: 50,
-  precursors: [
-    { element: 'Pt', reagentKey: 'h2ptcl6-6h2o', stockMm: 20 },
-    { element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 },
-  ],
-  reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-};
 
 const line = (d: BatchDesign, key: string) => {
   const found = d.reagents.find((r) => r.key === key);

@@ -5,25 +5,12 @@ import { batchDesignInputSchema, type BatchDesignRequest } from '../../../shared
 import { prepareReagent } from '../../../shared-model/recipes/reagent';
 import { buildReagentList, inventoryMassMg, reagentListCsv } from '../../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
+import { ptNi } from '../../support/sample-batches';
 
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 const LATTICE: Record<string, number> = { Au: 0.40782, Pt: 0.39242, Ni: 0.3524 };
 const design = (request: BatchDesignRequest) => designBatch(batchDesignInputSchema.parse(request), { catalog, latticeNm: (s) => LATTICE[s] });
 
-const ptNi: BatchDesignRequest = {
-  elementA: 'Pt',
-  elementB: 'Ni',
-  target: 'alloy',
-  route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
-  amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-  batchVolumeMl: 50,
-  precursors: [
-    { element: 'Pt', reagentKey: 'h2ptcl6-6h2o', stockMm: 20 },
-    { element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 },
-  ],
-  reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-};
 const auPt: BatchDesignRequest = {
   elementA: 'Au',
   elementB: 'Pt',
