@@ -7,7 +7,8 @@ import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
-import { estimate, fixed, readPickedFile } from './format';
+import { CsvFileField } from './CsvFileField';
+import { estimate, fixed } from './format';
 
 const MODEL_COLOURS = ['#555555', '#1f77b4', '#d62728', '#2ca02c'];
 
@@ -183,20 +184,13 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
         <Field label={`Line scan (CSV: position nm, ${outcome.elementA}, ${outcome.elementB})`} name="csvText" error={errors.csvText} hint="counts (or at.%) per element; headers naming the elements are matched" wide>
           <textarea className="csv-input" name="lineScanCsv" value={csvText} onChange={(event) => setCsvText(event.target.value)} spellCheck={false} />
         </Field>
-        <Field label="File" name="lineScanFile">
-          <input
-            type="file"
-            name="lineScanFile"
-            accept=".csv,.txt,.tsv"
-            onChange={async (event) => {
-              const picked = await readPickedFile(event.target);
-              if (picked) {
-                setCsvText(picked.text);
-                setSourceFile(picked.name);
-              }
-            }}
-          />
-        </Field>
+        <CsvFileField
+          name="lineScanFile"
+          onPicked={(picked) => {
+            setCsvText(picked.text);
+            setSourceFile(picked.name);
+          }}
+        />
         <Field label="Name" name="name" error={errors.name}>
           <input name="scanName" value={name} onChange={(event) => setName(event.target.value)} placeholder="e.g. particle 3" />
         </Field>

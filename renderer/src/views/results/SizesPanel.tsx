@@ -7,7 +7,8 @@ import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
-import { fixed, num, readPickedFile } from './format';
+import { CsvFileField } from './CsvFileField';
+import { fixed, num } from './format';
 
 function SizeChart(props: { record: SizeRecord }) {
   const { histogram } = props.record;
@@ -143,20 +144,13 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
         <Field label="Diameters (CSV, nm)" name="csvText" error={errors.csvText} hint="paste a column of diameters or pick a file; header, ; or tab and decimal commas are fine" wide>
           <textarea className="csv-input" name="csvText" value={csvText} onChange={(event) => setCsvText(event.target.value)} spellCheck={false} />
         </Field>
-        <Field label="File" name="file">
-          <input
-            type="file"
-            name="file"
-            accept=".csv,.txt,.tsv"
-            onChange={async (event) => {
-              const picked = await readPickedFile(event.target);
-              if (picked) {
-                setCsvText(picked.text);
-                setSourceFile(picked.name);
-              }
-            }}
-          />
-        </Field>
+        <CsvFileField
+          name="file"
+          onPicked={(picked) => {
+            setCsvText(picked.text);
+            setSourceFile(picked.name);
+          }}
+        />
         <Field label="Column" name="column" error={errors.column} hint="name or number; blank = automatic">
           <input name="column" value={column} onChange={(event) => setColumn(event.target.value)} autoComplete="off" />
         </Field>

@@ -20,10 +20,3 @@ export function estimate(value: Estimate | null | undefined, decimals = 2): stri
 
 export const atPct = (fraction: number | null | undefined, decimals = 1): string =>
   fraction === null || fraction === undefined ? '–' : `${(fraction * 100).toFixed(decimals)} at.%`;
-
-/** Reads a file the user picked into text (the file itself stays where it is). */
-export async function readPickedFile(input: HTMLInputElement): Promise<{ name: string; text: string } | null> {
-  const file = input.files?.[0];
-  if (!file) return null;
-  return { name: file.name, text: await file.text() };
-}
