@@ -43,8 +43,11 @@ export function binaryTables(elementA: string, elementB: string, list: Neighbour
   return { elements: [elementA, elementB], pairs, phi, rho };
 }
 
-/** Energy (eV) of an occupation (0 = A, 1 = B) on the sites of `list` with `tables`, from scratch. */
-export function configurationEnergyEv(list: NeighbourList, tables: BinaryTables, species: Uint8Array): number {
+/**
+ * Energy (eV) of an occupation (0 = A, 1 = B) on the sites of `list` with `tables`, from scratch. When
+ * `densities` is given, each site's band density ρ_i and √ρ_i are written into it on the way.
+ */
+function energyFromScratch(list: NeighbourList, tables: BinaryTables, species: Uint8Array, densities?: { density: Float64Array; sqrtDensity: Float64Array }): number {
   const { offsets, neighbours, distanceClass } = list;
   const { phi, rho } = tables;
   let pair = 0;
@@ -57,14 +60,19 @@ export function configurationEnergyEv(list: NeighbourList, tables: BinaryTables,
       pair += phi[idx]!;
       density += rho[idx]!;
     }
-    band += Math.sqrt(density);
+    const root = Math.sqrt(density);
+    if (densities) {
+      densities.density[i] = density;
+      densities.sqrtDensity[i] = root;
+    }
+    band += root;
   }
   return pair / 2 - band;
 }
 
-export interface SwapStatistics {
-  attempts: number;
-  accepted: number;
+/** Energy (eV) of an occupation (0 = A, 1 = B) on the sites of `list` with `tables`, from scratch. */
+export function configurationEnergyEv(list: NeighbourList, tables: BinaryTables, species: Uint8Array): number {
+  return energyFromScratch(list, tables, species);
 }
 
 export interface SwapStatistics {
@@ -418,25 +426,7 @@ export class SwapEngine {
 
   /** Recomputes every density and the total energy from the occupation (removes round-off drift). */
   recomputeEnergy(): number {
-    const { offsets, neighbours, distanceClass } = this.list;
-    const { phi, rho } = this.tables;
-    const species = this.species;
-    let pair = 0;
-    let band = 0;
-    for (let i = 0; i < this.atoms; i++) {
-      const si = species[i]!;
-      let density = 0;
-      for (let e = offsets[i]!; e < offsets[i + 1]!; e++) {
-        const idx = distanceClass[e]! * 3 + si + species[neighbours[e]!]!;
-        pair += phi[idx]!;
-        density += rho[idx]!;
-      }
-      this.density[i] = density;
-      const root = Math.sqrt(density);
-      this.sqrtDensity[i] = root;
-      band += root;
-    }
-    this.totals[0] = pair / 2 - band;
+    this.totals[0] = energyFromScratch(this.list, this.tables, this.species, { density: this.density, sqrtDensity: this.sqrtDensity });
     return this.totals[0];
   }
 
