@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { browserAvailable, launchBrowser, newTestPage, screenshotPath } from '../support/browser';
 import { startTestHost, type HostFixture } from '../support/host-fixture';
 
 const available = browserAvailable();
@@ -19,11 +19,7 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
   beforeAll(async () => {
     browser = await launchBrowser();
     fixture = await startTestHost();
-    page = await browser.newPage({ viewport: { width: 1500, height: 1000 }, acceptDownloads: true });
-    page.setDefaultTimeout(8000);
-    page.on('pageerror', (error) => {
-      throw error;
-    });
+    page = await newTestPage(browser, { viewport: { width: 1500, height: 1000 }, acceptDownloads: true }, 8000);
   });
   afterAll(async () => {
     await browser?.close();

@@ -10,7 +10,7 @@ import { dispatch } from '../../electron/services/dispatch';
 import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
-import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
+import { browserAvailable, launchBrowser, newTestPage, screenshotPath } from '../support/browser';
 import { startTestHost, type HostFixture } from '../support/host-fixture';
 import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
@@ -42,12 +42,8 @@ describe.skipIf(!available)('results in the browser host', () => {
       pairId: pair.id,
       design: auPd,
     });
-    page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
-    // Generous: the whole suite runs browsers and fits side by side on two cores.
-    page.setDefaultTimeout(30000);
-    page.on('pageerror', (error) => {
-      throw error;
-    });
+    // Generous default timeout: the whole suite runs browsers and fits side by side on two cores.
+    page = await newTestPage(browser, { viewport: { width: 1400, height: 1000 } }, 30000);
     await page.goto(fixture.host.url);
     await page.evaluate((id) => window.localStorage.setItem('pairwright.campaignId', String(id)), campaign.id);
     await page.reload();

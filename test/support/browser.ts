@@ -4,7 +4,7 @@
  */
 import { existsSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type BrowserContextOptions, type Page } from 'playwright-core';
 import { inCi } from './reference-tools';
 
 export const CHROMIUM_PATH = process.env.PAIRWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
@@ -25,6 +25,16 @@ export async function launchBrowser(): Promise<Browser> {
     headless: true,
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
   });
+}
+
+/** A new page with its default timeout; an uncaught error in the page fails the test. */
+export async function newTestPage(browser: Browser, options: BrowserContextOptions, timeoutMs: number): Promise<Page> {
+  const page = await browser.newPage(options);
+  page.setDefaultTimeout(timeoutMs);
+  page.on('pageerror', (error) => {
+    throw error;
+  });
+  return page;
 }
 
 export function screenshotPath(name: string): string {
