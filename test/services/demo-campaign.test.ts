@@ -125,6 +125,7 @@ describe('the demo campaign', () => {
       expect(outcome.lineScans).toHaveLength(1);
       expect(outcome.lineScans[0]?.name).toMatch(/^Demo .*invented/);
       expect(outcome.observed).toMatchObject({ label: spec.observed, decision: 'confirmed', suggestedLabel: spec.observed });
+      expect(outcome.observed?.reason.startsWith(DEMO_NOTE_PREFIX)).toBe(true);
       expect(outcome.predictions.find((p) => p.source === 'analytic')).toBeDefined();
     }
     for (const name of [DEMO_BATCH_NAMES.pdSeeds, DEMO_BATCH_NAMES.agPd]) {
@@ -215,12 +216,13 @@ describe('the demo campaign', () => {
     }
   });
 
-  it('stores nothing when a step fails part-way (a catalog edit makes the last batch impossible)', async () => {
-    // The user has recorded their oleylamine as solvent and capping agent only: the demo's Ag–Pd batch, designed
-    // after the other batches and their outcomes are written, then has no reducer and the design refuses it.
+  it('stores nothing when a step fails part-way (a catalog edit makes a later batch impossible)', async () => {
+    // The user has recorded ascorbic acid as an additive only (an antioxidant in their own recipes): the demo's
+    // Pd seed batch, designed after the Ag–Pd and Pt–Ni batches and the Pt–Ni outcomes are written, then has
+    // no reducer the design accepts, and the design refuses it.
     const catalog = await ok<CatalogReagent[]>('reagents.catalog', {});
-    const oleylamine = catalog.find((r) => r.key === 'oleylamine') as CatalogReagent;
-    await ok('reagents.edit', { ...oleylamine, roles: ['capping-agent', 'solvent'] });
+    const ascorbic = catalog.find((r) => r.key === 'ascorbic-acid') as CatalogReagent;
+    await ok('reagents.edit', { ...ascorbic, roles: ['additive'] });
     const empty = counts();
     expect(Object.values(empty).every((n) => n === 0)).toBe(true);
 
@@ -228,12 +230,12 @@ describe('the demo campaign', () => {
     expect(result.ok).toBe(false);
     const message = result.ok ? '' : result.error.message;
     expect(message).toContain('nothing was stored');
-    expect(message).toContain(DEMO_BATCH_NAMES.agPd);
+    expect(message).toContain(DEMO_BATCH_NAMES.pdSeeds);
     expect(message).toMatch(/reducer/);
     expect(counts()).toEqual(empty);
     // The user's own edit is untouched by the rollback.
     const after = await ok<CatalogReagent[]>('reagents.catalog', {});
-    expect(after.find((r) => r.key === 'oleylamine')?.roles).toEqual(['capping-agent', 'solvent']);
+    expect(after.find((r) => r.key === 'ascorbic-acid')?.roles).toEqual(['additive']);
   });
 });
 
