@@ -72,7 +72,12 @@ export const campaignCommands: CliCommand[] = [
     options: {},
     run: async (_args, context) => {
       const campaign = await context.call('campaigns.loadDemo', {});
-      return { json: campaign, text: `demo campaign ${campaign.id} "${campaign.name}" with ${campaign.pairCount} pairs (invented data)` };
+      const batches = await context.call('batches.list', { campaignId: campaign.id });
+      const text = [
+        `demo campaign ${campaign.id} "${campaign.name}" (invented data): ${campaign.pairCount} pairs, ${batches.length} batches`,
+        `next: pairwright pairs list ${campaign.id} · pairwright batches list · pairwright outcomes list ${campaign.id}`,
+      ].join('\n');
+      return { json: campaign, text };
     },
   },
 ];
