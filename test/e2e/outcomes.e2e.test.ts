@@ -6,11 +6,11 @@
  */
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { dispatch } from '../../electron/services/dispatch';
 import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
 import { browserAvailable, launchBrowser, newTestPage, screenshotPath } from '../support/browser';
+import { dispatchValue } from '../support/dispatch';
 import { startTestHost, type HostFixture } from '../support/host-fixture';
 import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
@@ -22,11 +22,7 @@ describe.skipIf(!available)('results in the browser host', () => {
   let fixture: HostFixture;
   let page: Page;
 
-  async function api<T>(name: string, input: unknown): Promise<T> {
-    const result = await dispatch({ store: fixture.store }, name, input);
-    if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
-    return result.value as T;
-  }
+  const api = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>({ store: fixture.store }, name, input);
   const countRows = (table: string) => (fixture.store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
 
   beforeAll(async () => {

@@ -80,13 +80,9 @@ describe('pairwright outcomes add / show / list / confusion', () => {
     const storeDir = join(dir, 'store-add');
     // The planning side (campaign, pair, saved batch) is set up in-process on the same store.
     const { openStore } = await import('../../db/store');
-    const { dispatch } = await import('../../electron/services/dispatch');
+    const { dispatchValue } = await import('../support/dispatch');
     const store = openStore({ dataDir: storeDir });
-    const call = async <T>(name: string, input: unknown): Promise<T> => {
-      const result = await dispatch({ store }, name, input);
-      if (!result.ok) throw new Error(result.error.message);
-      return result.value as T;
-    };
+    const call = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>({ store }, name, input);
     const campaign = await call<{ id: number }>('campaigns.create', { name: 'CLI screen' });
     const pair = await call<{ id: number }>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd' });
     const batch = await call<{ id: number }>('batches.save', {

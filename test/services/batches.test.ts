@@ -7,6 +7,7 @@ import type { CatalogReagent, SavedBatch } from '../../shared-model/api/batches'
 import type { BatchDesign } from '../../shared-model/recipes/design';
 import type { ReagentList } from '../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
+import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
 import { ptNi } from '../support/sample-batches';
 
@@ -18,11 +19,7 @@ beforeEach(() => {
 });
 afterEach(() => store.close());
 
-async function ok<T>(name: string, input: unknown): Promise<T> {
-  const result = await dispatch(context, name, input);
-  if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
-  return result.value as T;
-}
+const ok = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>(context, name, input);
 const count = (table: string) => (store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
 
 describe('catalog', () => {

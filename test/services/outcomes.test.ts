@@ -7,6 +7,7 @@ import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { BatchOutcome, CampaignConfusion, CompositionRecord, LineScanRecord, OutcomeRow, SizeRecord } from '../../shared-model/api/outcomes';
 import type { CandidatePair } from '../../shared-model/api/pairs';
+import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
 import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
@@ -19,11 +20,7 @@ beforeEach(() => {
 });
 afterEach(() => store.close());
 
-async function ok<T>(name: string, input: unknown): Promise<T> {
-  const result = await dispatch(context, name, input);
-  if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
-  return result.value as T;
-}
+const ok = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>(context, name, input);
 async function failure(name: string, input: unknown): Promise<{ code: string; message: string; field?: string }> {
   const result = await dispatch(context, name, input);
   if (result.ok) throw new Error(`${name} should have failed`);

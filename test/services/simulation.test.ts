@@ -7,6 +7,7 @@ import { queueFor } from '../../electron/workers/montecarlo-queue';
 import type { SimulationRun, SimulationRunSummary, XyzExport } from '../../shared-model/api/simulation';
 import type { StructureEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { magicClusterAtoms } from '../../shared-model/geometry/magic-numbers';
+import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
 
 let store: Store;
@@ -20,11 +21,7 @@ afterEach(async () => {
   store.close();
 });
 
-async function value<T>(name: string, input: unknown): Promise<T> {
-  const result = await dispatch(context, name, input);
-  if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
-  return result.value as T;
-}
+const value = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>(context, name, input);
 
 async function waitForEnd(id: number, timeoutMs = 60_000): Promise<SimulationRunSummary> {
   const start = Date.now();
