@@ -9,7 +9,7 @@ import type { ReagentList } from '../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
 import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
-import { ptNi } from '../support/sample-batches';
+import { auSeeds, ptNi } from '../support/sample-batches';
 
 let store: Store;
 let context: ServiceContext;
@@ -113,20 +113,7 @@ describe('designing and saving batches', () => {
   });
 
   it('lineage: a growth batch takes the seed batch’s measured size and concentration; the seed batch cannot be removed', async () => {
-    const seeds = await ok<SavedBatch>('batches.save', {
-      name: 'Au seeds 15 nm',
-      design: {
-        elementA: 'Au',
-        elementB: 'Pt',
-        target: 'Au@Pt',
-        route: 'co-reduction',
-        size: { kind: 'single-metal', element: 'Au', diameterNm: 15 },
-        amount: { kind: 'total-metal', totalMetalMmol: 0.025 },
-        batchVolumeMl: 100,
-        precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
-        reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
-      },
-    });
+    const seeds = await ok<SavedBatch>('batches.save', { name: 'Au seeds 15 nm', design: auSeeds });
     await ok('batches.setStatus', { id: seeds.id, status: 'made' });
     await ok('batches.setStatus', { id: seeds.id, status: 'characterized', measured: { diameterNm: 13.2, particlesPerMl: 2.1e12 } });
     const growth = await ok<SavedBatch>('batches.save', {

@@ -35,3 +35,16 @@ export const auPd: BatchDesignRequest = {
   ],
   reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
 };
+
+/** 15 nm Au seeds by citrate reduction, 0.025 mmol Au in 100 mL, planned for an Au@Pt growth batch (the lineage tests' seed batch). */
+export const auSeeds: BatchDesignRequest = {
+  elementA: 'Au',
+  elementB: 'Pt',
+  target: 'Au@Pt',
+  route: 'co-reduction',
+  size: { kind: 'single-metal', element: 'Au', diameterNm: 15 },
+  amount: { kind: 'total-metal', totalMetalMmol: 0.025 },
+  batchVolumeMl: 100,
+  precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
+  reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
+};

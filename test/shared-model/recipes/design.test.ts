@@ -5,7 +5,7 @@ import { batchDesignInputSchema, type BatchDesignRequest } from '../../../shared
 import { seedsFromBatch, seedBatchMetal } from '../../../shared-model/recipes/lineage';
 import { prepareReagent } from '../../../shared-model/recipes/reagent';
 import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
-import { ptNi } from '../../support/sample-batches';
+import { auSeeds, ptNi } from '../../support/sample-batches';
 
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 // Kittel, Introduction to Solid State Physics, 8th ed. (from memory)
@@ -139,17 +139,7 @@ describe('seed-mediated growth', () => {
   });
 
   it('lineage: the seed batch’s measured size and concentration feed the shell', () => {
-    const seedBatch = design({
-      elementA: 'Au',
-      elementB: 'Pt',
-      target: 'Au@Pt',
-      route: 'co-reduction',
-      size: { kind: 'single-metal', element: 'Au', diameterNm: 15 },
-      amount: { kind: 'total-metal', totalMetalMmol: 0.025 },
-      batchVolumeMl: 100,
-      precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
-      reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
-    });
+    const seedBatch = design(auSeeds);
     expect(seedBatch.architecture).toBe('single-metal');
     expect(seedBatchMetal({ id: 3, name: 'Au seeds', design: seedBatch })).toBe('Au');
     const planned = seedsFromBatch({ id: 3, name: 'Au seeds', design: seedBatch }, 'Au', 10);
