@@ -1,16 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseDiameterCsv, parseLineScanCsv } from '../../../shared-model/characterization/csv-import';
-import { DomainError } from '../../../shared-model/api/result';
-
-function errorOf(fn: () => unknown): DomainError {
-  try {
-    fn();
-  } catch (error) {
-    if (error instanceof DomainError) return error;
-    throw error;
-  }
-  throw new Error('expected a DomainError');
-}
+import { domainErrorOf as errorOf } from '../../support/domain-error';
 
 describe('diameter CSV import', () => {
   it('reads one column without a header', () => {

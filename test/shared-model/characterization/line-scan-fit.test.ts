@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fitLineScan } from '../../../shared-model/characterization/line-scan-fit';
 import { LINE_SCAN_MODELS, type LineScanModelKind } from '../../../shared-model/characterization/chord-profile';
-import { DomainError } from '../../../shared-model/api/result';
+import { domainErrorOf as errorOf } from '../../support/domain-error';
 import { monolayerThicknessNm } from '../../../shared-model/geometry/fcc';
 import { createRandom } from '../../../shared-model/random';
 import { exactBlurredProfiles, positions, syntheticScan, type SyntheticScanSpec } from './synthetic-line-scan';
@@ -32,16 +32,6 @@ function spec(kind: LineScanModelKind, trial: number): SyntheticScanSpec {
     backgroundB: 3,
     positionsNm: positions(0, 20, 0.4),
   };
-}
-
-function errorOf(fn: () => unknown): DomainError {
-  try {
-    fn();
-  } catch (error) {
-    if (error instanceof DomainError) return error;
-    throw error;
-  }
-  throw new Error('expected a DomainError');
 }
 
 describe('line-scan model fits on synthetic scans', () => {
