@@ -311,19 +311,12 @@ export interface PredictionCore {
   miscibilityGap: boolean;
 }
 
-/** The numbers of a prediction (no labels, strings or term breakdown): the hot path of ranking. */
 /** The size-independent part of a prediction: depends on composition, temperature, facet and strain rule. */
-interface CompositionPart {
+interface CompositionPart extends Pick<PredictionCore, 'kT' | 'mixing' | 'omegaChemEv' | 'latticeNm' | 'strain' | 'k'> {
   xB: number;
   temperatureK: number;
   facet: SurfaceFacet;
   strainRule: StrainRule;
-  kT: number;
-  mixing: ReturnType<typeof miedemaFromConstants>;
-  omegaChemEv: number;
-  latticeNm: number;
-  strain: { bInA: number; aInB: number };
-  k: SegregationCoefficients;
   ratio: number;
   gap: boolean;
 }
