@@ -18,7 +18,7 @@ import { guptaElement } from '../../shared-model/montecarlo/gupta-parameters';
 import { binaryTables, SwapEngine } from '../../shared-model/montecarlo/swap-engine';
 import type { SimulationResult, SimulationSpec } from '../../shared-model/montecarlo/simulate';
 import { createRandom } from '../../shared-model/random';
-import { runLammps, writeEamFs, writeLammpsData } from '../support/gupta-lammps';
+import { runLammpsGuptaCluster } from '../support/gupta-lammps';
 
 function hasLammps(): boolean {
   return spawnSync('sh', ['-c', 'command -v lmp'], { encoding: 'utf8' }).stdout.trim().length > 0;
@@ -100,23 +100,12 @@ export async function run(): Promise<void> {
   const symbols = Array.from(species, (s) => (s ? elementB : elementA));
   const swapsPerStep = 50;
   const steps = 40;
-  const script = [
-    'units metal',
-    'atom_style atomic',
-    'atom_modify map array',
-    'boundary f f f',
-    'read_data cluster.data',
-    'pair_style eam/fs',
-    `pair_coeff * * gupta.eam.fs ${elementA} ${elementB}`,
+  const stdout = runLammpsGuptaCluster(symbols, geometry.positions, [elementA, elementB], FIVE_SHELL_CUTOFF_FACTOR * nn, [
     'timestep 0.001',
     `fix mc all atom/swap 1 ${swapsPerStep} 4711 ${temperatureK} ke no types 1 2`,
     'thermo 10',
     `run ${steps}`,
-  ].join('\n');
-  const stdout = runLammps(script, {
-    'cluster.data': writeLammpsData(symbols, geometry.positions, [elementA, elementB]),
-    'gupta.eam.fs': writeEamFs([elementA, elementB], FIVE_SHELL_CUTOFF_FACTOR * nn),
-  });
+  ]);
   const loop = /Loop time of ([0-9.eE+-]+) on/.exec(stdout);
   if (!loop) {
     console.log(`LAMMPS printed no loop time:\n${stdout.slice(-1500)}`);

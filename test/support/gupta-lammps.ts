@@ -128,9 +128,11 @@ export function runLammps(script: string, files: Record<string, string>, timeout
   }
 }
 
-/** Total energy (eV) LAMMPS computes for a cluster with the tabulated Gupta potential. */
-export function lammpsGuptaEnergyEv(symbols: readonly string[], positions: Float64Array, cutoffAngstrom: number): number {
-  const elements = [...new Set(symbols)];
+/**
+ * Runs `lmp` on a free cluster (`symbols` at `positions`, atom types in the order of `elements`) with the
+ * tabulated Gupta potential, then `commands`; answers LAMMPS' standard output.
+ */
+export function runLammpsGuptaCluster(symbols: readonly string[], positions: Float64Array, elements: readonly string[], cutoffAngstrom: number, commands: readonly string[]): string {
   const script = [
     'units metal',
     'atom_style atomic',
@@ -139,11 +141,15 @@ export function lammpsGuptaEnergyEv(symbols: readonly string[], positions: Float
     'read_data cluster.data',
     'pair_style eam/fs',
     `pair_coeff * * gupta.eam.fs ${elements.join(' ')}`,
-    'thermo_style custom step pe',
-    'run 0',
-    'print "PAIRWRIGHT_ENERGY $(pe:%.12f)"',
+    ...commands,
   ].join('\n');
-  const stdout = runLammps(script, { 'cluster.data': writeLammpsData(symbols, positions, elements), 'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom) });
+  return runLammps(script, { 'cluster.data': writeLammpsData(symbols, positions, elements), 'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom) });
+}
+
+/** Total energy (eV) LAMMPS computes for a cluster with the tabulated Gupta potential. */
+export function lammpsGuptaEnergyEv(symbols: readonly string[], positions: Float64Array, cutoffAngstrom: number): number {
+  const elements = [...new Set(symbols)];
+  const stdout = runLammpsGuptaCluster(symbols, positions, elements, cutoffAngstrom, ['thermo_style custom step pe', 'run 0', 'print "PAIRWRIGHT_ENERGY $(pe:%.12f)"']);
   const match = /PAIRWRIGHT_ENERGY (-?[0-9.eE+-]+)/.exec(stdout);
   if (!match) throw new Error(`LAMMPS printed no energy:\n${stdout.slice(-2000)}`);
   return Number(match[1]);
