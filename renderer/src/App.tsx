@@ -14,9 +14,14 @@ function initialView(): string {
 }
 
 function CampaignBadge() {
-  const { campaignId, revision } = useAppState();
+  const { campaignId, selectCampaign, revision } = useAppState();
   const campaigns = useQuery('campaigns.list', { includeArchived: true }, `badge:${revision}`);
   const current = campaigns.data?.find((campaign) => campaign.id === campaignId);
+  // Whatever view opens first, work in the most recently used active campaign until the user picks another.
+  const fallbackId = campaigns.data?.find((campaign) => !campaign.archived)?.id ?? null;
+  useEffect(() => {
+    if (campaigns.data && !current && fallbackId !== null) selectCampaign(fallbackId);
+  }, [campaigns.data, current, fallbackId, selectCampaign]);
   return (
     <div className="sidebar__campaign" data-testid="current-campaign">
       <span className="sidebar__caption">Campaign</span>

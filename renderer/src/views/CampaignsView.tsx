@@ -1,5 +1,5 @@
 /** Campaigns: create, rename, archive; the empty state offers the demo campaign. */
-import { useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import type { Campaign } from '../../../shared-model/api/campaigns';
 import { call } from '../api/client';
 import { useFieldErrors, useQuery } from '../api/hooks';
@@ -108,11 +108,6 @@ export function CampaignsView() {
   const [demoError, setDemoError] = useState<string | null>(null);
   const list = campaigns.data ?? [];
   const selected = list.find((campaign) => campaign.id === campaignId) ?? null;
-  // Open the most recently used campaign when none is chosen (first start in a new browser, or after an archive).
-  const firstId = list[0]?.id ?? null;
-  useEffect(() => {
-    if (campaigns.data && !selected && firstId !== null) selectCampaign(firstId);
-  }, [campaigns.data, selected, firstId, selectCampaign]);
 
   const loadDemo = async () => {
     const result = await call('campaigns.loadDemo', {});

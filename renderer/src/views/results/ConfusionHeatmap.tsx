@@ -4,7 +4,7 @@ import type { ConfusionMatrix } from '../../../../shared-model/characterization/
 
 const CELL_PX = 78;
 const Y_AXIS_PX = 150;
-const X_AXIS_PX = 70;
+const X_AXIS_PX = 110;
 const MARGIN = { top: 10, right: 10, bottom: 10, left: 10 };
 
 interface CellDatum {
@@ -60,6 +60,10 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           interval={0}
           tickFormatter={(i: number) => labels[i] ?? ''}
           height={X_AXIS_PX}
+          // Slanted so long labels ("surface-enriched alloy") never run into their neighbours.
+          angle={-35}
+          textAnchor="end"
+          label={{ value: 'predicted', position: 'insideBottom', offset: 0, fontSize: 12 }}
         />
         <YAxis
           type="number"
@@ -69,6 +73,7 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           interval={0}
           tickFormatter={(i: number) => labels[n - 1 - i] ?? ''}
           width={Y_AXIS_PX}
+          label={{ value: 'observed', angle: -90, position: 'insideLeft', fontSize: 12 }}
         />
         <Scatter data={cells} shape={shape} isAnimationActive={false} />
       </ScatterChart>
