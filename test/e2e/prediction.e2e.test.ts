@@ -12,6 +12,7 @@ import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
 import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
 import { startTestHost, tempDataDir, type HostFixture } from '../support/host-fixture';
+import { auPd } from '../support/sample-batches';
 
 const available = browserAvailable();
 
@@ -150,20 +151,7 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     const campaign = campaigns.find((c) => c.name === 'Cathode screen');
     if (!campaign) throw new Error('campaign "Cathode screen" missing');
     const pair = await api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
-    const design = {
-      elementA: 'Au',
-      elementB: 'Pd',
-      target: 'alloy',
-      route: 'co-reduction',
-      size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
-      amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
-      batchVolumeMl: 50,
-      precursors: [
-        { element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 20 },
-        { element: 'Pd', reagentKey: 'na2pdcl4', stockMm: 20 },
-      ],
-      reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
-    };
+    const design = auPd;
     const first = await api<SavedBatch>('batches.save', { name: 'AuPd-1', campaignId: campaign.id, pairId: pair.id, design });
     const second = await api<SavedBatch>('batches.save', { name: 'AuPd-2', campaignId: campaign.id, pairId: pair.id, design });
     await api<SavedBatch>('batches.save', { name: 'AuPd-3 not characterised', campaignId: campaign.id, pairId: pair.id, design });
