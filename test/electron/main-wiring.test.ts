@@ -3,12 +3,15 @@
  * downloaded on every machine). Checks the window's security settings, IPC sender validation,
  * navigation and window.open refusal, and the app menu — with a real store behind the services.
  */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterEach, describe, expect, it } from 'vitest';
 import { openStore, type Store } from '../../db/store';
 import {
   CALL_CHANNEL,
   OPERATIONS_CHANNEL,
+  PRINT_CHANNEL,
   type BrowserWindowLike,
   type IpcMainEventLike,
   type BrowserWindowOptions,
@@ -33,6 +36,7 @@ function standInElectron() {
   let menu: MenuItemTemplate[] = [];
   const appListeners = new Map<string, Listener>();
   let quitCalls = 0;
+  let savePath: string | null = null;
   class FakeWindow implements BrowserWindowLike {
     webContents = {
       id: 7,
@@ -63,7 +67,10 @@ function standInElectron() {
     },
     Menu: { buildFromTemplate: (template) => ((menu = template), template), setApplicationMenu: () => undefined },
     shell: { openExternal: async (url) => void opened.push(url), openPath: async () => '' },
-    dialog: { showSaveDialog: async () => ({ canceled: true }), showMessageBox: async () => ({}) },
+    dialog: {
+      showSaveDialog: async () => (savePath === null ? { canceled: true } : { canceled: false, filePath: savePath }),
+      showMessageBox: async () => ({}),
+    },
   };
   return {
     electron,
@@ -86,6 +93,10 @@ function standInElectron() {
     appListeners,
     get quitCalls() {
       return quitCalls;
+    },
+    /** Where the stand-in save dialog answers (null = the user cancels). */
+    chooseSavePath(path: string | null) {
+      savePath = path;
     },
   };
 }
@@ -169,6 +180,18 @@ describe('Electron main process wiring', () => {
     await expect.poll(() => fake.quitCalls).toBe(1);
     expect(openStoreHandle?.db.open).toBe(false);
     store = null;
+  });
+
+  it('saves the page as PDF where the user chose, and does nothing when the dialog is cancelled', async () => {
+    const fake = await wired();
+    const print = fake.handlers.get(PRINT_CHANNEL);
+    expect(await print?.(trustedEvent(), 'reagents.pdf')).toEqual({ ok: true, value: { saved: null } });
+    const target = join(tempDataDir('pairwright-pdf-'), 'reagents.pdf');
+    fake.chooseSavePath(target);
+    expect(await print?.(trustedEvent(), 'reagents.pdf')).toEqual({ ok: true, value: { saved: target } });
+    expect(readFileSync(target).subarray(0, 4).toString('latin1')).toBe('%PDF');
+    const foreign = await print?.({ sender: { id: 7 }, senderFrame: { url: 'https://example.org/' } }, 'x.pdf');
+    expect(foreign).toMatchObject({ ok: false, error: { code: 'forbidden' } });
   });
 
   it('builds the usual application menu', async () => {
