@@ -56,9 +56,23 @@ export default tseslint.config(
   },
   {
     files: ['electron/**/*.ts', 'electron/**/*.cts'],
-    ignores: ['electron/main.ts', 'electron/preload.cts'],
+    ignores: ['electron/desktop/**'],
     rules: {
-      'no-restricted-imports': ['error', forbid(['electron', 'electron/*'], 'Only electron/main.ts and electron/preload.cts import electron.')[1]],
+      'no-restricted-imports': ['error', forbid(['electron', 'electron/*'], "Only electron/desktop/ imports 'electron' (see DEVELOPERS.md, layer rules).")[1]],
+    },
+  },
+  {
+    files: ['electron/cli/**/*.ts', 'electron/host/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['electron', 'electron/*'], message: "The CLI and the browser host never import 'electron'." },
+            { group: ['**/db/**', 'better-sqlite3'], message: 'The CLI and the browser host reach the store through services (electron/services/workspace.ts and dispatch), never db/ directly.' },
+          ],
+        },
+      ],
     },
   },
   {
@@ -66,6 +80,17 @@ export default tseslint.config(
     rules: {
       'no-restricted-syntax': ['error', { selector: "ImportDeclaration[source.value=/renderer/]", message: 'electron/ must not import renderer code.' }],
     },
+  },
+  {
+    files: ['**/*.ts', '**/*.tsx'],
+    ignores: ['test/fixtures/**'],
+    languageOptions: {
+      parserOptions: {
+        projectService: { allowDefaultProject: ['vitest.config.ts', 'renderer/vite.config.ts', 'scripts/dev/*.ts'] },
+        tsconfigRootDir: import.meta.dirname,
+      },
+    },
+    rules: { '@typescript-eslint/no-floating-promises': 'error' },
   },
   {
     files: ['renderer/**/*.ts', 'renderer/**/*.tsx'],

@@ -16,12 +16,12 @@ export async function buildDesktop() {
   const common = { bundle: true, platform: 'node', target: 'node20', sourcemap: true, logLevel: 'warning', external: ['electron', 'better-sqlite3'] };
   await build({
     ...common,
-    entryPoints: [join(root, 'electron', 'desktop-entry.ts')],
+    entryPoints: [join(root, 'electron', 'desktop', 'entry.ts')],
     outfile: join(out, 'main.mjs'),
     format: 'esm',
     banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
   });
-  await build({ ...common, entryPoints: [join(root, 'electron', 'preload.cts')], outfile: join(out, 'preload.cjs'), format: 'cjs' });
+  await build({ ...common, entryPoints: [join(root, 'electron', 'desktop', 'preload.cts')], outfile: join(out, 'preload.cjs'), format: 'cjs' });
   await build({
     ...common,
     entryPoints: [join(root, 'electron', 'cli', 'bin.ts')],

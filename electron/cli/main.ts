@@ -6,11 +6,11 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
-import { openStore, type Store } from '../../db/store';
 import type { OperationInput, OperationName, OperationOutput } from '../../shared-model/api/contract';
 import { defaultDataDir } from '../paths';
 import { dispatchKnown } from '../services/dispatch';
-import { shutdownServices } from '../services/lifecycle';
+import type { ServiceContext } from '../services/context';
+import { closeWorkspace, openWorkspace } from '../services/workspace';
 import { CliError, type CliCommand, type CliContext, type OptionSpec } from './command';
 import { commands } from './commands/index';
 
@@ -70,7 +70,7 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
     return { exitCode: 2, stdout: '', stderr: `pairwright: unknown command "${argv.filter((a) => !a.startsWith('-')).join(' ')}"; run pairwright --help` };
   }
   const { command, rest } = found;
-  let store: Store | null = null;
+  let workspace: ServiceContext | null = null;
   try {
     let parsed;
     try {
@@ -82,8 +82,8 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
     const dataDir = typeof parsed.values.data === 'string' ? resolve(parsed.values.data) : defaultDataDir(env);
     const context: CliContext = {
       call: async <Name extends OperationName>(name: Name, input: OperationInput<Name>): Promise<OperationOutput<Name>> => {
-        store ??= openStore({ dataDir });
-        const result = await dispatchKnown({ store }, name, input);
+        workspace ??= openWorkspace({ dataDir });
+        const result = await dispatchKnown(workspace, name, input);
         if (!result.ok) throw new CliError(result.error.message);
         return result.value;
       },
@@ -104,8 +104,8 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
     const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
     return { exitCode: 1, stdout: '', stderr: `pairwright: unexpected failure: ${detail}` };
   } finally {
-    const opened = store as Store | null;
-    if (opened) await shutdownServices(opened);
+    const opened = workspace as ServiceContext | null;
+    if (opened) await closeWorkspace(opened);
   }
 }
 

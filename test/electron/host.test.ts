@@ -1,7 +1,7 @@
 /** The browser host: token, Host header, 127.0.0.1 binding, errors as values, the page carries the token. */
 import { request } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { TOKEN_HEADER } from '../../electron/host';
+import { TOKEN_HEADER } from '../../electron/host/server';
 import { startTestHost, type HostFixture } from '../support/host-fixture';
 
 let fixture: HostFixture;

@@ -18,8 +18,8 @@ import {
   type ElectronBoundary,
   type IpcMainInvokeEventLike,
   type MenuItemTemplate,
-} from '../../electron/electron-boundary';
-import { isVettedExternalLink, wireDesktopApp } from '../../electron/main';
+} from '../../electron/desktop/electron-boundary';
+import { isVettedExternalLink, wireDesktopApp } from '../../electron/desktop/main';
 import { OPERATION_NAMES } from '../../shared-model/api/contract';
 import { tempDataDir } from '../support/host-fixture';
 

@@ -3,7 +3,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { openStore, type Store } from '../../db/store';
-import { startHost, type RunningHost } from '../../electron/host';
+import { startHost, type RunningHost } from '../../electron/host/server';
 import { rendererDistDir } from '../../electron/paths';
 
 export interface HostFixture {

@@ -6,11 +6,11 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { isOperationName, OPERATION_NAMES } from '../shared-model/api/contract';
-import { fail } from '../shared-model/api/result';
-import type { ServiceContext } from './services/context';
-import { dispatch } from './services/dispatch';
-import { shutdownServices } from './services/lifecycle';
+import { isOperationName, OPERATION_NAMES } from '../../shared-model/api/contract';
+import { fail } from '../../shared-model/api/result';
+import type { ServiceContext } from '../services/context';
+import { dispatch } from '../services/dispatch';
+import { shutdownServices } from '../services/lifecycle';
 import {
   CALL_CHANNEL,
   OPERATIONS_CHANNEL,

@@ -2,10 +2,9 @@
  * `npm run serve [-- --port N --data DIR]`: runs Pairwright in a browser tab, served on 127.0.0.1 only.
  */
 import { parseArgs } from 'node:util';
-import { openStore } from '../db/store';
-import { startHost } from './host';
-import { defaultDataDir, rendererDistDir } from './paths';
-import { shutdownServices } from './services/lifecycle';
+import { startHost } from './server';
+import { defaultDataDir, rendererDistDir } from '../paths';
+import { closeWorkspace, openWorkspace } from '../services/workspace';
 
 function parsePort(text: string | undefined): number {
   if (text === undefined) return 5178;
@@ -24,16 +23,16 @@ async function main(): Promise<void> {
     return;
   }
   const dataDir = values.data ?? defaultDataDir();
-  const store = openStore({ dataDir });
-  const host = await startHost({ context: { store }, rendererDir: rendererDistDir(), port: parsePort(values.port) });
+  const context = openWorkspace({ dataDir });
+  const host = await startHost({ context, rendererDir: rendererDistDir(), port: parsePort(values.port) });
   const address = `${host.url}`;
   console.log(`Pairwright is running. Open ${address} in your browser.`);
-  console.log(`Data: ${store.path}`);
+  console.log(`Data: ${context.store.path}`);
   console.log('Press Ctrl+C to stop.');
   const stop = (): void => {
     host
       .close()
-      .then(() => shutdownServices(store))
+      .then(() => closeWorkspace(context))
       .then(() => process.exit(0))
       .catch((error: unknown) => {
         console.error('error while stopping:', error);

@@ -11,9 +11,9 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { extname, join, normalize, sep } from 'node:path';
-import type { ApiResult } from '../shared-model/api/result';
-import { dispatch } from './services/dispatch';
-import type { ServiceContext } from './services/context';
+import type { ApiResult } from '../../shared-model/api/result';
+import { dispatch } from '../services/dispatch';
+import type { ServiceContext } from '../services/context';
 
 export const TOKEN_HEADER = 'x-pairwright-token';
 const MAX_BODY_BYTES = 20 * 1024 * 1024;

@@ -6,7 +6,7 @@
 import { existsSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { openStore } from '../db/store';
+import { openWorkspace } from '../services/workspace';
 import type { ElectronBoundary } from './electron-boundary';
 import { wireDesktopApp } from './main';
 
@@ -17,9 +17,9 @@ const electron: ElectronBoundary = electronModule.default ?? electronModule;
 
 const nativeBinding = join(here, 'native', 'better_sqlite3.node');
 await electron.app.whenReady();
-const store = openStore({
+const context = openWorkspace({
   dataDir: electron.app.getPath('userData'),
   migrationsDir: join(here, 'migrations'),
   ...(existsSync(nativeBinding) ? { nativeBinding } : {}),
 });
-await wireDesktopApp(electron, { store }, { rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'), preload: join(here, 'preload.cjs') });
+await wireDesktopApp(electron, context, { rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'), preload: join(here, 'preload.cjs') });
