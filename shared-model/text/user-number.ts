@@ -9,10 +9,22 @@
 
 export type UserNumberResult = { ok: true; value: number } | { ok: false; message: string };
 
-const PLAIN_NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/;
+/** One number with a decimal point or comma and an optional exponent (also used by the CSV reader per cell). */
+export const PLAIN_NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/;
 
-/** Reads one typed number. Empty text is refused here; use `readOptionalUserNumber` where empty means "not given". */
-export function readUserNumber(text: string): UserNumberResult {
+/**
+ * Reads one typed number. Empty text is refused here; use `readOptionalUserNumber` where empty means "not given".
+ * With `field` (how the user knows the field: "temperature, K", "--diameter-nm") a refusal starts with it:
+ * 'temperature, K: "abc" is not a number'.
+ */
+export function readUserNumber(text: string, field?: string): UserNumberResult {
+  const result = readUnnamed(text);
+  return result.ok || field === undefined ? result : { ok: false, message: `${field}: ${lowerFirst(result.message)}` };
+}
+
+const lowerFirst = (message: string) => (message.startsWith('Enter') ? `e${message.slice(1)}` : message);
+
+function readUnnamed(text: string): UserNumberResult {
   const trimmed = text.trim();
   if (trimmed === '') return { ok: false, message: 'Enter a number' };
   if (/\d[\s\u00a0\u202f']\d/.test(trimmed)) {
@@ -32,6 +44,9 @@ export function readUserNumber(text: string): UserNumberResult {
 }
 
 /** Empty text → `{ ok: true, value: undefined }`; otherwise as `readUserNumber`. */
-export function readOptionalUserNumber(text: string): { ok: true; value: number | undefined } | { ok: false; message: string } {
-  return text.trim() === '' ? { ok: true, value: undefined } : readUserNumber(text);
+export function readOptionalUserNumber(
+  text: string,
+  field?: string,
+): { ok: true; value: number | undefined } | { ok: false; message: string } {
+  return text.trim() === '' ? { ok: true, value: undefined } : readUserNumber(text, field);
 }
