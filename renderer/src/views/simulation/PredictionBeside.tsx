@@ -1,0 +1,63 @@
+/** The Monte Carlo architecture beside the analytic prediction for the same pair, size and temperature. */
+import { useMemo } from 'react';
+import { describeArchitecture } from '../../../../shared-model/architecture/labels';
+import type { ClusterShape } from '../../../../shared-model/clusters/shapes';
+import type { ParticleShape } from '../../../../shared-model/geometry/particle-sites';
+import type { SimulationResult } from '../../../../shared-model/montecarlo/simulate';
+import { predictPair } from '../../../../shared-model/prediction/predict';
+import { pct } from './format';
+
+const PREDICTION_SHAPE: Record<ClusterShape, ParticleShape> = {
+  cuboctahedron: 'cuboctahedron',
+  icosahedron: 'icosahedron',
+  'truncated-octahedron': 'truncated octahedron',
+  sphere: 'sphere',
+};
+
+export function PredictionBeside(props: { result: SimulationResult; temperatureK: number }) {
+  const { result } = props;
+  const prediction = useMemo(() => {
+    try {
+      return {
+        value: predictPair(result.elementA, result.elementB, {
+          xB: result.xB,
+          diameterNm: result.geometry.equivalentDiameterNm,
+          shape: PREDICTION_SHAPE[result.geometry.shape],
+          temperatureK: props.temperatureK,
+        }),
+        error: null,
+      };
+    } catch (error) {
+      return { value: null, error: error instanceof Error ? error.message : String(error) };
+    }
+  }, [result, props.temperatureK]);
+  return (
+    <div className="sim-compare" aria-label="Simulation beside the analytic prediction">
+      <div>
+        <div className="sim-stat__label">Monte Carlo</div>
+        <div className="sim-stat__value" data-testid="sim-architecture">
+          {result.architecture}
+        </div>
+        <div className="small">
+          surface {result.elementB} {pct(result.surfaceXB)}; {describeArchitecture(result.architecture)}
+        </div>
+      </div>
+      <div>
+        <div className="sim-stat__label">Analytic prediction</div>
+        {prediction.value ? (
+          <>
+            <div className="sim-stat__value" data-testid="sim-prediction-architecture">
+              {prediction.value.architecture}
+            </div>
+            <div className="small">
+              surface {result.elementB} {pct(prediction.value.surfaceXB)} (Langmuir–McLean with Wynblatt–Ku terms,
+              same size and temperature)
+            </div>
+          </>
+        ) : (
+          <div className="small">no analytic prediction: {prediction.error}</div>
+        )}
+      </div>
+    </div>
+  );
+}

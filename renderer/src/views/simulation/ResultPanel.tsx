@@ -1,0 +1,88 @@
+/** A finished run: headline numbers, the prediction beside it, radial profile, picture, traces, XYZ export. */
+import { useState } from 'react';
+import type { SimulationRun } from '../../../../shared-model/api/simulation';
+import type { SimulationResult } from '../../../../shared-model/montecarlo/simulate';
+import { call } from '../../api/client';
+import { Banner } from '../../components/Banner';
+import { num, pct } from './format';
+import { ParticlePicture } from './ParticlePicture';
+import { PredictionBeside } from './PredictionBeside';
+import { RadialProfile } from './RadialProfile';
+import { Traces } from './Traces';
+import { resultPoints } from './traces';
+
+function Stat(props: { label: string; value: string; testId?: string }) {
+  return (
+    <div className="sim-stat">
+      <span className="sim-stat__label">{props.label}</span>
+      <span className="sim-stat__value" data-testid={props.testId}>
+        {props.value}
+      </span>
+    </div>
+  );
+}
+
+async function downloadXyz(id: number, onError: (message: string) => void): Promise<void> {
+  const result = await call('simulation.exportXyz', { id });
+  if (!result.ok) {
+    onError(result.error.message);
+    return;
+  }
+  const url = URL.createObjectURL(new Blob([result.value.content], { type: 'chemical/x-xyz' }));
+  const anchor = document.createElement('a');
+  anchor.href = url;
+  anchor.download = result.value.fileName;
+  anchor.dataset.testid = 'xyz-download';
+  document.body.appendChild(anchor);
+  anchor.click();
+  anchor.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
+
+export function ResultPanel(props: { run: SimulationRun; result: SimulationResult }) {
+  const { run, result } = props;
+  const [error, setError] = useState<string | null>(null);
+  const eq = result.equilibration;
+  const surfaceB = `${pct(result.surfaceXB)} ± ${(100 * result.surfaceXBStandardError).toFixed(1)}`;
+  return (
+    <div className="stack" data-testid="sim-result">
+      <PredictionBeside result={result} temperatureK={run.spec.temperatureK} />
+      <div className="sim-stats">
+        <Stat
+          label={`surface ${result.elementA}`}
+          value={pct(result.surfaceFraction[result.elementA] ?? 0)}
+          testId="sim-surface-a"
+        />
+        <Stat label={`surface ${result.elementB}`} value={surfaceB} testId="sim-surface-b" />
+        <Stat label="Warren–Cowley order, 1st shell" value={num(result.warrenCowley, 3)} testId="sim-warren-cowley" />
+        <Stat label="energy per atom" value={`${result.energyPerAtomEv.toFixed(4)} eV`} />
+        <Stat label="mixing energy" value={`${(1000 * result.mixingEnergyPerAtomEv).toFixed(1)} meV/atom`} />
+        <Stat label="atoms / surface sites" value={`${result.atoms} / ${result.surfaceSites}`} />
+        <Stat label="acceptance" value={pct(result.acceptance)} />
+        <Stat label="speed" value={`${Math.round(result.attemptsPerSecond).toLocaleString('en-US')} /s`} />
+      </div>
+      <p className="small muted">
+        {eq.equilibrated ? 'Equilibrated' : 'Not equilibrated (energy still drifting in the last quarters: run longer)'}
+        ; averages from sweep {eq.equilibratedFromSample + (run.spec.anneal?.sweeps ?? 0) + 1}. Unlike pairs:{' '}
+        {result.pairRule.description}. Rigid lattice (no relaxation) at the Vegard spacing{' '}
+        {result.geometry.nearestNeighbourAngstrom.toFixed(3)} Å; engine {result.engineVersion}.
+      </p>
+      <div className="sim-charts">
+        <RadialProfile result={result} />
+        <ParticlePicture
+          spec={run.spec}
+          occupation={result.finalOccupation}
+          elementA={result.elementA}
+          elementB={result.elementB}
+        />
+      </div>
+      <Traces points={resultPoints(result)} elementB={result.elementB} xB={result.xB} />
+      <div className="form-actions">
+        <button type="button" onClick={() => downloadXyz(run.id, setError)}>
+          Export extended XYZ
+        </button>
+      </div>
+      {error ? <Banner tone="error">{error}</Banner> : null}
+    </div>
+  );
+}

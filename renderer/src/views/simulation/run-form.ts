@@ -1,0 +1,149 @@
+/**
+ * The New run form as a pure model (no React, no DOM): the typed text of each field, the defaults, reading
+ * the text into a `simulation.start` input (typed numbers through the one reader, the field at fault
+ * named), the planned size shown while typing, and taking over a request handed on by another view.
+ */
+import type { OperationInput } from '../../../../shared-model/api/contract';
+import type { ClusterShape } from '../../../../shared-model/clusters/shapes';
+import type { ParticleShape } from '../../../../shared-model/geometry/particle-sites';
+import { planSimulation, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
+import { readOptionalUserNumber, readUserNumber } from '../../../../shared-model/text/user-number';
+import type { SimulationRequest } from '../../app-state';
+
+export interface RunFormState {
+  elementA: string;
+  elementB: string;
+  xB: string;
+  shape: ClusterShape;
+  sizeMode: 'shells' | 'diameter';
+  shells: string;
+  diameterNm: string;
+  temperatureK: string;
+  sweeps: string;
+  anneal: boolean;
+  annealStartK: string;
+  annealSweeps: string;
+  seed: string;
+}
+
+export const INITIAL_RUN_FORM: RunFormState = {
+  elementA: 'Ag',
+  elementB: 'Pd',
+  xB: '0.5',
+  shape: 'cuboctahedron',
+  sizeMode: 'shells',
+  shells: '5',
+  diameterNm: '3',
+  temperatureK: '600',
+  sweeps: '1000',
+  anneal: false,
+  annealStartK: '1500',
+  annealSweeps: '500',
+  seed: '1',
+};
+
+/** The input read from the form, or the first field that does not hold a number (field = the API's path). */
+type SimulationStartInput = OperationInput<'simulation.start'>;
+
+export type RunFormReading = { ok: true; input: SimulationStartInput } | { ok: false; field: string; message: string };
+
+class FieldRefusal extends Error {
+  constructor(
+    readonly field: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+function required(text: string, field: string, label: string): number {
+  const result = readUserNumber(text, label);
+  if (!result.ok) throw new FieldRefusal(field, result.message);
+  return result.value;
+}
+
+function optional(text: string, field: string, label: string): number | undefined {
+  const result = readOptionalUserNumber(text, label);
+  if (!result.ok) throw new FieldRefusal(field, result.message);
+  return result.value;
+}
+
+/** Reads the typed text; range checks are left to the contract (zod) so the form and the API say the same. */
+export function readRunForm(form: RunFormState): RunFormReading {
+  try {
+    const input: SimulationStartInput = {
+      elementA: form.elementA,
+      elementB: form.elementB,
+      xB: required(form.xB, 'xB', `x(${form.elementB})`),
+      shape: form.shape,
+      ...(form.sizeMode === 'shells'
+        ? { shells: optional(form.shells, 'shells', 'shells') }
+        : { diameterNm: optional(form.diameterNm, 'diameterNm', 'diameter, nm') }),
+      temperatureK: required(form.temperatureK, 'temperatureK', 'temperature, K'),
+      sweeps: required(form.sweeps, 'sweeps', 'sweeps'),
+      anneal: form.anneal
+        ? {
+            startTemperatureK: required(form.annealStartK, 'anneal.startTemperatureK', 'anneal start, K'),
+            sweeps: required(form.annealSweeps, 'anneal.sweeps', 'cooling sweeps'),
+          }
+        : null,
+      seed: optional(form.seed, 'seed', 'seed') ?? 1,
+    };
+    return { ok: true, input };
+  } catch (error) {
+    if (error instanceof FieldRefusal) return { ok: false, field: error.field, message: error.message };
+    throw error;
+  }
+}
+
+/** The planned size, or the first problem, computed in the page with the model's own checks. */
+export function planText(form: RunFormState): { text: string; ok: boolean } {
+  const reading = readRunForm(form);
+  if (!reading.ok) return { text: reading.message, ok: false };
+  try {
+    const plan = planSimulation(reading.input as SimulationSpec);
+    const atoms = plan.atoms.toLocaleString('en-US');
+    const sweeps = plan.totalSweeps.toLocaleString('en-US');
+    return { text: `${atoms} atoms, ${sweeps} sweeps = ${plan.attempts.toExponential(2)} swap attempts`, ok: true };
+  } catch (error) {
+    return { text: error instanceof Error ? error.message : String(error), ok: false };
+  }
+}
+
+/** The hint under the shells field, which depends on the shape. */
+export function shellsHint(shape: ClusterShape): string {
+  if (shape === 'truncated-octahedron') return 'edge atoms − 1';
+  if (shape === 'sphere') return 'radius in nearest-neighbour distances';
+  return '13, 55, 147, 309 … atoms';
+}
+
+const CLUSTER_SHAPE_OF: Record<ParticleShape, ClusterShape> = {
+  cuboctahedron: 'cuboctahedron',
+  icosahedron: 'icosahedron',
+  'truncated octahedron': 'truncated-octahedron',
+  sphere: 'sphere',
+};
+
+/** Short decimal text for a number from another view (0.30000000000000004 → "0.3"). */
+export const decimalText = (x: number): string => String(Number(x.toPrecision(6)));
+
+/** The form with a request from another view copied in; size by diameter, run length and seed kept. */
+export function formFromRequest(current: RunFormState, request: SimulationRequest): RunFormState {
+  return {
+    ...current,
+    elementA: request.elementA,
+    elementB: request.elementB,
+    xB: decimalText(request.xB),
+    shape: CLUSTER_SHAPE_OF[request.shape],
+    sizeMode: 'diameter',
+    diameterNm: decimalText(request.diameterNm),
+    temperatureK: decimalText(request.temperatureK),
+  };
+}
+
+/** The sentence above the form saying where its values came from. */
+export function describeRequest(request: SimulationRequest): string {
+  const pair = `${request.elementA}-${request.elementB}, x(${request.elementB}) = ${decimalText(request.xB)}`;
+  const particle = `${decimalText(request.diameterNm)} nm ${request.shape}, ${decimalText(request.temperatureK)} K`;
+  return `Filled in from ${request.source}: ${pair}, ${particle}. Check the sweeps and seed, then Run.`;
+}
