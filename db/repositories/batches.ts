@@ -1,91 +1,14 @@
 /**
- * Store for batch design: the reagent catalog with revisions (seeded from the built-in reagent list),
- * saved batches (inputs + computed JSON + status + lineage + lots + stock dates) and the inventory.
+ * Saved batches (migration 0004: `batches`, `batch_lots`, `batch_stocks`): inputs and computed JSON as
+ * saved, status, lineage (growth batch → seed batch), reagent lots and stock-solution dates. The reagent
+ * catalog and the inventory have their own repositories (catalog.ts, inventory.ts).
  */
-import type { BatchStatus, BatchSummary, CatalogReagent, InventoryRecord, MeasuredSeeds, ReagentLot } from '../../shared-model/api/batches';
+import type { BatchStatus, BatchSummary, MeasuredSeeds, ReagentLot } from '../../shared-model/api/batches';
 import { DomainError } from '../../shared-model/api/result';
 import type { BatchDesign } from '../../shared-model/recipes/design';
 import type { BatchDesignInput, StockRecord } from '../../shared-model/recipes/design-input';
-import { prepareReagent, type Reagent } from '../../shared-model/recipes/reagent';
-import type { InventoryUnit } from '../../shared-model/recipes/reagent-list';
-import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
 import { nowIso, type SqliteDatabase } from '../store';
-
-// ── Catalog ───────────────────────────────────────────────────────────────────
-
-interface ReagentRow {
-  key: string;
-  data: string;
-  revision: number;
-  built_in: number;
-  updated_at: string;
-}
-
-let preparedSeed: Reagent[] | null = null;
-function seedReagents(): Reagent[] {
-  preparedSeed ??= REAGENT_SEED.map((reagent) => prepareReagent(reagent));
-  return preparedSeed;
-}
-
-function toCatalogReagent(row: ReagentRow): CatalogReagent {
-  return { ...(JSON.parse(row.data) as Reagent), revision: row.revision, builtIn: row.built_in === 1, updatedAt: row.updated_at };
-}
-
-/** Writes the built-in reagents that are not in the catalog yet (first use, or a newer Pairwright). */
-export function ensureCatalogSeeded(db: SqliteDatabase): void {
-  const present = db.prepare('SELECT count(*) AS n FROM reagents WHERE built_in = 1').get() as { n: number };
-  if (present.n >= REAGENT_SEED.length) return;
-  const now = nowIso();
-  const insert = db.prepare('INSERT OR IGNORE INTO reagents (key, data, revision, built_in, created_at, updated_at) VALUES (?, ?, 1, 1, ?, ?)');
-  const history = db.prepare('INSERT OR IGNORE INTO reagent_revisions (reagent_key, revision, data, saved_at) VALUES (?, 1, ?, ?)');
-  db.transaction(() => {
-    for (const reagent of seedReagents()) {
-      const data = JSON.stringify(reagent);
-      const info = insert.run(reagent.key, data, now, now);
-      if (info.changes > 0) history.run(reagent.key, data, now);
-    }
-  })();
-}
-
-export function listCatalog(db: SqliteDatabase): CatalogReagent[] {
-  ensureCatalogSeeded(db);
-  const rows = db.prepare('SELECT key, data, revision, built_in, updated_at FROM reagents ORDER BY key').all() as ReagentRow[];
-  return rows.map(toCatalogReagent);
-}
-
-export function findCatalogReagent(db: SqliteDatabase, key: string): CatalogReagent | null {
-  ensureCatalogSeeded(db);
-  const row = db.prepare('SELECT key, data, revision, built_in, updated_at FROM reagents WHERE key = ?').get(key) as ReagentRow | undefined;
-  return row ? toCatalogReagent(row) : null;
-}
-
-export function addCatalogReagent(db: SqliteDatabase, reagent: Reagent): CatalogReagent {
-  ensureCatalogSeeded(db);
-  if (findCatalogReagent(db, reagent.key)) throw new DomainError('conflict', `a reagent with key "${reagent.key}" is already in the catalog; edit it instead`, 'key');
-  const now = nowIso();
-  const data = JSON.stringify(reagent);
-  db.transaction(() => {
-    db.prepare('INSERT INTO reagents (key, data, revision, built_in, created_at, updated_at) VALUES (?, ?, 1, 0, ?, ?)').run(reagent.key, data, now, now);
-    db.prepare('INSERT INTO reagent_revisions (reagent_key, revision, data, saved_at) VALUES (?, 1, ?, ?)').run(reagent.key, data, now);
-  })();
-  return findCatalogReagent(db, reagent.key) as CatalogReagent;
-}
-
-/** Saves a new revision of a catalog reagent; batches saved earlier keep their values. */
-export function editCatalogReagent(db: SqliteDatabase, reagent: Reagent): CatalogReagent {
-  const current = findCatalogReagent(db, reagent.key);
-  if (!current) throw new DomainError('not_found', `no reagent "${reagent.key}" in the catalog`, 'key');
-  const now = nowIso();
-  const data = JSON.stringify(reagent);
-  const revision = current.revision + 1;
-  db.transaction(() => {
-    db.prepare('UPDATE reagents SET data = ?, revision = ?, updated_at = ? WHERE key = ?').run(data, revision, now, reagent.key);
-    db.prepare('INSERT INTO reagent_revisions (reagent_key, revision, data, saved_at) VALUES (?, ?, ?, ?)').run(reagent.key, revision, data, now);
-  })();
-  return findCatalogReagent(db, reagent.key) as CatalogReagent;
-}
-
-// ── Batches ───────────────────────────────────────────────────────────────────
+import { currentRevisions } from './catalog';
 
 interface BatchRow {
   id: number;
@@ -193,11 +116,6 @@ export function listBatchSummaries(db: SqliteDatabase, filter: { campaignId?: nu
   }));
 }
 
-export function currentRevisions(db: SqliteDatabase): Map<string, number> {
-  const rows = db.prepare('SELECT key, revision FROM reagents').all() as { key: string; revision: number }[];
-  return new Map(rows.map((r) => [r.key, r.revision]));
-}
-
 export interface NewBatch {
   name: string;
   campaignId: number | null;
@@ -284,61 +202,63 @@ export function removeBatch(db: SqliteDatabase, id: number): void {
   db.prepare('DELETE FROM batches WHERE id = ?').run(id);
 }
 
-// ── Inventory ─────────────────────────────────────────────────────────────────
+// ── What other areas read of a batch ──
 
-interface InventoryRow {
+/** What the outcome area reads of a batch: its pair, target and the planned size and composition. */
+export interface BatchForOutcome {
   id: number;
-  reagent_key: string;
-  amount: number;
-  unit: InventoryUnit;
-  location: string;
-  lot: string;
-  updated_at: string;
-  data: string;
+  name: string;
+  campaignId: number | null;
+  pairId: number | null;
+  elementA: string;
+  elementB: string;
+  target: string;
+  diameterNm: number | null;
+  /** Nominal (feed) atomic fraction of B, from the saved design. */
+  nominalXB: number | null;
+  createdAt: string;
 }
 
-function toInventoryRecord(row: InventoryRow): InventoryRecord {
+interface BatchForOutcomeRow {
+  id: number;
+  name: string;
+  campaign_id: number | null;
+  pair_id: number | null;
+  element_a: string;
+  element_b: string;
+  target: string;
+  diameter_nm: unknown;
+  x_b_pct: unknown;
+  created_at: string;
+}
+
+const BATCH_FOR_OUTCOME_SELECT = `SELECT id, name, campaign_id, pair_id, element_a, element_b, target,
+  json_extract(computed, '$.diameterNm') AS diameter_nm, json_extract(computed, '$.xBPct') AS x_b_pct, created_at
+  FROM batches`;
+
+function toBatchForOutcome(row: BatchForOutcomeRow): BatchForOutcome {
   return {
     id: row.id,
-    reagentKey: row.reagent_key,
-    reagentName: (JSON.parse(row.data) as Reagent).name,
-    amount: row.amount,
-    unit: row.unit,
-    location: row.location,
-    lot: row.lot,
-    updatedAt: row.updated_at,
+    name: row.name,
+    campaignId: row.campaign_id,
+    pairId: row.pair_id,
+    elementA: row.element_a,
+    elementB: row.element_b,
+    target: row.target,
+    diameterNm: typeof row.diameter_nm === 'number' ? row.diameter_nm : null,
+    nominalXB: typeof row.x_b_pct === 'number' ? row.x_b_pct / 100 : null,
+    createdAt: row.created_at,
   };
 }
 
-const INVENTORY_SELECT = 'SELECT i.*, r.data FROM inventory i JOIN reagents r ON r.key = i.reagent_key';
-
-export function listInventory(db: SqliteDatabase): InventoryRecord[] {
-  const rows = db.prepare(`${INVENTORY_SELECT} ORDER BY json_extract(r.data, '$.name'), i.id`).all() as InventoryRow[];
-  return rows.map(toInventoryRecord);
+export function getBatchForOutcome(db: SqliteDatabase, batchId: number, field = 'batchId'): BatchForOutcome {
+  const row = db.prepare(`${BATCH_FOR_OUTCOME_SELECT} WHERE id = ?`).get(batchId) as BatchForOutcomeRow | undefined;
+  if (!row) throw new DomainError('not_found', `no batch with id ${batchId}`, field);
+  return toBatchForOutcome(row);
 }
 
-export function upsertInventory(
-  db: SqliteDatabase,
-  item: { id?: number | undefined; reagentKey: string; amount: number; unit: InventoryUnit; location: string; lot: string },
-): InventoryRecord {
-  if (!findCatalogReagent(db, item.reagentKey)) throw new DomainError('invalid_input', `no reagent "${item.reagentKey}" in the catalog`, 'reagentKey');
-  const now = nowIso();
-  let id = item.id;
-  if (id !== undefined) {
-    const info = db
-      .prepare('UPDATE inventory SET reagent_key = ?, amount = ?, unit = ?, location = ?, lot = ?, updated_at = ? WHERE id = ?')
-      .run(item.reagentKey, item.amount, item.unit, item.location, item.lot, now, id);
-    if (info.changes === 0) throw new DomainError('not_found', `no inventory entry with id ${id}`, 'id');
-  } else {
-    const info = db
-      .prepare('INSERT INTO inventory (reagent_key, amount, unit, location, lot, updated_at) VALUES (?, ?, ?, ?, ?, ?)')
-      .run(item.reagentKey, item.amount, item.unit, item.location, item.lot, now);
-    id = Number(info.lastInsertRowid);
-  }
-  return toInventoryRecord(db.prepare(`${INVENTORY_SELECT} WHERE i.id = ?`).get(id) as InventoryRow);
-}
-
-export function removeInventory(db: SqliteDatabase, id: number): void {
-  const info = db.prepare('DELETE FROM inventory WHERE id = ?').run(id);
-  if (info.changes === 0) throw new DomainError('not_found', `no inventory entry with id ${id}`, 'id');
+/** The batches of a campaign, oldest first. */
+export function listCampaignBatches(db: SqliteDatabase, campaignId: number): BatchForOutcome[] {
+  const rows = db.prepare(`${BATCH_FOR_OUTCOME_SELECT} WHERE campaign_id = ? ORDER BY id`).all(campaignId);
+  return (rows as BatchForOutcomeRow[]).map(toBatchForOutcome);
 }

@@ -1,6 +1,7 @@
 import type { Campaign } from '../../shared-model/api/campaigns';
 import { DomainError } from '../../shared-model/api/result';
 import { nowIso, type SqliteDatabase } from '../store';
+import { countPairsByCampaign } from './pairs';
 
 interface CampaignRow {
   id: number;
@@ -10,19 +11,18 @@ interface CampaignRow {
   is_demo: number;
   created_at: string;
   updated_at: string;
-  pair_count: number;
 }
 
-const SELECT = `SELECT c.*, (SELECT count(*) FROM pairs p WHERE p.campaign_id = c.id) AS pair_count FROM campaigns c`;
+const SELECT = 'SELECT c.* FROM campaigns c';
 
-function toCampaign(row: CampaignRow): Campaign {
+function toCampaign(row: CampaignRow, pairCount: number): Campaign {
   return {
     id: row.id,
     name: row.name,
     description: row.description,
     archived: row.archived === 1,
     isDemo: row.is_demo === 1,
-    pairCount: row.pair_count,
+    pairCount,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
   };
@@ -36,17 +36,18 @@ function nameTaken(db: SqliteDatabase, name: string, exceptId?: number): boolean
 export function getCampaign(db: SqliteDatabase, id: number): Campaign {
   const row = db.prepare(`${SELECT} WHERE c.id = ?`).get(id) as CampaignRow | undefined;
   if (!row) throw new DomainError('not_found', `no campaign with id ${id}`, 'id');
-  return toCampaign(row);
+  return toCampaign(row, countPairsByCampaign(db, [id]).get(id) ?? 0);
 }
 
 export function findCampaignByName(db: SqliteDatabase, name: string): Campaign | null {
   const row = db.prepare(`${SELECT} WHERE c.name = ? COLLATE NOCASE`).get(name) as CampaignRow | undefined;
-  return row ? toCampaign(row) : null;
+  return row ? toCampaign(row, countPairsByCampaign(db, [row.id]).get(row.id) ?? 0) : null;
 }
 
 export function listCampaigns(db: SqliteDatabase, includeArchived: boolean): Campaign[] {
   const rows = db.prepare(`${SELECT} ${includeArchived ? '' : 'WHERE c.archived = 0'} ORDER BY c.archived, c.updated_at DESC, c.id DESC`).all() as CampaignRow[];
-  return rows.map(toCampaign);
+  const counts = countPairsByCampaign(db, rows.map((row) => row.id));
+  return rows.map((row) => toCampaign(row, counts.get(row.id) ?? 0));
 }
 
 export function createCampaign(db: SqliteDatabase, input: { name: string; description: string; isDemo?: boolean }): Campaign {

@@ -1,6 +1,8 @@
 /**
- * Outcome tables (migration 0005_outcomes.sql): raw characterization data beside derived results and the
- * analysis version. Every import writes its parent row and all its raw rows in one transaction.
+ * Outcome tables (migration 0005_outcomes.sql, every table named `outcome_*`): raw characterization data
+ * beside derived results and the analysis version. Every import writes its parent row and all its raw rows
+ * in one transaction. The batch a record belongs to is read through the batches repository; the
+ * predictions made when it was planned through the predictions and simulation repositories.
  */
 import type {
   CompositionRecord,
@@ -10,7 +12,6 @@ import type {
   ObservedDecision,
   OutcomeFile,
   OutcomeFileKind,
-  PredictionAtPlanning,
   SizeRecord,
 } from '../../shared-model/api/outcomes';
 import { DomainError } from '../../shared-model/api/result';
@@ -18,62 +19,6 @@ import type { CompositionComparison, CompositionMeasurement } from '../../shared
 import type { LineScanAnalysis } from '../../shared-model/characterization/line-scan-fit';
 import type { SizeAnalysis } from '../../shared-model/characterization/size-analysis';
 import { nowIso, type SqliteDatabase } from '../store';
-
-/** What the outcome area reads of a batch (the batches table belongs to the batch-design area). */
-export interface BatchForOutcome {
-  id: number;
-  name: string;
-  campaignId: number | null;
-  pairId: number | null;
-  elementA: string;
-  elementB: string;
-  target: string;
-  diameterNm: number | null;
-  /** Nominal (feed) atomic fraction of B, from the saved design. */
-  nominalXB: number | null;
-  createdAt: string;
-}
-
-interface BatchRow {
-  id: number;
-  name: string;
-  campaign_id: number | null;
-  pair_id: number | null;
-  element_a: string;
-  element_b: string;
-  target: string;
-  diameter_nm: number | null;
-  x_b_pct: number | null;
-  created_at: string;
-}
-
-const BATCH_SELECT = `SELECT id, name, campaign_id, pair_id, element_a, element_b, target,
-  json_extract(computed, '$.diameterNm') AS diameter_nm, json_extract(computed, '$.xBPct') AS x_b_pct, created_at FROM batches`;
-
-function toBatch(row: BatchRow): BatchForOutcome {
-  return {
-    id: row.id,
-    name: row.name,
-    campaignId: row.campaign_id,
-    pairId: row.pair_id,
-    elementA: row.element_a,
-    elementB: row.element_b,
-    target: row.target,
-    diameterNm: typeof row.diameter_nm === 'number' ? row.diameter_nm : null,
-    nominalXB: typeof row.x_b_pct === 'number' ? row.x_b_pct / 100 : null,
-    createdAt: row.created_at,
-  };
-}
-
-export function getBatchForOutcome(db: SqliteDatabase, batchId: number, field = 'batchId'): BatchForOutcome {
-  const row = db.prepare(`${BATCH_SELECT} WHERE id = ?`).get(batchId) as BatchRow | undefined;
-  if (!row) throw new DomainError('not_found', `no batch with id ${batchId}`, field);
-  return toBatch(row);
-}
-
-export function listCampaignBatches(db: SqliteDatabase, campaignId: number): BatchForOutcome[] {
-  return (db.prepare(`${BATCH_SELECT} WHERE campaign_id = ? ORDER BY id`).all(campaignId) as BatchRow[]).map(toBatch);
-}
 
 // ---------------------------------------------------------------- sizes
 
@@ -397,55 +342,4 @@ export function removeOutcomeFile(db: SqliteDatabase, id: number): number {
   const changes = db.prepare('DELETE FROM outcome_files WHERE id = ?').run(id).changes;
   if (changes === 0) throw new DomainError('not_found', `no recorded file with id ${id}`, 'id');
   return changes;
-}
-
-// ---------------------------------------------------------------- predictions made when the batch was planned
-
-function tableExists(db: SqliteDatabase, name: string): boolean {
-  return db.prepare("SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?").get(name) !== undefined;
-}
-
-/**
- * The analytic prediction stored for the batch's pair at or before the batch was saved (the newest such);
- * without a pair link, the newest stored prediction of the same two elements before the batch. Plus the
- * newest finished simulation of the pair, if one ran.
- */
-export function predictionsAtPlanning(db: SqliteDatabase, batch: BatchForOutcome): PredictionAtPlanning[] {
-  const found: PredictionAtPlanning[] = [];
-  if (tableExists(db, 'predictions')) {
-    const byPair =
-      batch.pairId !== null
-        ? (db
-            .prepare(
-              `SELECT json_extract(result_json, '$.architecture') AS label, model_version, created_at FROM predictions
-               WHERE pair_id = ? AND created_at <= ? ORDER BY created_at DESC, id DESC LIMIT 1`,
-            )
-            .get(batch.pairId, batch.createdAt) as { label: string | null; model_version: string; created_at: string } | undefined)
-        : undefined;
-    const row =
-      byPair ??
-      (db
-        .prepare(
-          `SELECT json_extract(result_json, '$.architecture') AS label, model_version, created_at FROM predictions
-           WHERE ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?)) AND created_at <= ? ORDER BY created_at DESC, id DESC LIMIT 1`,
-        )
-        .get(batch.elementA, batch.elementB, batch.elementB, batch.elementA, batch.createdAt) as { label: string | null; model_version: string; created_at: string } | undefined);
-    if (row && typeof row.label === 'string') found.push({ label: row.label, source: 'analytic', modelVersion: row.model_version, createdAt: row.created_at });
-  }
-  if (tableExists(db, 'simulation_runs')) {
-    // The newest finished Monte Carlo run of the pair (or of the same two elements), whenever it ran.
-    type RunRow = { label: string | null; engine_version: string; created_at: string };
-    const select = `SELECT json_extract(result_json, '$.architecture') AS label, engine_version, created_at FROM simulation_runs`;
-    const byPair =
-      batch.pairId !== null
-        ? (db.prepare(`${select} WHERE pair_id = ? AND status = 'done' ORDER BY created_at DESC, id DESC LIMIT 1`).get(batch.pairId) as RunRow | undefined)
-        : undefined;
-    const run =
-      byPair ??
-      (db
-        .prepare(`${select} WHERE ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?)) AND status = 'done' ORDER BY created_at DESC, id DESC LIMIT 1`)
-        .get(batch.elementA, batch.elementB, batch.elementB, batch.elementA) as RunRow | undefined);
-    if (run && typeof run.label === 'string') found.push({ label: run.label, source: 'simulation', modelVersion: run.engine_version, createdAt: run.created_at });
-  }
-  return found;
 }

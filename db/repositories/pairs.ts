@@ -35,6 +35,18 @@ export function getPair(db: SqliteDatabase, id: number): CandidatePair {
   return toPair(row);
 }
 
+/** How many candidate pairs each of the given campaigns holds (campaigns without pairs are left out). */
+export function countPairsByCampaign(db: SqliteDatabase, campaignIds: readonly number[]): Map<number, number> {
+  if (campaignIds.length === 0) return new Map();
+  const rows = db
+    .prepare(
+      `SELECT campaign_id, count(*) AS n FROM pairs WHERE campaign_id IN (SELECT value FROM json_each(?))
+       GROUP BY campaign_id`,
+    )
+    .all(JSON.stringify(campaignIds)) as { campaign_id: number; n: number }[];
+  return new Map(rows.map((row) => [row.campaign_id, row.n]));
+}
+
 export function listPairs(db: SqliteDatabase, campaignId: number): CandidatePair[] {
   getCampaign(db, campaignId);
   const rows = db.prepare('SELECT * FROM pairs WHERE campaign_id = ? ORDER BY id').all(campaignId) as PairRow[];

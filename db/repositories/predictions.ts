@@ -76,3 +76,48 @@ export function listPredictionsForPair(db: SqliteDatabase, pairId: number): Save
   const rows = db.prepare('SELECT * FROM predictions WHERE pair_id = ? ORDER BY created_at DESC, id DESC').all(pairId) as PredictionRow[];
   return rows.map(toSaved);
 }
+
+/** The architecture label of a stored prediction, with the model version and when it was made. */
+export interface PredictedLabel {
+  label: string;
+  modelVersion: string;
+  createdAt: string;
+}
+
+interface LabelRow {
+  label: unknown;
+  model_version: string;
+  created_at: string;
+}
+
+const LABEL_SELECT = `SELECT json_extract(result_json, '$.architecture') AS label, model_version, created_at
+  FROM predictions`;
+
+const toLabel = (row: LabelRow | undefined): PredictedLabel | null =>
+  row && typeof row.label === 'string'
+    ? { label: row.label, modelVersion: row.model_version, createdAt: row.created_at }
+    : null;
+
+/**
+ * The newest prediction stored for a pair at or before `madeBy` (an ISO time); without a pair link (or
+ * when the pair has none), the newest one of the same two elements in either order.
+ */
+export function latestPredictionBefore(
+  db: SqliteDatabase,
+  query: { pairId: number | null; elementA: string; elementB: string; madeBy: string },
+): PredictedLabel | null {
+  const byPair =
+    query.pairId !== null
+      ? (db
+          .prepare(`${LABEL_SELECT} WHERE pair_id = ? AND created_at <= ? ORDER BY created_at DESC, id DESC LIMIT 1`)
+          .get(query.pairId, query.madeBy) as LabelRow | undefined)
+      : undefined;
+  if (byPair) return toLabel(byPair);
+  const bySymbols = db
+    .prepare(
+      `${LABEL_SELECT} WHERE ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?))
+       AND created_at <= ? ORDER BY created_at DESC, id DESC LIMIT 1`,
+    )
+    .get(query.elementA, query.elementB, query.elementB, query.elementA, query.madeBy) as LabelRow | undefined;
+  return toLabel(bySymbols);
+}

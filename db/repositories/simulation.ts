@@ -159,3 +159,36 @@ export function expireSilentRuns(db: SqliteDatabase, staleBeforeIso: string): nu
     .run('interrupted: the Pairwright process running it closed before the run finished; start it again', nowIso(), staleBeforeIso);
   return info.changes;
 }
+
+/** The architecture a finished run found, with the engine version and when the run was queued. */
+export interface SimulatedLabel {
+  label: string;
+  engineVersion: string;
+  createdAt: string;
+}
+
+/**
+ * The newest finished run of a pair, whenever it ran; without a pair link (or when the pair has none),
+ * the newest finished run of the same two elements in either order.
+ */
+export function latestFinishedRun(
+  db: SqliteDatabase,
+  query: { pairId: number | null; elementA: string; elementB: string },
+): SimulatedLabel | null {
+  type LabelRow = { label: unknown; engine_version: string; created_at: string };
+  const select = `SELECT json_extract(result_json, '$.architecture') AS label, engine_version, created_at
+    FROM simulation_runs`;
+  const newest = "AND status = 'done' ORDER BY created_at DESC, id DESC LIMIT 1";
+  const byPair =
+    query.pairId !== null
+      ? (db.prepare(`${select} WHERE pair_id = ? ${newest}`).get(query.pairId) as LabelRow | undefined)
+      : undefined;
+  const row =
+    byPair ??
+    (db
+      .prepare(`${select} WHERE ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?)) ${newest}`)
+      .get(query.elementA, query.elementB, query.elementB, query.elementA) as LabelRow | undefined);
+  return row && typeof row.label === 'string'
+    ? { label: row.label, engineVersion: row.engine_version, createdAt: row.created_at }
+    : null;
+}

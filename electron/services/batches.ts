@@ -6,21 +6,16 @@
 import { getCampaign } from '../../db/repositories/campaigns';
 import { getPair } from '../../db/repositories/pairs';
 import {
-  addCatalogReagent,
-  currentRevisions,
-  editCatalogReagent,
   getBatch,
   insertBatch,
   listBatchSummaries,
-  listCatalog,
-  listInventory,
   removeBatch,
-  removeInventory,
   updateBatchRecords,
   updateBatchStatus,
-  upsertInventory,
   type StoredBatch,
 } from '../../db/repositories/batches';
+import { addCatalogReagent, currentRevisions, editCatalogReagent, listCatalog } from '../../db/repositories/catalog';
+import { listInventory, removeInventory, upsertInventory } from '../../db/repositories/inventory';
 import { nowIso, type SqliteDatabase } from '../../db/store';
 import { statusMoveAllowed, type batchOperations, type CatalogChange, type SavedBatch } from '../../shared-model/api/batches';
 import { DomainError, invalid } from '../../shared-model/api/result';

@@ -3,9 +3,9 @@
  * data beside derived results (validate → analyse → store in one transaction → answer). A failed import
  * (bad CSV row, too few particles, a scan shorter than the particle) throws before anything is written.
  */
+import { getBatchForOutcome, listCampaignBatches, type BatchForOutcome } from '../../db/repositories/batches';
 import {
   addOutcomeFile,
-  getBatchForOutcome,
   getObservation,
   getLineScan,
   insertComposition,
@@ -13,24 +13,32 @@ import {
   insertSizeImport,
   lineScanElements,
   lineScanPoints,
-  listCampaignBatches,
   listCompositions,
   listLineScans,
   listOutcomeFiles,
   listSizeImports,
-  predictionsAtPlanning,
   removeLineScan,
   removeOutcomeFile,
   removeSizeImport,
   setObservation,
   setOutcomeNotes,
   updateLineScanFit,
-  type BatchForOutcome,
 } from '../../db/repositories/outcomes';
 import { getCampaign } from '../../db/repositories/campaigns';
+import { latestPredictionBefore } from '../../db/repositories/predictions';
+import { latestFinishedRun } from '../../db/repositories/simulation';
 import type { SqliteDatabase } from '../../db/store';
 import { formatArchitecture, parseArchitecture } from '../../shared-model/architecture/labels';
-import type { Agreement, BatchOutcome, CampaignConfusion, OutcomeRow, OutcomeSuggestion, outcomeAnalysisOperations, outcomeOperations } from '../../shared-model/api/outcomes';
+import type {
+  Agreement,
+  BatchOutcome,
+  CampaignConfusion,
+  OutcomeRow,
+  OutcomeSuggestion,
+  outcomeAnalysisOperations,
+  outcomeOperations,
+  PredictionAtPlanning,
+} from '../../shared-model/api/outcomes';
 import { invalid } from '../../shared-model/api/result';
 import { compareComposition } from '../../shared-model/characterization/composition';
 import { confusionMatrix, labelAgreement } from '../../shared-model/characterization/confusion';
@@ -50,6 +58,26 @@ function suggestionFor(db: SqliteDatabase, batchId: number): OutcomeSuggestion |
   const latest = scans[scans.length - 1];
   if (!latest) return null;
   return { label: latest.analysis.suggestion.label, reason: latest.analysis.suggestion.reason, lineScanId: latest.id };
+}
+
+/**
+ * What was predicted for a batch when it was planned: the analytic prediction stored for its pair at or
+ * before the batch was saved (else the newest one of the same two elements before it), plus the newest
+ * finished simulation of the pair, whenever it ran.
+ */
+export function predictionsAtPlanning(db: SqliteDatabase, batch: BatchForOutcome): PredictionAtPlanning[] {
+  const found: PredictionAtPlanning[] = [];
+  const pair = { pairId: batch.pairId, elementA: batch.elementA, elementB: batch.elementB };
+  const analytic = latestPredictionBefore(db, { ...pair, madeBy: batch.createdAt });
+  if (analytic) {
+    const { label, modelVersion, createdAt } = analytic;
+    found.push({ label, source: 'analytic', modelVersion, createdAt });
+  }
+  const run = latestFinishedRun(db, pair);
+  if (run) {
+    found.push({ label: run.label, source: 'simulation', modelVersion: run.engineVersion, createdAt: run.createdAt });
+  }
+  return found;
 }
 
 export function batchOutcome(db: SqliteDatabase, batchId: number): BatchOutcome {

@@ -1,17 +1,14 @@
 /** The batch-design tables on a real SQLite file: catalog seeding and revisions, batches, lineage, inventory. */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { getBatch, insertBatch, removeBatch } from '../../db/repositories/batches';
 import {
   addCatalogReagent,
   editCatalogReagent,
   ensureCatalogSeeded,
   findCatalogReagent,
-  getBatch,
-  insertBatch,
   listCatalog,
-  listInventory,
-  removeBatch,
-  upsertInventory,
-} from '../../db/repositories/batches';
+} from '../../db/repositories/catalog';
+import { listInventory, upsertInventory } from '../../db/repositories/inventory';
 import { openStore, type Store } from '../../db/store';
 import { designBatch } from '../../shared-model/recipes/design';
 import { batchDesignInputSchema } from '../../shared-model/recipes/design-input';
