@@ -4,7 +4,7 @@
  * file is copied (SQLite `VACUUM INTO`, a consistent snapshot) into `backups/` beside it.
  */
 import type Database from 'better-sqlite3';
-import { existsSync, mkdirSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { chmodSync, closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -44,9 +44,12 @@ export function loadMigrations(dir: string = defaultMigrationsDir()): Migration[
 function backupBeforeMigrating(db: Database.Database, dbPath: string, fromVersion: number): string | null {
   if (fromVersion === 0 || !existsSync(dbPath) || statSync(dbPath).size === 0) return null;
   const dir = join(dirname(dbPath), 'backups');
-  mkdirSync(dir, { recursive: true });
+  mkdirSync(dir, { recursive: true, mode: 0o700 });
+  chmodSync(dir, 0o700);
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const target = join(dir, `${basename(dbPath, '.sqlite')}-v${fromVersion}-${stamp}.sqlite`);
+  // Owner-only from the start: VACUUM INTO accepts an existing empty file.
+  closeSync(openSync(target, 'wx', 0o600));
   // VACUUM INTO writes a consistent snapshot even while other connections use the file.
   db.prepare('VACUUM INTO ?').run(target);
   return target;

@@ -1,4 +1,8 @@
-/** Starts the browser host in-process on a temporary store (a real SQLite file) for end-to-end tests. */
+/**
+ * Starts the browser host in-process on a temporary store (a real SQLite file) for end-to-end tests.
+ * `host.url` is the host's first one-time login address: a browser page that opens it is logged in (the
+ * session cookie stays with that browser context; opening the address again there just redirects).
+ */
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';

@@ -1,7 +1,7 @@
 /**
  * The renderer's only way to data: `call(operation, input)`. In the Electron window it goes through the
- * preload bridge (window.pairwright), in a browser tab through the host's `POST /api/<operation>` with the
- * per-start token the host wrote into the page. Types come from the one contract in shared-model/api.
+ * preload bridge (window.pairwright), in a browser tab through the host's `POST /api/<operation>`; the browser
+ * sends the host's HttpOnly session cookie (set when the login address printed in the terminal was opened). Types come from the one contract in shared-model/api.
  */
 import type { OperationInput, OperationName, OperationOutput } from '../../../shared-model/api/contract';
 import type { ApiResult } from '../../../shared-model/api/result';
@@ -13,10 +13,6 @@ declare global {
     pairwright?: Bridge;
     pairwrightDesktop?: { printToPdf(name: string): Promise<ApiResult<{ saved: string | null }>> };
   }
-}
-
-function hostToken(): string | null {
-  return document.querySelector('meta[name="pairwright-token"]')?.getAttribute('content') ?? null;
 }
 
 export type Transport = 'desktop' | 'browser';
@@ -32,17 +28,20 @@ export async function call<Name extends OperationName>(name: Name, input: Operat
     if (!operation) return { ok: false, error: { code: 'unknown_operation', message: `operation ${name} is not exposed by this window` } };
     return (await operation(input)) as ApiResult<OperationOutput<Name>>;
   }
-  const token = hostToken();
-  if (!token) return { ok: false, error: { code: 'forbidden', message: 'no session token in this page; open the address printed by "npm run serve"' } };
   let response: Response;
   try {
     response = await fetch(`./api/${encodeURIComponent(name)}`, {
       method: 'POST',
-      headers: { 'content-type': 'application/json', 'x-pairwright-token': token },
+      credentials: 'same-origin',
+      headers: { 'content-type': 'application/json', 'x-pairwright-call': '1' },
       body: JSON.stringify(input ?? {}),
     });
   } catch (error) {
     return { ok: false, error: { code: 'internal', message: `the Pairwright host did not answer (${String(error)}); is "npm run serve" still running?` } };
+  }
+  if (response.status === 401) {
+    const message = 'this browser is not logged in to the Pairwright host; open the address printed in its terminal';
+    return { ok: false, error: { code: 'forbidden', message } };
   }
   try {
     return (await response.json()) as ApiResult<OperationOutput<Name>>;
