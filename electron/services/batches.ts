@@ -20,7 +20,7 @@ import { nowIso, type SqliteDatabase } from '../../db/store';
 import { statusMoveAllowed, type batchOperations, type CatalogChange, type SavedBatch } from '../../shared-model/api/batches';
 import { DomainError, invalid } from '../../shared-model/api/result';
 import { predictPair } from '../../shared-model/prediction/predict';
-import { designBatch, type BatchDesign } from '../../shared-model/recipes/design';
+import { designBatch, type BatchDesign, type SurfaceAnswer, type SurfaceQuestion } from '../../shared-model/recipes/design';
 import type { BatchDesignInput, StockRecord } from '../../shared-model/recipes/design-input';
 import { seedBatchMetal, seedsFromBatch } from '../../shared-model/recipes/lineage';
 import { prepareReagent } from '../../shared-model/recipes/reagent';
@@ -41,19 +41,19 @@ export function resolveLineage(db: SqliteDatabase, input: BatchDesignInput): Bat
 
 /**
  * Where the thermodynamic model (shared-model/prediction) puts the surface element for this pair at the
- * design's composition, size and temperature; undefined when there is nothing to compare (one metal) or
+ * designed composition, size and temperature; undefined when there is nothing to compare (one metal) or
  * the model cannot answer for this pair (the reason is returned for the view).
  */
-export function thermodynamicSurface(design: BatchDesign): { element: string | null | undefined; note: string | null } {
-  if (design.architecture === 'single-metal') return { element: undefined, note: null };
-  const xB = design.xBPct / 100;
+export function thermodynamicSurface(particle: SurfaceQuestion): SurfaceAnswer {
+  if (particle.architecture === 'single-metal') return { element: undefined, note: null };
+  const { xB } = particle;
   if (!(xB > 0 && xB < 1)) return { element: undefined, note: null };
   try {
-    const prediction = predictPair(design.elementA, design.elementB, {
+    const prediction = predictPair(particle.elementA, particle.elementB, {
       xB,
-      diameterNm: design.diameterNm,
+      diameterNm: particle.diameterNm,
       shape: 'sphere',
-      temperatureK: design.temperatureC + 273.15,
+      temperatureK: particle.temperatureC + 273.15,
     });
     return { element: prediction.surfaceElement, note: null };
   } catch (error) {
@@ -62,17 +62,11 @@ export function thermodynamicSurface(design: BatchDesign): { element: string | n
   }
 }
 
+/** Resolves the lineage and designs the batch once, the thermodynamic prediction asked on the way. */
 export function computeDesign(db: SqliteDatabase, rawInput: BatchDesignInput): { input: BatchDesignInput; design: BatchDesign } {
   const input = resolveLineage(db, rawInput);
-  const catalog = listCatalog(db);
-  const now = nowIso();
-  const first = designBatch(input, { catalog, now });
-  const thermo = thermodynamicSurface(first);
-  if (thermo.element === undefined) {
-    if (thermo.note) first.checks.push({ kind: 'kinetics-vs-thermodynamics', severity: 'info', message: thermo.note });
-    return { input, design: first };
-  }
-  return { input, design: designBatch(input, { catalog, now, thermodynamicSurfaceElement: thermo.element }) };
+  const design = designBatch(input, { catalog: listCatalog(db), now: nowIso(), thermodynamicSurface });
+  return { input, design };
 }
 
 function catalogChanges(db: SqliteDatabase, batch: StoredBatch): CatalogChange[] {

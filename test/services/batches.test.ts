@@ -4,6 +4,7 @@ import { openStore, type Store } from '../../db/store';
 import type { ServiceContext } from '../../electron/services/context';
 import { dispatch } from '../../electron/services/dispatch';
 import type { CatalogReagent, SavedBatch } from '../../shared-model/api/batches';
+import { predictPair } from '../../shared-model/prediction/predict';
 import type { BatchDesign } from '../../shared-model/recipes/design';
 import type { ReagentList } from '../../shared-model/recipes/reagent-list';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
@@ -61,6 +62,9 @@ describe('designing and saving batches', () => {
     expect(design.thermodynamicSurfaceElement === null || ['Pt', 'Ni'].includes(design.thermodynamicSurfaceElement as string)).toBe(true);
     expect(design.checks.some((c) => c.kind === 'kinetics-vs-thermodynamics' && c.message.startsWith('No thermodynamic prediction'))).toBe(false);
     expect(design.latticeNm.Pt).toBeCloseTo(0.39242, 4);
+    // the same answer as the prediction model at the designed particle (x_B 0.25, 4 nm, 25 °C)
+    const prediction = predictPair('Pt', 'Ni', { xB: 0.25, diameterNm: 4, shape: 'sphere', temperatureK: 298.15 });
+    expect(design.thermodynamicSurfaceElement).toBe(prediction.surfaceElement);
   });
 
   it('refuses bad input naming the field and saves nothing', async () => {

@@ -48,3 +48,34 @@ export const auSeeds: BatchDesignRequest = {
   precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
   reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
 };
+
+/** Au shell (2 monolayers) grown with ascorbate on 20 nm Ag seeds, 0.5 mM Ag × 5 mL: the galvanic-replacement case. */
+export const auOnAg: BatchDesignRequest = {
+  elementA: 'Au',
+  elementB: 'Ag',
+  target: 'Ag@Au',
+  route: 'seed-mediated',
+  size: { kind: 'core-shell', shellMonolayers: 2 },
+  batchVolumeMl: 20,
+  seeds: { metal: 'Ag', diameterNm: 20, metalMm: 0.5, volumeMl: 5 },
+  precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 10 }],
+  reducer: { reagentKey: 'ascorbic-acid', excess: 4, stockMm: 100 },
+  capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
+};
+
+/** 5 nm Pt50Ni50 alloy in 20 mL ethylene glycol (solvent and reducer), PVP 10 mol/mol: the polyol case. */
+export const ptNiPolyol: BatchDesignRequest = {
+  elementA: 'Pt',
+  elementB: 'Ni',
+  target: 'alloy',
+  route: 'polyol',
+  size: { kind: 'alloy', diameterNm: 5, xBPct: 50 },
+  amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
+  batchVolumeMl: 20,
+  precursors: [
+    { element: 'Pt', reagentKey: 'pt-acac2' },
+    { element: 'Ni', reagentKey: 'ni-acetate-4h2o' },
+  ],
+  solvent: { reagentKey: 'ethylene-glycol', volumeMl: 20 },
+  capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
+};

@@ -251,6 +251,31 @@ describe('other routes', () => {
   });
 });
 
+describe('the thermodynamic prediction, asked once about the designed particle', () => {
+  it('the caller is asked once with the composition as a fraction, the size and the route temperature', () => {
+    const asked: unknown[] = [];
+    const d = design(ptNi, {
+      thermodynamicSurface: (particle) => {
+        asked.push(particle);
+        return { element: 'Ni', note: null };
+      },
+    });
+    const particle = { elementA: 'Pt', elementB: 'Ni', architecture: 'alloy', xB: 0.25, diameterNm: 4, temperatureC: 25 };
+    expect(asked).toEqual([particle]);
+    expect(d.thermodynamicSurfaceElement).toBe('Ni');
+    expect(d.checks.find((c) => c.kind === 'kinetics-vs-thermodynamics')?.message).toContain('agree: Pt in the core');
+  });
+
+  it('no answer: the reason follows the missing-prediction line', () => {
+    const d = design(ptNi, { thermodynamicSurface: () => ({ element: undefined, note: 'unavailable: no data' }) });
+    const versus = d.checks.filter((c) => c.kind === 'kinetics-vs-thermodynamics').map((c) => c.message);
+    expect(versus).toEqual([
+      'No thermodynamic prediction was available to compare with the kinetic expectation.',
+      'unavailable: no data',
+    ]);
+  });
+});
+
 describe('bad input names the field', () => {
   it.each<[string, BatchDesignRequest, string]>([
     ['composition 0 at.%', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xBPct: 0 } }, 'size.xBPct'],
