@@ -4,14 +4,14 @@
  * and the element property table with its sources.
  */
 import { z } from 'zod';
-import { DEFAULT_THRESHOLDS, type ClassificationThresholds } from '../architecture/classify';
+import type { ClassificationThresholds } from '../architecture/classify';
 import type { ColumnSource, ElementRecord } from '../elements/element-table';
 import { METAL_SYMBOLS } from '../elements/symbols';
 import { PARTICLE_SHAPES } from '../geometry/particle-sites';
 import type { Isotherm } from '../prediction/isotherm';
 import { ISOTHERM_SWEEPS } from '../prediction/isotherm';
 import type { Prediction } from '../prediction/predict';
-import { STRAIN_RULES } from '../prediction/predict';
+import { PREDICTION_DEFAULTS, STRAIN_RULES } from '../prediction/conditions';
 import { parseRankTarget, type RankTarget } from '../prediction/rank';
 import { SURFACE_FACETS } from '../prediction/segregation';
 import { DomainError } from './result';
@@ -40,7 +40,7 @@ export const thresholdsSchema = z
     intermetallicUnlikeRatio: thresholdValue,
   })
   .partial()
-  .transform((t): ClassificationThresholds => ({ ...DEFAULT_THRESHOLDS, ...t }))
+  .transform((t): ClassificationThresholds => ({ ...PREDICTION_DEFAULTS.thresholds, ...t }))
   .superRefine((t, ctx) => {
     if (t.enrichedAlloyEnrichment >= t.coreShellEnrichment) {
       ctx.addIssue({ code: 'custom', path: ['enrichedAlloyEnrichment'], message: 'must be below coreShellEnrichment' });
@@ -50,16 +50,15 @@ export const thresholdsSchema = z
     }
   });
 
-export const DEFAULT_CONDITIONS = Object.freeze({ xB: 0.5, diameterNm: 3, shape: 'cuboctahedron' as const, temperatureK: 600 });
-
+/** The one validator of prediction conditions from outside; defaults from PREDICTION_DEFAULTS (model). */
 export const conditionsSchema = z.object({
   xB: xBSchema,
   diameterNm: diameterNmSchema,
-  shape: shapeSchema.default('cuboctahedron'),
+  shape: shapeSchema.default(PREDICTION_DEFAULTS.shape),
   temperatureK: temperatureKSchema,
-  facet: facetSchema.default('111'),
-  strainRule: strainRuleSchema.default('oversized solute'),
-  thresholds: thresholdsSchema.default(() => ({ ...DEFAULT_THRESHOLDS })),
+  facet: facetSchema.default(PREDICTION_DEFAULTS.facet),
+  strainRule: strainRuleSchema.default(PREDICTION_DEFAULTS.strainRule),
+  thresholds: thresholdsSchema.default(() => ({ ...PREDICTION_DEFAULTS.thresholds })),
 });
 export type ConditionsInput = z.input<typeof conditionsSchema>;
 

@@ -4,7 +4,7 @@
  * prediction (same chain as `predictPair`), reduced to the numbers a chart needs.
  */
 import { invalid } from '../api/result';
-import { checkConditions, pairContext, predictWithContext, type PredictionConditions } from './predict';
+import { resolveConditions, pairContext, predictWithContext, type PredictionConditions, type ResolvedConditions } from './predict';
 
 export const ISOTHERM_SWEEPS = ['xB', 'diameter', 'temperature'] as const;
 export type IsothermSweep = (typeof ISOTHERM_SWEEPS)[number];
@@ -31,7 +31,7 @@ export interface Isotherm {
   points: IsothermPoint[];
 }
 
-function sweepValues(sweep: IsothermSweep, points: number, around: Required<PredictionConditions>): number[] {
+function sweepValues(sweep: IsothermSweep, points: number, around: ResolvedConditions): number[] {
   const values: number[] = [];
   switch (sweep) {
     case 'xB':
@@ -58,7 +58,7 @@ function sweepValues(sweep: IsothermSweep, points: number, around: Required<Pred
 export function computeIsotherm(elementA: string, elementB: string, conditions: PredictionConditions, sweep: IsothermSweep, points = 41): Isotherm {
   if (!(ISOTHERM_SWEEPS as readonly string[]).includes(sweep)) throw invalid('sweep', `sweep must be one of ${ISOTHERM_SWEEPS.join(', ')}, got "${String(sweep)}"`);
   if (!Number.isInteger(points) || points < 3 || points > 400) throw invalid('points', `points must be a whole number from 3 to 400, got ${String(points)}`);
-  const base = checkConditions(conditions);
+  const base = resolveConditions(conditions);
   const ctx = pairContext(elementA, elementB);
   const out: IsothermPoint[] = [];
   for (const value of sweepValues(sweep, points, base)) {

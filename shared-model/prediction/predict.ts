@@ -14,18 +14,18 @@
  * miscibility gap the particle is taken as two coexisting phases with binodal compositions x_b and 1 − x_b,
  * ratio x_b(1 − x_b)/(x(1 − x)); outside it the quasi-chemical value.
  */
-import { DEFAULT_THRESHOLDS, classifyArchitecture, type ClassificationThresholds } from '../architecture/classify';
+import { classifyArchitecture, type ClassificationThresholds } from '../architecture/classify';
 import type { ArchitectureKind } from '../architecture/labels';
 import { invalid } from '../api/result';
 import { getElement, recordProperty, type ElementRecord } from '../elements/element-table';
 import { isMetalSymbol } from '../elements/symbols';
-import { particleSiteCounts, PARTICLE_SHAPES, type ParticleShape, type ParticleSiteCounts } from '../geometry/particle-sites';
+import { particleSiteCounts, type ParticleShape, type ParticleSiteCounts } from '../geometry/particle-sites';
+import { resolveConditions, type PredictionConditions, type ResolvedConditions, type StrainRule } from './conditions';
 import { miedemaFromConstants, miedemaPairConstants, type MiedemaPairConstants } from './miedema';
 import {
   BOLTZMANN_EV_PER_K,
   FCC_COORDINATION,
   KJ_PER_MOL_PER_EV,
-  SURFACE_FACETS,
   friedelStrainEnergyEv,
   negateTerms,
   segregationCoefficients,
@@ -36,29 +36,11 @@ import {
 } from './segregation';
 import { solveSurfaceEquilibrium } from './surface-equilibrium';
 
-export const STRAIN_RULES = ['oversized solute', 'any solute'] as const;
-export type StrainRule = (typeof STRAIN_RULES)[number];
+export { PREDICTION_DEFAULTS, STRAIN_RULES, resolveConditions } from './conditions';
+export type { PredictionConditions, ResolvedConditions, StrainRule } from './conditions';
 
 /** Version of the whole prediction chain; stored with every saved prediction. */
 export const MODEL_VERSION = 'segregation-1.0';
-
-export interface PredictionConditions {
-  /** Overall atomic fraction of B, 0 < xB < 1. */
-  xB: number;
-  diameterNm: number;
-  shape: ParticleShape;
-  /** Synthesis or annealing temperature, K. */
-  temperatureK: number;
-  /** Facet whose coordination and area per atom enter the segregation enthalpy; (111) by default. */
-  facet?: SurfaceFacet;
-  /**
-   * Which solutes gain the Friedel strain relief at the surface: 'oversized solute' (default: only a solute
-   * larger than its host; a clean surface is under tensile stress and offers room to larger atoms only) or
-   * 'any solute' (Wynblatt & Ku's original, which also pushes smaller solutes out).
-   */
-  strainRule?: StrainRule;
-  thresholds?: ClassificationThresholds;
-}
 
 /** Terms of the segregation enthalpy, eV; negative values favour the named element at the surface. */
 export interface PredictionTerms {
@@ -197,35 +179,6 @@ export function pairContext(elementA: string, elementB: string): PairContext {
   };
 }
 
-/** Validates conditions; throws a DomainError naming the field. Returns them with defaults filled. */
-export function checkConditions(conditions: PredictionConditions): Required<PredictionConditions> {
-  if (conditions === null || typeof conditions !== 'object') throw invalid('conditions', 'conditions must be an object');
-  const { xB, diameterNm, temperatureK, shape } = conditions;
-  if (typeof xB !== 'number' || !Number.isFinite(xB) || xB <= 0 || xB >= 1) {
-    throw invalid('xB', `xB must be a number strictly between 0 and 1, got ${String(xB)}`);
-  }
-  if (typeof diameterNm !== 'number' || !Number.isFinite(diameterNm) || diameterNm <= 0) {
-    throw invalid('diameterNm', `diameterNm must be a positive number, got ${String(diameterNm)}`);
-  }
-  if (typeof temperatureK !== 'number' || !Number.isFinite(temperatureK) || temperatureK <= 0) {
-    throw invalid('temperatureK', `temperatureK must be a positive number, got ${String(temperatureK)}`);
-  }
-  if (typeof shape !== 'string' || !(PARTICLE_SHAPES as readonly string[]).includes(shape)) {
-    throw invalid('shape', `shape must be one of ${PARTICLE_SHAPES.join(', ')}, got "${String(shape)}"`);
-  }
-  const facet = conditions.facet ?? '111';
-  if (!(SURFACE_FACETS as readonly string[]).includes(facet)) throw invalid('facet', `facet must be "111" or "100", got "${String(facet)}"`);
-  const strainRule = conditions.strainRule ?? 'oversized solute';
-  if (!(STRAIN_RULES as readonly string[]).includes(strainRule)) {
-    throw invalid('strainRule', `strainRule must be one of ${STRAIN_RULES.join(', ')}, got "${String(strainRule)}"`);
-  }
-  const thresholds = conditions.thresholds ?? DEFAULT_THRESHOLDS;
-  for (const [key, value] of Object.entries(thresholds)) {
-    if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) throw invalid(`thresholds.${key}`, `threshold ${key} must be a positive number, got ${String(value)}`);
-  }
-  return { xB, diameterNm, shape, temperatureK, facet, strainRule, thresholds };
-}
-
 /** Regular-solution binodal x_b < ½ at τ = Zω/kT > 2: ln((1 − x)/x) = τ(1 − 2x). */
 export function regularSolutionBinodal(tau: number): number {
   if (!(tau > 2)) return 0.5;
@@ -321,7 +274,7 @@ interface CompositionPart extends Pick<PredictionCore, 'kT' | 'mixing' | 'omegaC
   gap: boolean;
 }
 
-function compositionPart(ctx: PairContext, c: Required<PredictionConditions>): CompositionPart {
+function compositionPart(ctx: PairContext, c: ResolvedConditions): CompositionPart {
   const last = ctx.lastComposition;
   if (last !== null && last.xB === c.xB && last.temperatureK === c.temperatureK && last.facet === c.facet && last.strainRule === c.strainRule) return last;
   const xB = c.xB;
@@ -362,7 +315,7 @@ function compositionPart(ctx: PairContext, c: Required<PredictionConditions>): C
 }
 
 /** The numbers of a prediction (no labels, strings or term breakdown): the hot path of ranking. */
-export function predictCore(ctx: PairContext, c: Required<PredictionConditions>): PredictionCore {
+export function predictCore(ctx: PairContext, c: ResolvedConditions): PredictionCore {
   const part = compositionPart(ctx, c);
   const k = part.k;
   const sites = particleSiteCounts(c.diameterNm, part.latticeNm, c.shape);
@@ -386,11 +339,11 @@ export function predictCore(ctx: PairContext, c: Required<PredictionConditions>)
  * Prediction from a precomputed pair context and already-checked conditions (the fast path used by
  * ranking and isotherms). Use `predictPair` for user input.
  */
-export function predictWithContext(ctx: PairContext, c: Required<PredictionConditions>): Prediction {
+export function predictWithContext(ctx: PairContext, c: ResolvedConditions): Prediction {
   return predictionFromCore(ctx, c, predictCore(ctx, c));
 }
 
-export function predictionFromCore(ctx: PairContext, c: Required<PredictionConditions>, core: PredictionCore): Prediction {
+export function predictionFromCore(ctx: PairContext, c: ResolvedConditions, core: PredictionCore): Prediction {
   const { kT, mixing, latticeNm, strain, k, sites } = core;
   const xB = c.xB;
   const solved = { surfaceXB: core.surfaceXB, coreXB: core.coreXB };
@@ -502,6 +455,6 @@ function kArgs(ctx: PairContext, omegaEv: number, facet: SurfaceFacet, strain: {
 export function predictPair(elementA: string, elementB: string, conditions: PredictionConditions): Prediction {
   if (typeof elementA !== 'string' || !isMetalSymbol(elementA)) getElement(String(elementA), 'elementA');
   if (typeof elementB !== 'string' || !isMetalSymbol(elementB)) getElement(String(elementB), 'elementB');
-  const checked = checkConditions(conditions);
+  const checked = resolveConditions(conditions);
   return predictWithContext(pairContext(elementA, elementB), checked);
 }

@@ -13,7 +13,7 @@ import { invalid } from '../api/result';
 import { getElement } from '../elements/element-table';
 import { METAL_SYMBOLS, isMetalSymbol } from '../elements/symbols';
 import { surfaceEnrichment } from '../architecture/classify';
-import { checkConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions, type PredictionCore } from './predict';
+import { resolveConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions, type ResolvedConditions, type PredictionCore } from './predict';
 
 export type RankTarget =
   | { kind: 'alloy' }
@@ -37,7 +37,7 @@ class RankedRow implements RankedPair {
     readonly score: number,
     readonly pair: string,
     private readonly ctx: PairContext,
-    private readonly conditions: Required<PredictionConditions>,
+    private readonly conditions: ResolvedConditions,
     private readonly core: PredictionCore,
   ) {}
 
@@ -124,7 +124,7 @@ export function pairContexts(elements: readonly string[]): PairContext[] {
  */
 export function rankContexts(contexts: readonly PairContext[], target: RankTarget, conditions: PredictionConditions): RankedPair[] {
   if (target.kind === 'core@shell' && target.shellElement !== undefined) getElement(target.shellElement, 'target');
-  const checked = checkConditions(conditions);
+  const checked = resolveConditions(conditions);
   const rows: RankedRow[] = new Array(contexts.length);
   for (let i = 0; i < contexts.length; i++) {
     const ctx = contexts[i] as PairContext;

@@ -3,6 +3,7 @@
  * the segregation prediction from the command line (same services as the app).
  */
 import type { ConditionsInput } from '../../../shared-model/api/prediction';
+import { PREDICTION_DEFAULTS } from '../../../shared-model/prediction/conditions';
 import type { Prediction } from '../../../shared-model/prediction/predict';
 import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
 import { formatTable } from '../table';
@@ -21,9 +22,9 @@ function conditionsFrom(args: ParsedArgs): ConditionsInput {
   const facet = optionalString(args, 'facet');
   const strainRule = optionalString(args, 'strain-rule');
   return {
-    xB: optionalNumber(args, 'xB') ?? 0.5,
-    diameterNm: optionalNumber(args, 'diameter-nm') ?? 3,
-    temperatureK: optionalNumber(args, 'temperature-k') ?? 600,
+    xB: optionalNumber(args, 'xB') ?? PREDICTION_DEFAULTS.xB,
+    diameterNm: optionalNumber(args, 'diameter-nm') ?? PREDICTION_DEFAULTS.diameterNm,
+    temperatureK: optionalNumber(args, 'temperature-k') ?? PREDICTION_DEFAULTS.temperatureK,
     ...(shape !== undefined ? { shape: shape as ConditionsInput['shape'] } : {}),
     ...(facet !== undefined ? { facet: facet as ConditionsInput['facet'] } : {}),
     ...(strainRule !== undefined ? { strainRule: strainRule as ConditionsInput['strainRule'] } : {}),

@@ -3,7 +3,8 @@ import { DomainError } from '../../../shared-model/api/result';
 import { DEFAULT_THRESHOLDS } from '../../../shared-model/architecture/classify';
 import { elementProperty } from '../../../shared-model/elements/element-table';
 import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
-import { MODEL_VERSION, checkConditions, pairContext, predictCore, predictPair, regularSolutionBinodal, type PredictionConditions } from '../../../shared-model/prediction/predict';
+import { conditionsSchema } from '../../../shared-model/api/prediction';
+import { MODEL_VERSION, PREDICTION_DEFAULTS, resolveConditions, pairContext, predictCore, predictPair, regularSolutionBinodal, type PredictionConditions } from '../../../shared-model/prediction/predict';
 import { friedelStrainEnergyEv, segregationCoefficients, segregationTermsB } from '../../../shared-model/prediction/segregation';
 import { solveSurfaceEquilibrium } from '../../../shared-model/prediction/surface-equilibrium';
 
@@ -67,7 +68,7 @@ describe('predictPair: output', () => {
 
 describe('predictPair: physics checks', () => {
   it('huge particle → the semi-infinite surface (McLean with the bulk at the overall composition)', () => {
-    const conditions = checkConditions({ ...BASE, xB: 0.2, diameterNm: 1e5 });
+    const conditions = resolveConditions({ ...BASE, xB: 0.2, diameterNm: 1e5 });
     const ctx = pairContext('Pd', 'Ag');
     const core = predictCore(ctx, conditions);
     const semi = solveSurfaceEquilibrium({ xB: 0.2, surfaceShare: 0, kTEv: core.kT, c0: core.k.c0, cS: core.k.cS, cC: core.k.cC });
@@ -201,5 +202,14 @@ describe('predictPair: bad input names the field', () => {
     [() => predictPair('Ag', 'Pd', { ...BASE, diameterNm: 0.2 }), 'diameterNm'],
   ])('case %#', (fn, field) => {
     expect(fieldOf(fn)).toBe(field);
+  });
+});
+
+describe('prediction conditions: one set of defaults', () => {
+  it('the contract fills the settings a caller leaves out from PREDICTION_DEFAULTS, as the model does', () => {
+    const { xB, diameterNm, temperatureK } = PREDICTION_DEFAULTS;
+    const fromContract = conditionsSchema.parse({ xB, diameterNm, temperatureK });
+    expect(fromContract).toEqual(PREDICTION_DEFAULTS);
+    expect(resolveConditions({ xB, diameterNm, temperatureK, shape: PREDICTION_DEFAULTS.shape })).toEqual(fromContract);
   });
 });
