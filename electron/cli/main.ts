@@ -39,6 +39,7 @@ export function helpText(selected?: CliCommand): string {
     lines.push(usage.length < 50 ? usage.padEnd(52) + command.summary : `${usage}\n${' '.repeat(52)}${command.summary}`);
   }
   lines.push('', 'every command takes --json (machine-readable output), --data DIR (choose the store) and --help');
+  lines.push('pairwright help terms explains the terms and symbols (E, ω, ΔHmix, Warren–Cowley α, ΔBIC, routes)');
   return lines.join('\n');
 }
 

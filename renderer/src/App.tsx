@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { transport } from './api/client';
 import { useQuery } from './api/hooks';
 import { AppStateProvider, useAppState } from './app-state';
+import { GlossaryPanel } from './components/GlossaryPanel';
 import { VIEWS } from './navigation';
 
 const VIEW_KEY = 'pairwright.view';
@@ -33,6 +34,7 @@ function CampaignBadge() {
 
 function Shell() {
   const [viewId, setViewId] = useState(initialView);
+  const [glossaryOpen, setGlossaryOpen] = useState(false);
   useEffect(() => {
     window.localStorage.setItem(VIEW_KEY, viewId);
     if (window.location.hash !== `#/${viewId}`) window.history.replaceState(null, '', `#/${viewId}`);
@@ -79,12 +81,16 @@ function Shell() {
             ))}
           </div>
         ))}
+        <button type="button" className="nav-item nav-item--help" onClick={() => setGlossaryOpen(true)} data-testid="open-glossary">
+          Terms and symbols
+        </button>
         <p className="sidebar__footnote">
           {transport() === 'desktop' ? 'Desktop app' : 'Browser host on this computer'}. Recipes and hazard notes assist you; they never replace the supplier's SDS
           or your institution's rules.
         </p>
       </nav>
       <main className="content">{ActiveView ? <ActiveView /> : null}</main>
+      {glossaryOpen ? <GlossaryPanel onClose={() => setGlossaryOpen(false)} /> : null}
     </div>
   );
 }

@@ -2,6 +2,7 @@
 import type { CliCommand } from '../command';
 import { batchCommands } from './batches';
 import { campaignCommands } from './campaigns';
+import { helpCommands } from './help';
 import { outcomeCommands } from './outcomes';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
@@ -14,4 +15,5 @@ export const commands: CliCommand[] = [
   ...simulationCommands,
   ...batchCommands,
   ...outcomeCommands,
+  ...helpCommands,
 ];
