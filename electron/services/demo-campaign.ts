@@ -98,7 +98,7 @@ const PT_NI_ALLOY: BatchDesignRequest = {
   elementB: 'Ni',
   target: 'alloy',
   route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
+  size: { kind: 'alloy', diameterNm: 4, xB: 0.25 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
   batchVolumeMl: 50,
   precursors: [
@@ -114,7 +114,7 @@ const AG_PD_OLEYLAMINE: BatchDesignRequest = {
   elementB: 'Pd',
   target: 'alloy',
   route: 'organic',
-  size: { kind: 'alloy', diameterNm: 8, xBPct: 50 },
+  size: { kind: 'alloy', diameterNm: 8, xB: 0.5 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
   batchVolumeMl: 20,
   precursors: [

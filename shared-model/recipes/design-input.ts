@@ -42,10 +42,12 @@ export const sizeSchema = z.discriminatedUnion(
     z.object({
       kind: z.literal('alloy'),
       diameterNm: positive('diameter', 'nm'),
-      /** Composition: at.% of element B. */
-      xBPct: z
-        .number({ error: 'composition must be a number (at.% of B)' })
-        .refine((v) => Number.isFinite(v) && v > 0 && v < 100, { error: 'composition must lie strictly between 0 and 100 at.% (a bimetallic batch needs both metals)' }),
+      /** Composition: atomic fraction of element B (0–1), as in predictions and outcomes; views show at.%. */
+      xB: z
+        .number({ error: 'composition must be a number (atomic fraction of B, 0–1)' })
+        .refine((v) => Number.isFinite(v) && v > 0 && v < 1, {
+          error: 'composition x_B must lie strictly between 0 and 1 (0 and 100 at.%): a bimetallic batch needs both metals',
+        }),
     }),
     z
       .object({

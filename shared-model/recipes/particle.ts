@@ -45,7 +45,10 @@ function requireDiameter(field: string, value: number): void {
 /** Solid-solution sphere of diameter `diameterNm` with atomic fraction `xB` of B (Vegard lattice constant). */
 export function alloyParticle(diameterNm: number, xB: number, latticeANm: number, latticeBNm: number): ParticleGeometry {
   requireDiameter('size.diameterNm', diameterNm);
-  if (!Number.isFinite(xB) || xB <= 0 || xB >= 1) throw invalid('size.xBPct', `composition must lie strictly between 0 and 100 at.%, got ${(xB * 100).toPrecision(4)} at.%`);
+  if (!Number.isFinite(xB) || xB <= 0 || xB >= 1) {
+    const got = `x_B = ${xB.toPrecision(4)} (${(xB * 100).toPrecision(4)} at.%)`;
+    throw invalid('size.xB', `composition x_B must lie strictly between 0 and 1 (0 and 100 at.%), got ${got}`);
+  }
   const latticeNm = vegardLatticeNm(latticeANm, latticeBNm, xB);
   const atoms = atomsInSphere(diameterNm, latticeNm);
   return {

@@ -45,13 +45,13 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
   });
 
   it('shows bad input beside the field and saves nothing', async () => {
-    await form().locator('input[name="size.xBPct"]').fill('120');
+    await form().locator('input[name="size.xB"]').fill('120');
     await form().getByRole('button', { name: 'Compute' }).click();
-    await expect.poll(() => page.locator('[data-error-for="size.xBPct"]').textContent()).toMatch(/between 0 and 100 at\.%/);
+    await expect.poll(() => page.locator('[data-error-for="size.xB"]').textContent()).toMatch(/0 and 100 at\.%/);
     await form().locator('input[name="name"]').fill('should not exist');
     await form().getByRole('button', { name: 'Save as planned batch' }).click();
-    await expect.poll(() => page.locator('[data-error-for="size.xBPct"]').textContent()).toMatch(/between 0 and 100/);
-    await form().locator('input[name="size.xBPct"]').fill('25');
+    await expect.poll(() => page.locator('[data-error-for="size.xB"]').textContent()).toMatch(/0 and 100 at\.%/);
+    await form().locator('input[name="size.xB"]').fill('25');
     await form().locator('select[name="reducer"]').selectOption('');
     await form().getByRole('button', { name: 'Compute' }).click();
     await expect.poll(() => page.locator('[data-error-for="reducer"]').textContent()).toMatch(/choose a reducer/);

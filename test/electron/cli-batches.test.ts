@@ -75,7 +75,7 @@ describe('pairwright recipe / reagents / catalog', () => {
   it('exits 2 with one line naming the field for bad input', () => {
     const data = tempDataDir();
     const cases: [string[], RegExp][] = [
-      [['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '120', '--total-metal', '0.1', '--volume', '50', '--precursor', 'Pt=h2ptcl6-6h2o', '--precursor', 'Ni=nicl2-6h2o', '--reducer', 'nabh4'], /size\.xBPct/],
+      [['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '120', '--total-metal', '0.1', '--volume', '50', '--precursor', 'Pt=h2ptcl6-6h2o', '--precursor', 'Ni=nicl2-6h2o', '--reducer', 'nabh4'], /size\.xB\b.*0 and 100 at\.%/],
       [['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '25', '--total-metal', '0.1', '--volume', '50', '--precursor', 'Pt=h2ptcl6-6h2o', '--precursor', 'Ni=nicl2-6h2o'], /reducer/],
       [['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '25', '--total-metal', '0.1', '--volume', '50', '--precursor', 'Pt=h2ptcl6-6h2o', '--precursor', 'Ni=agno3', '--reducer', 'nabh4'], /Ag precursor, not a Ni precursor/],
       [['recipe', 'Pt-Ni', '--diameter', 'four'], /--diameter must be a number/],

@@ -69,7 +69,7 @@ describe('designing and saving batches', () => {
 
   it('refuses bad input naming the field and saves nothing', async () => {
     const cases: [unknown, string][] = [
-      [{ ...ptNi, size: { kind: 'alloy', diameterNm: 4, xBPct: 120 } }, 'design.size.xBPct'],
+      [{ ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1.2 } }, 'design.size.xB'],
       [{ ...ptNi, reducer: undefined }, 'reducer'],
       [{ ...ptNi, precursors: [ptNi.precursors[0], { element: 'Ni', reagentKey: 'agno3' }] }, 'precursors.1.reagentKey'],
     ];

@@ -10,7 +10,7 @@ export const ptNi: BatchDesignRequest = {
   elementB: 'Ni',
   target: 'alloy',
   route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 4, xBPct: 25 },
+  size: { kind: 'alloy', diameterNm: 4, xB: 0.25 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
   batchVolumeMl: 50,
   precursors: [
@@ -26,7 +26,7 @@ export const auPd: BatchDesignRequest = {
   elementB: 'Pd',
   target: 'alloy',
   route: 'co-reduction',
-  size: { kind: 'alloy', diameterNm: 10, xBPct: 50 },
+  size: { kind: 'alloy', diameterNm: 10, xB: 0.5 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.1 },
   batchVolumeMl: 50,
   precursors: [
@@ -69,7 +69,7 @@ export const ptNiPolyol: BatchDesignRequest = {
   elementB: 'Ni',
   target: 'alloy',
   route: 'polyol',
-  size: { kind: 'alloy', diameterNm: 5, xBPct: 50 },
+  size: { kind: 'alloy', diameterNm: 5, xB: 0.5 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
   batchVolumeMl: 20,
   precursors: [

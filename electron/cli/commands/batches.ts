@@ -82,7 +82,10 @@ export function recipeRequest(args: ParsedArgs): BatchDesignRequest {
       ...(shellMl !== undefined ? { shellMonolayers: shellMl } : {}),
     };
   } else if (shellNm !== undefined) size = { kind: 'core-shell-overall', diameterNm: requireNumber(args, 'diameter'), shellThicknessNm: shellNm };
-  else size = { kind: 'alloy', diameterNm: requireNumber(args, 'diameter'), xBPct: requireNumber(args, 'composition') };
+    else {
+    // --composition is typed in at.% of B; the contract takes the atomic fraction x_B
+    size = { kind: 'alloy', diameterNm: requireNumber(args, 'diameter'), xB: requireNumber(args, 'composition') / 100 };
+  }
 
   const totalMetal = optionalNumber(args, 'total-metal');
   const particlesPerMl = optionalNumber(args, 'particles-per-ml');

@@ -102,7 +102,7 @@ export function buildRequest(f: FormState): BatchDesignRequest {
   let size: BatchDesignRequest['size'];
   switch (f.sizeKind) {
     case 'alloy':
-      size = { kind: 'alloy', diameterNm: numberOf(f.diameterNm) as number, xBPct: numberOf(f.xBPct) as number };
+      size = { kind: 'alloy', diameterNm: numberOf(f.diameterNm) as number, xB: (numberOf(f.xBPct) as number) / 100 };
       break;
     case 'single-metal':
       size = { kind: 'single-metal', element: f.singleElement, diameterNm: numberOf(f.diameterNm) as number };
@@ -200,7 +200,7 @@ function inputForField(field: string, f: FormState): string {
 }
 
 const FIELD_NAMES = new Set([
-  'elementA', 'elementB', 'target', 'route', 'size.kind', 'size.diameterNm', 'size.xBPct', 'size.coreDiameterNm', 'shell', 'size.element', 'amount',
+  'elementA', 'elementB', 'target', 'route', 'size.kind', 'size.diameterNm', 'size.xB', 'size.coreDiameterNm', 'shell', 'size.element', 'amount',
   'batchVolumeMl', 'seeds', 'seeds.metal', 'seeds.diameterNm', 'seeds.particlesPerMl', 'seeds.volumeMl', 'seeds.seedBatchId', 'precursors',
   'precursorA', 'stockA', 'precursorB', 'stockB', 'reducer', 'reducer.excess', 'reducer.stockMm', 'capping', 'capping.molPerMolMetal', 'capping.stockMm', 'solvent',
   'solvent.volumeMl', 'temperatureC', 'name', 'pairId', 'campaignId',
@@ -559,8 +559,8 @@ export function BatchDesignView() {
               </Field>
             ) : null}
             {!seedMode && form.sizeKind === 'alloy' ? (
-              <Field label={`Composition (at.% ${form.elementB || 'B'})`} name="size.xBPct" error={errors['size.xBPct']}>
-                <input name="size.xBPct" inputMode="decimal" value={form.xBPct} onChange={(e) => set('xBPct')(e.target.value)} />
+              <Field label={`Composition (at.% ${form.elementB || 'B'})`} name="size.xB" error={errors['size.xB']}>
+                <input name="size.xB" inputMode="decimal" value={form.xBPct} onChange={(e) => set('xBPct')(e.target.value)} />
               </Field>
             ) : null}
             {!seedMode && form.sizeKind === 'single-metal' ? (

@@ -247,7 +247,7 @@ function nucleatedParticles(
         `the target ${input.target} is a core@shell: give the size as core-shell (core diameter and shell)`,
       );
     }
-    geometry = alloyParticle(size.diameterNm, size.xBPct / 100, lattice(elementA), lattice(elementB));
+    geometry = alloyParticle(size.diameterNm, size.xB, lattice(elementA), lattice(elementB));
   } else {
     if (target.kind !== 'core@shell' || !target.core || !target.shell) {
       throw invalid(

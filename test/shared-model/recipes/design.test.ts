@@ -172,7 +172,7 @@ describe('other routes', () => {
       elementB: 'Ni',
       target: 'alloy',
       route: 'polyol',
-      size: { kind: 'alloy', diameterNm: 5, xBPct: 50 },
+      size: { kind: 'alloy', diameterNm: 5, xB: 0.5 },
       amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
       batchVolumeMl: 20,
       precursors: [
@@ -197,7 +197,7 @@ describe('other routes', () => {
       elementB: 'Pt',
       target: 'intermetallic',
       route: 'organic',
-      size: { kind: 'alloy', diameterNm: 4, xBPct: 50 },
+      size: { kind: 'alloy', diameterNm: 4, xB: 0.5 },
       amount: { kind: 'total-metal', totalMetalMmol: 1 },
       batchVolumeMl: 25,
       precursors: [
@@ -278,12 +278,12 @@ describe('the thermodynamic prediction, asked once about the designed particle',
 
 describe('bad input names the field', () => {
   it.each<[string, BatchDesignRequest, string]>([
-    ['composition 0 at.%', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xBPct: 0 } }, 'size.xBPct'],
-    ['composition 100 at.%', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xBPct: 100 } }, 'size.xBPct'],
-    ['composition 130 at.%', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xBPct: 130 } }, 'size.xBPct'],
+    ['composition x_B = 0', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 0 } }, 'size.xB'],
+    ['composition x_B = 1', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1 } }, 'size.xB'],
+    ['composition x_B = 1.3', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1.3 } }, 'size.xB'],
     ['negative metal amount', { ...ptNi, amount: { kind: 'total-metal', totalMetalMmol: -1 } }, 'amount.totalMetalMmol'],
     ['zero batch volume', { ...ptNi, batchVolumeMl: 0 }, 'batchVolumeMl'],
-    ['zero diameter', { ...ptNi, size: { kind: 'alloy', diameterNm: 0, xBPct: 25 } }, 'size.diameterNm'],
+    ['zero diameter', { ...ptNi, size: { kind: 'alloy', diameterNm: 0, xB: 0.25 } }, 'size.diameterNm'],
     ['reducer excess ≤ 0', { ...ptNi, reducer: { reagentKey: 'nabh4', excess: 0 } }, 'reducer.excess'],
     ['precursor of the wrong metal', { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Ni', reagentKey: 'cocl2-6h2o' }] }, 'precursors.1.reagentKey'],
     ['precursor for a metal outside the pair', { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Au', reagentKey: 'haucl4-3h2o' }] }, 'precursors.1.element'],

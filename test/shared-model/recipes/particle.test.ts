@@ -94,9 +94,9 @@ describe('against the closed-shell magic numbers (Mackay, Acta Cryst. 15, 916 (1
 
 describe('bad geometry names the field', () => {
   it('composition must lie strictly inside 0–100 at.%', () => {
-    expect(fieldOf(() => alloyParticle(4, 0, A_PT, A_NI))).toBe('size.xBPct');
-    expect(fieldOf(() => alloyParticle(4, 1, A_PT, A_NI))).toBe('size.xBPct');
-    expect(fieldOf(() => alloyParticle(4, 1.2, A_PT, A_NI))).toBe('size.xBPct');
+    expect(fieldOf(() => alloyParticle(4, 0, A_PT, A_NI))).toBe('size.xB');
+    expect(fieldOf(() => alloyParticle(4, 1, A_PT, A_NI))).toBe('size.xB');
+    expect(fieldOf(() => alloyParticle(4, 1.2, A_PT, A_NI))).toBe('size.xB');
   });
   it('a shell as thick as the radius leaves no core', () => {
     expect(fieldOf(() => coreDiameterFromOverall(10, 5))).toBe('size.shellThicknessNm');

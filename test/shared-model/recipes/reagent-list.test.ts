@@ -16,7 +16,7 @@ const auPt: BatchDesignRequest = {
   elementB: 'Pt',
   target: 'alloy',
   route: 'polyol',
-  size: { kind: 'alloy', diameterNm: 5, xBPct: 50 },
+  size: { kind: 'alloy', diameterNm: 5, xB: 0.5 },
   amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
   batchVolumeMl: 20,
   precursors: [

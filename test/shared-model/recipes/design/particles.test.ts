@@ -47,7 +47,7 @@ describe('particles from a size target and a total metal', () => {
       elementA: 'Fe',
       route: 'organic',
       precursors: [ptNi.precursors[0] as never, { element: 'Fe', reagentKey: 'fe-co5' }],
-      size: { kind: 'alloy', diameterNm: 4, xBPct: 50 },
+      size: { kind: 'alloy', diameterNm: 4, xB: 0.5 },
       elementB: 'Pt',
     });
     expect(p.checks.map((c) => c.kind)).toEqual(['geometry']);
