@@ -10,6 +10,7 @@ import { CLUSTER_SHAPES } from '../../shared-model/clusters/shapes';
 import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
 import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
+import { FIRE_DESCRIPTION, relaxStructure } from '../../shared-model/montecarlo/minimise';
 import { ENGINE_VERSION, rebuildGeometry, SIMULATION_LIMITS, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
 import { queueFor } from '../workers/montecarlo-queue';
 import type { HandlerMap } from './context';
@@ -86,6 +87,27 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
       },
     );
     return { fileName: `pairwright-run-${id}-${result.elementA}${result.elementB}.xyz`, content };
+  },
+
+  'simulation.relax': ({ xyz, forceToleranceEvPerAngstrom, maxIterations }) => {
+    const relaxed = relaxStructure(readExtendedXyz(xyz), { forceToleranceEvPerAngstrom, maxIterations });
+    const content = writeExtendedXyz(
+      { symbols: relaxed.symbols, positions: relaxed.positions },
+      { energy: relaxed.energyEv, initialEnergy: relaxed.initialEnergyEv, maxForce: relaxed.maxForceEvPerAngstrom, iterations: relaxed.iterations, method: 'FIRE' },
+    );
+    return {
+      atoms: relaxed.atoms,
+      composition: relaxed.composition,
+      initialEnergyEv: relaxed.initialEnergyEv,
+      relaxedEnergyEv: relaxed.energyEv,
+      relaxedEnergyPerAtomEv: relaxed.energyEv / relaxed.atoms,
+      maxForceEvPerAngstrom: relaxed.maxForceEvPerAngstrom,
+      iterations: relaxed.iterations,
+      converged: relaxed.converged,
+      forceToleranceEvPerAngstrom,
+      method: FIRE_DESCRIPTION,
+      xyz: content,
+    };
   },
 
   'simulation.energy': ({ xyz, cutoffAngstrom }) => totalEnergy(readExtendedXyz(xyz), cutoffAngstrom === undefined ? {} : { cutoffAngstrom }),

@@ -15,6 +15,22 @@ import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../mont
 import { planSimulation, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
 import type { StructureEnergy } from '../montecarlo/gupta-energy';
 
+/** `simulation.relax`: the minimised structure of a given cluster (FIRE on the off-lattice Gupta energy). */
+export interface RelaxedCluster {
+  atoms: number;
+  composition: Record<string, number>;
+  initialEnergyEv: number;
+  relaxedEnergyEv: number;
+  relaxedEnergyPerAtomEv: number;
+  maxForceEvPerAngstrom: number;
+  iterations: number;
+  converged: boolean;
+  forceToleranceEvPerAngstrom: number;
+  method: string;
+  /** The relaxed structure as extended XYZ. */
+  xyz: string;
+}
+
 const guptaElementSchema = z
   .string({ error: 'must be an element symbol' })
   .trim()
@@ -164,6 +180,15 @@ export const simulationOperations = {
     input: z.object({
       xyz: z.string({ error: 'must be the text of an XYZ file' }).min(1, 'must not be empty').max(20_000_000, 'must be at most 20 MB'),
       cutoffAngstrom: positiveNumber('Å').gt(0, 'must be above 0 Å').optional(),
+    }),
+  }),
+  'simulation.relax': operation<RelaxedCluster>()({
+    kind: 'query',
+    summary: 'Minimise the Gupta energy of a given cluster (extended XYZ, Å) off the lattice; stores nothing',
+    input: z.object({
+      xyz: z.string({ error: 'must be the text of an XYZ file' }).min(1, 'must not be empty').max(20_000_000, 'must be at most 20 MB'),
+      forceToleranceEvPerAngstrom: positiveNumber('eV/Å').gt(0, 'must be above 0 eV/Å').max(1, 'must be at most 1 eV/Å').default(1e-3),
+      maxIterations: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(200_000, 'must be at most 200000').default(20_000),
     }),
   }),
 };

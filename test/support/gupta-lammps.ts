@@ -11,6 +11,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { guptaElement, guptaPair, pairDensityEv2, pairRepulsionEv } from '../../shared-model/montecarlo/gupta-parameters';
+import { OffLatticeGupta } from '../../shared-model/montecarlo/offlattice-gupta';
 
 /** Atomic numbers (IUPAC periodic table) of the ten Gupta metals. */
 const ATOMIC_NUMBER: Record<string, number> = { Al: 13, Ni: 28, Cu: 29, Rh: 45, Pd: 46, Ag: 47, Ir: 77, Pt: 78, Au: 79, Pb: 82 };
@@ -20,6 +21,11 @@ export interface EamTableOptions {
   nr?: number;
   /** Points of the ρ grid (0 .. rhoMax). */
   nrho?: number;
+  /**
+   * Tabulate the off-lattice energy: each pair's functions times its quintic switch (zero beyond its
+   * rc2); the table's cutoff must then be the largest rc2 (`OffLatticeGupta.maxCutoffAngstrom`).
+   */
+  switched?: boolean;
 }
 
 function fmt(values: Float64Array): string {
@@ -46,31 +52,34 @@ export function writeEamFs(elements: readonly string[], cutoffAngstrom: number, 
   }
   rhoMax *= 1.5;
   const drho = rhoMax / (nrho - 1);
+  const smooth = options.switched ? new OffLatticeGupta(elements) : null;
+  const density = (a: number, b: number, r: number) => (smooth ? smooth.pairTerms(a, b, r).rho : pairDensityEv2(guptaPair(elements[a]!, elements[b]!), r));
+  const repulsion = (a: number, b: number, r: number) => (smooth ? smooth.pairTerms(a, b, r).phi : pairRepulsionEv(guptaPair(elements[a]!, elements[b]!), r));
   const out: string[] = [
     'Pairwright Gupta (second-moment tight-binding) potential, Cleri & Rosato PRB 48, 22 (1993) parameters',
-    'unlike pairs by the mixing rule (arithmetic p, q, r0; geometric A, xi); sharp cutoff at 2.35 nn',
+    smooth
+      ? 'unlike pairs by the mixing rule; per-pair quintic switch between 2.31 and 2.37 r0_ab (5th-6th shells)'
+      : 'unlike pairs by the mixing rule (arithmetic p, q, r0; geometric A, xi); sharp cutoff at 2.35 nn',
     'F(rho) = -sqrt(rho); rho_ij(r) = xi^2 exp(-2q(r/r0-1)); phi(r) = 2A exp(-p(r/r0-1))',
     `${elements.length} ${elements.join(' ')}`,
     `${nrho} ${drho.toExponential(16)} ${nr} ${dr.toExponential(16)} ${cutoffAngstrom.toExponential(16)}`,
   ];
-  for (const symbol of elements) {
+  for (const [a, symbol] of elements.entries()) {
     const e = guptaElement(symbol);
     out.push(`${ATOMIC_NUMBER[symbol]} ${e.massU} ${e.latticeAngstrom} fcc`);
     const f = new Float64Array(nrho);
     for (let k = 0; k < nrho; k++) f[k] = -Math.sqrt(k * drho);
     out.push(fmt(f));
-    for (const other of elements) {
-      const pair = guptaPair(symbol, other);
+    for (let b = 0; b < elements.length; b++) {
       const rho = new Float64Array(nr);
-      for (let k = 0; k < nr; k++) rho[k] = pairDensityEv2(pair, k * dr);
+      for (let k = 0; k < nr; k++) rho[k] = density(a, b, k * dr);
       out.push(fmt(rho));
     }
   }
   for (let i = 0; i < elements.length; i++) {
     for (let j = 0; j <= i; j++) {
-      const pair = guptaPair(elements[i]!, elements[j]!);
       const rphi = new Float64Array(nr);
-      for (let k = 0; k < nr; k++) rphi[k] = k * dr * pairRepulsionEv(pair, k * dr);
+      for (let k = 0; k < nr; k++) rphi[k] = k * dr * repulsion(i, j, k * dr);
       out.push(fmt(rphi));
     }
   }
@@ -132,7 +141,14 @@ export function runLammps(script: string, files: Record<string, string>, timeout
  * Runs `lmp` on a free cluster (`symbols` at `positions`, atom types in the order of `elements`) with the
  * tabulated Gupta potential, then `commands`; answers LAMMPS' standard output.
  */
-export function runLammpsGuptaCluster(symbols: readonly string[], positions: Float64Array, elements: readonly string[], cutoffAngstrom: number, commands: readonly string[]): string {
+export function runLammpsGuptaCluster(
+  symbols: readonly string[],
+  positions: Float64Array,
+  elements: readonly string[],
+  cutoffAngstrom: number,
+  commands: readonly string[],
+  table: EamTableOptions = {},
+): string {
   const script = [
     'units metal',
     'atom_style atomic',
@@ -143,13 +159,27 @@ export function runLammpsGuptaCluster(symbols: readonly string[], positions: Flo
     `pair_coeff * * gupta.eam.fs ${elements.join(' ')}`,
     ...commands,
   ].join('\n');
-  return runLammps(script, { 'cluster.data': writeLammpsData(symbols, positions, elements), 'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom) });
+  return runLammps(script, { 'cluster.data': writeLammpsData(symbols, positions, elements), 'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom, table) });
 }
 
 /** Total energy (eV) LAMMPS computes for a cluster with the tabulated Gupta potential. */
 export function lammpsGuptaEnergyEv(symbols: readonly string[], positions: Float64Array, cutoffAngstrom: number): number {
   const elements = [...new Set(symbols)];
   const stdout = runLammpsGuptaCluster(symbols, positions, elements, cutoffAngstrom, ['thermo_style custom step pe', 'run 0', 'print "PAIRWRIGHT_ENERGY $(pe:%.12f)"']);
+  const match = /PAIRWRIGHT_ENERGY (-?[0-9.eE+-]+)/.exec(stdout);
+  if (!match) throw new Error(`LAMMPS printed no energy:\n${stdout.slice(-2000)}`);
+  return Number(match[1]);
+}
+
+/** Energy (eV) LAMMPS computes with the switched (off-lattice) table; `minimize` first when asked (cg). */
+export function lammpsSwitchedEnergyEv(symbols: readonly string[], positions: Float64Array, options: { minimize?: boolean } = {}): number {
+  const elements = [...new Set(symbols)];
+  const cutoff = new OffLatticeGupta(elements).maxCutoffAngstrom;
+  const commands = ['thermo_style custom step pe fmax', 'thermo_modify format float %.12f'];
+  if (options.minimize) commands.push('min_style cg', 'minimize 0 1e-8 50000 500000');
+  else commands.push('run 0');
+  commands.push('print "PAIRWRIGHT_ENERGY $(pe:%.12f)"');
+  const stdout = runLammpsGuptaCluster(symbols, positions, elements, cutoff, commands, { switched: true });
   const match = /PAIRWRIGHT_ENERGY (-?[0-9.eE+-]+)/.exec(stdout);
   if (!match) throw new Error(`LAMMPS printed no energy:\n${stdout.slice(-2000)}`);
   return Number(match[1]);

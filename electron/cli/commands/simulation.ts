@@ -182,6 +182,37 @@ export const simulationCommands: CliCommand[] = [
     },
   },
   {
+    words: ['relax'],
+    args: '<structure.xyz>',
+    summary: 'Minimise the off-lattice Gupta energy of a cluster given as (extended) XYZ in Å (FIRE); stores nothing',
+    options: {
+      xyz: { type: 'string', description: 'write the relaxed structure as extended XYZ to this file' },
+      'force-tolerance': { type: 'string', description: 'stop when every force is below this, eV/Å (default 0.001)' },
+      'max-iterations': { type: 'string', description: 'give up after this many steps (default 20000)' },
+    },
+    run: async (args, context) => {
+      const path = requirePositional(args, 0, 'structure.xyz');
+      const tolerance = optionalNumber(args, 'force-tolerance');
+      const maxIterations = integerOption(args, 'max-iterations');
+      const relaxed = await context.call('simulation.relax', {
+        xyz: context.readTextFile(path),
+        ...(tolerance !== undefined ? { forceToleranceEvPerAngstrom: tolerance } : {}),
+        ...(maxIterations !== undefined ? { maxIterations } : {}),
+      });
+      const out = optionalString(args, 'xyz');
+      if (out) context.writeTextFile(out, relaxed.xyz);
+      const { xyz: _structure, ...numbers } = relaxed;
+      const text = [
+        `${relaxed.atoms} atoms: ${f(relaxed.initialEnergyEv, 10)} eV → ${f(relaxed.relaxedEnergyEv, 10)} eV (${f(relaxed.relaxedEnergyPerAtomEv, 8)} eV/atom)`,
+        `${relaxed.iterations} steps, largest force ${f(relaxed.maxForceEvPerAngstrom, 3)} eV/Å` +
+          (relaxed.converged ? '' : ` — NOT converged to ${relaxed.forceToleranceEvPerAngstrom} eV/Å; raise --max-iterations`),
+        relaxed.method,
+        ...(out ? [`relaxed structure written to ${out}`] : []),
+      ].join('\n');
+      return { json: { ...numbers, xyzFile: out ?? null }, text };
+    },
+  },
+  {
     words: ['simulations'],
     args: '',
     summary: 'List stored Monte Carlo runs, newest first',
