@@ -72,8 +72,8 @@ export function minimiseInPlace(model: OffLatticeGupta, positions: Float64Array,
   const initialEnergyEv = energy;
   let maxForce = maxForceOf(forces, atoms);
   if (!Number.isFinite(energy) || !Number.isFinite(maxForce)) throw explodedError(model, positions, types, forces, list, 'the start');
-  let dt = FIRE.dtStart;
-  let alpha = FIRE.alphaStart;
+  let dt: number = FIRE.dtStart;
+  let alpha: number = FIRE.alphaStart;
   let sincePowerNegative = 0;
   let iterations = 0;
   while (maxForce > tolerance && iterations < maxIterations) {
