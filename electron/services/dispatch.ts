@@ -19,14 +19,46 @@ export async function dispatchKnown<Name extends OperationName>(
   name: Name,
   rawInput: unknown,
 ): Promise<ApiResult<OperationOutput<Name>>> {
-  const validated = validateInput(name, rawInput);
-  if (!validated.ok) return validated;
-  const handler = handlers[name] as Handler<Name>;
   try {
-    return ok(await handler(validated.value, context));
+    return ok(await runOperation(context, name, rawInput));
   } catch (error) {
     return errorToResult(name, error);
   }
+}
+
+/**
+ * The one path from an operation name and raw input to its service: zod validation (with defaults), then
+ * the service function. Bad input is thrown as a DomainError naming the field. `dispatchKnown` turns what
+ * this throws into an `ApiResult`; a workflow that runs several operations inside one store transaction
+ * (the demo campaign) calls `runOperationInTransaction`.
+ */
+export function runOperation<Name extends OperationName>(
+  context: ServiceContext,
+  name: Name,
+  rawInput: unknown,
+): OperationOutput<Name> | Promise<OperationOutput<Name>> {
+  const validated = validateInput(name, rawInput);
+  if (!validated.ok) throw new DomainError(validated.error.code, validated.error.message, validated.error.field);
+  const handler = handlers[name] as Handler<Name>;
+  return handler(validated.value, context);
+}
+
+/**
+ * `runOperation` for a caller inside a better-sqlite3 transaction, which cannot span an `await`: the
+ * service must answer synchronously (every store-backed service does; a long job returns its id at once).
+ */
+export function runOperationInTransaction<Name extends OperationName>(
+  context: ServiceContext,
+  name: Name,
+  rawInput: unknown,
+): OperationOutput<Name> {
+  if (!context.store.db.inTransaction) throw new Error(`${name}: runOperationInTransaction needs an open transaction`);
+  const output = runOperation(context, name, rawInput);
+  if (output instanceof Promise) {
+    void output.catch((error: unknown) => console.error(`[pairwright] ${name} (refused in a transaction):`, error));
+    throw new Error(`${name} answers asynchronously, so it cannot run inside a store transaction`);
+  }
+  return output;
 }
 
 function errorToResult(name: string, error: unknown): { ok: false; error: { code: DomainError['code']; message: string; field?: string } } {

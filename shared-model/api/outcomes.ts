@@ -199,6 +199,90 @@ const lineScanImportFields = {
   probeSigmaNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').max(50, 'must be at most 50 nm').nullable().default(null),
 };
 
+const filePathSchema = z
+  .string({ error: 'must be a file path' })
+  .trim()
+  .min(1, 'must not be empty')
+  .max(1000, 'must be at most 1000 characters');
+
+/** The parts of a batch outcome `outcomes.record` stores, in the order it writes them. */
+export const OUTCOME_PARTS = ['sizes', 'composition', 'lineScan', 'observed', 'notes', 'files'] as const;
+export type OutcomePart = (typeof OUTCOME_PARTS)[number];
+/** How an error message names the part that failed ("line scan: …"). */
+export const OUTCOME_PART_NAMES: Record<OutcomePart, string> = {
+  sizes: 'sizes',
+  composition: 'composition',
+  lineScan: 'line scan',
+  observed: 'observed architecture',
+  notes: 'notes',
+  files: 'files',
+};
+
+/** What `outcomes.record` stored, and the batch's outcome afterwards. */
+export interface RecordedOutcome {
+  recorded: OutcomePart[];
+  outcome: BatchOutcome;
+}
+
+const observedLabelSchema = z
+  .string({ error: 'must be an architecture such as alloy, Au@Pd, Janus, hollow' })
+  .trim()
+  .min(1, 'must not be empty');
+const observedReasonSchema = z
+  .string({ error: 'must be text' })
+  .trim()
+  .max(2000, 'must be at most 2000 characters')
+  .default('');
+
+/** confirmed: the suggestion of the newest line scan (the label may be left out); override: the label given. */
+const observedPartSchema = z.discriminatedUnion(
+  'decision',
+  [
+    z.object({ decision: z.literal('confirmed'), label: observedLabelSchema.optional(), reason: observedReasonSchema }),
+    z.object({ decision: z.literal('override'), label: observedLabelSchema, reason: observedReasonSchema }),
+  ],
+  { error: (issue) => (issue.code === 'invalid_union' ? 'must be confirmed or override' : undefined) },
+);
+
+export const outcomeRecordSchema = z
+  .object({
+    batchId: idSchema,
+    sizes: z.object({ sourceFile: sourceFileSchema, ...sizeImportFields }).optional(),
+    composition: z
+      .object({
+        nominalXB: fractionSchema('nominal xB').nullable().optional(),
+        measurements: z
+          .array(compositionMeasurementSchema, { error: 'must be a list of measurements' })
+          .max(50, 'at most 50 measurements'),
+        gridMetal: elementSymbolSchema.nullable().default(null),
+      })
+      .optional(),
+    lineScan: z
+      .object({
+        name: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters').default(''),
+        sourceFile: sourceFileSchema,
+        ...lineScanImportFields,
+      })
+      .optional(),
+    observed: observedPartSchema.optional(),
+    notes: notesSchema.optional(),
+    files: z
+      .array(
+        z.object({
+          path: filePathSchema,
+          kind: z.enum(OUTCOME_FILE_KINDS, { error: `must be one of: ${OUTCOME_FILE_KINDS.join(', ')}` }).default('image'),
+          note: z.string({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').default(''),
+        }),
+        { error: 'must be a list of files' },
+      )
+      .max(100, 'at most 100 files at once')
+      .optional(),
+  })
+  .refine((value) => OUTCOME_PARTS.some((part) => value[part] !== undefined), {
+    error: 'nothing to record: give sizes, composition, lineScan, observed, notes or files',
+  });
+export type OutcomeRecordInput = z.output<typeof outcomeRecordSchema>;
+
 /** Analyses that store nothing: usable without a batch (CLI `sizes` / `linescan`). */
 export const outcomeAnalysisOperations = {
   'outcomes.previewSizes': operation<SizePreview>()({
@@ -219,35 +303,17 @@ export const outcomeOperations = {
     summary: 'Everything recorded for one batch: sizes, composition, line scans, observed architecture, files, predictions',
     input: z.object({ batchId: idSchema }),
   }),
-  'outcomes.recordSizes': operation<SizeRecord>()({
+  'outcomes.record': operation<RecordedOutcome>()({
     kind: 'command',
-    summary: 'Import TEM particle diameters (CSV text) for a batch and analyse them',
-    input: z.object({ batchId: idSchema, sourceFile: sourceFileSchema, ...sizeImportFields }),
+    summary:
+      'Record what was measured on a batch — sizes, composition, line scan, observed architecture, notes, file paths ' +
+      '— in one transaction: all of it is stored or none, and an error names the part that failed',
+    input: outcomeRecordSchema,
   }),
   'outcomes.removeSizes': operation<{ removed: number }>()({
     kind: 'command',
     summary: 'Remove one size import (needs confirm: true)',
     input: z.object({ id: idSchema, confirm: confirmSchema('a size import') }),
-  }),
-  'outcomes.recordComposition': operation<CompositionRecord>()({
-    kind: 'command',
-    summary: 'Record the composition of a batch: nominal, bulk (ICP) and EDX values with their uncertainties',
-    input: z.object({
-      batchId: idSchema,
-      nominalXB: fractionSchema('nominal xB').nullable().optional(),
-      measurements: z.array(compositionMeasurementSchema, { error: 'must be a list of measurements' }).max(50, 'at most 50 measurements'),
-      gridMetal: elementSymbolSchema.nullable().default(null),
-    }),
-  }),
-  'outcomes.importLineScan': operation<LineScanRecord>()({
-    kind: 'command',
-    summary: 'Import an EDX line scan (CSV: position nm, A, B), fit the four models and choose by BIC',
-    input: z.object({
-      batchId: idSchema,
-      name: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters').default(''),
-      sourceFile: sourceFileSchema,
-      ...lineScanImportFields,
-    }),
   }),
   'outcomes.refitLineScan': operation<LineScanRecord>()({
     kind: 'command',
@@ -258,31 +324,6 @@ export const outcomeOperations = {
     kind: 'command',
     summary: 'Remove one line scan (needs confirm: true)',
     input: z.object({ id: idSchema, confirm: confirmSchema('a line scan') }),
-  }),
-  'outcomes.setObserved': operation<BatchOutcome>()({
-    kind: 'command',
-    summary: 'Confirm the suggested architecture of a batch or override it with another label',
-    input: z.object({
-      batchId: idSchema,
-      label: z.string({ error: 'must be an architecture such as alloy, Au@Pd, Janus, hollow' }).trim().min(1, 'must not be empty'),
-      decision: z.enum(OBSERVED_DECISIONS, { error: 'must be confirmed or override' }),
-      reason: z.string({ error: 'must be text' }).trim().max(2000, 'must be at most 2000 characters').default(''),
-    }),
-  }),
-  'outcomes.setNotes': operation<BatchOutcome>()({
-    kind: 'command',
-    summary: 'Free-text notes on a batch outcome',
-    input: z.object({ batchId: idSchema, notes: notesSchema }),
-  }),
-  'outcomes.addFile': operation<OutcomeFile>()({
-    kind: 'command',
-    summary: 'Record the path of an original image or spectrum (the file stays where it is)',
-    input: z.object({
-      batchId: idSchema,
-      path: z.string({ error: 'must be a file path' }).trim().min(1, 'must not be empty').max(1000, 'must be at most 1000 characters'),
-      kind: z.enum(OUTCOME_FILE_KINDS, { error: `must be one of: ${OUTCOME_FILE_KINDS.join(', ')}` }).default('image'),
-      note: z.string({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').default(''),
-    }),
   }),
   'outcomes.removeFile': operation<{ removed: number }>()({
     kind: 'command',

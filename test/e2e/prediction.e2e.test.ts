@@ -155,8 +155,9 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     const first = await api<SavedBatch>('batches.save', { name: 'AuPd-1', campaignId: campaign.id, pairId: pair.id, design });
     const second = await api<SavedBatch>('batches.save', { name: 'AuPd-2', campaignId: campaign.id, pairId: pair.id, design });
     await api<SavedBatch>('batches.save', { name: 'AuPd-3 not characterised', campaignId: campaign.id, pairId: pair.id, design });
-    await api('outcomes.setObserved', { batchId: first.id, label: 'Au@Pd', decision: 'override', reason: 'EDX line scan: Pd at the rim' });
-    await api('outcomes.setObserved', { batchId: second.id, label: 'alloy', decision: 'override' });
+    const observed = { label: 'Au@Pd', decision: 'override', reason: 'EDX line scan: Pd at the rim' };
+    await api('outcomes.record', { batchId: first.id, observed });
+    await api('outcomes.record', { batchId: second.id, observed: { label: 'alloy', decision: 'override' } });
 
     // Leave the view and come back: it reads the campaign's outcomes again.
     await page.locator('[data-view="candidates"]').click();

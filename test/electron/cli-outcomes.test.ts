@@ -1,7 +1,9 @@
-/** `pairwright sizes` and `pairwright linescan` run as child processes on CSV files. */
+/** `pairwright sizes`, `linescan` and `outcomes …` run as child processes on CSV files and a real store. */
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import Database from 'better-sqlite3';
 import { describe, expect, it } from 'vitest';
+import { STORE_FILE_NAME } from '../../db/store';
 import { fitLogNormal } from '../../shared-model/characterization/lognormal';
 import { runPairwright, runPairwrightJson } from '../support/cli';
 import { tempDataDir } from '../support/host-fixture';
@@ -105,12 +107,40 @@ describe('pairwright outcomes add / show / list / confusion', () => {
     writeFileSync(sizes, '9.6\n10.1\n10.4\n10.8\n9.2\n11.3\n');
     const badScan = join(dir, 'short-scan.csv');
     writeFileSync(badScan, Array.from({ length: 14 }, (_, i) => `${i},${50 + i},${40 + i}`).join('\n'));
-    // A bad line-scan file stops the whole command before anything is stored.
-    const refused = runPairwright(['outcomes', 'add', String(batch.id), '--sizes', sizes, '--linescan', badScan, ...storeArgs]);
+    // A bad line-scan file stops the whole command: the sizes, composition, notes and file given with it are
+    // not stored either (one outcomes.record call, one transaction). Rows counted in the SQLite file itself.
+    const outcomeRows = () => {
+      const file = new Database(join(storeDir, STORE_FILE_NAME), { readonly: true });
+      try {
+        const tables = ['outcome_size_imports', 'outcome_diameters', 'outcome_compositions', 'outcome_line_scans', 'outcome_observations', 'outcome_files'];
+        return Object.fromEntries(tables.map((t) => [t, (file.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]));
+      } finally {
+        file.close();
+      }
+    };
+    const before = outcomeRows();
+    expect(Object.values(before).every((n) => n === 0)).toBe(true);
+    const refused = runPairwright([
+      'outcomes',
+      'add',
+      String(batch.id),
+      '--sizes',
+      sizes,
+      '--icp',
+      '48±2',
+      '--notes',
+      'grid 2',
+      '--file',
+      '/data/tem/img_000.dm4',
+      '--linescan',
+      badScan,
+      ...storeArgs,
+    ]);
     expect(refused.status).toBe(2);
-    expect(refused.stderr).toMatch(/shorter than the particle/);
-    const empty = runPairwrightJson<{ sizes: unknown[] }>(['outcomes', 'show', String(batch.id), ...storeArgs]);
-    expect(empty.sizes).toEqual([]);
+    expect(refused.stderr).toMatch(/line scan: .*shorter than the particle/);
+    expect(outcomeRows()).toEqual(before);
+    const empty = runPairwrightJson<{ sizes: unknown[]; compositions: unknown[]; notes: string }>(['outcomes', 'show', String(batch.id), ...storeArgs]);
+    expect([empty.sizes, empty.compositions, empty.notes]).toEqual([[], [], '']);
 
     const out = runPairwrightJson<{ added: string[]; outcome: { sizes: { statistics: { n: number } }[]; observed: { label: string; decision: string }; compositions: { comparison: { rows: { flagged: boolean | null }[] } }[] } }>([
       'outcomes',

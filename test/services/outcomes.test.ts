@@ -5,7 +5,8 @@ import type { ServiceContext } from '../../electron/services/context';
 import { dispatch } from '../../electron/services/dispatch';
 import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
-import type { BatchOutcome, CampaignConfusion, CompositionRecord, LineScanRecord, OutcomeRow, SizeRecord } from '../../shared-model/api/outcomes';
+import Database from 'better-sqlite3';
+import type { BatchOutcome, CampaignConfusion, LineScanRecord, OutcomeRow, RecordedOutcome } from '../../shared-model/api/outcomes';
 import type { CandidatePair } from '../../shared-model/api/pairs';
 import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
@@ -27,6 +28,29 @@ async function failure(name: string, input: unknown): Promise<{ code: string; me
   return result.error;
 }
 const count = (table: string) => (store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
+/** Stores parts of a batch's outcome through the one write operation. */
+const record = (batchId: number, parts: Record<string, unknown>) => ok<RecordedOutcome>('outcomes.record', { batchId, ...parts });
+const recordFailure = (batchId: number, parts: Record<string, unknown>) => failure('outcomes.record', { batchId, ...parts });
+
+const OUTCOME_TABLES = [
+  'outcome_size_imports',
+  'outcome_diameters',
+  'outcome_compositions',
+  'outcome_composition_measurements',
+  'outcome_line_scans',
+  'outcome_line_scan_points',
+  'outcome_observations',
+  'outcome_files',
+] as const;
+/** Row counts of every outcome table, read from the SQLite file by a second connection (what was committed). */
+function committedCounts(): Record<string, number> {
+  const reader = new Database(store.path, { readonly: true });
+  try {
+    return Object.fromEntries(OUTCOME_TABLES.map((t) => [t, (reader.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]));
+  } finally {
+    reader.close();
+  }
+}
 
 async function campaignWithBatch(): Promise<{ campaign: Campaign; pair: CandidatePair; batch: SavedBatch }> {
   const campaign = await ok<Campaign>('campaigns.create', { name: 'Au-Pd screen' });
@@ -48,12 +72,15 @@ function scanCsv(kind: 'alloy' | 'A@B' | 'B@A' | 'Janus', seed: number): string 
 describe('TEM sizes on a batch', () => {
   it('stores every diameter beside the analysis and its version', async () => {
     const { batch } = await campaignWithBatch();
-    const record = await ok<SizeRecord>('outcomes.recordSizes', { batchId: batch.id, csvText: 'd (nm)\r\n9.5\r\n10.2\r\n\r\n10.9\r\n11.4\r\n', sourceFile: 'sizes.csv' });
-    expect(record.diametersNm).toEqual([9.5, 10.2, 10.9, 11.4]);
-    expect(record.statistics.n).toBe(4);
+    const stored = await record(batch.id, { sizes: { csvText: 'd (nm)\r\n9.5\r\n10.2\r\n\r\n10.9\r\n11.4\r\n', sourceFile: 'sizes.csv' } });
+    expect(stored.recorded).toEqual(['sizes']);
+    const size = stored.outcome.sizes[0]!;
+    expect(size.sourceFile).toBe('sizes.csv');
+    expect(size.diametersNm).toEqual([9.5, 10.2, 10.9, 11.4]);
+    expect(size.statistics.n).toBe(4);
     // The batch's design target (10 nm) is used when no target is given.
-    expect(record.statistics.target?.diameterNm).toBe(10);
-    expect(record.analysisVersion).toMatch(/^characterization-/);
+    expect(size.statistics.target?.diameterNm).toBe(10);
+    expect(size.analysisVersion).toMatch(/^characterization-/);
     expect(count('outcome_diameters')).toBe(4);
     const outcome = await ok<BatchOutcome>('outcomes.get', { batchId: batch.id });
     expect(outcome.sizes[0]?.diametersNm).toEqual([9.5, 10.2, 10.9, 11.4]);
@@ -62,50 +89,117 @@ describe('TEM sizes on a batch', () => {
 
   it('stores nothing of a file with a malformed row, and names the line and value', async () => {
     const { batch } = await campaignWithBatch();
-    const error = await failure('outcomes.recordSizes', { batchId: batch.id, csvText: '9.5\n10.2\n1O.9\n11.4\n' });
-    expect(error).toMatchObject({ code: 'invalid_input', field: 'csvText', message: 'line 3: "1O.9" in column 1 is not a number' });
-    expect(await failure('outcomes.recordSizes', { batchId: batch.id, csvText: '9.5\n-10\n11\n' })).toMatchObject({ field: 'csvText' });
-    expect((await failure('outcomes.recordSizes', { batchId: batch.id, csvText: '9.5\n10\n' })).message).toMatch(/at least 3/);
+    const error = await recordFailure(batch.id, { sizes: { csvText: '9.5\n10.2\n1O.9\n11.4\n' } });
+    expect(error).toMatchObject({ code: 'invalid_input', field: 'sizes.csvText', message: 'sizes: line 3: "1O.9" in column 1 is not a number' });
+    expect(await recordFailure(batch.id, { sizes: { csvText: '9.5\n-10\n11\n' } })).toMatchObject({ field: 'sizes.csvText' });
+    expect((await recordFailure(batch.id, { sizes: { csvText: '9.5\n10\n' } })).message).toMatch(/^sizes: .*at least 3/);
     expect(count('outcome_size_imports')).toBe(0);
     expect(count('outcome_diameters')).toBe(0);
-    expect(await failure('outcomes.recordSizes', { batchId: 999, csvText: '1\n2\n3' })).toMatchObject({ code: 'not_found', field: 'batchId' });
+    expect(await recordFailure(999, { sizes: { csvText: '1\n2\n3' } })).toMatchObject({ code: 'not_found', field: 'batchId' });
+    expect(await recordFailure(batch.id, {})).toMatchObject({ code: 'invalid_input', message: expect.stringMatching(/^nothing to record/) });
+  });
+});
+
+describe('outcomes.record: one transaction for every part', () => {
+  it('stores all parts in order, so a scan given in the same call is the suggestion a confirmation refers to', async () => {
+    const { batch } = await campaignWithBatch();
+    const stored = await record(batch.id, {
+      sizes: { csvText: '9.6\n10.1\n10.4\n10.8\n', sourceFile: 'sizes.csv' },
+      composition: { measurements: [{ method: 'ICP-OES', xB: 0.48, uncertaintyXB: 0.02 }] },
+      lineScan: { csvText: scanCsv('B@A', 5), sourceFile: 'scan.csv' },
+      observed: { decision: 'confirmed' },
+      notes: 'grid 2',
+      files: [{ path: '/data/tem/b1.dm4' }, { path: '/data/edx/b1.msa', kind: 'spectrum' }],
+    });
+    expect(stored.recorded).toEqual(['sizes', 'composition', 'lineScan', 'observed', 'notes', 'files']);
+    expect(stored.outcome.observed).toMatchObject({ label: 'Pd@Au', decision: 'confirmed' });
+    expect(stored.outcome.files.map((f) => f.kind)).toEqual(['image', 'spectrum']);
+    expect(committedCounts()).toEqual({
+      outcome_size_imports: 1,
+      outcome_diameters: 4,
+      outcome_compositions: 1,
+      outcome_composition_measurements: 1,
+      outcome_line_scans: 1,
+      outcome_line_scan_points: 51,
+      outcome_observations: 1,
+      outcome_files: 2,
+    });
+  });
+
+  it('a bad line scan stores nothing of the sizes, composition, notes or files before it, and names the part', async () => {
+    const { batch } = await campaignWithBatch();
+    const before = committedCounts();
+    expect(Object.values(before).every((n) => n === 0)).toBe(true);
+    // The first half of an alloy scan: it ends inside the particle.
+    const short = scanCsv('alloy', 4).split('\n').slice(0, 27).join('\n');
+    const error = await recordFailure(batch.id, {
+      sizes: { csvText: '9.6\n10.1\n10.4\n10.8\n' },
+      composition: { measurements: [{ method: 'ICP-OES', xB: 0.48, uncertaintyXB: 0.02 }], gridMetal: 'Cu' },
+      lineScan: { csvText: short },
+      notes: 'should not stay',
+      files: [{ path: '/data/tem/b1.dm4' }],
+    });
+    expect(error.code).toBe('invalid_input');
+    expect(error.field).toMatch(/^lineScan(\.|$)/);
+    expect(error.message).toMatch(/^line scan: .*shorter than the particle/);
+    expect(committedCounts()).toEqual(before);
+    const outcome = await ok<BatchOutcome>('outcomes.get', { batchId: batch.id });
+    expect([outcome.sizes, outcome.compositions, outcome.lineScans, outcome.files]).toEqual([[], [], [], []]);
+    expect(outcome.notes).toBe('');
+  });
+
+  it('a confirmation with nothing to confirm rolls back the sizes stored before it', async () => {
+    const { batch } = await campaignWithBatch();
+    const error = await recordFailure(batch.id, { sizes: { csvText: '9\n10\n11\n' }, observed: { decision: 'confirmed' } });
+    expect(error).toMatchObject({ field: 'observed.decision', message: expect.stringMatching(/^observed architecture: there is no suggested/) });
+    expect(committedCounts().outcome_size_imports).toBe(0);
   });
 });
 
 describe('composition', () => {
   it('keeps nominal, ICP and EDX apart and flags deviations and grid trouble', async () => {
     const { batch } = await campaignWithBatch();
-    const record = await ok<CompositionRecord>('outcomes.recordComposition', {
-      batchId: batch.id,
-      measurements: [
-        { method: 'ICP-OES', xB: 0.47, uncertaintyXB: 0.02 },
-        { method: 'EDX particle', xB: 0.38, uncertaintyXB: 0.04, lines: 'Au L, Pd K' },
-      ],
-      gridMetal: 'Cu',
+    const stored = await record(batch.id, {
+      composition: {
+        measurements: [
+          { method: 'ICP-OES', xB: 0.47, uncertaintyXB: 0.02 },
+          { method: 'EDX particle', xB: 0.38, uncertaintyXB: 0.04, lines: 'Au L, Pd K' },
+        ],
+        gridMetal: 'Cu',
+      },
     });
-    expect(record.nominalXB).toBeCloseTo(0.5, 12);
-    expect(record.comparison.rows.map((r) => r.flagged)).toEqual([true, true]);
-    expect(record.measurements[1]).toEqual({ method: 'EDX particle', xB: 0.38, uncertaintyXB: 0.04, lines: 'Au L, Pd K' });
+    const composition = stored.outcome.compositions[0]!;
+    expect(composition.nominalXB).toBeCloseTo(0.5, 12);
+    expect(composition.comparison.rows.map((r) => r.flagged)).toEqual([true, true]);
+    expect(composition.measurements[1]).toEqual({ method: 'EDX particle', xB: 0.38, uncertaintyXB: 0.04, lines: 'Au L, Pd K' });
     expect(count('outcome_composition_measurements')).toBe(2);
-    expect(await failure('outcomes.recordComposition', { batchId: batch.id, measurements: [{ method: 'ICP-MS', xB: 1.4 }] })).toMatchObject({ field: 'measurements.0.xB' });
+    expect(await recordFailure(batch.id, { composition: { measurements: [{ method: 'ICP-MS', xB: 1.4 }] } })).toMatchObject({
+      field: 'composition.measurements.0.xB',
+    });
   });
 });
 
 describe('line scans and the observed architecture', () => {
   it('imports a scan with every point, suggests the fitted model, and takes confirm or override', async () => {
     const { batch } = await campaignWithBatch();
-    const scan = await ok<LineScanRecord>('outcomes.importLineScan', { batchId: batch.id, csvText: scanCsv('B@A', 3), name: 'particle 1' });
+    const stored = await record(batch.id, { lineScan: { csvText: scanCsv('B@A', 3), name: 'particle 1' } });
+    const scan = stored.outcome.lineScans[0]!;
     expect(scan.points).toHaveLength(51);
     expect(count('outcome_line_scan_points')).toBe(51);
     expect(scan.analysis.chosenModel).toBe('Pd@Au');
     let outcome = await ok<BatchOutcome>('outcomes.get', { batchId: batch.id });
     expect(outcome.suggestion).toMatchObject({ label: 'Pd@Au', lineScanId: scan.id });
 
-    expect(await failure('outcomes.setObserved', { batchId: batch.id, label: 'Au@Pd', decision: 'confirmed' })).toMatchObject({ field: 'label' });
-    expect(await failure('outcomes.setObserved', { batchId: batch.id, label: 'Ni@Pt', decision: 'override' })).toMatchObject({ field: 'label' });
-    outcome = await ok<BatchOutcome>('outcomes.setObserved', { batchId: batch.id, label: 'Pd@Au', decision: 'confirmed' });
+    expect(await recordFailure(batch.id, { observed: { label: 'Au@Pd', decision: 'confirmed' } })).toMatchObject({ field: 'observed.label' });
+    expect(await recordFailure(batch.id, { observed: { label: 'Ni@Pt', decision: 'override' } })).toMatchObject({ field: 'observed.label' });
+    expect(await recordFailure(batch.id, { observed: { decision: 'override' } })).toMatchObject({ field: 'observed.label' });
+    expect(await recordFailure(batch.id, { observed: { label: 'alloy', decision: 'maybe' } })).toMatchObject({ field: 'observed.decision' });
+    outcome = (await record(batch.id, { observed: { label: 'Pd@Au', decision: 'confirmed' } })).outcome;
     expect(outcome.observed).toMatchObject({ label: 'Pd@Au', decision: 'confirmed', suggestedLabel: 'Pd@Au' });
-    outcome = await ok<BatchOutcome>('outcomes.setObserved', { batchId: batch.id, label: 'janus', decision: 'override', reason: 'HAADF shows two lobes' });
+    // Confirming without a label takes the suggestion.
+    outcome = (await record(batch.id, { observed: { decision: 'confirmed', reason: 'as fitted' } })).outcome;
+    expect(outcome.observed).toMatchObject({ label: 'Pd@Au', decision: 'confirmed', reason: 'as fitted' });
+    outcome = (await record(batch.id, { observed: { label: 'janus', decision: 'override', reason: 'HAADF shows two lobes' } })).outcome;
     expect(outcome.observed).toMatchObject({ label: 'Janus', decision: 'override', reason: 'HAADF shows two lobes' });
 
     const refit = await ok<LineScanRecord>('outcomes.refitLineScan', { id: scan.id, probeSigmaNm: 0.6 });
@@ -118,22 +212,21 @@ describe('line scans and the observed architecture', () => {
     const { batch } = await campaignWithBatch();
     const lines = scanCsv('alloy', 4).split('\n');
     const short = [lines[0], ...lines.slice(1, 27)].join('\n');
-    expect((await failure('outcomes.importLineScan', { batchId: batch.id, csvText: short })).message).toMatch(/shorter than the particle/);
+    expect((await recordFailure(batch.id, { lineScan: { csvText: short } })).message).toMatch(/^line scan: .*shorter than the particle/);
     const zero = lines.map((line, i) => (i === 0 ? line : line.replace(/,[^,]*$/, ',0'))).join('\n');
-    expect((await failure('outcomes.importLineScan', { batchId: batch.id, csvText: zero })).message).toMatch(/Pd channel is zero at every point/);
+    expect((await recordFailure(batch.id, { lineScan: { csvText: zero } })).message).toMatch(/Pd channel is zero at every point/);
     expect(count('outcome_line_scans')).toBe(0);
     expect(count('outcome_line_scan_points')).toBe(0);
   });
 
   it('keeps notes and file paths, and removes everything with the batch', async () => {
     const { batch } = await campaignWithBatch();
-    await ok('outcomes.setNotes', { batchId: batch.id, notes: 'grid 3, region B' });
-    await ok('outcomes.addFile', { batchId: batch.id, path: '/data/tem/b7_012.dm4', kind: 'image' });
-    await ok('outcomes.recordSizes', { batchId: batch.id, csvText: '9\n10\n11\n' });
+    await record(batch.id, { notes: 'grid 3, region B', files: [{ path: '/data/tem/b7_012.dm4', kind: 'image' }] });
+    await record(batch.id, { sizes: { csvText: '9\n10\n11\n' } });
     const outcome = await ok<BatchOutcome>('outcomes.get', { batchId: batch.id });
     expect(outcome.notes).toBe('grid 3, region B');
     expect(outcome.files.map((f) => f.path)).toEqual(['/data/tem/b7_012.dm4']);
-    expect(await failure('outcomes.addFile', { batchId: batch.id, path: '  ' })).toMatchObject({ field: 'path' });
+    expect(await recordFailure(batch.id, { files: [{ path: '/ok.tif' }, { path: '  ' }] })).toMatchObject({ field: 'files.1.path' });
     await ok('batches.remove', { id: batch.id, confirm: true });
     expect(count('outcome_files')).toBe(0);
     expect(count('outcome_diameters')).toBe(0);
@@ -145,8 +238,8 @@ describe('prediction vs outcome over a campaign', () => {
   it('lists each batch with its prediction at planning and builds the confusion matrix', async () => {
     const { campaign, pair, batch } = await campaignWithBatch();
     const second = await ok<SavedBatch>('batches.save', { name: 'AuPd second', campaignId: campaign.id, pairId: pair.id, design: auPd });
-    await ok('outcomes.setObserved', { batchId: batch.id, label: 'Au@Pd', decision: 'override' });
-    await ok('outcomes.setObserved', { batchId: second.id, label: 'alloy', decision: 'override' });
+    await record(batch.id, { observed: { label: 'Au@Pd', decision: 'override' } });
+    await record(second.id, { observed: { label: 'alloy', decision: 'override' } });
     const rows = await ok<OutcomeRow[]>('outcomes.listByCampaign', { campaignId: campaign.id });
     expect(rows).toHaveLength(2);
     const predicted = rows[0]!.predicted;

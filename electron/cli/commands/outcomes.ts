@@ -1,13 +1,23 @@
 /**
- * Outcome commands: `sizes` and `linescan` analyse a CSV file and store nothing; `outcomes …` record
- * results on a batch.
+ * Outcome commands: `sizes` and `linescan` analyse a CSV file and store nothing; `outcomes add` records what
+ * was measured on a batch in one call of `outcomes.record` (one transaction: all of it or nothing);
+ * `outcomes show / list / confusion` read. How they print is in outcome-format.ts.
  */
-import type { BatchOutcome, CampaignConfusion, LineScanPreview, OutcomeRow, SizePreview } from '../../../shared-model/api/outcomes';
+import type { OperationInput } from '../../../shared-model/api/contract';
+import type { OutcomePart } from '../../../shared-model/api/outcomes';
 import type { CompositionMeasurement } from '../../../shared-model/characterization/composition';
-import type { Estimate, LineScanModelFit } from '../../../shared-model/characterization/line-scan-fit';
-import { CliError, optionalNumber, optionalString, requirePositional, requireString, type CliCommand, type ParsedArgs } from '../command';
-import { formatTable } from '../table';
+import {
+  CliError,
+  optionalNumber,
+  optionalString,
+  requirePositional,
+  requireString,
+  type CliCommand,
+  type CliContext,
+  type ParsedArgs,
+} from '../command';
 import { resolveCampaign } from './campaigns';
+import { confusionText, lineScanJson, lineScanText, outcomeText, rowTable, sizesJson, sizesText } from './outcome-format';
 
 function columnOption(args: ParsedArgs, name: string): string | number | undefined {
   const value = optionalString(args, name);
@@ -19,123 +29,6 @@ function decimalOption(args: ParsedArgs): 'auto' | '.' | ',' {
   const value = optionalString(args, 'decimal') ?? 'auto';
   if (value !== 'auto' && value !== '.' && value !== ',') throw new CliError(`--decimal must be auto, "." or ",", got "${value}"`);
   return value;
-}
-
-const f = (value: number, digits = 3) => (Number.isFinite(value) ? value.toPrecision(digits) : String(value));
-const est = (e: Estimate | null, digits = 3) => (e === null ? '–' : e.sd === null ? f(e.value, digits) : `${f(e.value, digits)} ± ${f(e.sd, 2)}`);
-
-/** The flat JSON of `pairwright sizes`. */
-export function sizesJson(preview: SizePreview) {
-  const s = preview.statistics;
-  const ln = preview.lognormal;
-  return {
-    n: s.n,
-    meanNm: s.meanNm,
-    sdNm: s.sdNm,
-    semNm: s.semNm,
-    medianNm: s.medianNm,
-    minNm: s.minNm,
-    maxNm: s.maxNm,
-    cvPercent: s.cvPercent,
-    meanInterval95Nm: s.meanInterval,
-    lognormal: {
-      mu: ln.mu,
-      sigma: ln.sigma,
-      muInterval: ln.muInterval,
-      sigmaInterval: ln.sigmaInterval,
-      confidenceLevel: ln.confidenceLevel,
-      medianNm: ln.medianNm,
-      geometricSd: ln.geometricSd,
-    },
-    target: s.target,
-    precision: s.precision,
-    histogram: preview.histogram.bins.map((b) => ({ fromNm: b.fromNm, toNm: b.toNm, count: b.count })),
-    column: preview.column,
-    notes: preview.importNotes,
-    analysisVersion: preview.analysisVersion,
-  };
-}
-
-function sizesText(preview: SizePreview): string {
-  const s = preview.statistics;
-  const ln = preview.lognormal;
-  const lines = [
-    `n = ${s.n} particles (column ${preview.column.number}${preview.column.name ? ` "${preview.column.name}"` : ''})`,
-    `mean ${f(s.meanNm)} ± ${f(s.sdNm)} nm (SD), SEM ${f(s.semNm, 2)} nm, median ${f(s.medianNm)} nm, CV ${f(s.cvPercent, 3)} %`,
-    `log-normal (ML): mu = ${f(ln.mu, 4)} [${f(ln.muInterval[0], 4)}, ${f(ln.muInterval[1], 4)}], sigma = ${f(ln.sigma, 3)} [${f(ln.sigmaInterval[0], 3)}, ${f(ln.sigmaInterval[1], 3)}] of ln(d/nm), 95 %`,
-  ];
-  if (s.target) lines.push(`target ${f(s.target.diameterNm)} nm: mean deviates by ${f(s.target.deviationNm, 2)} nm (${f(s.target.deviationPercent, 2)} %)`);
-  if (s.precision) {
-    lines.push(
-      `for ±${f(s.precision.halfWidthNm, 2)} nm on the mean (95 %): ${s.precision.particlesNeeded} particles in all, ${s.precision.moreParticles} more to count`,
-    );
-  }
-  for (const note of preview.importNotes) lines.push(`note: ${note}`);
-  return lines.join('\n');
-}
-
-const modelRow = (m: LineScanModelFit) => ({
-  model: m.label,
-  bic: m.bic,
-  deltaBic: m.deltaBic,
-  bicWeight: m.bicWeight,
-  radiusNm: m.radiusNm.value,
-  radiusSdNm: m.radiusNm.sd,
-  coreRadiusNm: m.coreRadiusNm?.value ?? null,
-  coreRadiusSdNm: m.coreRadiusNm?.sd ?? null,
-  shellThicknessNm: m.shellThicknessNm?.value ?? null,
-  shellThicknessSdNm: m.shellThicknessNm?.sd ?? null,
-  shellMonolayers: m.shellMonolayers?.value ?? null,
-  probeSigmaNm: m.probeSigmaNm.value,
-  atBounds: m.atBounds,
-});
-
-/** The flat JSON of `pairwright linescan`. */
-export function lineScanJson(preview: LineScanPreview) {
-  const a = preview.analysis;
-  const chosen = a.models.find((m) => m.label === a.chosenModel) as LineScanModelFit;
-  return {
-    chosenModel: a.chosenModel,
-    evidence: a.evidence,
-    deltaBicToNext: a.deltaBicToNext,
-    radiusNm: chosen.radiusNm.value,
-    radiusSdNm: chosen.radiusNm.sd,
-    coreRadiusNm: chosen.coreRadiusNm?.value ?? null,
-    coreRadiusSdNm: chosen.coreRadiusNm?.sd ?? null,
-    shellThicknessNm: chosen.shellThicknessNm?.value ?? null,
-    shellThicknessSdNm: chosen.shellThicknessNm?.sd ?? null,
-    shellMonolayers: chosen.shellMonolayers?.value ?? null,
-    probeSigmaNm: chosen.probeSigmaNm.value,
-    bic: Object.fromEntries(a.models.map((m) => [m.label, m.bic])),
-    models: a.models.map(modelRow),
-    suggestion: a.suggestion,
-    points: a.points,
-    unit: a.unit,
-    columns: preview.columns,
-    latticeNm: preview.latticeNm,
-    notes: [...preview.importNotes, ...a.notes],
-    analysisVersion: a.analysisVersion,
-  };
-}
-
-function lineScanText(preview: LineScanPreview): string {
-  const a = preview.analysis;
-  const table = formatTable(a.models, [
-    { header: 'model', value: (m) => `${m.label}${m.label === a.chosenModel ? ' *' : ''}` },
-    { header: 'ΔBIC', value: (m) => m.deltaBic.toFixed(1), align: 'right' },
-    { header: 'radius nm', value: (m) => est(m.radiusNm) },
-    { header: 'core nm', value: (m) => est(m.coreRadiusNm) },
-    { header: 'shell nm', value: (m) => est(m.shellThicknessNm) },
-    { header: 'shell ML', value: (m) => est(m.shellMonolayers, 2) },
-    { header: 'probe σ nm', value: (m) => est(m.probeSigmaNm, 2) },
-  ]);
-  const lines = [
-    `${a.points} points (${a.unit}); columns: position ${preview.columns.position}, ${a.elementA} ${preview.columns.a}, ${a.elementB} ${preview.columns.b}`,
-    table,
-    `chosen: ${a.chosenModel} (${a.evidence} evidence, ΔBIC ${a.deltaBicToNext.toFixed(1)} to the next)`,
-  ];
-  for (const note of [...preview.importNotes, ...a.notes]) lines.push(`note: ${note}`);
-  return lines.join('\n');
 }
 
 function batchIdArg(args: ParsedArgs): number {
@@ -153,44 +46,89 @@ export function parseAtPercent(text: string, option: string): { xB: number; unce
   return { xB: value / 100, uncertaintyXB: uncertainty === null ? null : uncertainty / 100 };
 }
 
-function outcomeText(o: BatchOutcome): string {
-  const lines = [`batch ${o.batchId} "${o.batchName}": ${o.elementA}-${o.elementB}, target ${o.targetLabel ?? '–'}`];
-  const size = o.sizes[o.sizes.length - 1];
-  if (size) lines.push(`sizes: n = ${size.statistics.n}, mean ${f(size.statistics.meanNm)} ± ${f(size.statistics.sdNm)} nm, CV ${f(size.statistics.cvPercent)} %`);
-  const composition = o.compositions[o.compositions.length - 1];
-  if (composition) {
-    for (const row of composition.comparison.rows) lines.push(`composition ${row.method}: ${(row.xB * 100).toFixed(1)} at.% ${o.elementB} — ${row.comment}`);
-    for (const warning of composition.comparison.warnings) lines.push(`warning: ${warning.message}`);
+function compositionMeasurements(args: ParsedArgs): CompositionMeasurement[] {
+  const measurements: CompositionMeasurement[] = [];
+  const icp = optionalString(args, 'icp');
+  if (icp !== undefined) {
+    const method = optionalString(args, 'icp-method') ?? 'ICP-OES';
+    if (method !== 'ICP-OES' && method !== 'ICP-MS') throw new CliError(`--icp-method must be ICP-OES or ICP-MS, got "${method}"`);
+    measurements.push({ method, ...parseAtPercent(icp, 'icp') });
   }
-  for (const scan of o.lineScans) lines.push(`line scan ${scan.id}${scan.name ? ` "${scan.name}"` : ''}: ${scan.analysis.chosenModel} (${scan.analysis.evidence})`);
-  if (o.predictions.length > 0) lines.push(`predicted: ${o.predictions.map((p) => `${p.label} (${p.source})`).join(', ')}`);
-  if (o.suggestion) lines.push(`suggested: ${o.suggestion.label}`);
-  lines.push(`observed: ${o.observed ? `${o.observed.label} (${o.observed.decision})` : 'not recorded'}`);
-  if (o.notes) lines.push(`notes: ${o.notes}`);
-  for (const file of o.files) lines.push(`file: ${file.path} (${file.kind})`);
-  return lines.join('\n');
+  const edx = optionalString(args, 'edx');
+  if (edx !== undefined) {
+    const mode = optionalString(args, 'edx-mode') ?? 'particle';
+    if (mode !== 'particle' && mode !== 'area') throw new CliError(`--edx-mode must be particle or area, got "${mode}"`);
+    const lines = optionalString(args, 'edx-lines');
+    const method = mode === 'particle' ? 'EDX particle' : 'EDX area';
+    measurements.push({ method, ...parseAtPercent(edx, 'edx'), ...(lines ? { lines } : {}) });
+  }
+  return measurements;
 }
 
-const rowTable = (rows: readonly OutcomeRow[]): string =>
-  formatTable(rows, [
-    { header: 'batch', value: (r) => r.batchId, align: 'right' },
-    { header: 'name', value: (r) => r.batchName },
-    { header: 'pair', value: (r) => `${r.elementA}-${r.elementB}` },
-    { header: 'predicted', value: (r) => r.predicted ?? '' },
-    { header: 'simulated', value: (r) => r.simulated ?? '' },
-    { header: 'observed', value: (r) => r.observed ?? '' },
-    { header: 'agreement', value: (r) => r.agreement ?? '' },
-    { header: 'mean nm', value: (r) => (r.meanDiameterNm === null ? '' : r.meanDiameterNm.toFixed(2)), align: 'right' },
-    { header: 'line scan', value: (r) => r.lineScanModel ?? '' },
-  ]);
+type RecordRequest = OperationInput<'outcomes.record'>;
 
-function confusionText(c: CampaignConfusion): string {
-  const m = c.matrix;
-  if (m.labels.length === 0) return `no batch has both an observed architecture and a ${c.against} yet`;
-  const width = Math.max(10, ...m.labels.map((l) => l.length)) + 2;
-  const header = `${'observed \\ ' + (c.against === 'prediction' ? 'predicted' : 'simulated')}`.padEnd(width + 12) + m.labels.map((l) => l.padStart(width)).join('');
-  const body = m.labels.map((label, i) => label.padEnd(width + 12) + (m.counts[i] as number[]).map((n) => String(n).padStart(width)).join(''));
-  return [header, ...body, `exact agreement ${m.exactAgreement}/${m.total}, same kind ${m.kindAgreement}/${m.total}`].join('\n');
+/** A spectrum by its file extension, an image otherwise. */
+const fileKind = (path: string) => (/\.(msa|emsa|spx|eds|txt)$/i.test(path) ? 'spectrum' : 'image');
+
+/** The flags of `outcomes add` as the one `outcomes.record` input (the files are read here, nothing is stored). */
+function outcomeRecordInput(args: ParsedArgs, context: CliContext): RecordRequest {
+  const batchId = batchIdArg(args);
+  const observed = optionalString(args, 'observed');
+  const confirm = args.values.confirm === true;
+  if (confirm && observed !== undefined) throw new CliError('give either --confirm or --observed, not both');
+  const input: RecordRequest = { batchId };
+  const decimalSeparator = decimalOption(args);
+  const sizesPath = optionalString(args, 'sizes');
+  if (sizesPath !== undefined) {
+    const target = optionalNumber(args, 'target');
+    input.sizes = {
+      csvText: context.readTextFile(sizesPath),
+      sourceFile: sizesPath,
+      column: columnOption(args, 'column'),
+      decimalSeparator,
+      // Without --target the service takes the batch design's diameter.
+      ...(target !== undefined ? { targetDiameterNm: target } : {}),
+      precisionPercent: optionalNumber(args, 'precision') ?? 2,
+    };
+  }
+  const measurements = compositionMeasurements(args);
+  const nominal = optionalString(args, 'nominal');
+  const grid = optionalString(args, 'grid');
+  if (measurements.length > 0 || nominal !== undefined || grid !== undefined) {
+    input.composition = {
+      ...(nominal !== undefined ? { nominalXB: parseAtPercent(nominal, 'nominal').xB } : {}),
+      measurements,
+      gridMetal: grid ?? null,
+    };
+  }
+  const scanPath = optionalString(args, 'linescan');
+  if (scanPath !== undefined) {
+    input.lineScan = {
+      csvText: context.readTextFile(scanPath),
+      sourceFile: scanPath,
+      decimalSeparator,
+      probeSigmaNm: optionalNumber(args, 'probe-sigma') ?? null,
+    };
+  }
+  const reason = optionalString(args, 'reason') ?? '';
+  if (confirm) input.observed = { decision: 'confirmed', reason };
+  if (observed !== undefined) input.observed = { decision: 'override', label: observed, reason };
+  const notes = optionalString(args, 'notes');
+  if (notes !== undefined) input.notes = notes;
+  const files = args.values.file;
+  const paths = (Array.isArray(files) ? files : []).filter((path): path is string => typeof path === 'string');
+  if (paths.length > 0) input.files = paths.map((path) => ({ path, kind: fileKind(path) }));
+  if (!Object.keys(input).some((key) => key !== 'batchId')) {
+    throw new CliError('nothing to add: give --sizes, --linescan, --icp, --edx, --observed, --confirm, --notes or --file');
+  }
+  return input;
+}
+
+/** How `outcomes add` names a stored part in its answer. */
+function addedLabel(part: OutcomePart, input: RecordRequest): string {
+  if (part === 'lineScan') return 'line scan';
+  if (part === 'observed') return input.observed?.decision === 'confirmed' ? 'observed (confirmed)' : 'observed';
+  return part;
 }
 
 export const outcomeCommands: CliCommand[] = [
@@ -249,7 +187,9 @@ export const outcomeCommands: CliCommand[] = [
   {
     words: ['outcomes', 'add'],
     args: '<batch id>',
-    summary: 'Record characterization of a made batch: sizes CSV, composition, line-scan CSV, observed architecture, notes, file paths',
+    summary:
+      'Record characterization of a made batch: sizes CSV, composition, line-scan CSV, observed architecture, notes, ' +
+      'file paths; all of it is stored or none',
     options: {
       sizes: { type: 'string', description: 'CSV of particle diameters (nm)' },
       column: { type: 'string', description: 'diameter column (name or number)' },
@@ -272,84 +212,10 @@ export const outcomeCommands: CliCommand[] = [
       file: { type: 'string', multiple: true, description: 'path of an original image or spectrum (repeatable)' },
     },
     run: async (args, context) => {
-      const batchId = batchIdArg(args);
-      if (args.values.confirm === true && optionalString(args, 'observed') !== undefined) throw new CliError('give either --confirm or --observed, not both');
-      const sizesPath = optionalString(args, 'sizes');
-      const scanPath = optionalString(args, 'linescan');
-      const sizesText = sizesPath !== undefined ? context.readTextFile(sizesPath) : null;
-      const scanText = scanPath !== undefined ? context.readTextFile(scanPath) : null;
-      const measurements: CompositionMeasurement[] = [];
-      const icp = optionalString(args, 'icp');
-      if (icp !== undefined) {
-        const method = optionalString(args, 'icp-method') ?? 'ICP-OES';
-        if (method !== 'ICP-OES' && method !== 'ICP-MS') throw new CliError(`--icp-method must be ICP-OES or ICP-MS, got "${method}"`);
-        measurements.push({ method, ...parseAtPercent(icp, 'icp') });
-      }
-      const edx = optionalString(args, 'edx');
-      if (edx !== undefined) {
-        const mode = optionalString(args, 'edx-mode') ?? 'particle';
-        if (mode !== 'particle' && mode !== 'area') throw new CliError(`--edx-mode must be particle or area, got "${mode}"`);
-        const lines = optionalString(args, 'edx-lines');
-        measurements.push({ method: mode === 'particle' ? 'EDX particle' : 'EDX area', ...parseAtPercent(edx, 'edx'), ...(lines ? { lines } : {}) });
-      }
-      const nominalText = optionalString(args, 'nominal');
-      const grid = optionalString(args, 'grid');
-
-      // Check the batch and both files before storing anything, so a bad file leaves no partial record.
-      const before = await context.call('outcomes.get', { batchId });
-      const sizeInput = {
-        column: columnOption(args, 'column'),
-        decimalSeparator: decimalOption(args),
-        targetDiameterNm: optionalNumber(args, 'target') ?? before.targetDiameterNm,
-        precisionPercent: optionalNumber(args, 'precision') ?? 2,
-      };
-      const probeSigmaNm = optionalNumber(args, 'probe-sigma') ?? null;
-      if (sizesText !== null) await context.call('outcomes.previewSizes', { csvText: sizesText, ...sizeInput });
-      if (scanText !== null) await context.call('outcomes.previewLineScan', { pair: `${before.elementA}-${before.elementB}`, csvText: scanText, probeSigmaNm });
-
-      const added: string[] = [];
-      if (sizesText !== null) {
-        await context.call('outcomes.recordSizes', { batchId, csvText: sizesText, sourceFile: sizesPath ?? null, ...sizeInput });
-        added.push('sizes');
-      }
-      if (measurements.length > 0 || nominalText !== undefined || grid !== undefined) {
-        await context.call('outcomes.recordComposition', {
-          batchId,
-          ...(nominalText !== undefined ? { nominalXB: parseAtPercent(nominalText, 'nominal').xB } : {}),
-          measurements,
-          gridMetal: grid ?? null,
-        });
-        added.push('composition');
-      }
-      if (scanText !== null) {
-        await context.call('outcomes.importLineScan', { batchId, csvText: scanText, sourceFile: scanPath ?? null, probeSigmaNm });
-        added.push('line scan');
-      }
-      const reason = optionalString(args, 'reason') ?? '';
-      if (args.values.confirm === true) {
-        const now = await context.call('outcomes.get', { batchId });
-        if (!now.suggestion) throw new CliError('--confirm needs a line scan to suggest an architecture; give --observed LABEL instead');
-        await context.call('outcomes.setObserved', { batchId, label: now.suggestion.label, decision: 'confirmed', reason });
-        added.push('observed (confirmed)');
-      }
-      const observed = optionalString(args, 'observed');
-      if (observed !== undefined) {
-        await context.call('outcomes.setObserved', { batchId, label: observed, decision: 'override', reason });
-        added.push('observed');
-      }
-      const notes = optionalString(args, 'notes');
-      if (notes !== undefined) {
-        await context.call('outcomes.setNotes', { batchId, notes });
-        added.push('notes');
-      }
-      const files = args.values.file;
-      for (const path of Array.isArray(files) ? files : []) {
-        if (typeof path === 'string') await context.call('outcomes.addFile', { batchId, path, kind: /\.(msa|emsa|spx|eds|txt)$/i.test(path) ? 'spectrum' : 'image' });
-      }
-      if (Array.isArray(files) && files.length > 0) added.push('files');
-      if (added.length === 0) throw new CliError('nothing to add: give --sizes, --linescan, --icp, --edx, --observed, --confirm, --notes or --file');
-      const outcome = await context.call('outcomes.get', { batchId });
-      return { json: { added, outcome }, text: `recorded ${added.join(', ')}\n${outcomeText(outcome)}` };
+      const input = outcomeRecordInput(args, context);
+      const stored = await context.call('outcomes.record', input);
+      const added = stored.recorded.map((part) => addedLabel(part, input));
+      return { json: { added, outcome: stored.outcome }, text: `recorded ${added.join(', ')}\n${outcomeText(stored.outcome)}` };
     },
   },
   {

@@ -10,18 +10,22 @@ const issue = (name: keyof typeof outcomeOperations, input: unknown) => {
 
 describe('outcome operation inputs', () => {
   it('accept a size import with defaults', () => {
-    const parsed = outcomeOperations['outcomes.recordSizes'].input.parse({ batchId: 1, csvText: '5\n6\n7' });
-    expect(parsed).toMatchObject({ decimalSeparator: 'auto', precisionPercent: 2, sourceFile: null });
+    const parsed = outcomeOperations['outcomes.record'].input.parse({ batchId: 1, sizes: { csvText: '5\n6\n7' } });
+    expect(parsed.sizes).toMatchObject({ decimalSeparator: 'auto', precisionPercent: 2, sourceFile: null });
   });
 
-  it('name the field at fault', () => {
-    expect(issue('outcomes.recordSizes', { batchId: 1, csvText: '' })).toEqual({ path: 'csvText', message: 'the file is empty' });
-    expect(issue('outcomes.recordComposition', { batchId: 1, nominalXB: 50, measurements: [] })?.message).toMatch(/at most 1 \(a fraction/);
-    expect(issue('outcomes.recordComposition', { batchId: 1, measurements: [{ method: 'SEM', xB: 0.2 }] })?.path).toBe('measurements.0.method');
-    expect(issue('outcomes.recordComposition', { batchId: 1, measurements: [], gridMetal: 'Xx' })?.message).toMatch(/unknown element/);
+  it('name the part and the field at fault', () => {
+    const record = (parts: Record<string, unknown>) => issue('outcomes.record', { batchId: 1, ...parts });
+    expect(record({ sizes: { csvText: '' } })).toEqual({ path: 'sizes.csvText', message: 'the file is empty' });
+    expect(record({ composition: { nominalXB: 50, measurements: [] } })?.message).toMatch(/at most 1 \(a fraction/);
+    expect(record({ composition: { measurements: [{ method: 'SEM', xB: 0.2 }] } })?.path).toBe('composition.measurements.0.method');
+    expect(record({ composition: { measurements: [], gridMetal: 'Xx' } })?.message).toMatch(/unknown element/);
     expect(issue('outcomes.removeLineScan', { id: 3 })?.message).toMatch(/confirmation/);
-    expect(issue('outcomes.importLineScan', { batchId: 1, csvText: 'x', probeSigmaNm: -1 })?.path).toBe('probeSigmaNm');
-    expect(issue('outcomes.setObserved', { batchId: 1, label: 'alloy', decision: 'maybe' })?.path).toBe('decision');
+    expect(record({ lineScan: { csvText: 'x', probeSigmaNm: -1 } })?.path).toBe('lineScan.probeSigmaNm');
+    expect(record({ observed: { label: 'alloy', decision: 'maybe' } })).toEqual({ path: 'observed.decision', message: 'must be confirmed or override' });
+    expect(record({ observed: { decision: 'override' } })?.path).toBe('observed.label');
+    expect(record({ files: [{ path: ' ' }] })?.path).toBe('files.0.path');
+    expect(record({})).toEqual({ path: '', message: 'nothing to record: give sizes, composition, lineScan, observed, notes or files' });
   });
 });
 

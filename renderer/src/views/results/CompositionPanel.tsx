@@ -7,6 +7,7 @@ import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
 import { atPct } from './format';
+import { partError } from './part-error';
 
 interface RowDraft {
   method: CompositionMethod;
@@ -91,17 +92,20 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
     event.preventDefault();
     const filled = rows.filter((row) => row.xBPct.trim() !== '');
     const nominalXB = percentToFraction(nominal);
-    const result = await call('outcomes.recordComposition', {
+    const answer = await call('outcomes.record', {
       batchId: outcome.batchId,
-      nominalXB,
-      gridMetal: grid.trim() === '' ? null : grid.trim(),
-      measurements: filled.map((row) => ({
-        method: row.method,
-        xB: percentToFraction(row.xBPct) ?? Number.NaN,
-        uncertaintyXB: percentToFraction(row.uncertaintyPct),
-        ...(row.lines.trim() ? { lines: row.lines.trim() } : {}),
-      })),
+      composition: {
+        nominalXB,
+        gridMetal: grid.trim() === '' ? null : grid.trim(),
+        measurements: filled.map((row) => ({
+          method: row.method,
+          xB: percentToFraction(row.xBPct) ?? Number.NaN,
+          uncertaintyXB: percentToFraction(row.uncertaintyPct),
+          ...(row.lines.trim() ? { lines: row.lines.trim() } : {}),
+        })),
+      },
     });
+    const result = answer.ok ? answer : { ...answer, error: partError(answer.error, 'composition') };
     if (!result.ok) {
       // measurements.N.field refers to the N-th filled row; map it back to the row shown.
       const match = /^measurements\.(\d+)\.(\w+)$/.exec(result.error.field ?? '');

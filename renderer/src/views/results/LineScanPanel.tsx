@@ -9,6 +9,7 @@ import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
 import { CsvFileField } from './CsvFileField';
 import { estimate, fixed } from './format';
+import { partError } from './part-error';
 
 const MODEL_COLOURS = ['#555555', '#1f77b4', '#d62728', '#2ca02c'];
 
@@ -159,16 +160,18 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
   const { errors, general, show, clear } = useFieldErrors();
   const submit = async (event: FormEvent) => {
     event.preventDefault();
-    const result = await call('outcomes.importLineScan', {
+    const result = await call('outcomes.record', {
       batchId: outcome.batchId,
-      csvText,
-      name,
-      sourceFile,
-      unit,
-      probeSigmaNm: sigma.trim() === '' ? null : Number(sigma.replace(',', '.')),
+      lineScan: {
+        csvText,
+        name,
+        sourceFile,
+        unit,
+        probeSigmaNm: sigma.trim() === '' ? null : Number(sigma.replace(',', '.')),
+      },
     });
     if (!result.ok) {
-      show(result.error, { positionsNm: 'csvText', signalA: 'csvText', signalB: 'csvText' });
+      show(partError(result.error, 'lineScan'), { positionsNm: 'csvText', signalA: 'csvText', signalB: 'csvText' });
       return;
     }
     clear();

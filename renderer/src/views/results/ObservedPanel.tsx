@@ -7,6 +7,7 @@ import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
+import { partError } from './part-error';
 
 export function observedChoices(a: string, b: string): string[] {
   return ['alloy', 'surface-enriched alloy', `${a}@${b}`, `${b}@${a}`, 'Janus', 'intermetallic', 'hollow', 'other', 'unknown'];
@@ -28,9 +29,9 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
   const fileErrors = useFieldErrors();
 
   const setObserved = async (label: string, decision: 'confirmed' | 'override') => {
-    const result = await call('outcomes.setObserved', { batchId: outcome.batchId, label, decision, reason });
+    const result = await call('outcomes.record', { batchId: outcome.batchId, observed: { label, decision, reason } });
     if (!result.ok) {
-      observedErrors.show(result.error);
+      observedErrors.show(partError(result.error, 'observed'));
       return;
     }
     observedErrors.clear();
@@ -39,7 +40,7 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
   };
   const saveNotes = async (event: FormEvent) => {
     event.preventDefault();
-    const result = await call('outcomes.setNotes', { batchId: outcome.batchId, notes });
+    const result = await call('outcomes.record', { batchId: outcome.batchId, notes });
     if (!result.ok) notesErrors.show(result.error);
     else {
       notesErrors.clear();
@@ -48,9 +49,10 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
   };
   const addFile = async (event: FormEvent) => {
     event.preventDefault();
-    const result = await call('outcomes.addFile', { batchId: outcome.batchId, path, kind, note: fileNote });
+    const result = await call('outcomes.record', { batchId: outcome.batchId, files: [{ path, kind, note: fileNote }] });
     if (!result.ok) {
-      fileErrors.show(result.error);
+      // One file per submit: its fields are files.0.path, files.0.kind, files.0.note.
+      fileErrors.show(partError(result.error, 'files'), { '0.path': 'path', '0.kind': 'kind', '0.note': 'note' });
       return;
     }
     fileErrors.clear();

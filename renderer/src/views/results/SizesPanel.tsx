@@ -8,6 +8,7 @@ import { Banner } from '../../components/Banner';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
 import { CsvFileField } from './CsvFileField';
+import { partError } from './part-error';
 import { fixed, num } from './format';
 
 function SizeChart(props: { record: SizeRecord }) {
@@ -118,16 +119,18 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
     event.preventDefault();
     const targetNm = target.trim() === '' ? null : Number(target.replace(',', '.'));
     const precisionPercent = Number(precision.replace(',', '.'));
-    const result = await call('outcomes.recordSizes', {
+    const result = await call('outcomes.record', {
       batchId: props.outcome.batchId,
-      csvText,
-      sourceFile,
-      ...(column.trim() ? { column: /^\d+$/.test(column.trim()) ? Number(column.trim()) : column.trim() } : {}),
-      targetDiameterNm: targetNm,
-      precisionPercent,
+      sizes: {
+        csvText,
+        sourceFile,
+        ...(column.trim() ? { column: /^\d+$/.test(column.trim()) ? Number(column.trim()) : column.trim() } : {}),
+        targetDiameterNm: targetNm,
+        precisionPercent,
+      },
     });
     if (!result.ok) {
-      show(result.error);
+      show(partError(result.error, 'sizes'));
       return;
     }
     clear();
