@@ -4,7 +4,7 @@ import type { predictionOperations } from '../../shared-model/api/prediction';
 import { ELEMENT_COLUMN_SOURCES, ELEMENT_RECORDS } from '../../shared-model/elements/element-table';
 import { computeIsotherm } from '../../shared-model/prediction/isotherm';
 import { predictPair, type Prediction } from '../../shared-model/prediction/predict';
-import { describeRankTarget, rankPairs } from '../../shared-model/prediction/rank';
+import { describeRankTarget, qualifiesFor, rankPairs } from '../../shared-model/prediction/rank';
 import type { HandlerMap } from './context';
 
 /** A plain copy (the lazily built `reason` becomes a data property) that any transport can carry. */
@@ -15,7 +15,9 @@ function plain(prediction: Prediction): Prediction {
 export const predictionHandlers: HandlerMap<keyof typeof predictionOperations> = {
   'prediction.predict': (input) => plain(predictPair(input.pair.elementA, input.pair.elementB, input.conditions)),
   'prediction.rank': (input) => {
-    const rows = rankPairs(input.elements, input.target, input.conditions);
+    const ranked = rankPairs(input.elements, input.target, input.conditions);
+    // Janus is a yes/no question of the wetting criterion: list only the pairs that qualify
+    const rows = input.target.kind === 'Janus' ? ranked.filter((row) => qualifiesFor(input.target, row.prediction)) : ranked;
     const kept = input.limit === undefined ? rows : rows.slice(0, input.limit);
     return {
       target: describeRankTarget(input.target),

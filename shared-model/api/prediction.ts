@@ -12,6 +12,7 @@ import type { Isotherm } from '../prediction/isotherm';
 import { ISOTHERM_SWEEPS } from '../prediction/isotherm';
 import type { Prediction } from '../prediction/predict';
 import { PREDICTION_DEFAULTS, STRAIN_RULES } from '../prediction/conditions';
+import { ENVIRONMENTS } from '../prediction/environment';
 import { parseRankTarget, type RankTarget } from '../prediction/rank';
 import { SURFACE_FACETS } from '../prediction/segregation';
 import { DomainError } from './result';
@@ -29,6 +30,13 @@ export const temperatureKSchema = finite('K')
   .refine((t) => t <= 5000, { error: 'must be at most 5000 K' });
 export const shapeSchema = z.enum(PARTICLE_SHAPES, { error: `must be one of: ${PARTICLE_SHAPES.join(', ')}` });
 export const facetSchema = z.enum(SURFACE_FACETS, { error: 'must be "111" or "100"' });
+export const environmentSchema = z.enum(ENVIRONMENTS, { error: `must be one of: ${ENVIRONMENTS.join(', ')}` });
+export const pressureBarSchema = finite('bar')
+  .refine((p) => p > 0, { error: 'must be a positive pressure in bar' })
+  .refine((p) => p <= 1000, { error: 'must be at most 1000 bar' });
+export const timeHSchema = finite('h')
+  .refine((t) => t > 0, { error: 'must be a positive time in hours' })
+  .refine((t) => t <= 10000, { error: 'must be at most 10000 h' });
 export const strainRuleSchema = z.enum(STRAIN_RULES, { error: `must be one of: ${STRAIN_RULES.join(', ')}` });
 
 const thresholdValue = finite('threshold').refine((v) => v > 0, { error: 'must be a positive number' });
@@ -59,6 +67,9 @@ export const conditionsSchema = z.object({
   facet: facetSchema.default(PREDICTION_DEFAULTS.facet),
   strainRule: strainRuleSchema.default(PREDICTION_DEFAULTS.strainRule),
   thresholds: thresholdsSchema.default(() => ({ ...PREDICTION_DEFAULTS.thresholds })),
+  environment: environmentSchema.default(PREDICTION_DEFAULTS.environment),
+  pressureBar: pressureBarSchema.default(PREDICTION_DEFAULTS.pressureBar),
+  timeH: timeHSchema.default(PREDICTION_DEFAULTS.timeH),
 });
 export type ConditionsInput = z.input<typeof conditionsSchema>;
 

@@ -37,6 +37,11 @@ export interface ClassificationInput {
    * composition (1 − Warren–Cowley α); omitted when the model gives no neighbour statistics.
    */
   unlikeNeighbourRatio?: number;
+  /**
+   * Spreading coefficient S = γ_core − γ_shell − γ_AB (J/m²) of a phase-separated particle, when a model
+   * gives one: S < 0 (partial wetting) makes it Janus even if the isotherm puts one element outside.
+   */
+  spreadingJPerM2?: number;
 }
 
 export interface Classification {
@@ -97,7 +102,10 @@ export function classifyArchitecture(
 
   let kind: ArchitectureKind;
   let label: ArchitectureLabel;
-  if (enrichedElement !== null && enrichment >= thresholds.coreShellEnrichment) {
+  if (input.spreadingJPerM2 !== undefined && input.spreadingJPerM2 < 0) {
+    kind = 'Janus';
+    label = 'Janus';
+  } else if (enrichedElement !== null && enrichment >= thresholds.coreShellEnrichment) {
     kind = 'core@shell';
     label = coreShellLabel(otherElement, enrichedElement);
   } else if (ratio !== undefined && ratio < thresholds.janusUnlikeRatio) {

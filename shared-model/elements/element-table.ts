@@ -56,6 +56,12 @@ export interface ElementRecord {
   metallicRadiusAngstrom: number | null;
   /** Mean surface energy of the solid, J/m². */
   surfaceEnergyJPerM2: number | null;
+  /**
+   * Second, independent surface energy: DFT value of the close-packed facet, J/m² (Vitos et al. 1998;
+   * see `ELEMENT_COLUMN_SOURCES`). Used to judge whether a surface-energy difference is within the
+   * scatter between sources; null where the recalled table has no value.
+   */
+  surfaceEnergyDftJPerM2: number | null;
   electronegativityPauling: number | null;
   bulkModulusGpa: number | null;
   shearModulusGpa: number | null;
@@ -72,6 +78,7 @@ export type NumericElementProperty =
   | 'cohesiveEnergyEv'
   | 'metallicRadiusAngstrom'
   | 'surfaceEnergyJPerM2'
+  | 'surfaceEnergyDftJPerM2'
   | 'electronegativityPauling'
   | 'bulkModulusGpa'
   | 'shearModulusGpa'
@@ -87,6 +94,7 @@ export const NUMERIC_ELEMENT_PROPERTIES: readonly NumericElementProperty[] = [
   'cohesiveEnergyEv',
   'metallicRadiusAngstrom',
   'surfaceEnergyJPerM2',
+  'surfaceEnergyDftJPerM2',
   'electronegativityPauling',
   'bulkModulusGpa',
   'shearModulusGpa',
@@ -127,6 +135,14 @@ export const ELEMENT_COLUMN_SOURCES: readonly ColumnSource[] = [
     unit: 'J/m²',
     source: 'Tyson & Miller, Surf. Sci. 62, 267 (1977): mean solid surface energy from liquid surface tension',
     fromMemory: true,
+  },
+  {
+    column: 'surfaceEnergyDftJPerM2',
+    unit: 'J/m²',
+    source:
+      'Vitos, Ruban, Skriver & Kollár, Surf. Sci. 411, 186 (1998): full-charge-density DFT (GGA) surface energy of the close-packed facet (fcc 111, hcp 0001, bcc 110)',
+    fromMemory: true,
+    note: 'a second, independent source for the surface energy (a facet value, not a mean); blank where not recalled',
   },
   { column: 'electronegativityPauling', unit: '', source: 'Pauling scale (Allred 1961 revision) as in the CRC Handbook', fromMemory: true },
   {
@@ -212,6 +228,14 @@ const ROWS: Row[] = [
   ['Bi', { structure: 'rhombohedral', aAngstrom: 4.75, alphaDeg: 57.23, atomsPerCell: 2 }, 4.75, 2.18, 1.82, 0.537, 2.02, 31.5, 12, 208.98040, [4.15, 1.16, 7.20, 0, 2.3, 5], [3]],
 ];
 
+/** Vitos et al. (1998) close-packed-facet surface energies, J/m² (from memory; see ELEMENT_COLUMN_SOURCES). */
+// prettier-ignore
+const SURFACE_ENERGY_DFT_J_PER_M2: Partial<Record<MetalSymbol, number>> = {
+  Al: 1.199, Ti: 2.632, V: 3.258, Cr: 3.979, Fe: 2.430, Co: 2.775, Ni: 2.011, Cu: 1.952, Zn: 0.989, Zr: 2.260,
+  Nb: 2.686, Mo: 3.454, Ru: 3.928, Rh: 2.472, Pd: 1.920, Ag: 1.172, Cd: 0.592, Hf: 2.471, Ta: 3.084, W: 4.005,
+  Re: 4.214, Os: 4.566, Ir: 2.971, Pt: 2.299, Au: 1.283,
+};
+
 function buildRecord(row: Row): ElementRecord {
   const [symbol, cell, latticeA, cohesiveEv, radiusA, gammaJm2, chi, bulkGpa, shearGpa, mass, m, oxidation] = row;
   const meta = METALS.find((metal) => metal.symbol === symbol);
@@ -225,6 +249,7 @@ function buildRecord(row: Row): ElementRecord {
     cohesiveEnergyEv: cohesiveEv,
     metallicRadiusAngstrom: radiusA,
     surfaceEnergyJPerM2: gammaJm2,
+    surfaceEnergyDftJPerM2: SURFACE_ENERGY_DFT_J_PER_M2[symbol] ?? null,
     electronegativityPauling: chi,
     bulkModulusGpa: bulkGpa,
     shearModulusGpa: shearGpa,

@@ -8,6 +8,7 @@
 import { DEFAULT_THRESHOLDS, type ClassificationThresholds } from '../architecture/classify';
 import { invalid } from '../api/result';
 import type { ParticleShape } from '../geometry/particle-sites';
+import { DEFAULT_PRESSURE_BAR, type Environment } from './environment';
 import type { SurfaceFacet } from './segregation';
 
 export const STRAIN_RULES = ['oversized solute', 'any solute'] as const;
@@ -29,6 +30,12 @@ export interface PredictionConditions {
    */
   strainRule?: StrainRule;
   thresholds?: ClassificationThresholds;
+  /** Gas or ligand around the particle (environment.ts); vacuum by default. */
+  environment?: Environment;
+  /** Gas pressure for the Langmuir coverage, bar (default 1). */
+  pressureBar?: number;
+  /** Time at `temperatureK`, hours (default 1 h, common practice for colloidal syntheses): sets the interdiffusion length. */
+  timeH?: number;
 }
 
 /** Conditions with every setting filled in, as the model computes with them. */
@@ -43,6 +50,9 @@ export const PREDICTION_DEFAULTS: Readonly<ResolvedConditions> = Object.freeze({
   facet: '111',
   strainRule: 'oversized solute',
   thresholds: DEFAULT_THRESHOLDS,
+  environment: 'vacuum',
+  pressureBar: DEFAULT_PRESSURE_BAR,
+  timeH: 1,
 });
 
 /**
@@ -60,6 +70,11 @@ export function resolveConditions(conditions: PredictionConditions): ResolvedCon
   if (!(Number.isFinite(temperatureK) && temperatureK > 0)) {
     throw invalid('temperatureK', `temperatureK must be a positive number, got ${String(temperatureK)}`);
   }
+  const { pressureBar, timeH } = conditions;
+  if (pressureBar !== undefined && !(Number.isFinite(pressureBar) && pressureBar > 0)) {
+    throw invalid('pressureBar', `pressureBar must be a positive number, got ${String(pressureBar)}`);
+  }
+  if (timeH !== undefined && !(Number.isFinite(timeH) && timeH > 0)) throw invalid('timeH', `timeH must be a positive number, got ${String(timeH)}`);
   return {
     xB,
     diameterNm,
@@ -68,5 +83,8 @@ export function resolveConditions(conditions: PredictionConditions): ResolvedCon
     facet: conditions.facet ?? PREDICTION_DEFAULTS.facet,
     strainRule: conditions.strainRule ?? PREDICTION_DEFAULTS.strainRule,
     thresholds: conditions.thresholds ?? PREDICTION_DEFAULTS.thresholds,
+    environment: conditions.environment ?? PREDICTION_DEFAULTS.environment,
+    pressureBar: conditions.pressureBar ?? PREDICTION_DEFAULTS.pressureBar,
+    timeH: conditions.timeH ?? PREDICTION_DEFAULTS.timeH,
   };
 }

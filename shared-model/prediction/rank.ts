@@ -6,6 +6,8 @@
  *   core@shell (X):   E when X is the surface element, else 0
  *   core@shell (any): E
  *   Janus:            (1 − ρ)⁺ · (1 − E)              like atoms cluster, both elements exposed
+ * A demixing pair whose spreading coefficient is negative (wetting.ts) is scored with E = 0: both
+ * elements stay exposed. `qualifiesFor` says whether a prediction is of the target's kind.
  *   intermetallic:    min(1, (ρ − 1)⁺) · (1 − E)
  * Ties are broken by the pair name. The reason string comes from the prediction's dominant terms.
  */
@@ -91,6 +93,12 @@ export function scoreFromNumbers(target: RankTarget, enrichedElement: string | n
   }
 }
 
+/** Whether the predicted architecture is the kind the target asks for (core@shell:X: X in the shell). */
+export function qualifiesFor(target: RankTarget, p: Prediction): boolean {
+  if (target.kind === 'core@shell') return p.architectureKind === 'core@shell' && (target.shellElement === undefined || p.surfaceElement === target.shellElement);
+  return p.architectureKind === target.kind;
+}
+
 export function targetScore(target: RankTarget, p: Prediction): number {
   return scoreFromNumbers(target, p.surfaceElement, p.enrichment, p.unlikeNeighbourRatio);
 }
@@ -129,7 +137,9 @@ export function rankContexts(contexts: readonly PairContext[], target: RankTarge
   for (let i = 0; i < contexts.length; i++) {
     const ctx = contexts[i] as PairContext;
     const core = predictCore(ctx, checked);
-    const { enriched, enrichment } = surfaceEnrichment(checked.xB, core.surfaceXB);
+    const { enriched, enrichment: isothermEnrichment } = surfaceEnrichment(checked.xB, core.surfaceXB);
+    // a partially wetting (Janus) particle exposes both elements: no shell to score
+    const enrichment = core.wetting !== null && core.wetting.verdict === 'Janus' ? 0 : isothermEnrichment;
     const enrichedElement = enriched === 'A' ? ctx.a.symbol : enriched === 'B' ? ctx.b.symbol : null;
     rows[i] = new RankedRow(scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio), ctx.pairName, ctx, checked, core);
   }

@@ -25,6 +25,9 @@
  *   composition between the two dilute limits so that both ends are exact.
  * At x_s = x_c = 0 the expression is W&K's dilute B-in-A segregation enthalpy; at x_s = x_c = 1 it equals
  * minus the dilute A-in-B one. It is linear in x_s and x_c: ΔH_B = c0 + cS·x_s + cC·x_c.
+ *
+ * Optional, for the prediction chain: a calibration factor `scale` on all three terms (calibration.ts)
+ * and a constant adsorbate term ΔH_ads (environment.ts), added unscaled.
  */
 import { getElement } from '../elements/element-table';
 import { invalid } from '../api/result';
@@ -84,6 +87,10 @@ export interface SegregationCoefficients {
   outOfPlane: number;
   strainBinAEv: number;
   strainAinBEv: number;
+  /** Factor on the three Wynblatt–Ku terms (1 = uncalibrated). */
+  scale: number;
+  /** Adsorbate term of B to the surface, eV (0 in vacuum). */
+  adsorbateEv: number;
   c0: number;
   cS: number;
   cC: number;
@@ -97,11 +104,15 @@ export function segregationCoefficients(args: {
   omegaEv: number;
   strainBinAEv: number;
   strainAinBEv: number;
+  scale?: number;
+  adsorbateEv?: number;
 }): SegregationCoefficients {
   const geometry = facetGeometry(args.facet);
   const aM = args.latticeNm * 1e-9;
   const sigmaM2 = geometry.areaPerAtomOverA2 * aM * aM;
-  const surfaceEnergyEv = (args.gammaBJPerM2 - args.gammaAJPerM2) * sigmaM2 * EV_PER_JOULE;
+  const scale = args.scale ?? 1;
+  const adsorbateEv = args.adsorbateEv ?? 0;
+  const surfaceEnergyEv = scale * (args.gammaBJPerM2 - args.gammaAJPerM2) * sigmaM2 * EV_PER_JOULE;
   const w = args.omegaEv;
   const zl = geometry.inPlane;
   const zv = geometry.outOfPlane;
@@ -112,9 +123,11 @@ export function segregationCoefficients(args: {
     outOfPlane: zv,
     strainBinAEv: args.strainBinAEv,
     strainAinBEv: args.strainAinBEv,
-    c0: surfaceEnergyEv - w * zv - args.strainBinAEv,
-    cS: -2 * w * zl,
-    cC: 2 * w * (zl + zv) + args.strainBinAEv + args.strainAinBEv,
+    scale,
+    adsorbateEv,
+    c0: surfaceEnergyEv + scale * (-w * zv - args.strainBinAEv) + adsorbateEv,
+    cS: scale * (-2 * w * zl),
+    cC: scale * (2 * w * (zl + zv) + args.strainBinAEv + args.strainAinBEv),
   };
 }
 
@@ -124,16 +137,19 @@ export interface SegregationTerms {
   surfaceEnergyEv: number;
   chemicalEv: number;
   elasticEv: number;
+  /** Adsorbate term (0 in vacuum). */
+  adsorbateEv: number;
 }
 
 /** The three terms of ΔH_B at surface fraction `xs` and core fraction `xc` of B. */
 export function segregationTermsB(k: SegregationCoefficients, xs: number, xc: number): SegregationTerms {
-  const chemicalEv = 2 * k.omegaEv * (k.inPlane * (xc - xs) + k.outOfPlane * (xc - 0.5));
-  const elasticEv = -(1 - xc) * k.strainBinAEv + xc * k.strainAinBEv;
-  return { totalEv: k.surfaceEnergyEv + chemicalEv + elasticEv, surfaceEnergyEv: k.surfaceEnergyEv, chemicalEv, elasticEv };
+  const chemicalEv = k.scale * 2 * k.omegaEv * (k.inPlane * (xc - xs) + k.outOfPlane * (xc - 0.5));
+  const elasticEv = k.scale * (-(1 - xc) * k.strainBinAEv + xc * k.strainAinBEv);
+  const totalEv = k.surfaceEnergyEv + chemicalEv + elasticEv + k.adsorbateEv;
+  return { totalEv, surfaceEnergyEv: k.surfaceEnergyEv, chemicalEv, elasticEv, adsorbateEv: k.adsorbateEv };
 }
 
 /** Same terms seen from A (ΔH_A = −ΔH_B). */
 export function negateTerms(t: SegregationTerms): SegregationTerms {
-  return { totalEv: -t.totalEv, surfaceEnergyEv: -t.surfaceEnergyEv, chemicalEv: -t.chemicalEv, elasticEv: -t.elasticEv };
+  return { totalEv: -t.totalEv, surfaceEnergyEv: -t.surfaceEnergyEv, chemicalEv: -t.chemicalEv, elasticEv: -t.elasticEv, adsorbateEv: -t.adsorbateEv };
 }
