@@ -40,7 +40,7 @@ import { adsorbateTerm, type AdsorbateTerm, type Environment } from './environme
 import { interdiffusionEstimate, type KineticsEstimate } from './diffusion';
 import { pairOxidation, type PairOxidation } from './oxidation';
 import { surfaceEnergySources, type SurfaceEnergySources } from './surface-energy-scatter';
-import { wettingAt, wettingPair, type WettingEstimate, type WettingPair } from './wetting';
+import { spreadingAt, wettingAt, wettingPair, type WettingEstimate, type WettingPair } from './wetting';
 import { coReductionExpectation, type KineticExpectation } from './kinetic-expectation';
 
 export { PREDICTION_DEFAULTS, STRAIN_RULES, resolveConditions } from './conditions';
@@ -332,8 +332,8 @@ export interface PredictionCore {
   unlikeNeighbourRatio: number;
   miscibilityGap: boolean;
   adsorbate: AdsorbateTerm;
-  /** Spreading coefficient at this size for a pair inside its miscibility gap, else null. */
-  wetting: WettingEstimate | null;
+  /** Spreading coefficient (J/m²) at this size for a pair inside its miscibility gap, else null. */
+  spreadingJPerM2: number | null;
 }
 
 /** The size-independent part of a prediction: depends on composition, temperature, facet and strain rule. */
@@ -423,7 +423,7 @@ export function predictCore(ctx: PairContext, c: ResolvedConditions): Prediction
     unlikeNeighbourRatio: part.ratio,
     miscibilityGap: part.gap,
     adsorbate: part.adsorbate,
-    wetting: part.gap ? wettingAt(pairWetting(ctx), ctx.b.symbol, c.xB, c.diameterNm) : null,
+    spreadingJPerM2: part.gap ? spreadingAt(pairWetting(ctx), ctx.b.symbol, c.xB, c.diameterNm) : null,
   };
 }
 
@@ -440,7 +440,7 @@ export function predictionFromCore(ctx: PairContext, c: ResolvedConditions, core
   const xB = c.xB;
   const solved = { surfaceXB: core.surfaceXB, coreXB: core.coreXB };
   const tendency = { ratio: core.unlikeNeighbourRatio, gap: core.miscibilityGap };
-  const wetting = core.wetting;
+  const wetting = core.spreadingJPerM2 !== null ? wettingAt(pairWetting(ctx), ctx.b.symbol, xB, c.diameterNm) : null;
   const classification = classifyArchitecture(
     {
       elementA: ctx.a.symbol,

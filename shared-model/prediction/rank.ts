@@ -139,7 +139,7 @@ export function rankContexts(contexts: readonly PairContext[], target: RankTarge
     const core = predictCore(ctx, checked);
     const { enriched, enrichment: isothermEnrichment } = surfaceEnrichment(checked.xB, core.surfaceXB);
     // a partially wetting (Janus) particle exposes both elements: no shell to score
-    const enrichment = core.wetting !== null && core.wetting.verdict === 'Janus' ? 0 : isothermEnrichment;
+    const enrichment = core.spreadingJPerM2 !== null && core.spreadingJPerM2 < 0 ? 0 : isothermEnrichment;
     const enrichedElement = enriched === 'A' ? ctx.a.symbol : enriched === 'B' ? ctx.b.symbol : null;
     rows[i] = new RankedRow(scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio), ctx.pairName, ctx, checked, core);
   }

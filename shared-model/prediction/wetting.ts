@@ -102,6 +102,13 @@ export function shellThicknessNm(diameterNm: number, shellFraction: number): num
   return (diameterNm / 2) * (1 - Math.cbrt(1 - shellFraction));
 }
 
+/** S alone (J/m²), without building the record: the ranking's hot path. */
+export function spreadingAt(pair: WettingPair, elementB: string, xB: number, diameterNm: number): number {
+  const shellFraction = pair.shell === elementB ? xB : 1 - xB;
+  const coherent = pair.biaxialModulusGpa * 1e9 * pair.misfit * pair.misfit * shellThicknessNm(diameterNm, shellFraction) * 1e-9;
+  return pair.deltaGammaJPerM2 - pair.interfaceChemicalJPerM2 - Math.min(coherent, pair.interfaceMisfitCapJPerM2);
+}
+
 /** The spreading coefficient at one size and composition (x_B the overall fraction of B). */
 export function wettingAt(pair: WettingPair, elementB: string, xB: number, diameterNm: number): WettingEstimate {
   const shellFraction = pair.shell === elementB ? xB : 1 - xB;

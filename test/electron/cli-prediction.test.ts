@@ -22,7 +22,7 @@ describe('pairwright prediction commands', () => {
       expect(p, key).toHaveProperty(key);
     }
     expect(p.surfaceElement).toBe('Ag');
-    expect(Object.keys(p.terms).sort()).toEqual(['chemical', 'elastic', 'surfaceEnergy', 'total']);
+    expect(Object.keys(p.terms).sort()).toEqual(['adsorbate', 'chemical', 'elastic', 'surfaceEnergy', 'total']);
   });
 
   it('rank --elements … --target alloy --json ranks the 21 pairs', () => {
@@ -39,7 +39,28 @@ describe('pairwright prediction commands', () => {
     expect(run.stdout).toMatch(/surface energy/);
   });
 
+  it('predict --environment CO --time-h: Pd comes out of Ag–Pd; the as-made verdict and the terms are printed', () => {
+    const p = runPairwrightJson<Prediction>(['predict', 'Ag-Pd', '--environment', 'CO', '--temperature-k', '350', '--time-h', '2', ...data]);
+    expect(p.environment).toBe('CO');
+    expect(p.timeH).toBe(2);
+    expect(p.surfaceElement).toBe('Pd'); // CO draws Pd out of Ag–Pd (see test/shared-model/prediction/flask-conditions.test.ts)
+    const run = runPairwright(['predict', 'Ag-Pd', '--environment', 'CO', '--temperature-k', '350', ...data]);
+    expect(run.stdout).toMatch(/adsorbate\s+CO: E_ads/);
+    expect(run.stdout).toMatch(/equilibrium not reachable: the as-made structure follows the reduction order/);
+  });
+
+  it('rank --target Janus --environment vacuum lists only qualifying pairs, each with its spreading coefficient', () => {
+    const out = runPairwrightJson<RankResult>(['rank', '--target', 'Janus', '--environment', 'vacuum', '--temperature-k', '600', '--diameter-nm', '4', ...data]);
+    expect(out.rows.length).toBeGreaterThan(0);
+    for (const row of out.rows) {
+      expect(row.prediction.architectureKind).toBe('Janus');
+      expect(row.prediction.reason).toMatch(/partial wetting, Janus: S = /);
+    }
+  });
+
   it.each([
+    [['predict', 'Ag-Pd', '--environment', 'N2'], /conditions\.environment/],
+    [['predict', 'Ag-Pd', '--time-h', '0'], /conditions\.timeH/],
     [['predict', 'Ag-Pd', '--xB', '1.5'], /conditions\.xB/],
     [['predict', 'Ag-Ag'], /two different elements/],
     [['predict', 'Ag-Xx'], /unknown element "Xx"/],

@@ -15,12 +15,18 @@ const CONDITION_OPTIONS: Record<string, OptionSpec> = {
   'temperature-k': { type: 'string', description: 'synthesis or annealing temperature in K (default 600)' },
   facet: { type: 'string', description: 'surface facet of the segregation terms: 111 (default) or 100' },
   'strain-rule': { type: 'string', description: '"oversized solute" (default) or "any solute"' },
+  environment: { type: 'string', description: 'vacuum (default), H2, CO, O2 (air) or ligand (thiol, amine): adsorbate-induced segregation' },
+  'pressure-bar': { type: 'string', description: 'gas pressure for the adsorbate coverage, bar (default 1)' },
+  'time-h': { type: 'string', description: 'time at the temperature, hours (default 1): interdiffusion length and the as-made verdict' },
 };
 
 function conditionsFrom(args: ParsedArgs): ConditionsInput {
   const shape = optionalString(args, 'shape');
   const facet = optionalString(args, 'facet');
   const strainRule = optionalString(args, 'strain-rule');
+  const environment = optionalString(args, 'environment');
+  const pressureBar = optionalNumber(args, 'pressure-bar');
+  const timeH = optionalNumber(args, 'time-h');
   return {
     xB: optionalNumber(args, 'xB') ?? PREDICTION_DEFAULTS.xB,
     diameterNm: optionalNumber(args, 'diameter-nm') ?? PREDICTION_DEFAULTS.diameterNm,
@@ -28,6 +34,9 @@ function conditionsFrom(args: ParsedArgs): ConditionsInput {
     ...(shape !== undefined ? { shape: shape as ConditionsInput['shape'] } : {}),
     ...(facet !== undefined ? { facet: facet as ConditionsInput['facet'] } : {}),
     ...(strainRule !== undefined ? { strainRule: strainRule as ConditionsInput['strainRule'] } : {}),
+    ...(environment !== undefined ? { environment: environment as ConditionsInput['environment'] } : {}),
+    ...(pressureBar !== undefined ? { pressureBar } : {}),
+    ...(timeH !== undefined ? { timeH } : {}),
   };
 }
 
@@ -36,13 +45,22 @@ const ev = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(3)} eV`;
 
 function describePrediction(p: Prediction): string {
   return [
-    `${p.pair} at xB = ${p.xB} (${percent(p.xB)} ${p.elementB}), ${p.diameterNm} nm ${p.shape}, ${p.temperatureK} K, (${p.facet}) terms`,
-    `  architecture      ${p.architecture} (confidence ${p.confidence.toFixed(2)})`,
+    `${p.pair} at xB = ${p.xB} (${percent(p.xB)} ${p.elementB}), ${p.diameterNm} nm ${p.shape}, ${p.temperatureK} K for ${p.timeH} h, ${p.environment}, (${p.facet}) terms`,
+    `  architecture      ${p.architecture} after annealing (confidence ${p.confidence.toFixed(2)}${p.certainty.uncertain ? ', uncertain' : ''}); as made: ${p.verdicts.asMade}`,
+    `  kinetics          ${p.verdicts.text}`,
     `  surface element   ${p.surfaceElement ?? 'none'}: ${percent(p.surfaceFraction)} of ${p.surfaceSites} surface sites (${p.atoms} atoms); enrichment E = ${p.enrichment.toFixed(3)}`,
     `  core              ${percent(p.coreXB)} ${p.elementB}`,
-    `  terms             surface energy ${ev(p.terms.surfaceEnergy)}, chemical ${ev(p.terms.chemical)}, elastic ${ev(p.terms.elastic)} (negative favours ${p.surfaceElement ?? p.elementB} outside)`,
+    `  terms             surface energy ${ev(p.terms.surfaceEnergy)}, chemical ${ev(p.terms.chemical)}, elastic ${ev(p.terms.elastic)}, adsorbate ${ev(p.terms.adsorbate)} (×${p.calibrationScale} calibrated; negative favours ${p.surfaceElement ?? p.elementB} outside)`,
     `  dilute limits     ${p.elementB} in ${p.elementA}: ${ev(p.segregation.bInA.total)}; ${p.elementA} in ${p.elementB}: ${ev(p.segregation.aInB.total)}`,
     `  mixing            ΔHmix ${p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical ${p.mixingChemicalKjPerMol.toFixed(1)}, elastic ${p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×${p.unlikeNeighbourRatio.toFixed(2)}`,
+    ...(p.adsorbate.adsorbate !== null
+      ? [`  adsorbate         ${p.adsorbate.adsorbate}: E_ads ${p.elementA} ${p.adsorbate.energyAEv ?? '–'} eV, ${p.elementB} ${p.adsorbate.energyBEv ?? '–'} eV, coverage ${p.adsorbate.coverage.toFixed(2)} (${p.adsorbate.source})`]
+      : []),
+    ...(p.wetting !== null
+      ? [`  wetting           S = ${p.wetting.spreadingJPerM2.toFixed(2)} J/m² (γ ${p.wetting.core} ${p.wetting.gammaCoreJPerM2.toFixed(2)} − γ ${p.wetting.shell} ${p.wetting.gammaShellJPerM2.toFixed(2)} − γ_AB ${p.wetting.interfaceJPerM2.toFixed(2)}): ${p.wetting.verdict}${p.wetting.flipDiameterNm !== null ? `, flips at ${p.wetting.flipDiameterNm.toFixed(1)} nm` : ''}`]
+      : []),
+    ...(p.oxidation.summary !== '' ? [`  in air           ${p.oxidation.summary}`] : []),
+    `  surface energies  ${p.certainty.sources.note}`,
     `  why               ${p.reason}`,
     ...p.flags.map((flag) => `  note              ${flag}`),
     `  model ${p.modelVersion}, classifier ${p.classifierVersion}`,
@@ -111,13 +129,15 @@ export const predictionCommands: CliCommand[] = [
         ...(limit !== undefined ? { limit } : {}),
       });
       const text =
-        `target: ${result.target}; xB ${result.conditions.xB}, ${result.conditions.diameterNm} nm ${result.conditions.shape}, ${result.conditions.temperatureK} K\n` +
+        `target: ${result.target}; xB ${result.conditions.xB}, ${result.conditions.diameterNm} nm ${result.conditions.shape}, ${result.conditions.temperatureK} K for ${result.conditions.timeH} h, ${result.conditions.environment}\n` +
         formatTable(result.rows, [
           { header: '#', value: (r) => r.rank, align: 'right' },
           { header: 'pair', value: (r) => r.prediction.pair },
           { header: 'score', value: (r) => r.score.toFixed(3), align: 'right' },
           { header: 'architecture', value: (r) => r.prediction.architecture },
-          { header: 'conf.', value: (r) => r.prediction.confidence.toFixed(2), align: 'right' },
+          { header: 'conf.', value: (r) => `${r.prediction.confidence.toFixed(2)}${r.prediction.certainty.uncertain ? ' uncertain' : ''}`, align: 'right' },
+          { header: 'as made', value: (r) => r.prediction.verdicts.asMade },
+          { header: 'in air', value: (r) => r.prediction.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ') || '-' },
           { header: 'surface', value: (r) => r.prediction.surfaceElement ?? '-' },
           { header: 'E', value: (r) => r.prediction.enrichment.toFixed(2), align: 'right' },
           { header: 'ΔHmix kJ/mol', value: (r) => r.prediction.mixingEnthalpyKjPerMol.toFixed(1), align: 'right' },

@@ -1,3 +1,4 @@
+import { SEGREGATION_CALIBRATION } from '../../../shared-model/prediction/calibration';
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
 import { DEFAULT_THRESHOLDS } from '../../../shared-model/architecture/classify';
@@ -107,10 +108,13 @@ describe('predictPair: physics checks', () => {
     // surface-energy term (γ_Au − γ_Pt)·σ(111) of Pt, σ = √3 a²/4, 1 eV = 1.602176634e-19 J
     const a = elementProperty('Pt', 'latticeConstantAngstrom') * 1e-10;
     const sigma = (Math.sqrt(3) / 4) * a * a;
+    // every term carries the calibration factor s (calibration.ts: fitted to EAM slab energies)
+    const s = SEGREGATION_CALIBRATION.scale;
+    expect(p.calibrationScale).toBe(s);
     const expected = ((elementProperty('Au', 'surfaceEnergyJPerM2') - elementProperty('Pt', 'surfaceEnergyJPerM2')) * sigma) / 1.602176634e-19;
-    expect(p.segregation.bInA.surfaceEnergy).toBeCloseTo(expected, 10);
+    expect(p.segregation.bInA.surfaceEnergy).toBeCloseTo(s * expected, 10);
     // Au is larger than Pt: Friedel strain relief applies, −E_el(Au in Pt)
-    expect(p.segregation.bInA.elastic).toBeCloseTo(-friedelStrainEnergyEv('Pt', 'Au'), 12);
+    expect(p.segregation.bInA.elastic).toBeCloseTo(-s * friedelStrainEnergyEv('Pt', 'Au'), 12);
     // Pt is smaller than Au: no strain relief for Pt at the Au surface under the default rule
     expect(Math.abs(p.segregation.aInB.elastic)).toBe(0);
   });
