@@ -1,0 +1,243 @@
+/**
+ * Next-batch proposals (DOMAIN.md "Proposals"): every untested candidate is scored by
+ *   P(target) × P(success) ÷ metal cost per batch,
+ * with P(target) drawn from the model's Laplace posterior (Thompson sampling: one posterior draw per slot,
+ * the best candidate under that draw fills it), at most one proposal per pair, and the last
+ * `explorationSlots` slots kept for exploration (untried pairs, or conditions where physics and the model
+ * disagree), marked as such. A condition where a synthesis failed is left out unless asked.
+ * P(target) ± is the mean and standard deviation over 64 posterior draws.
+ */
+import { getElement } from '../elements/element-table';
+import type { RankTarget } from '../prediction/rank';
+import { createRandom } from '../random';
+import { classesForTarget, labelOfClass, type ClassKey } from './classes';
+import { sameCondition, type Candidate } from './candidates';
+import type { CanonicalCondition } from './conditions';
+import { logisticParameterDraw } from './posterior';
+import {
+  classifierProbabilities,
+  floorProbabilities,
+  successProbabilities,
+  type PreparedOutcome,
+} from './outcome-model';
+import { physicsProbabilities } from './physics';
+import type { FittedCampaignModel } from './review';
+import { applyColumnScaler } from './standardise';
+import { predictLogistic } from './logistic';
+
+export interface MetalPrice {
+  symbol: string;
+  pricePerGram: number;
+  currency: string;
+  pricedOn: string;
+}
+
+export interface ProposalSettings {
+  target: RankTarget;
+  count: number;
+  explorationSlots: number;
+  /** Propose again where a synthesis failed. */
+  includeFailed: boolean;
+  /** Total metal per batch, mmol (cost basis). */
+  metalMmolPerBatch: number;
+  seed: number;
+}
+
+export const DEFAULT_METAL_MMOL_PER_BATCH = 0.1;
+const POSTERIOR_DRAWS = 64;
+
+export interface Proposal {
+  pair: string;
+  elementA: string;
+  elementB: string;
+  xB: number;
+  diameterNm: number;
+  temperatureK: number;
+  route: CanonicalCondition['route'];
+  /** Posterior mean of P(target) and its standard deviation. */
+  probability: number;
+  probabilitySd: number;
+  successProbability: number;
+  /** Metal cost of one batch in the prices' currency; null when a price is missing. */
+  costPerBatch: number | null;
+  currency: string | null;
+  exploration: boolean;
+  /** The architecture label the target means for this pair (e.g. "Ni@Pt"). */
+  targetLabel: string;
+  physicsLabel: string;
+  modelLabel: string;
+  reason: string;
+}
+
+export interface ProposalResult {
+  proposals: Proposal[];
+  candidatesConsidered: number;
+  excludedTested: number;
+  excludedFailed: number;
+  costNote: string | null;
+  targetNote: string | null;
+}
+
+function metalCost(c: CanonicalCondition, prices: ReadonlyMap<string, MetalPrice>, mmol: number): number | null {
+  const pa = prices.get(c.elementA);
+  const pb = prices.get(c.elementB);
+  if (!pa || !pb) return null;
+  const massA = mmol * 1e-3 * (1 - c.xB) * getElement(c.elementA).atomicMass;
+  const massB = mmol * 1e-3 * c.xB * getElement(c.elementB).atomicMass;
+  return massA * pa.pricePerGram + massB * pb.pricePerGram;
+}
+
+function targetProbability(
+  probs: readonly number[],
+  classes: readonly ClassKey[],
+  wanted: readonly ClassKey[],
+): number {
+  let p = 0;
+  classes.forEach((k, i) => {
+    if (wanted.includes(k)) p += probs[i] as number;
+  });
+  return p;
+}
+
+function formatP(p: number): string {
+  return p.toFixed(2);
+}
+
+export function proposeBatches(
+  fitted: FittedCampaignModel,
+  candidates: readonly Candidate[],
+  outcomes: readonly PreparedOutcome[],
+  prices: readonly MetalPrice[],
+  settings: ProposalSettings,
+): ProposalResult {
+  const classes = fitted.classes;
+  const priceMap = new Map(prices.map((p) => [p.symbol, p]));
+  const triedPairs = new Set(outcomes.map((o) => o.condition.pair));
+  const triedRoutes = new Set(outcomes.map((o) => `${o.condition.pair}|${o.condition.route}`));
+  let excludedTested = 0;
+  let excludedFailed = 0;
+  const open: Candidate[] = [];
+  for (const c of candidates) {
+    const matches = outcomes.filter((o) => sameCondition(o.condition, c.condition));
+    if (matches.some((o) => o.failed) && !settings.includeFailed) {
+      excludedFailed++;
+      continue;
+    }
+    if (matches.some((o) => !o.failed)) {
+      excludedTested++;
+      continue;
+    }
+    open.push(c);
+  }
+  const wanted = open.map((c) => classesForTarget(settings.target, c.condition.elementA, c.condition.elementB));
+  const modelKnowsTarget = open.some((_, i) => (wanted[i] as ClassKey[]).some((k) => classes.includes(k)));
+  const targetNote = modelKnowsTarget
+    ? null
+    : 'no outcome has reached this target yet; P(target) comes from the physics prediction alone';
+  const features = open.map((c) => c.features);
+  const meanProbs = classifierProbabilities(fitted.classifier, features);
+  const physicsProbs = open.map((c) => floorProbabilities(physicsProbabilities(c.physics, classes), classes.length));
+  const success = successProbabilities(fitted.success, features);
+  const costs = open.map((c) => metalCost(c.condition, priceMap, settings.metalMmolPerBatch));
+  const allPriced = costs.every((c) => c !== null);
+  const missing = [
+    ...new Set(open.flatMap((c) => [c.condition.elementA, c.condition.elementB]).filter((s) => !priceMap.has(s))),
+  ].sort();
+  const costNote = allPriced
+    ? null
+    : `no price per gram for ${missing.join(', ')}; ranked without cost (enter prices to include it)`;
+
+  // Posterior draws of P(target) for every open candidate.
+  const random = createRandom(settings.seed);
+  const z = applyColumnScaler(fitted.classifier.scaler, features);
+  const canDraw = fitted.classifier.hessianCholesky.length > 0 && modelKnowsTarget;
+  const draws: Float64Array[] = [];
+  for (let d = 0; d < POSTERIOR_DRAWS; d++) {
+    const out = new Float64Array(open.length);
+    if (canDraw) {
+      const params = logisticParameterDraw(fitted.classifier, random);
+      z.forEach((row, i) => {
+        out[i] = targetProbability(
+          floorProbabilities(predictLogistic(params, row), classes.length),
+          classes,
+          wanted[i] as ClassKey[],
+        );
+      });
+    } else {
+      open.forEach((_, i) => {
+        out[i] = targetProbability(
+          modelKnowsTarget ? (meanProbs[i] as number[]) : (physicsProbs[i] as number[]),
+          classes,
+          wanted[i] as ClassKey[],
+        );
+      });
+    }
+    draws.push(out);
+  }
+  const mean = open.map((_, i) => draws.reduce((s, d) => s + (d[i] as number), 0) / POSTERIOR_DRAWS);
+  const sd = open.map((_, i) =>
+    Math.sqrt(draws.reduce((s, d) => s + ((d[i] as number) - (mean[i] as number)) ** 2, 0) / (POSTERIOR_DRAWS - 1)),
+  );
+  const modelTop = meanProbs.map((p) => classes[p.indexOf(Math.max(...p))] as ClassKey);
+  const disagree = open.map((c, i) => c.physics.classKey !== null && c.physics.classKey !== modelTop[i]);
+  const isExplorationCandidate = open.map((c, i) => !triedPairs.has(c.condition.pair) || (disagree[i] as boolean));
+
+  const count = Math.max(0, Math.floor(settings.count));
+  const exploreSlots = Math.min(count, Math.max(0, Math.floor(settings.explorationSlots)));
+  const usedPairs = new Set<string>();
+  const chosen: { index: number; exploration: boolean }[] = [];
+  for (let slot = 0; slot < count; slot++) {
+    const exploration = slot >= count - exploreSlots;
+    const draw = draws[slot % POSTERIOR_DRAWS] as Float64Array;
+    let best = -1;
+    let bestScore = -Infinity;
+    open.forEach((c, i) => {
+      if (usedPairs.has(c.condition.pair)) return;
+      if ((wanted[i] as ClassKey[]).length === 0) return;
+      if (exploration && !isExplorationCandidate[i]) return;
+      const cost = allPriced ? (costs[i] as number) : 1;
+      const score = ((draw[i] as number) * (success[i] as number)) / Math.max(cost, 1e-9);
+      if (score > bestScore) {
+        bestScore = score;
+        best = i;
+      }
+    });
+    if (best < 0) continue;
+    usedPairs.add((open[best] as Candidate).condition.pair);
+    chosen.push({ index: best, exploration });
+  }
+
+  const proposals = chosen.map(({ index, exploration }) => {
+    const c = open[index] as Candidate;
+    const { elementA: a, elementB: b } = c.condition;
+    const wantedHere = wanted[index] as ClassKey[];
+    const targetLabel = wantedHere.map((k) => labelOfClass(k, a, b)).join(' or ');
+    const physicsAgrees = c.physics.classKey !== null && wantedHere.includes(c.physics.classKey);
+    const parts = [`P(${targetLabel}) ${formatP(mean[index] as number)} ± ${formatP(sd[index] as number)}`];
+    parts.push(physicsAgrees ? 'physics agrees' : `physics predicts ${c.physics.label}`);
+    if (!triedPairs.has(c.condition.pair)) parts.push('pair untried');
+    else if (!triedRoutes.has(`${c.condition.pair}|${c.condition.route}`)) parts.push('route untried here');
+    if (exploration) parts.push(disagree[index] ? 'exploration: physics and model disagree' : 'exploration');
+    const cost = costs[index] as number | null;
+    return {
+      pair: c.condition.pair,
+      elementA: a,
+      elementB: b,
+      xB: c.condition.xB,
+      diameterNm: c.condition.diameterNm,
+      temperatureK: c.condition.temperatureK,
+      route: c.condition.route,
+      probability: mean[index] as number,
+      probabilitySd: sd[index] as number,
+      successProbability: success[index] as number,
+      costPerBatch: cost,
+      currency: cost === null ? null : (priceMap.get(a)?.currency ?? null),
+      exploration,
+      targetLabel,
+      physicsLabel: c.physics.label,
+      modelLabel: labelOfClass(modelTop[index] as ClassKey, a, b),
+      reason: parts.join('; '),
+    };
+  });
+  return { proposals, candidatesConsidered: open.length, excludedTested, excludedFailed, costNote, targetNote };
+}

@@ -1,0 +1,417 @@
+/**
+ * The model review of a campaign: leave-one-pair-out validation of the learned model (the headline; every
+ * outcome of a pair held out together, standardisation and fit inside each fold) beside the physics
+ * prediction alone and the "always the most common class" baseline; leave-one-out shown only as "known
+ * pairs, new conditions"; a weekly timeline; the prior weight (tuned by leave-one-pair-out log-loss once
+ * 30 outcomes exist); the LDA view (shrinkage 'auto'; structure correlations of the descriptors with the
+ * discriminant scores); and the final fitted model with the ids of the outcomes it was trained on.
+ */
+import { DomainError } from '../api/result';
+import { describeClass, type ClassKey } from './classes';
+import { buildCandidates, candidateConditions, DEFAULT_GRID, type Candidate, type CandidateGrid } from './candidates';
+import { crossValidate, leaveOneGroupOut, leaveOneOut, type Fold } from './cross-validation';
+import { FEATURE_LABELS, FEATURE_NAMES } from './features';
+import { fitLda, ldaTransform, structureCorrelations } from './lda';
+import { classifierFigures, type ClassifierFigures } from './metrics';
+import {
+  classifierProbabilities,
+  DEFAULT_PRIOR_WEIGHT,
+  fitClassifier,
+  fitSuccessModel,
+  floorProbabilities,
+  LEARN_MODEL_VERSION,
+  MIN_OUTCOMES,
+  physicsPseudoOutcomes,
+  prepareOutcomes,
+  PRIOR_WEIGHT_CHOICES,
+  TUNE_PRIOR_FROM,
+  type FittedClassifier,
+  type LearningOutcome,
+  type PreparedOutcome,
+  type PseudoOutcome,
+  type SuccessModel,
+} from './outcome-model';
+import { physicsProbabilities } from './physics';
+import { applyColumnScaler, fitColumnScaler } from './standardise';
+
+export interface ReviewSettings {
+  C: number;
+  /** A fixed prior weight, or 'tune'. */
+  priorWeight: number | 'tune';
+  grid: CandidateGrid;
+  /** Largest pseudo-outcome set used inside cross-validation folds (every k-th candidate). */
+  maxPseudoInFolds: number;
+}
+
+export const DEFAULT_REVIEW_SETTINGS: ReviewSettings = {
+  C: 1,
+  priorWeight: 'tune',
+  grid: DEFAULT_GRID,
+  maxPseudoInFolds: 200,
+};
+
+export interface ReviewProgress {
+  fraction: number;
+  stage: string;
+}
+
+export interface ReviewHooks {
+  onProgress?: (progress: ReviewProgress) => void;
+  shouldCancel?: () => boolean;
+}
+
+export interface TimelinePoint {
+  /** Monday of the week (ISO date). */
+  week: string;
+  outcomes: number;
+  model: { accuracy: number; logLoss: number } | null;
+  physics: { accuracy: number; logLoss: number } | null;
+}
+
+export interface LdaView {
+  axes: number;
+  explainedVarianceRatio: number[];
+  points: { id: string; pair: string; classKey: ClassKey; x: number; y: number }[];
+  /** Structure correlations with the first (and second) discriminant axis, strongest first. */
+  loadings: { descriptor: string; label: string; weight: number; weight2: number | null }[];
+}
+
+export interface FittedCampaignModel {
+  modelVersion: string;
+  classes: ClassKey[];
+  classifier: FittedClassifier;
+  success: SuccessModel;
+  priorWeight: number;
+  trainedOn: string[];
+  elements: string[];
+}
+
+export type ModelReview =
+  | {
+      status: 'too-few';
+      /** What to log next. */
+      message: string;
+      minOutcomes: number;
+      outcomes: number;
+      failed: number;
+      classes: { key: ClassKey; description: string; count: number }[];
+      left: { id: string; reason: string }[];
+      physics: ClassifierFigures | null;
+      trainedOn: string[];
+    }
+  | {
+      status: 'ready';
+      minOutcomes: number;
+      outcomes: number;
+      failed: number;
+      classes: { key: ClassKey; description: string; count: number }[];
+      left: { id: string; reason: string }[];
+      validation: 'leave-one-pair-out';
+      pairs: number;
+      priorWeight: number;
+      priorWeightTuning: { weight: number; logLoss: number }[];
+      model: ClassifierFigures;
+      physics: ClassifierFigures;
+      majority: ClassifierFigures;
+      knownPairsNewConditions: { model: ClassifierFigures; physics: ClassifierFigures };
+      timeline: TimelinePoint[];
+      lda: LdaView | null;
+      ldaNote: string | null;
+      fitted: FittedCampaignModel;
+      trainedOn: string[];
+    };
+
+function cancelled(hooks: ReviewHooks): void {
+  if (hooks.shouldCancel?.()) throw new DomainError('cancelled', 'the retrain was cancelled');
+}
+
+function thin<T>(items: readonly T[], max: number): T[] {
+  if (items.length <= max) return [...items];
+  const step = items.length / max;
+  return Array.from({ length: max }, (_, i) => items[Math.floor(i * step)] as T);
+}
+
+function majorityProbabilities(train: readonly PreparedOutcome[], classes: readonly ClassKey[]): number[] {
+  // Class frequencies of the training fold with add-one smoothing (the most common class on top).
+  const counts = classes.map((k) => train.filter((o) => o.classKey === k).length + 1);
+  const total = counts.reduce((a, b) => a + b, 0);
+  return floorProbabilities(
+    counts.map((c) => c / total),
+    classes.length,
+  );
+}
+
+interface FoldPredictions {
+  model: number[][];
+  physics: number[][];
+  majority: number[][];
+}
+
+function validate(
+  labelled: readonly PreparedOutcome[],
+  folds: readonly Fold[],
+  pseudo: readonly PseudoOutcome[],
+  weight: number,
+  classes: readonly ClassKey[],
+  C: number,
+  hooks: ReviewHooks,
+  progress: (done: number) => void,
+): FoldPredictions {
+  let done = 0;
+  const warm = fitClassifier(
+    labelled.map((o) => ({ features: o.features, classKey: o.classKey as ClassKey })),
+    pseudo,
+    weight,
+    classes,
+    C,
+  );
+  const model = crossValidate(labelled.length, folds, (train, test) => {
+    cancelled(hooks);
+    const rows = train
+      .map((i) => labelled[i] as PreparedOutcome)
+      .map((o) => ({ features: o.features, classKey: o.classKey as ClassKey }));
+    const fit = fitClassifier(rows, pseudo, weight, classes, C, warm);
+    progress(++done);
+    return classifierProbabilities(
+      fit,
+      test.map((i) => (labelled[i] as PreparedOutcome).features),
+    );
+  });
+  const physics = labelled.map((o) => floorProbabilities(physicsProbabilities(o.physics, classes), classes.length));
+  const majority = crossValidate(labelled.length, folds, (train, test) =>
+    test.map(() =>
+      majorityProbabilities(
+        train.map((i) => labelled[i] as PreparedOutcome),
+        classes,
+      ),
+    ),
+  );
+  return { model, physics, majority };
+}
+
+function mondayOf(isoDate: string): string {
+  const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
+  const day = (d.getUTCDay() + 6) % 7;
+  d.setUTCDate(d.getUTCDate() - day);
+  return d.toISOString().slice(0, 10);
+}
+
+function classSummary(
+  outcomes: readonly PreparedOutcome[],
+  classes: readonly ClassKey[],
+): { key: ClassKey; description: string; count: number }[] {
+  return classes.map((key) => ({
+    key,
+    description: describeClass(key),
+    count: outcomes.filter((o) => o.classKey === key).length,
+  }));
+}
+
+/** Builds the review; `elements` are the campaign's elements (the candidate set for the physics prior). */
+export function reviewCampaign(
+  outcomes: readonly LearningOutcome[],
+  elements: readonly string[],
+  settings: ReviewSettings = DEFAULT_REVIEW_SETTINGS,
+  hooks: ReviewHooks = {},
+): ModelReview {
+  const report = (fraction: number, stage: string) => hooks.onProgress?.({ fraction: Math.min(1, fraction), stage });
+  report(0, 'reading outcomes');
+  const prepared = prepareOutcomes(outcomes);
+  const { labelled, classes, left } = prepared;
+  const failed = prepared.all.filter((o) => o.failed).length;
+  const trainedOn = [...prepared.all.map((o) => o.id)];
+  const summary = classSummary(labelled, classes);
+  const pairs = new Set(labelled.map((o) => o.condition.pair));
+  const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+  const tooFew =
+    labelled.length < MIN_OUTCOMES
+      ? `${plural(labelled.length, 'labelled outcome')}; the learned model needs at least ${MIN_OUTCOMES}. ` +
+        `Log ${MIN_OUTCOMES - labelled.length} more (new pairs teach the most).`
+      : classes.length < 2
+        ? `every labelled outcome is "${classes[0] ?? 'none'}"; ` +
+          'log an outcome of a second architecture before a model can separate them.'
+        : pairs.size < 3
+          ? `outcomes cover ${plural(pairs.size, 'pair')}; leave-one-pair-out validation needs at least 3 pairs.`
+          : null;
+  if (tooFew) {
+    const physics =
+      labelled.length > 0 && classes.length >= 2
+        ? classifierFigures(
+            labelled.map((o) => floorProbabilities(physicsProbabilities(o.physics, classes), classes.length)),
+            labelled.map((o) => classes.indexOf(o.classKey as ClassKey)),
+            classes,
+          )
+        : null;
+    return {
+      status: 'too-few',
+      message: tooFew,
+      minOutcomes: MIN_OUTCOMES,
+      outcomes: labelled.length,
+      failed,
+      classes: summary,
+      left,
+      physics,
+      trainedOn,
+    };
+  }
+  cancelled(hooks);
+  report(0.05, 'physics over the candidate set');
+  const allElements = [
+    ...new Set([...elements, ...labelled.flatMap((o) => [o.condition.elementA, o.condition.elementB])]),
+  ];
+  const candidates: Candidate[] = buildCandidates(candidateConditions(allElements, settings.grid));
+  const pseudoAll = physicsPseudoOutcomes(candidates, classes);
+  const pseudoFolds = thin(pseudoAll, settings.maxPseudoInFolds);
+  const observed = labelled.map((o) => classes.indexOf(o.classKey as ClassKey));
+  const lopo = leaveOneGroupOut(labelled.map((o) => o.condition.pair));
+  const loo = leaveOneOut(labelled.length);
+
+  const weights =
+    settings.priorWeight === 'tune'
+      ? labelled.length >= TUNE_PRIOR_FROM
+        ? PRIOR_WEIGHT_CHOICES
+        : [DEFAULT_PRIOR_WEIGHT]
+      : [settings.priorWeight];
+  const totalFits = weights.length * lopo.length + loo.length;
+  let fitsDone = 0;
+  const step = () => report(0.1 + (0.75 * ++fitsDone) / totalFits, 'cross-validation');
+  const tuning: { weight: number; logLoss: number; predictions: FoldPredictions }[] = [];
+  for (const w of weights) {
+    const predictions = validate(labelled, lopo, pseudoFolds, w, classes, settings.C, hooks, step);
+    tuning.push({ weight: w, logLoss: classifierFigures(predictions.model, observed, classes).logLoss, predictions });
+  }
+  const best = tuning.reduce((a, b) => (b.logLoss < a.logLoss - 1e-12 ? b : a));
+  const looPredictions = validate(labelled, loo, pseudoFolds, best.weight, classes, settings.C, hooks, step);
+
+  report(0.86, 'weekly timeline');
+  const timeline: TimelinePoint[] = [];
+  const dated = labelled.filter((o) => o.madeOn);
+  const weeks = [...new Set(dated.map((o) => mondayOf(o.madeOn as string)))].sort();
+  for (const week of weeks) {
+    cancelled(hooks);
+    const end = new Date(`${week}T00:00:00Z`);
+    end.setUTCDate(end.getUTCDate() + 7);
+    const endIso = end.toISOString().slice(0, 10);
+    const subset = dated.filter((o) => (o.madeOn as string).slice(0, 10) < endIso);
+    const subsetPairs = new Set(subset.map((o) => o.condition.pair));
+    const subsetClasses = classes.filter((k) => subset.some((o) => o.classKey === k));
+    const subObserved = subset.map((o) => classes.indexOf(o.classKey as ClassKey));
+    const physicsFigures = classifierFigures(
+      subset.map((o) => floorProbabilities(physicsProbabilities(o.physics, classes), classes.length)),
+      subObserved,
+      classes,
+    );
+    let model: TimelinePoint['model'] = null;
+    if (subset.length >= MIN_OUTCOMES && subsetClasses.length >= 2 && subsetPairs.size >= 3) {
+      const p = validate(
+        subset,
+        leaveOneGroupOut(subset.map((o) => o.condition.pair)),
+        pseudoFolds,
+        best.weight,
+        classes,
+        settings.C,
+        hooks,
+        () => undefined,
+      );
+      const f = classifierFigures(p.model, subObserved, classes);
+      model = { accuracy: f.accuracy, logLoss: f.logLoss };
+    }
+    timeline.push({
+      week,
+      outcomes: subset.length,
+      model,
+      physics: { accuracy: physicsFigures.accuracy, logLoss: physicsFigures.logLoss },
+    });
+  }
+
+  report(0.92, 'discriminant view');
+  let lda: LdaView | null = null;
+  let ldaNote: string | null = null;
+  const ldaClasses = classes.filter((k) => labelled.filter((o) => o.classKey === k).length >= 2);
+  const ldaRows = labelled.filter((o) => ldaClasses.includes(o.classKey as ClassKey));
+  if (ldaClasses.length < 2) ldaNote = 'the discriminant view needs two architectures seen at least twice each';
+  else {
+    try {
+      const scaler = fitColumnScaler(ldaRows.map((o) => o.features));
+      const z = applyColumnScaler(
+        scaler,
+        ldaRows.map((o) => o.features),
+      );
+      const yIdx = ldaRows.map((o) => ldaClasses.indexOf(o.classKey as ClassKey));
+      const model = fitLda(z, yIdx, ldaClasses.length, { shrinkage: 'auto' });
+      const axes = Math.min(2, model.components);
+      const scores = ldaTransform(model, z, axes);
+      const corr = structureCorrelations(model, z, axes);
+      lda = {
+        axes,
+        explainedVarianceRatio: model.explainedVarianceRatio.slice(0, axes),
+        points: ldaRows.map((o, i) => ({
+          id: o.id,
+          pair: o.condition.pair,
+          classKey: o.classKey as ClassKey,
+          x: (scores[i] as number[])[0] as number,
+          y: axes > 1 ? ((scores[i] as number[])[1] as number) : o.condition.xB,
+        })),
+        loadings: scaler.kept
+          .map((column, j) => ({
+            descriptor: FEATURE_NAMES[column] as string,
+            label: FEATURE_LABELS[FEATURE_NAMES[column] as string] ?? (FEATURE_NAMES[column] as string),
+            weight: (corr[j] as number[])[0] as number,
+            weight2: axes > 1 ? ((corr[j] as number[])[1] as number) : null,
+          }))
+          .sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight)),
+      };
+      if (lda.points.some((p) => !Number.isFinite(p.x) || !Number.isFinite(p.y))) {
+        lda = null;
+        ldaNote = 'the discriminant axes are not defined for these outcomes (too little spread in the descriptors)';
+      }
+    } catch (error) {
+      if (!(error instanceof RangeError)) throw error;
+      ldaNote = `the discriminant view cannot be computed: ${error.message}`;
+    }
+  }
+
+  report(0.96, 'final model');
+  cancelled(hooks);
+  const classifier = fitClassifier(
+    labelled.map((o) => ({ features: o.features, classKey: o.classKey as ClassKey })),
+    pseudoAll,
+    best.weight,
+    classes,
+    settings.C,
+  );
+  const success = fitSuccessModel(prepared.all, settings.C);
+  report(1, 'done');
+  return {
+    status: 'ready',
+    minOutcomes: MIN_OUTCOMES,
+    outcomes: labelled.length,
+    failed,
+    classes: summary,
+    left,
+    validation: 'leave-one-pair-out',
+    pairs: pairs.size,
+    priorWeight: best.weight,
+    priorWeightTuning: tuning.map((t) => ({ weight: t.weight, logLoss: t.logLoss })),
+    model: classifierFigures(best.predictions.model, observed, classes),
+    physics: classifierFigures(best.predictions.physics, observed, classes),
+    majority: classifierFigures(best.predictions.majority, observed, classes),
+    knownPairsNewConditions: {
+      model: classifierFigures(looPredictions.model, observed, classes),
+      physics: classifierFigures(looPredictions.physics, observed, classes),
+    },
+    timeline,
+    lda,
+    ldaNote,
+    fitted: {
+      modelVersion: LEARN_MODEL_VERSION,
+      classes,
+      classifier,
+      success,
+      priorWeight: best.weight,
+      trainedOn,
+      elements: allElements.sort(),
+    },
+    trainedOn,
+  };
+}

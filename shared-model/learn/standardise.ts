@@ -1,0 +1,79 @@
+/**
+ * Column standardisation fitted on a training set and applied to any rows (mean and standard deviation with
+ * ddof 0, as scikit-learn's StandardScaler), plus the removal of constant and exactly collinear columns.
+ * Both are fitted inside each training fold of a cross-validation, never on the held-out rows.
+ */
+
+export interface ColumnScaler {
+  /** Indices of the kept input columns, in order. */
+  kept: number[];
+  means: number[];
+  scales: number[];
+  /** Input columns left out, with the reason. */
+  dropped: { column: number; reason: 'constant' | 'collinear' }[];
+}
+
+/** Relative size of a residual below which a column counts as a linear combination of earlier ones. */
+const COLLINEAR_TOLERANCE = 1e-9;
+
+function columnMeanAndScale(rows: readonly (readonly number[])[], column: number): { mean: number; scale: number } {
+  let sum = 0;
+  for (const row of rows) sum += row[column] as number;
+  const mean = sum / rows.length;
+  let squares = 0;
+  for (const row of rows) {
+    const d = (row[column] as number) - mean;
+    squares += d * d;
+  }
+  return { mean, scale: Math.sqrt(squares / rows.length) };
+}
+
+/**
+ * Fits the scaler: drops constant columns, then (Gram–Schmidt on the standardised columns, in column order)
+ * every column whose residual after projection on the kept ones is below 1e-9 of its norm — e.g. a Miedema
+ * total that is the sum of its chemical and elastic parts, or the last level of a one-hot group.
+ */
+export function fitColumnScaler(
+  rows: readonly (readonly number[])[],
+  options: { dropCollinear?: boolean } = {},
+): ColumnScaler {
+  if (rows.length === 0) throw new RangeError('cannot standardise an empty table');
+  const columns = (rows[0] as readonly number[]).length;
+  const kept: number[] = [];
+  const means: number[] = [];
+  const scales: number[] = [];
+  const dropped: ColumnScaler['dropped'] = [];
+  const basis: Float64Array[] = [];
+  for (let c = 0; c < columns; c++) {
+    const { mean, scale } = columnMeanAndScale(rows, c);
+    if (!(scale > 1e-12 * Math.max(1, Math.abs(mean)))) {
+      dropped.push({ column: c, reason: 'constant' });
+      continue;
+    }
+    if (options.dropCollinear !== false) {
+      const v = Float64Array.from(rows, (row) => ((row[c] as number) - mean) / scale);
+      const norm0 = Math.sqrt(v.reduce((s, x) => s + x * x, 0));
+      for (const q of basis) {
+        let dot = 0;
+        for (let i = 0; i < v.length; i++) dot += (q[i] as number) * (v[i] as number);
+        for (let i = 0; i < v.length; i++) v[i] = (v[i] as number) - dot * (q[i] as number);
+      }
+      const norm = Math.sqrt(v.reduce((s, x) => s + x * x, 0));
+      if (norm < COLLINEAR_TOLERANCE * norm0) {
+        dropped.push({ column: c, reason: 'collinear' });
+        continue;
+      }
+      basis.push(v.map((x) => x / norm));
+    }
+    kept.push(c);
+    means.push(mean);
+    scales.push(scale);
+  }
+  return { kept, means, scales, dropped };
+}
+
+export function applyColumnScaler(scaler: ColumnScaler, rows: readonly (readonly number[])[]): number[][] {
+  return rows.map((row) =>
+    scaler.kept.map((c, j) => ((row[c] as number) - (scaler.means[j] as number)) / (scaler.scales[j] as number)),
+  );
+}
