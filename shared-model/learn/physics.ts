@@ -6,7 +6,7 @@
  * (our convention: the prediction's confidence in [0, 1] read as a probability between a guess and 0.9);
  * when the predicted label is not one of the model's classes the physics probabilities are uniform.
  */
-import { pairContext, predictWithContext, checkConditions, type PairContext } from '../prediction/predict';
+import { pairContext, predictWithContext, resolveConditions, type PairContext } from '../prediction/predict';
 import { classOfLabel, type ClassKey } from './classes';
 import type { CanonicalCondition } from './conditions';
 
@@ -30,7 +30,7 @@ export function physicsPrediction(c: CanonicalCondition): PhysicsCall {
   const xB = Math.min(0.999, Math.max(0.001, c.xB));
   const prediction = predictWithContext(
     ctx,
-    checkConditions({ xB, diameterNm: c.diameterNm, temperatureK: c.temperatureK, shape: PHYSICS_SHAPE }),
+    resolveConditions({ xB, diameterNm: c.diameterNm, temperatureK: c.temperatureK, shape: PHYSICS_SHAPE }),
   );
   return {
     classKey: classOfLabel(prediction.architecture, c.elementA, c.elementB),
