@@ -52,13 +52,22 @@ export interface StoredBatch {
 }
 
 function toStoredBatch(db: SqliteDatabase, row: BatchRow): StoredBatch {
-  const lots = db.prepare('SELECT reagent_key, lot FROM batch_lots WHERE batch_id = ? ORDER BY reagent_key').all(row.id) as { reagent_key: string; lot: string }[];
-  const stocks = db.prepare('SELECT reagent_key, prepared_at, freshness_hours FROM batch_stocks WHERE batch_id = ? ORDER BY reagent_key').all(row.id) as {
+  const lots = db
+    .prepare('SELECT reagent_key, lot FROM batch_lots WHERE batch_id = ? ORDER BY reagent_key')
+    .all(row.id) as { reagent_key: string; lot: string }[];
+  const stocks = db
+    .prepare(
+      'SELECT reagent_key, prepared_at, freshness_hours FROM batch_stocks WHERE batch_id = ? ORDER BY reagent_key',
+    )
+    .all(row.id) as {
     reagent_key: string;
     prepared_at: string;
     freshness_hours: number | null;
   }[];
-  const measured = row.measured_diameter_nm !== null || row.measured_particles_per_ml !== null ? { diameterNm: row.measured_diameter_nm, particlesPerMl: row.measured_particles_per_ml } : null;
+  const measured =
+    row.measured_diameter_nm !== null || row.measured_particles_per_ml !== null
+      ? { diameterNm: row.measured_diameter_nm, particlesPerMl: row.measured_particles_per_ml }
+      : null;
   return {
     id: row.id,
     name: row.name,
@@ -72,7 +81,11 @@ function toStoredBatch(db: SqliteDatabase, row: BatchRow): StoredBatch {
     seedBatchId: row.seed_batch_id,
     measured,
     lots: lots.map((l) => ({ reagentKey: l.reagent_key, lot: l.lot })),
-    stocks: stocks.map((s) => ({ reagentKey: s.reagent_key, preparedAt: s.prepared_at, ...(s.freshness_hours !== null ? { freshnessHours: s.freshness_hours } : {}) })),
+    stocks: stocks.map((s) => ({
+      reagentKey: s.reagent_key,
+      preparedAt: s.prepared_at,
+      ...(s.freshness_hours !== null ? { freshnessHours: s.freshness_hours } : {}),
+    })),
     notes: row.notes,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
@@ -85,7 +98,10 @@ export function getBatch(db: SqliteDatabase, id: number, field = 'id'): StoredBa
   return toStoredBatch(db, row);
 }
 
-export function listBatchSummaries(db: SqliteDatabase, filter: { campaignId?: number; status?: BatchStatus }): BatchSummary[] {
+export function listBatchSummaries(
+  db: SqliteDatabase,
+  filter: { campaignId?: number; status?: BatchStatus },
+): BatchSummary[] {
   const where: string[] = [];
   const params: (string | number)[] = [];
   if (filter.campaignId !== undefined) {
@@ -97,8 +113,25 @@ export function listBatchSummaries(db: SqliteDatabase, filter: { campaignId?: nu
     params.push(filter.status);
   }
   const rows = db
-    .prepare(`SELECT id, name, campaign_id, element_a, element_b, target, route, status, seed_batch_id, catalog_revisions, json_extract(computed, '$.diameterNm') AS diameter_nm, created_at FROM batches ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY id DESC`)
-    .all(...params) as (Pick<BatchRow, 'id' | 'name' | 'campaign_id' | 'element_a' | 'element_b' | 'target' | 'route' | 'status' | 'seed_batch_id' | 'catalog_revisions' | 'created_at'> & { diameter_nm: number })[];
+    .prepare(
+      `SELECT id, name, campaign_id, element_a, element_b, target, route, status, seed_batch_id, catalog_revisions,
+         json_extract(computed, '$.diameterNm') AS diameter_nm, created_at
+       FROM batches ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY id DESC`,
+    )
+    .all(...params) as (Pick<
+    BatchRow,
+    | 'id'
+    | 'name'
+    | 'campaign_id'
+    | 'element_a'
+    | 'element_b'
+    | 'target'
+    | 'route'
+    | 'status'
+    | 'seed_batch_id'
+    | 'catalog_revisions'
+    | 'created_at'
+  > & { diameter_nm: number })[];
   const revisions = currentRevisions(db);
   return rows.map((row) => ({
     id: row.id,
@@ -111,7 +144,9 @@ export function listBatchSummaries(db: SqliteDatabase, filter: { campaignId?: nu
     status: row.status,
     diameterNm: row.diameter_nm,
     seedBatchId: row.seed_batch_id,
-    catalogChanged: Object.entries(JSON.parse(row.catalog_revisions) as Record<string, number>).some(([key, revision]) => revisions.get(key) !== revision),
+    catalogChanged: Object.entries(JSON.parse(row.catalog_revisions) as Record<string, number>).some(
+      ([key, revision]) => revisions.get(key) !== revision,
+    ),
     createdAt: row.created_at,
   }));
 }
@@ -134,7 +169,8 @@ export function insertBatch(db: SqliteDatabase, batch: NewBatch): StoredBatch {
   const id = db.transaction(() => {
     const info = db
       .prepare(
-        `INSERT INTO batches (name, campaign_id, pair_id, element_a, element_b, target, route, status, inputs, computed, model_version, catalog_revisions, seed_batch_id, notes, created_at, updated_at)
+        `INSERT INTO batches (name, campaign_id, pair_id, element_a, element_b, target, route, status, inputs, computed,
+           model_version, catalog_revisions, seed_batch_id, notes, created_at, updated_at)
          VALUES (?, ?, ?, ?, ?, ?, ?, 'planned', ?, ?, ?, ?, ?, ?, ?, ?)`,
       )
       .run(
@@ -170,11 +206,17 @@ function writeLots(db: SqliteDatabase, id: number, lots: readonly ReagentLot[]):
 
 function writeStocks(db: SqliteDatabase, id: number, stocks: readonly StockRecord[]): void {
   db.prepare('DELETE FROM batch_stocks WHERE batch_id = ?').run(id);
-  const insert = db.prepare('INSERT INTO batch_stocks (batch_id, reagent_key, prepared_at, freshness_hours) VALUES (?, ?, ?, ?)');
+  const insert = db.prepare(
+    'INSERT INTO batch_stocks (batch_id, reagent_key, prepared_at, freshness_hours) VALUES (?, ?, ?, ?)',
+  );
   for (const stock of stocks) insert.run(id, stock.reagentKey, stock.preparedAt, stock.freshnessHours ?? null);
 }
 
-export function updateBatchRecords(db: SqliteDatabase, id: number, changes: { lots?: readonly ReagentLot[]; stocks?: readonly StockRecord[]; notes?: string }): StoredBatch {
+export function updateBatchRecords(
+  db: SqliteDatabase,
+  id: number,
+  changes: { lots?: readonly ReagentLot[]; stocks?: readonly StockRecord[]; notes?: string },
+): StoredBatch {
   getBatch(db, id);
   db.transaction(() => {
     if (changes.lots) writeLots(db, id, changes.lots);
@@ -185,19 +227,38 @@ export function updateBatchRecords(db: SqliteDatabase, id: number, changes: { lo
   return getBatch(db, id);
 }
 
-export function updateBatchStatus(db: SqliteDatabase, id: number, status: BatchStatus, measured?: { diameterNm?: number | null; particlesPerMl?: number | null }): StoredBatch {
+export function updateBatchStatus(
+  db: SqliteDatabase,
+  id: number,
+  status: BatchStatus,
+  measured?: { diameterNm?: number | null; particlesPerMl?: number | null },
+): StoredBatch {
   const current = getBatch(db, id);
-  const diameter = measured && measured.diameterNm !== undefined ? measured.diameterNm : (current.measured?.diameterNm ?? null);
-  const concentration = measured && measured.particlesPerMl !== undefined ? measured.particlesPerMl : (current.measured?.particlesPerMl ?? null);
-  db.prepare('UPDATE batches SET status = ?, measured_diameter_nm = ?, measured_particles_per_ml = ?, updated_at = ? WHERE id = ?').run(status, diameter, concentration, nowIso(), id);
+  const diameter =
+    measured && measured.diameterNm !== undefined ? measured.diameterNm : (current.measured?.diameterNm ?? null);
+  const concentration =
+    measured && measured.particlesPerMl !== undefined
+      ? measured.particlesPerMl
+      : (current.measured?.particlesPerMl ?? null);
+  db.prepare(
+    `UPDATE batches SET status = ?, measured_diameter_nm = ?, measured_particles_per_ml = ?, updated_at = ?
+     WHERE id = ?`,
+  ).run(status, diameter, concentration, nowIso(), id);
   return getBatch(db, id);
 }
 
 export function removeBatch(db: SqliteDatabase, id: number): void {
   getBatch(db, id);
-  const children = db.prepare('SELECT id, name FROM batches WHERE seed_batch_id = ? ORDER BY id').all(id) as { id: number; name: string }[];
+  const children = db.prepare('SELECT id, name FROM batches WHERE seed_batch_id = ? ORDER BY id').all(id) as {
+    id: number;
+    name: string;
+  }[];
   if (children.length > 0) {
-    throw new DomainError('conflict', `batch ${id} is the seed batch of ${children.map((c) => `#${c.id} ${c.name}`).join(', ')}; remove those first`, 'id');
+    throw new DomainError(
+      'conflict',
+      `batch ${id} is the seed batch of ${children.map((c) => `#${c.id} ${c.name}`).join(', ')}; remove those first`,
+      'id',
+    );
   }
   db.prepare('DELETE FROM batches WHERE id = ?').run(id);
 }

@@ -45,7 +45,11 @@ export interface NewSizeImport {
 }
 
 function diametersOf(db: SqliteDatabase, importId: number): number[] {
-  return (db.prepare('SELECT diameter_nm FROM outcome_diameters WHERE import_id = ? ORDER BY seq').all(importId) as { diameter_nm: number }[]).map((r) => r.diameter_nm);
+  return (
+    db.prepare('SELECT diameter_nm FROM outcome_diameters WHERE import_id = ? ORDER BY seq').all(importId) as {
+      diameter_nm: number;
+    }[]
+  ).map((r) => r.diameter_nm);
 }
 
 function toSizeRecord(db: SqliteDatabase, row: SizeImportRow): SizeRecord {
@@ -66,7 +70,8 @@ export function insertSizeImport(db: SqliteDatabase, input: NewSizeImport): Size
   const write = db.transaction(() => {
     const info = db
       .prepare(
-        `INSERT INTO outcome_size_imports (batch_id, source_file, column_number, column_name, import_notes_json, target_diameter_nm, precision_percent, analysis_version, analysis_json, created_at)
+        `INSERT INTO outcome_size_imports (batch_id, source_file, column_number, column_name, import_notes_json,
+           target_diameter_nm, precision_percent, analysis_version, analysis_json, created_at)
          VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       )
       .run(
@@ -96,7 +101,9 @@ export function getSizeImport(db: SqliteDatabase, id: number): SizeRecord {
 }
 
 export function listSizeImports(db: SqliteDatabase, batchId: number): SizeRecord[] {
-  const rows = db.prepare('SELECT * FROM outcome_size_imports WHERE batch_id = ? ORDER BY id').all(batchId) as SizeImportRow[];
+  const rows = db
+    .prepare('SELECT * FROM outcome_size_imports WHERE batch_id = ? ORDER BY id')
+    .all(batchId) as SizeImportRow[];
   return rows.map((row) => toSizeRecord(db, row));
 }
 
@@ -119,13 +126,23 @@ interface CompositionRow {
 
 function toComposition(db: SqliteDatabase, row: CompositionRow): CompositionRecord {
   const measurements = (
-    db.prepare('SELECT method, xb, uncertainty_xb, lines FROM outcome_composition_measurements WHERE composition_id = ? ORDER BY seq').all(row.id) as {
+    db
+      .prepare(
+        `SELECT method, xb, uncertainty_xb, lines FROM outcome_composition_measurements
+         WHERE composition_id = ? ORDER BY seq`,
+      )
+      .all(row.id) as {
       method: CompositionMeasurement['method'];
       xb: number;
       uncertainty_xb: number | null;
       lines: string | null;
     }[]
-  ).map((m) => ({ method: m.method, xB: m.xb, uncertaintyXB: m.uncertainty_xb, ...(m.lines !== null ? { lines: m.lines } : {}) }));
+  ).map((m) => ({
+    method: m.method,
+    xB: m.xb,
+    uncertaintyXB: m.uncertainty_xb,
+    ...(m.lines !== null ? { lines: m.lines } : {}),
+  }));
   return {
     id: row.id,
     batchId: row.batch_id,
@@ -140,14 +157,34 @@ function toComposition(db: SqliteDatabase, row: CompositionRow): CompositionReco
 
 export function insertComposition(
   db: SqliteDatabase,
-  input: { batchId: number; nominalXB: number | null; gridMetal: string | null; measurements: readonly CompositionMeasurement[]; comparison: CompositionComparison; analysisVersion: string },
+  input: {
+    batchId: number;
+    nominalXB: number | null;
+    gridMetal: string | null;
+    measurements: readonly CompositionMeasurement[];
+    comparison: CompositionComparison;
+    analysisVersion: string;
+  },
 ): CompositionRecord {
   const write = db.transaction(() => {
     const info = db
-      .prepare('INSERT INTO outcome_compositions (batch_id, nominal_xb, grid_metal, analysis_version, comparison_json, created_at) VALUES (?, ?, ?, ?, ?, ?)')
-      .run(input.batchId, input.nominalXB, input.gridMetal, input.analysisVersion, JSON.stringify(input.comparison), nowIso());
+      .prepare(
+        `INSERT INTO outcome_compositions
+           (batch_id, nominal_xb, grid_metal, analysis_version, comparison_json, created_at) VALUES (?, ?, ?, ?, ?, ?)`,
+      )
+      .run(
+        input.batchId,
+        input.nominalXB,
+        input.gridMetal,
+        input.analysisVersion,
+        JSON.stringify(input.comparison),
+        nowIso(),
+      );
     const id = Number(info.lastInsertRowid);
-    const insert = db.prepare('INSERT INTO outcome_composition_measurements (composition_id, seq, method, xb, uncertainty_xb, lines) VALUES (?, ?, ?, ?, ?, ?)');
+    const insert = db.prepare(
+      `INSERT INTO outcome_composition_measurements (composition_id, seq, method, xb, uncertainty_xb, lines)
+       VALUES (?, ?, ?, ?, ?, ?)`,
+    );
     input.measurements.forEach((m, seq) => insert.run(id, seq, m.method, m.xB, m.uncertaintyXB, m.lines ?? null));
     return id;
   });
@@ -156,7 +193,9 @@ export function insertComposition(
 }
 
 export function listCompositions(db: SqliteDatabase, batchId: number): CompositionRecord[] {
-  const rows = db.prepare('SELECT * FROM outcome_compositions WHERE batch_id = ? ORDER BY id').all(batchId) as CompositionRow[];
+  const rows = db
+    .prepare('SELECT * FROM outcome_compositions WHERE batch_id = ? ORDER BY id')
+    .all(batchId) as CompositionRow[];
   return rows.map((row) => toComposition(db, row));
 }
 
@@ -194,7 +233,9 @@ export interface NewLineScan {
 
 export function lineScanPoints(db: SqliteDatabase, scanId: number): LineScanPoint[] {
   return (
-    db.prepare('SELECT position_nm, signal_a, signal_b FROM outcome_line_scan_points WHERE scan_id = ? ORDER BY seq').all(scanId) as {
+    db
+      .prepare('SELECT position_nm, signal_a, signal_b FROM outcome_line_scan_points WHERE scan_id = ? ORDER BY seq')
+      .all(scanId) as {
       position_nm: number;
       signal_a: number;
       signal_b: number;
@@ -222,7 +263,8 @@ export function insertLineScan(db: SqliteDatabase, input: NewLineScan): LineScan
     const now = nowIso();
     const info = db
       .prepare(
-        `INSERT INTO outcome_line_scans (batch_id, name, source_file, element_a, element_b, unit, probe_sigma_nm, import_notes_json, chosen_model, analysis_version, analysis_json, created_at, fitted_at)
+        `INSERT INTO outcome_line_scans (batch_id, name, source_file, element_a, element_b, unit, probe_sigma_nm,
+           import_notes_json, chosen_model, analysis_version, analysis_json, created_at, fitted_at)
          VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
       )
       .run(
@@ -241,7 +283,9 @@ export function insertLineScan(db: SqliteDatabase, input: NewLineScan): LineScan
         now,
       );
     const id = Number(info.lastInsertRowid);
-    const insert = db.prepare('INSERT INTO outcome_line_scan_points (scan_id, seq, position_nm, signal_a, signal_b) VALUES (?, ?, ?, ?, ?)');
+    const insert = db.prepare(
+      'INSERT INTO outcome_line_scan_points (scan_id, seq, position_nm, signal_a, signal_b) VALUES (?, ?, ?, ?, ?)',
+    );
     input.points.forEach((p, seq) => insert.run(id, seq, p.positionNm, p.a, p.b));
     return id;
   });
@@ -255,25 +299,29 @@ export function getLineScan(db: SqliteDatabase, id: number): LineScanRecord {
 }
 
 export function lineScanElements(db: SqliteDatabase, id: number): { elementA: string; elementB: string } {
-  const row = db.prepare('SELECT element_a, element_b FROM outcome_line_scans WHERE id = ?').get(id) as { element_a: string; element_b: string } | undefined;
+  const row = db.prepare('SELECT element_a, element_b FROM outcome_line_scans WHERE id = ?').get(id) as
+    { element_a: string; element_b: string } | undefined;
   if (!row) throw new DomainError('not_found', `no line scan with id ${id}`, 'id');
   return { elementA: row.element_a, elementB: row.element_b };
 }
 
-export function updateLineScanFit(db: SqliteDatabase, id: number, probeSigmaNm: number | null, analysis: LineScanAnalysis): LineScanRecord {
-  db.prepare('UPDATE outcome_line_scans SET probe_sigma_nm = ?, chosen_model = ?, analysis_version = ?, analysis_json = ?, fitted_at = ? WHERE id = ?').run(
-    probeSigmaNm,
-    analysis.chosenModel,
-    analysis.analysisVersion,
-    JSON.stringify(analysis),
-    nowIso(),
-    id,
-  );
+export function updateLineScanFit(
+  db: SqliteDatabase,
+  id: number,
+  probeSigmaNm: number | null,
+  analysis: LineScanAnalysis,
+): LineScanRecord {
+  db.prepare(
+    `UPDATE outcome_line_scans SET probe_sigma_nm = ?, chosen_model = ?, analysis_version = ?, analysis_json = ?,
+       fitted_at = ? WHERE id = ?`,
+  ).run(probeSigmaNm, analysis.chosenModel, analysis.analysisVersion, JSON.stringify(analysis), nowIso(), id);
   return getLineScan(db, id);
 }
 
 export function listLineScans(db: SqliteDatabase, batchId: number): LineScanRecord[] {
-  const rows = db.prepare('SELECT * FROM outcome_line_scans WHERE batch_id = ? ORDER BY id').all(batchId) as LineScanRow[];
+  const rows = db
+    .prepare('SELECT * FROM outcome_line_scans WHERE batch_id = ? ORDER BY id')
+    .all(batchId) as LineScanRow[];
   return rows.map((row) => toLineScan(db, row));
 }
 
@@ -293,19 +341,34 @@ interface ObservationRow {
   updated_at: string;
 }
 
-export function getObservation(db: SqliteDatabase, batchId: number): { observed: ObservedArchitecture | null; notes: string } {
-  const row = db.prepare('SELECT * FROM outcome_observations WHERE batch_id = ?').get(batchId) as ObservationRow | undefined;
+export function getObservation(
+  db: SqliteDatabase,
+  batchId: number,
+): { observed: ObservedArchitecture | null; notes: string } {
+  const row = db.prepare('SELECT * FROM outcome_observations WHERE batch_id = ?').get(batchId) as
+    ObservationRow | undefined;
   if (!row) return { observed: null, notes: '' };
   const observed =
     row.observed_label !== null && row.decision !== null
-      ? { label: row.observed_label, decision: row.decision, suggestedLabel: row.suggested_label, reason: row.reason, updatedAt: row.updated_at }
+      ? {
+          label: row.observed_label,
+          decision: row.decision,
+          suggestedLabel: row.suggested_label,
+          reason: row.reason,
+          updatedAt: row.updated_at,
+        }
       : null;
   return { observed, notes: row.notes };
 }
 
-export function setObservation(db: SqliteDatabase, batchId: number, observed: { label: string; decision: ObservedDecision; suggestedLabel: string | null; reason: string }): void {
+export function setObservation(
+  db: SqliteDatabase,
+  batchId: number,
+  observed: { label: string; decision: ObservedDecision; suggestedLabel: string | null; reason: string },
+): void {
   db.prepare(
-    `INSERT INTO outcome_observations (batch_id, observed_label, decision, suggested_label, reason, updated_at) VALUES (?, ?, ?, ?, ?, ?)
+    `INSERT INTO outcome_observations (batch_id, observed_label, decision, suggested_label, reason, updated_at)
+     VALUES (?, ?, ?, ?, ?, ?)
      ON CONFLICT (batch_id) DO UPDATE SET observed_label = excluded.observed_label, decision = excluded.decision,
        suggested_label = excluded.suggested_label, reason = excluded.reason, updated_at = excluded.updated_at`,
   ).run(batchId, observed.label, observed.decision, observed.suggestedLabel, observed.reason, nowIso());
@@ -327,15 +390,29 @@ interface FileRow {
   added_at: string;
 }
 
-const toFile = (row: FileRow): OutcomeFile => ({ id: row.id, batchId: row.batch_id, path: row.path, kind: row.kind, note: row.note, addedAt: row.added_at });
+const toFile = (row: FileRow): OutcomeFile => ({
+  id: row.id,
+  batchId: row.batch_id,
+  path: row.path,
+  kind: row.kind,
+  note: row.note,
+  addedAt: row.added_at,
+});
 
-export function addOutcomeFile(db: SqliteDatabase, input: { batchId: number; path: string; kind: OutcomeFileKind; note: string }): OutcomeFile {
-  const info = db.prepare('INSERT INTO outcome_files (batch_id, path, kind, note, added_at) VALUES (?, ?, ?, ?, ?)').run(input.batchId, input.path, input.kind, input.note, nowIso());
+export function addOutcomeFile(
+  db: SqliteDatabase,
+  input: { batchId: number; path: string; kind: OutcomeFileKind; note: string },
+): OutcomeFile {
+  const info = db
+    .prepare('INSERT INTO outcome_files (batch_id, path, kind, note, added_at) VALUES (?, ?, ?, ?, ?)')
+    .run(input.batchId, input.path, input.kind, input.note, nowIso());
   return toFile(db.prepare('SELECT * FROM outcome_files WHERE id = ?').get(Number(info.lastInsertRowid)) as FileRow);
 }
 
 export function listOutcomeFiles(db: SqliteDatabase, batchId: number): OutcomeFile[] {
-  return (db.prepare('SELECT * FROM outcome_files WHERE batch_id = ? ORDER BY id').all(batchId) as FileRow[]).map(toFile);
+  return (db.prepare('SELECT * FROM outcome_files WHERE batch_id = ? ORDER BY id').all(batchId) as FileRow[]).map(
+    toFile,
+  );
 }
 
 export function removeOutcomeFile(db: SqliteDatabase, id: number): number {

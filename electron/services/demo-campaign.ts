@@ -47,12 +47,34 @@ const DEMO_PAIRS: readonly DemoPair[] = [
     elementB: 'Ni',
     target: 'Ni@Pt',
     status: 'characterized',
-    notes: 'Demo data: invented. Pt-skin over a Ni-rich core for oxygen reduction; the co-reduced Pt3Ni alloy comes first.',
+    notes:
+      'Demo data: invented. Pt-skin over a Ni-rich core for oxygen reduction; the co-reduced Pt3Ni alloy comes first.',
     prediction: { xB: 0.25, diameterNm: 4, temperatureK: 298 },
   },
-  { elementA: 'Pt', elementB: 'Co', target: 'alloy', status: 'candidate', notes: 'Demo data: invented. Mixed alloy reference.', prediction: { xB: 0.25, diameterNm: 4, temperatureK: 298 } },
-  { elementA: 'Pd', elementB: 'Au', target: 'Pd@Au', status: 'characterized', notes: 'Demo data: invented. Au shell on Pd seeds.', prediction: { xB: 0.5, diameterNm: 10, temperatureK: 298 } },
-  { elementA: 'Ag', elementB: 'Pd', target: 'alloy', status: 'planned', notes: 'Demo data: invented. Co-reduction in oleylamine.', prediction: { xB: 0.5, diameterNm: 8, temperatureK: 473 } },
+  {
+    elementA: 'Pt',
+    elementB: 'Co',
+    target: 'alloy',
+    status: 'candidate',
+    notes: 'Demo data: invented. Mixed alloy reference.',
+    prediction: { xB: 0.25, diameterNm: 4, temperatureK: 298 },
+  },
+  {
+    elementA: 'Pd',
+    elementB: 'Au',
+    target: 'Pd@Au',
+    status: 'characterized',
+    notes: 'Demo data: invented. Au shell on Pd seeds.',
+    prediction: { xB: 0.5, diameterNm: 10, temperatureK: 298 },
+  },
+  {
+    elementA: 'Ag',
+    elementB: 'Pd',
+    target: 'alloy',
+    status: 'planned',
+    notes: 'Demo data: invented. Co-reduction in oleylamine.',
+    prediction: { xB: 0.5, diameterNm: 8, temperatureK: 473 },
+  },
   {
     elementA: 'Cu',
     elementB: 'Ag',
@@ -200,8 +222,12 @@ function step<Name extends OperationName>(
     return runOperationInTransaction(context, name, input);
   } catch (error) {
     if (!(error instanceof DomainError)) throw error;
-    const detail = error.field && !error.message.startsWith(`${error.field}:`) ? `${error.field}: ${error.message}` : error.message;
-    throw new DomainError(error.code, `The demo campaign could not be loaded (nothing was stored): ${what} (${name}): ${detail}`);
+    const detail =
+      error.field && !error.message.startsWith(`${error.field}:`) ? `${error.field}: ${error.message}` : error.message;
+    throw new DomainError(
+      error.code,
+      `The demo campaign could not be loaded (nothing was stored): ${what} (${name}): ${detail}`,
+    );
   }
 }
 
@@ -258,7 +284,11 @@ export function loadDemoCampaign(context: ServiceContext): Campaign {
           ? added
           : step(context, `status of pair ${text}`, 'pairs.update', { id: added.id, status: pair.status });
       pairs.set(text, stored);
-      step(context, `prediction for ${text}`, 'prediction.save', { pair: text, pairId: added.id, conditions: pair.prediction });
+      step(context, `prediction for ${text}`, 'prediction.save', {
+        pair: text,
+        pairId: added.id,
+        conditions: pair.prediction,
+      });
     }
     const pairId = (key: string): number => {
       const pair = pairs.get(key);
@@ -266,14 +296,21 @@ export function loadDemoCampaign(context: ServiceContext): Campaign {
       return pair.id;
     };
     const save = (name: string, pair: string, design: BatchDesignRequest, notes: string): SavedBatch =>
-      step(context, `batch "${name}"`, 'batches.save', { name, campaignId: campaign.id, pairId: pairId(pair), design, notes });
+      step(context, `batch "${name}"`, 'batches.save', {
+        name,
+        campaignId: campaign.id,
+        pairId: pairId(pair),
+        design,
+        notes,
+      });
 
     // Saved oldest first as listed; the views list the newest first, so Results opens on the Pd@Au batch.
     save(
       DEMO_BATCH_NAMES.agPd,
       'Ag-Pd',
       AG_PD_OLEYLAMINE,
-      `${DEMO_NOTE_PREFIX}. Planned; short of AgNO3 against the demo inventory (which is only added to an empty inventory).`,
+      `${DEMO_NOTE_PREFIX}. Planned; short of AgNO3 against the demo inventory ` +
+        '(which is only added to an empty inventory).',
     );
     const ptNi = save(
       DEMO_BATCH_NAMES.ptNi,
@@ -303,7 +340,10 @@ export function loadDemoCampaign(context: ServiceContext): Campaign {
     const inventory = step(context, 'inventory', 'inventory.list', {});
     if (inventory.length === 0) {
       for (const item of DEMO_INVENTORY) {
-        step(context, `inventory row ${item.reagentKey}`, 'inventory.upsert', { ...item, location: DEMO_INVENTORY_LOCATION });
+        step(context, `inventory row ${item.reagentKey}`, 'inventory.upsert', {
+          ...item,
+          location: DEMO_INVENTORY_LOCATION,
+        });
       }
     }
     return findCampaignByName(db, DEMO_CAMPAIGN_NAME) ?? campaign;

@@ -61,7 +61,10 @@ export function runOperationInTransaction<Name extends OperationName>(
   return output;
 }
 
-function errorToResult(name: string, error: unknown): { ok: false; error: { code: DomainError['code']; message: string; field?: string } } {
+function errorToResult(
+  name: string,
+  error: unknown,
+): { ok: false; error: { code: DomainError['code']; message: string; field?: string } } {
   if (error instanceof DomainError) return fail(error.code, error.message, error.field);
   if (error instanceof RangeError) {
     // Model code signals bad arguments this way; the message names the argument.

@@ -16,7 +16,12 @@ import {
   setOutcomeNotes,
 } from '../../db/repositories/outcomes';
 import type { SqliteDatabase } from '../../db/store';
-import { OUTCOME_PART_NAMES, type OutcomePart, type OutcomeRecordInput, type RecordedOutcome } from '../../shared-model/api/outcomes';
+import {
+  OUTCOME_PART_NAMES,
+  type OutcomePart,
+  type OutcomeRecordInput,
+  type RecordedOutcome,
+} from '../../shared-model/api/outcomes';
 import { DomainError, invalid } from '../../shared-model/api/result';
 import { formatArchitecture, parseArchitecture } from '../../shared-model/architecture/labels';
 import { compareComposition } from '../../shared-model/characterization/composition';
@@ -32,9 +37,14 @@ function inPart(part: OutcomePart, store: () => void): void {
     store();
   } catch (error) {
     if (error instanceof DomainError) {
-      throw new DomainError(error.code, `${OUTCOME_PART_NAMES[part]}: ${error.message}`, error.field ? `${part}.${error.field}` : part);
+      throw new DomainError(
+        error.code,
+        `${OUTCOME_PART_NAMES[part]}: ${error.message}`,
+        error.field ? `${part}.${error.field}` : part,
+      );
     }
-    if (error instanceof RangeError) throw new DomainError('invalid_input', `${OUTCOME_PART_NAMES[part]}: ${error.message}`, part);
+    if (error instanceof RangeError)
+      throw new DomainError('invalid_input', `${OUTCOME_PART_NAMES[part]}: ${error.message}`, part);
     throw error;
   }
 }
@@ -58,8 +68,21 @@ function storeSizes(db: SqliteDatabase, batch: BatchForOutcome, sizes: Part<'siz
 function storeComposition(db: SqliteDatabase, batch: BatchForOutcome, composition: Part<'composition'>): void {
   const nominalXB = composition.nominalXB === undefined ? batch.nominalXB : composition.nominalXB;
   const { measurements, gridMetal } = composition;
-  const comparison = compareComposition({ elementA: batch.elementA, elementB: batch.elementB, nominalXB, measurements, gridMetal });
-  insertComposition(db, { batchId: batch.id, nominalXB, gridMetal, measurements, comparison, analysisVersion: ANALYSIS_VERSION });
+  const comparison = compareComposition({
+    elementA: batch.elementA,
+    elementB: batch.elementB,
+    nominalXB,
+    measurements,
+    gridMetal,
+  });
+  insertComposition(db, {
+    batchId: batch.id,
+    nominalXB,
+    gridMetal,
+    measurements,
+    comparison,
+    analysisVersion: ANALYSIS_VERSION,
+  });
 }
 
 function storeLineScan(db: SqliteDatabase, batch: BatchForOutcome, scan: Part<'lineScan'>): void {

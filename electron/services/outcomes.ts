@@ -41,7 +41,13 @@ export const outcomeHandlers: HandlerMap<keyof typeof outcomeOperations> = {
         signalB: points.map((p) => p.b),
         unit: stored.unit,
       },
-      { elementA, elementB, probeSigmaNm, latticeANm: lattice[elementA] ?? null, latticeBNm: lattice[elementB] ?? null },
+      {
+        elementA,
+        elementB,
+        probeSigmaNm,
+        latticeANm: lattice[elementA] ?? null,
+        latticeBNm: lattice[elementB] ?? null,
+      },
     );
     return updateLineScanFit(store.db, input.id, probeSigmaNm, analysis);
   },

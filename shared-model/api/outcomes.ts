@@ -165,14 +165,30 @@ const csvTextSchema = z
   .string({ error: 'must be the text of a CSV file' })
   .min(1, 'the file is empty')
   .max(MAX_CSV_CHARS, `the file is larger than ${MAX_CSV_CHARS / 1e6} MB of text`);
-const columnSchema = z.union([z.string().trim().min(1, 'must name a column'), z.number().int('must be a column number').positive('columns count from 1')], {
-  error: 'must be a column name or number',
-});
+const columnSchema = z.union(
+  [
+    z.string().trim().min(1, 'must name a column'),
+    z.number().int('must be a column number').positive('columns count from 1'),
+  ],
+  {
+    error: 'must be a column name or number',
+  },
+);
 const decimalSchema = z.enum(['auto', '.', ','], { error: 'must be "auto", "." or ","' }).default('auto');
-const sourceFileSchema = z.string({ error: 'must be a file path' }).trim().max(1000, 'must be at most 1000 characters').nullable().default(null);
-const fractionSchema = (what: string) => z.number({ error: `${what} must be a number` }).min(0, `${what} must be at least 0`).max(1, `${what} must be at most 1 (a fraction; 0.25 = 25 at.%)`);
+const sourceFileSchema = z
+  .string({ error: 'must be a file path' })
+  .trim()
+  .max(1000, 'must be at most 1000 characters')
+  .nullable()
+  .default(null);
+const fractionSchema = (what: string) =>
+  z
+    .number({ error: `${what} must be a number` })
+    .min(0, `${what} must be at least 0`)
+    .max(1, `${what} must be at most 1 (a fraction; 0.25 = 25 at.%)`);
 const notesSchema = z.string({ error: 'must be text' }).max(8000, 'must be at most 8000 characters');
-const confirmSchema = (what: string) => z.literal(true, { error: `removing ${what} needs confirmation (confirm: true)` });
+const confirmSchema = (what: string) =>
+  z.literal(true, { error: `removing ${what} needs confirmation (confirm: true)` });
 
 export const compositionMeasurementSchema = z.object({
   method: z.enum(COMPOSITION_METHODS, { error: `must be one of: ${COMPOSITION_METHODS.join(', ')}` }),
@@ -185,8 +201,16 @@ const sizeImportFields = {
   csvText: csvTextSchema,
   column: columnSchema.optional(),
   decimalSeparator: decimalSchema,
-  targetDiameterNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').nullable().optional(),
-  precisionPercent: z.number({ error: 'must be a number' }).positive('must be greater than 0').max(50, 'must be at most 50 %').default(2),
+  targetDiameterNm: z
+    .number({ error: 'must be a number of nm' })
+    .positive('must be greater than 0')
+    .nullable()
+    .optional(),
+  precisionPercent: z
+    .number({ error: 'must be a number' })
+    .positive('must be greater than 0')
+    .max(50, 'must be at most 50 %')
+    .default(2),
 };
 
 const lineScanImportFields = {
@@ -196,7 +220,12 @@ const lineScanImportFields = {
   bColumn: columnSchema.optional(),
   unit: z.enum(['auto', 'counts', 'atPercent'], { error: 'must be auto, counts or atPercent' }).default('auto'),
   decimalSeparator: decimalSchema,
-  probeSigmaNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').max(50, 'must be at most 50 nm').nullable().default(null),
+  probeSigmaNm: z
+    .number({ error: 'must be a number of nm' })
+    .positive('must be greater than 0')
+    .max(50, 'must be at most 50 nm')
+    .nullable()
+    .default(null),
 };
 
 const filePathSchema = z
@@ -270,7 +299,9 @@ export const outcomeRecordSchema = z
       .array(
         z.object({
           path: filePathSchema,
-          kind: z.enum(OUTCOME_FILE_KINDS, { error: `must be one of: ${OUTCOME_FILE_KINDS.join(', ')}` }).default('image'),
+          kind: z
+            .enum(OUTCOME_FILE_KINDS, { error: `must be one of: ${OUTCOME_FILE_KINDS.join(', ')}` })
+            .default('image'),
           note: z.string({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').default(''),
         }),
         { error: 'must be a list of files' },
@@ -300,14 +331,15 @@ export const outcomeAnalysisOperations = {
 export const outcomeOperations = {
   'outcomes.get': operation<BatchOutcome>()({
     kind: 'query',
-    summary: 'Everything recorded for one batch: sizes, composition, line scans, observed architecture, files, predictions',
+    summary:
+      'Everything recorded for one batch: sizes, composition, line scans, observed architecture, files, predictions',
     input: z.object({ batchId: idSchema }),
   }),
   'outcomes.record': operation<RecordedOutcome>()({
     kind: 'command',
     summary:
-      'Record what was measured on a batch — sizes, composition, line scan, observed architecture, notes, file paths ' +
-      '— in one transaction: all of it is stored or none, and an error names the part that failed',
+      'Record what was measured on a batch — sizes, composition, line scan, observed architecture, notes, ' +
+      'file paths — in one transaction: all of it is stored or none, and an error names the part that failed',
     input: outcomeRecordSchema,
   }),
   'outcomes.removeSizes': operation<{ removed: number }>()({
@@ -318,7 +350,14 @@ export const outcomeOperations = {
   'outcomes.refitLineScan': operation<LineScanRecord>()({
     kind: 'command',
     summary: 'Fit a stored line scan again (current analysis version, optionally a given probe σ)',
-    input: z.object({ id: idSchema, probeSigmaNm: z.number({ error: 'must be a number of nm' }).positive('must be greater than 0').nullable().optional() }),
+    input: z.object({
+      id: idSchema,
+      probeSigmaNm: z
+        .number({ error: 'must be a number of nm' })
+        .positive('must be greater than 0')
+        .nullable()
+        .optional(),
+    }),
   }),
   'outcomes.removeLineScan': operation<{ removed: number }>()({
     kind: 'command',
@@ -338,6 +377,11 @@ export const outcomeOperations = {
   'outcomes.confusion': operation<CampaignConfusion>()({
     kind: 'query',
     summary: 'Confusion matrix of predicted vs observed architectures over a campaign',
-    input: z.object({ campaignId: idSchema, against: z.enum(['prediction', 'simulation'], { error: 'must be prediction or simulation' }).default('prediction') }),
+    input: z.object({
+      campaignId: idSchema,
+      against: z
+        .enum(['prediction', 'simulation'], { error: 'must be prediction or simulation' })
+        .default('prediction'),
+    }),
   }),
 };

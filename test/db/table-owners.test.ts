@@ -114,8 +114,8 @@ describe('each table is read and written by its owning repository only', () => {
 
   it('the check bites: a join on another area’s table, a template query and a plain string are all caught', () => {
     const source = [
-      "const A = `SELECT i.*, r.data FROM inventory i JOIN reagents r ON r.key = i.reagent_key`;",
-      "const B = (id: number) => db.prepare(`${A} WHERE batch_id = ${id} AND EXISTS (SELECT 1 FROM batches)`);",
+      'const A = `SELECT i.*, r.data FROM inventory i JOIN reagents r ON r.key = i.reagent_key`;',
+      'const B = (id: number) => db.prepare(`${A} WHERE batch_id = ${id} AND EXISTS (SELECT 1 FROM batches)`);',
       "db.prepare('UPDATE predictions SET model_version = ?').run('x');",
       "const message = 'no batches left in predictions';", // prose, not SQL: ignored
     ].join('\n');

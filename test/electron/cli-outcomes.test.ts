@@ -18,8 +18,18 @@ describe('pairwright sizes', () => {
     const diameters = [4.8, 5.1, 5.3, 5.3, 5.6, 5.9, 6.0, 6.4, 7.2, 8.1];
     const file = join(dir, 'diameters.csv');
     // An export with a BOM, CRLF, a header, semicolons and decimal commas.
-    writeFileSync(file, `\uFEFFParticle;Diameter (nm)\r\n${diameters.map((d, i) => `${i + 1};${String(d).replace('.', ',')}`).join('\r\n')}\r\n`);
-    const out = runPairwrightJson<{ n: number; meanNm: number; sdNm: number; medianNm: number; cvPercent: number; lognormal: { mu: number; sigma: number } }>(['sizes', file, ...data]);
+    writeFileSync(
+      file,
+      `\uFEFFParticle;Diameter (nm)\r\n${diameters.map((d, i) => `${i + 1};${String(d).replace('.', ',')}`).join('\r\n')}\r\n`,
+    );
+    const out = runPairwrightJson<{
+      n: number;
+      meanNm: number;
+      sdNm: number;
+      medianNm: number;
+      cvPercent: number;
+      lognormal: { mu: number; sigma: number };
+    }>(['sizes', file, ...data]);
     expect(out.n).toBe(10);
     const mean = diameters.reduce((s, d) => s + d, 0) / 10;
     expect(out.meanNm).toBeCloseTo(mean, 10);
@@ -42,12 +52,26 @@ describe('pairwright sizes', () => {
 describe('pairwright linescan', () => {
   it('chooses the generating model and reports radius, core and shell with per-model BIC', () => {
     const scan = syntheticScan(
-      { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
+      {
+        kind: 'B@A',
+        centerNm: 10,
+        radiusNm: 5,
+        coreRadiusNm: 3.5,
+        probeSigmaNm: 0.6,
+        amplitudeA: 10,
+        amplitudeB: 8,
+        backgroundA: 5,
+        backgroundB: 3,
+        positionsNm: positions(0, 20, 0.4),
+      },
       20,
       42,
     );
     const file = join(dir, 'scan.csv');
-    writeFileSync(file, `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]},${scan.signalB[i]}`).join('\n')}\n`);
+    writeFileSync(
+      file,
+      `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]},${scan.signalB[i]}`).join('\n')}\n`,
+    );
     const out = runPairwrightJson<{
       chosenModel: string;
       radiusNm: number;
@@ -98,11 +122,25 @@ describe('pairwright outcomes add / show / list / confusion', () => {
 
     const scanFile = join(dir, 'add-scan.csv');
     const scan = syntheticScan(
-      { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
+      {
+        kind: 'B@A',
+        centerNm: 10,
+        radiusNm: 5,
+        coreRadiusNm: 3.5,
+        probeSigmaNm: 0.6,
+        amplitudeA: 10,
+        amplitudeB: 8,
+        backgroundA: 5,
+        backgroundB: 3,
+        positionsNm: positions(0, 20, 0.4),
+      },
       20,
       43,
     );
-    writeFileSync(scanFile, `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]},${scan.signalB[i]}`).join('\n')}\n`);
+    writeFileSync(
+      scanFile,
+      `Position (nm),Au M,Pd L\n${scan.positionsNm.map((x, i) => `${x},${scan.signalA[i]},${scan.signalB[i]}`).join('\n')}\n`,
+    );
     const sizes = join(dir, 'add-sizes.csv');
     writeFileSync(sizes, '9.6\n10.1\n10.4\n10.8\n9.2\n11.3\n');
     const badScan = join(dir, 'short-scan.csv');
@@ -112,8 +150,17 @@ describe('pairwright outcomes add / show / list / confusion', () => {
     const outcomeRows = () => {
       const file = new Database(join(storeDir, STORE_FILE_NAME), { readonly: true });
       try {
-        const tables = ['outcome_size_imports', 'outcome_diameters', 'outcome_compositions', 'outcome_line_scans', 'outcome_observations', 'outcome_files'];
-        return Object.fromEntries(tables.map((t) => [t, (file.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]));
+        const tables = [
+          'outcome_size_imports',
+          'outcome_diameters',
+          'outcome_compositions',
+          'outcome_line_scans',
+          'outcome_observations',
+          'outcome_files',
+        ];
+        return Object.fromEntries(
+          tables.map((t) => [t, (file.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]),
+        );
       } finally {
         file.close();
       }
@@ -139,10 +186,22 @@ describe('pairwright outcomes add / show / list / confusion', () => {
     expect(refused.status).toBe(2);
     expect(refused.stderr).toMatch(/line scan: .*shorter than the particle/);
     expect(outcomeRows()).toEqual(before);
-    const empty = runPairwrightJson<{ sizes: unknown[]; compositions: unknown[]; notes: string }>(['outcomes', 'show', String(batch.id), ...storeArgs]);
+    const empty = runPairwrightJson<{ sizes: unknown[]; compositions: unknown[]; notes: string }>([
+      'outcomes',
+      'show',
+      String(batch.id),
+      ...storeArgs,
+    ]);
     expect([empty.sizes, empty.compositions, empty.notes]).toEqual([[], [], '']);
 
-    const out = runPairwrightJson<{ added: string[]; outcome: { sizes: { statistics: { n: number } }[]; observed: { label: string; decision: string }; compositions: { comparison: { rows: { flagged: boolean | null }[] } }[] } }>([
+    const out = runPairwrightJson<{
+      added: string[];
+      outcome: {
+        sizes: { statistics: { n: number } }[];
+        observed: { label: string; decision: string };
+        compositions: { comparison: { rows: { flagged: boolean | null }[] } }[];
+      };
+    }>([
       'outcomes',
       'add',
       String(batch.id),
@@ -166,14 +225,21 @@ describe('pairwright outcomes add / show / list / confusion', () => {
     expect(out.outcome.observed).toMatchObject({ label: 'Pd@Au', decision: 'confirmed' });
     expect(out.outcome.compositions[0]?.comparison.rows.map((r) => r.flagged)).toEqual([false, true]);
 
-    const rows = runPairwrightJson<{ observed: string; predicted: string | null }[]>(['outcomes', 'list', 'CLI screen', ...storeArgs]);
+    const rows = runPairwrightJson<{ observed: string; predicted: string | null }[]>([
+      'outcomes',
+      'list',
+      'CLI screen',
+      ...storeArgs,
+    ]);
     expect(rows).toHaveLength(1);
     expect(rows[0]?.observed).toBe('Pd@Au');
     const confusion = runPairwright(['outcomes', 'confusion', 'CLI screen', ...storeArgs]);
     expect(confusion.status).toBe(0);
     // No prediction was saved for this pair, so nothing can be compared yet.
     expect(confusion.stdout).toMatch(/no batch has both an observed architecture and a prediction yet/);
-    expect(runPairwright(['outcomes', 'add', String(batch.id), '--icp', 'about half', ...storeArgs]).stderr).toMatch(/--icp must be at.% of B/);
+    expect(runPairwright(['outcomes', 'add', String(batch.id), '--icp', 'about half', ...storeArgs]).stderr).toMatch(
+      /--icp must be at.% of B/,
+    );
     // Seven child processes; generous limit for a loaded machine.
   }, 180_000);
 });

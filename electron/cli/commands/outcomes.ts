@@ -17,7 +17,15 @@ import {
   type ParsedArgs,
 } from '../command';
 import { resolveCampaign } from './campaigns';
-import { confusionText, lineScanJson, lineScanText, outcomeText, rowTable, sizesJson, sizesText } from './outcome-format';
+import {
+  confusionText,
+  lineScanJson,
+  lineScanText,
+  outcomeText,
+  rowTable,
+  sizesJson,
+  sizesText,
+} from './outcome-format';
 
 function columnOption(args: ParsedArgs, name: string): string | number | undefined {
   const value = optionalString(args, name);
@@ -27,7 +35,8 @@ function columnOption(args: ParsedArgs, name: string): string | number | undefin
 
 function decimalOption(args: ParsedArgs): 'auto' | '.' | ',' {
   const value = optionalString(args, 'decimal') ?? 'auto';
-  if (value !== 'auto' && value !== '.' && value !== ',') throw new CliError(`--decimal must be auto, "." or ",", got "${value}"`);
+  if (value !== 'auto' && value !== '.' && value !== ',')
+    throw new CliError(`--decimal must be auto, "." or ",", got "${value}"`);
   return value;
 }
 
@@ -40,7 +49,8 @@ function batchIdArg(args: ParsedArgs): number {
 /** "48±2", "48+-2" or "48" (at.% of B, optional ± at.%) → fractions. */
 export function parseAtPercent(text: string, option: string): { xB: number; uncertaintyXB: number | null } {
   const match = /^\s*([0-9]+(?:[.,][0-9]+)?)\s*(?:(?:±|\+-|\+\/-)\s*([0-9]+(?:[.,][0-9]+)?))?\s*$/.exec(text);
-  if (!match) throw new CliError(`--${option} must be at.% of B with an optional uncertainty, e.g. 48±2, got "${text}"`);
+  if (!match)
+    throw new CliError(`--${option} must be at.% of B with an optional uncertainty, e.g. 48±2, got "${text}"`);
   const value = Number((match[1] as string).replace(',', '.'));
   const uncertainty = match[2] !== undefined ? Number(match[2].replace(',', '.')) : null;
   return { xB: value / 100, uncertaintyXB: uncertainty === null ? null : uncertainty / 100 };
@@ -51,13 +61,15 @@ function compositionMeasurements(args: ParsedArgs): CompositionMeasurement[] {
   const icp = optionalString(args, 'icp');
   if (icp !== undefined) {
     const method = optionalString(args, 'icp-method') ?? 'ICP-OES';
-    if (method !== 'ICP-OES' && method !== 'ICP-MS') throw new CliError(`--icp-method must be ICP-OES or ICP-MS, got "${method}"`);
+    if (method !== 'ICP-OES' && method !== 'ICP-MS')
+      throw new CliError(`--icp-method must be ICP-OES or ICP-MS, got "${method}"`);
     measurements.push({ method, ...parseAtPercent(icp, 'icp') });
   }
   const edx = optionalString(args, 'edx');
   if (edx !== undefined) {
     const mode = optionalString(args, 'edx-mode') ?? 'particle';
-    if (mode !== 'particle' && mode !== 'area') throw new CliError(`--edx-mode must be particle or area, got "${mode}"`);
+    if (mode !== 'particle' && mode !== 'area')
+      throw new CliError(`--edx-mode must be particle or area, got "${mode}"`);
     const lines = optionalString(args, 'edx-lines');
     const method = mode === 'particle' ? 'EDX particle' : 'EDX area';
     measurements.push({ method, ...parseAtPercent(edx, 'edx'), ...(lines ? { lines } : {}) });
@@ -119,7 +131,9 @@ function outcomeRecordInput(args: ParsedArgs, context: CliContext): RecordReques
   const paths = (Array.isArray(files) ? files : []).filter((path): path is string => typeof path === 'string');
   if (paths.length > 0) input.files = paths.map((path) => ({ path, kind: fileKind(path) }));
   if (!Object.keys(input).some((key) => key !== 'batchId')) {
-    throw new CliError('nothing to add: give --sizes, --linescan, --icp, --edx, --observed, --confirm, --notes or --file');
+    throw new CliError(
+      'nothing to add: give --sizes, --linescan, --icp, --edx, --observed, --confirm, --notes or --file',
+    );
   }
   return input;
 }
@@ -157,7 +171,8 @@ export const outcomeCommands: CliCommand[] = [
   {
     words: ['linescan'],
     args: '<scan.csv>',
-    summary: 'Fit alloy, A@B, B@A and Janus models to an EDX line scan (position nm, A, B) and choose by BIC; stores nothing',
+    summary:
+      'Fit alloy, A@B, B@A and Janus models to an EDX line scan (position nm, A, B) and choose by BIC; stores nothing',
     options: {
       pair: { type: 'string', description: 'the pair A-B, e.g. Au-Pd (required)' },
       'position-column': { type: 'string', description: 'position column (name or number)' },
@@ -170,7 +185,8 @@ export const outcomeCommands: CliCommand[] = [
     run: async (args, context) => {
       const path = requirePositional(args, 0, 'scan.csv');
       const unit = optionalString(args, 'unit') ?? 'auto';
-      if (unit !== 'auto' && unit !== 'counts' && unit !== 'atPercent') throw new CliError(`--unit must be counts, atPercent or auto, got "${unit}"`);
+      if (unit !== 'auto' && unit !== 'counts' && unit !== 'atPercent')
+        throw new CliError(`--unit must be counts, atPercent or auto, got "${unit}"`);
       const preview = await context.call('outcomes.previewLineScan', {
         pair: requireString(args, 'pair'),
         csvText: context.readTextFile(path),
@@ -215,7 +231,10 @@ export const outcomeCommands: CliCommand[] = [
       const input = outcomeRecordInput(args, context);
       const stored = await context.call('outcomes.record', input);
       const added = stored.recorded.map((part) => addedLabel(part, input));
-      return { json: { added, outcome: stored.outcome }, text: `recorded ${added.join(', ')}\n${outcomeText(stored.outcome)}` };
+      return {
+        json: { added, outcome: stored.outcome },
+        text: `recorded ${added.join(', ')}\n${outcomeText(stored.outcome)}`,
+      };
     },
   },
   {
@@ -243,10 +262,15 @@ export const outcomeCommands: CliCommand[] = [
     words: ['outcomes', 'confusion'],
     args: '<campaign>',
     summary: 'Confusion matrix of predicted (or --simulation) vs observed architectures',
-    options: { simulation: { type: 'boolean', description: 'compare with the simulations instead of the analytic predictions' } },
+    options: {
+      simulation: { type: 'boolean', description: 'compare with the simulations instead of the analytic predictions' },
+    },
     run: async (args, context) => {
       const campaign = await resolveCampaign(context, requirePositional(args, 0, 'campaign'));
-      const confusion = await context.call('outcomes.confusion', { campaignId: campaign.id, against: args.values.simulation === true ? 'simulation' : 'prediction' });
+      const confusion = await context.call('outcomes.confusion', {
+        campaignId: campaign.id,
+        against: args.values.simulation === true ? 'simulation' : 'prediction',
+      });
       return { json: confusion, text: confusionText(confusion) };
     },
   },

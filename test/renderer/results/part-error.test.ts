@@ -4,12 +4,32 @@ import { partError } from '../../../renderer/src/views/results/part-error';
 
 describe('partError', () => {
   it('makes the field relative to the part and drops the part name the panel heading already shows', () => {
-    const sizes = { code: 'invalid_input' as const, message: 'sizes: line 3: "1O.9" in column 1 is not a number', field: 'sizes.csvText' };
-    expect(partError(sizes, 'sizes')).toEqual({ code: 'invalid_input', message: 'line 3: "1O.9" in column 1 is not a number', field: 'csvText' });
+    const sizes = {
+      code: 'invalid_input' as const,
+      message: 'sizes: line 3: "1O.9" in column 1 is not a number',
+      field: 'sizes.csvText',
+    };
+    expect(partError(sizes, 'sizes')).toEqual({
+      code: 'invalid_input',
+      message: 'line 3: "1O.9" in column 1 is not a number',
+      field: 'csvText',
+    });
     // A zod refusal names the dotted field in front of its message.
-    const zod = { code: 'invalid_input' as const, message: 'lineScan.probeSigmaNm: must be greater than 0', field: 'lineScan.probeSigmaNm' };
-    expect(partError(zod, 'lineScan')).toEqual({ code: 'invalid_input', message: 'probeSigmaNm: must be greater than 0', field: 'probeSigmaNm' });
-    const nested = { code: 'invalid_input' as const, message: 'composition.measurements.1.xB: at most 1', field: 'composition.measurements.1.xB' };
+    const zod = {
+      code: 'invalid_input' as const,
+      message: 'lineScan.probeSigmaNm: must be greater than 0',
+      field: 'lineScan.probeSigmaNm',
+    };
+    expect(partError(zod, 'lineScan')).toEqual({
+      code: 'invalid_input',
+      message: 'probeSigmaNm: must be greater than 0',
+      field: 'probeSigmaNm',
+    });
+    const nested = {
+      code: 'invalid_input' as const,
+      message: 'composition.measurements.1.xB: at most 1',
+      field: 'composition.measurements.1.xB',
+    };
     expect(partError(nested, 'composition').field).toBe('measurements.1.xB');
   });
 

@@ -5,7 +5,9 @@ import { ANALYSIS_VERSION } from '../../../shared-model/characterization/version
 
 const issue = (name: keyof typeof outcomeOperations, input: unknown) => {
   const parsed = outcomeOperations[name].input.safeParse(input);
-  return parsed.success ? null : { path: parsed.error.issues[0]!.path.join('.'), message: parsed.error.issues[0]!.message };
+  return parsed.success
+    ? null
+    : { path: parsed.error.issues[0]!.path.join('.'), message: parsed.error.issues[0]!.message };
 };
 
 describe('outcome operation inputs', () => {
@@ -18,14 +20,22 @@ describe('outcome operation inputs', () => {
     const record = (parts: Record<string, unknown>) => issue('outcomes.record', { batchId: 1, ...parts });
     expect(record({ sizes: { csvText: '' } })).toEqual({ path: 'sizes.csvText', message: 'the file is empty' });
     expect(record({ composition: { nominalXB: 50, measurements: [] } })?.message).toMatch(/at most 1 \(a fraction/);
-    expect(record({ composition: { measurements: [{ method: 'SEM', xB: 0.2 }] } })?.path).toBe('composition.measurements.0.method');
+    expect(record({ composition: { measurements: [{ method: 'SEM', xB: 0.2 }] } })?.path).toBe(
+      'composition.measurements.0.method',
+    );
     expect(record({ composition: { measurements: [], gridMetal: 'Xx' } })?.message).toMatch(/unknown element/);
     expect(issue('outcomes.removeLineScan', { id: 3 })?.message).toMatch(/confirmation/);
     expect(record({ lineScan: { csvText: 'x', probeSigmaNm: -1 } })?.path).toBe('lineScan.probeSigmaNm');
-    expect(record({ observed: { label: 'alloy', decision: 'maybe' } })).toEqual({ path: 'observed.decision', message: 'must be confirmed or override' });
+    expect(record({ observed: { label: 'alloy', decision: 'maybe' } })).toEqual({
+      path: 'observed.decision',
+      message: 'must be confirmed or override',
+    });
     expect(record({ observed: { decision: 'override' } })?.path).toBe('observed.label');
     expect(record({ files: [{ path: ' ' }] })?.path).toBe('files.0.path');
-    expect(record({})).toEqual({ path: '', message: 'nothing to record: give sizes, composition, lineScan, observed, notes or files' });
+    expect(record({})).toEqual({
+      path: '',
+      message: 'nothing to record: give sizes, composition, lineScan, observed, notes or files',
+    });
   });
 });
 
