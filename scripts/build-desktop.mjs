@@ -13,7 +13,7 @@ const out = join(root, 'dist-electron');
 export async function buildDesktop() {
   rmSync(join(out, 'main.mjs'), { force: true });
   mkdirSync(out, { recursive: true });
-  const common = { bundle: true, platform: 'node', target: 'node20', sourcemap: true, logLevel: 'warning', external: ['electron', 'better-sqlite3'] };
+  const common = { bundle: true, platform: 'node', target: 'node20', sourcemap: true, logLevel: 'warning', external: ['electron', 'better-sqlite3', 'playwright-core'] };
   await build({
     ...common,
     entryPoints: [join(root, 'electron', 'desktop', 'entry.ts')],

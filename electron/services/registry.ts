@@ -4,6 +4,7 @@
  */
 import type { OperationName } from '../../shared-model/api/contract';
 import { batchHandlers } from './batches';
+import { benchSheetHandlers } from './bench-sheet';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
 import { outcomeAnalysisHandlers, outcomeHandlers } from './outcomes';
@@ -20,5 +21,6 @@ export const handlers: HandlerMap<OperationName> = {
   ...predictionHandlers,
   ...elementHandlers,
   ...batchHandlers,
+  ...benchSheetHandlers,
   ...simulationHandlers,
 };

@@ -5,6 +5,7 @@
  */
 import type { z } from 'zod';
 import { batchOperations } from './batches';
+import { benchSheetOperations } from './bench-sheet';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
 import type { OperationSpec } from './operation';
@@ -21,6 +22,7 @@ export const operations = {
   ...predictionOperations,
   ...elementOperations,
   ...batchOperations,
+  ...benchSheetOperations,
   ...simulationOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 

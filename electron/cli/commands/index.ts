@@ -1,6 +1,7 @@
 /** Every CLI command, in the order of the work (help lists them so); an area adds its list with one line. */
 import type { CliCommand } from '../command';
 import { batchCommands } from './batches';
+import { benchSheetCommands } from './bench-sheet';
 import { campaignCommands } from './campaigns';
 import { helpCommands } from './help';
 import { outcomeCommands } from './outcomes';
@@ -14,6 +15,7 @@ export const commands: CliCommand[] = [
   ...predictionCommands,
   ...simulationCommands,
   ...batchCommands,
+  ...benchSheetCommands,
   ...outcomeCommands,
   ...helpCommands,
 ];
