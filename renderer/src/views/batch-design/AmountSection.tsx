@@ -1,0 +1,51 @@
+/** How much: total metal or particle concentration (not for seeded growth), batch volume, temperature. */
+import { Field } from '../../components/Field';
+import type { BatchFormState } from './batch-form';
+import { Section, type SectionProps } from './form-parts';
+
+export function AmountSection({ form, set, errors }: SectionProps) {
+  return (
+    <Section title="Amount">
+      {form.route !== 'seed-mediated' ? (
+        <Field
+          label={form.amountKind === 'total-metal' ? 'Total metal (mmol)' : 'Particles per mL'}
+          name="amount"
+          error={errors.amount}
+        >
+          <span className="input-with-unit">
+            <input
+              name="amount"
+              inputMode="decimal"
+              value={form.amountValue}
+              onChange={(e) => set('amountValue')(e.target.value)}
+            />
+            <select
+              aria-label="Amount given as"
+              value={form.amountKind}
+              onChange={(e) => set('amountKind')(e.target.value as BatchFormState['amountKind'])}
+            >
+              <option value="total-metal">mmol metal</option>
+              <option value="particle-concentration">particles/mL</option>
+            </select>
+          </span>
+        </Field>
+      ) : null}
+      <Field label="Batch volume (mL)" name="batchVolumeMl" error={errors.batchVolumeMl}>
+        <input
+          name="batchVolumeMl"
+          inputMode="decimal"
+          value={form.batchVolumeMl}
+          onChange={(e) => set('batchVolumeMl')(e.target.value)}
+        />
+      </Field>
+      <Field label="Highest temperature (°C)" name="temperatureC" error={errors.temperatureC} hint="default by route">
+        <input
+          name="temperatureC"
+          inputMode="decimal"
+          value={form.temperatureC}
+          onChange={(e) => set('temperatureC')(e.target.value)}
+        />
+      </Field>
+    </Section>
+  );
+}

@@ -1,0 +1,25 @@
+/** What an opened saved batch was computed with: catalog changes since, stale stocks, lots. */
+import type { SavedBatch } from '../../../../shared-model/api/batches';
+import { Banner } from '../../components/Banner';
+import { formatNumber } from '../BatchResult';
+
+export function OpenedBatchBanner({ batch }: { batch: SavedBatch }) {
+  const changes = batch.catalogChanges;
+  const changed = changes
+    .map((c) => `${c.name} (revision ${c.savedRevision} → ${c.currentRevision ?? 'removed'})`)
+    .join(', ');
+  const savedAt = batch.createdAt.slice(0, 16).replace('T', ' ');
+  return (
+    <Banner tone={changes.length > 0 ? 'caution' : 'info'} testId="opened-batch">
+      Batch #{batch.id} “{batch.name}”, {batch.status}, saved {savedAt} with the values shown.
+      {changes.length > 0
+        ? ` The catalog changed since: ${changed}. The amounts below are those saved; design again to use the new ` +
+          'entries.'
+        : ''}
+      {batch.stockAges
+        .filter((s) => s.stale)
+        .map((s) => ` The ${s.name} stock is ${formatNumber(s.ageHours, 3)} h old, beyond its limit.`)}
+      {batch.lots.length > 0 ? ` Lots: ${batch.lots.map((l) => `${l.reagentKey} ${l.lot}`).join(', ')}.` : ''}
+    </Banner>
+  );
+}

@@ -1,0 +1,98 @@
+/** Catalog reagents of the batch: a precursor (and stock) per metal, reducer, capping agent, solvent. */
+import type { CatalogReagent } from '../../../../shared-model/api/batches';
+import { Field } from '../../components/Field';
+import { ReagentSelect, Section, type SectionProps } from './form-parts';
+
+function numberInput(name: string, value: string, onChange: (value: string) => void) {
+  return <input name={name} inputMode="decimal" value={value} onChange={(e) => onChange(e.target.value)} />;
+}
+
+export function ReagentsSection({ form, set, errors, catalog }: SectionProps & { catalog: CatalogReagent[] }) {
+  const precursorsOf = (element: string) => catalog.filter((r) => r.metal?.symbol === element);
+  const reducers = catalog.filter((r) => r.roles.includes('reducer'));
+  const cappings = catalog.filter((r) => r.roles.includes('capping-agent'));
+  const solvents = catalog.filter((r) => r.roles.includes('solvent'));
+  const slots = [
+    { slot: 'A' as const, element: form.elementA, key: form.precursorA, stock: form.stockA },
+    { slot: 'B' as const, element: form.elementB, key: form.precursorB, stock: form.stockB },
+  ];
+  return (
+    <Section title="Reagents">
+      {errors.precursors ? (
+        <p className="field__error field--wide" role="alert" data-error-for="precursors">
+          {errors.precursors}
+        </p>
+      ) : null}
+      {slots.map(({ slot, element, key, stock }) => (
+        <div className="precursor-pair" key={slot}>
+          <Field
+            label={`${element || slot} precursor`}
+            name={`precursor${slot}`}
+            error={errors[`precursor${slot}`]}
+          >
+            <ReagentSelect
+              name={`precursor${slot}`}
+              value={key}
+              onChange={set(slot === 'A' ? 'precursorA' : 'precursorB')}
+              options={[
+                ...precursorsOf(element),
+                ...catalog.filter((r) => r.key === key && r.metal?.symbol !== element),
+              ]}
+              allowNone="none"
+            />
+          </Field>
+          <Field label="Stock (mM)" name={`stock${slot}`} error={errors[`stock${slot}`]}>
+            {numberInput(`stock${slot}`, stock, set(slot === 'A' ? 'stockA' : 'stockB'))}
+          </Field>
+        </div>
+      ))}
+      <Field label="Reducer" name="reducer" error={errors.reducer}>
+        <ReagentSelect
+          name="reducer"
+          value={form.reducerKey}
+          onChange={set('reducerKey')}
+          options={reducers}
+          allowNone="none"
+        />
+      </Field>
+      <Field label="Excess (× electron balance)" name="reducer.excess" error={errors['reducer.excess']}>
+        {numberInput('reducer.excess', form.reducerExcess, set('reducerExcess'))}
+      </Field>
+      <Field label="Reducer stock (mM)" name="reducer.stockMm" error={errors['reducer.stockMm']}>
+        {numberInput('reducer.stockMm', form.reducerStock, set('reducerStock'))}
+      </Field>
+      <Field label="Capping agent" name="capping" error={errors.capping}>
+        <ReagentSelect
+          name="capping"
+          value={form.cappingKey}
+          onChange={set('cappingKey')}
+          options={cappings}
+          allowNone="none"
+        />
+      </Field>
+      {form.cappingKey ? (
+        <Field
+          label="Capping (mol per mol metal)"
+          name="capping.molPerMolMetal"
+          error={errors['capping.molPerMolMetal']}
+        >
+          {numberInput('capping.molPerMolMetal', form.cappingRatio, set('cappingRatio'))}
+        </Field>
+      ) : null}
+      <Field label="Solvent" name="solvent" error={errors.solvent} hint="water makes up the volume if none">
+        <ReagentSelect
+          name="solvent"
+          value={form.solventKey}
+          onChange={set('solventKey')}
+          options={solvents}
+          allowNone="water (make-up)"
+        />
+      </Field>
+      {form.solventKey ? (
+        <Field label="Solvent volume (mL)" name="solvent.volumeMl" error={errors['solvent.volumeMl']}>
+          {numberInput('solvent.volumeMl', form.solventVolumeMl, set('solventVolumeMl'))}
+        </Field>
+      ) : null}
+    </Section>
+  );
+}
