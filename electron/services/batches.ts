@@ -19,7 +19,7 @@ import { listInventory, removeInventory, upsertInventory } from '../../db/reposi
 import { nowIso, type SqliteDatabase } from '../../db/store';
 import { statusMoveAllowed, type batchOperations, type CatalogChange, type SavedBatch } from '../../shared-model/api/batches';
 import { DomainError, invalid } from '../../shared-model/api/result';
-import { predictPair } from '../../shared-model/prediction/predict';
+import { asMadeForBatch } from '../../shared-model/prediction/as-made';
 import { designBatch, type BatchDesign, type SurfaceAnswer, type SurfaceQuestion } from '../../shared-model/recipes/design';
 import type { BatchDesignInput, StockRecord } from '../../shared-model/recipes/design-input';
 import { seedBatchMetal, seedsFromBatch } from '../../shared-model/recipes/lineage';
@@ -49,13 +49,17 @@ export function thermodynamicSurface(particle: SurfaceQuestion): SurfaceAnswer {
   const { xB } = particle;
   if (!(xB > 0 && xB < 1)) return { element: undefined, note: null };
   try {
-    const prediction = predictPair(particle.elementA, particle.elementB, {
+    const expected = asMadeForBatch({
+      elementA: particle.elementA,
+      elementB: particle.elementB,
       xB,
       diameterNm: particle.diameterNm,
-      shape: 'sphere',
+      route: particle.route,
       temperatureK: particle.temperatureC + 273.15,
+      ...(particle.seedElement !== null ? { seedElement: particle.seedElement } : {}),
     });
-    return { element: prediction.surfaceElement, note: null };
+    const { label, basis, afterAnnealing, text, oxidation } = expected;
+    return { element: expected.equilibrium.surfaceElement, note: null, asMade: { label, basis, afterAnnealing, text, oxidation } };
   } catch (error) {
     if (error instanceof DomainError) return { element: undefined, note: `thermodynamic prediction unavailable: ${error.message}` };
     throw error;

@@ -32,6 +32,8 @@ function surfaceFor(input: BatchDesignInput, amounts: DesignAmounts, context: De
     xB: geometry.xB,
     diameterNm: geometry.diameterNm,
     temperatureC: amounts.temperatureC,
+    route: input.route,
+    seedElement: input.route === 'seed-mediated' ? amounts.coreElement : null,
   });
 }
 
@@ -82,6 +84,7 @@ export function designBatch(input: BatchDesignInput, context: DesignContext): Ba
     reductionOrder: kinetics.reductionOrder,
     galvanic: kinetics.galvanic,
     thermodynamicSurfaceElement: surface.element,
+    asMade: surface.asMade ?? null,
     checks: [...amounts.checks, ...lineChecks, ...kinetics.checks, ...versus, ...stockChecks, ...hazards.checks],
     hazards: hazards.hazardSummary.hazards.map((h) => ({ code: h.code, text: h.text })),
     hazardSummary: hazards.hazardSummary,

@@ -67,6 +67,16 @@ describe('designing and saving batches', () => {
     expect(design.thermodynamicSurfaceElement).toBe(prediction.surfaceElement);
   });
 
+  it('states the as-made expectation for the route: Pt–Ni co-reduced at 25 °C follows the reduction order', async () => {
+    const design = await ok<BatchDesign>('batches.design', ptNi);
+    // Pt (PtCl₆²⁻, +0.72 V) reduces long before Ni (Ni²⁺, −0.26 V; CRC Electrochemical Series); at 298 K
+    // bulk interdiffusion moves atoms far less than a radius in 0.5 h (Mehrer 2007, from memory)
+    expect(design.asMade?.basis).toBe('kinetic');
+    expect(design.asMade?.label).toBe('Pt@Ni');
+    expect(design.asMade?.text).toMatch(/equilibrium not reachable/);
+    expect(design.asMade?.oxidation).toMatch(/Ni/); // NiO −239.7 kJ/mol (CRC): a Ni surface oxidises in water
+  });
+
   it('refuses bad input naming the field and saves nothing', async () => {
     const cases: [unknown, string][] = [
       [{ ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1.2 } }, 'design.size.xB'],

@@ -124,6 +124,8 @@ export interface BatchDesign {
   reductionOrder: ReductionOrderSummary | null;
   galvanic: GalvanicSummary | null;
   thermodynamicSurfaceElement: string | null | undefined;
+  /** The structure expected as made for this route and conditions (null: no prediction for the pair). */
+  asMade: BatchAsMade | null;
   checks: DesignCheck[];
   hazards: { code: string; text: string }[];
   hazardSummary: HazardSummary;
@@ -137,6 +139,19 @@ export interface SurfaceQuestion {
   xB: number;
   diameterNm: number;
   temperatureC: number;
+  route: SynthesisRoute;
+  /** Seed metal of a seed-mediated batch, else null. */
+  seedElement: string | null;
+}
+
+/** What the particle is expected to be as the synthesis leaves it (shared-model/prediction/as-made.ts). */
+export interface BatchAsMade {
+  label: string;
+  basis: 'kinetic' | 'equilibrium';
+  afterAnnealing: string;
+  text: string;
+  /** In air or water: the oxidation outlook ('' when nothing oxidises). */
+  oxidation: string;
 }
 
 /**
@@ -146,6 +161,7 @@ export interface SurfaceQuestion {
 export interface SurfaceAnswer {
   element: string | null | undefined;
   note: string | null;
+  asMade?: BatchAsMade | null;
 }
 
 export interface DesignContext {

@@ -260,9 +260,10 @@ describe('the thermodynamic prediction, asked once about the designed particle',
         return { element: 'Ni', note: null };
       },
     });
-    const particle = { elementA: 'Pt', elementB: 'Ni', architecture: 'alloy', xB: 0.25, diameterNm: 4, temperatureC: 25 };
+    const particle = { elementA: 'Pt', elementB: 'Ni', architecture: 'alloy', xB: 0.25, diameterNm: 4, temperatureC: 25, route: 'co-reduction', seedElement: null };
     expect(asked).toEqual([particle]);
     expect(d.thermodynamicSurfaceElement).toBe('Ni');
+    expect(d.asMade).toBeNull();
     expect(d.checks.find((c) => c.kind === 'kinetics-vs-thermodynamics')?.message).toContain('agree: Pt in the core');
   });
 
