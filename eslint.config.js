@@ -8,7 +8,7 @@ const forbid = (groups, message) => ['error', { patterns: groups.map((group) => 
 
 export default tseslint.config(
   {
-    ignores: ['node_modules/**', 'dist/**', 'dist-electron/**', 'release/**', '.tsbuild/**', 'test-output/**', '.native/**', 'test/fixtures/**'],
+    ignores: ['node_modules/**', 'dist/**', 'dist-electron/**', 'release/**', '.tsbuild/**', 'test-output/**', '.native/**', 'test/fixtures/**', '.cache/**'],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,
@@ -83,7 +83,7 @@ export default tseslint.config(
   },
   {
     files: ['**/*.ts', '**/*.tsx'],
-    ignores: ['test/fixtures/**'],
+    ignores: ['test/fixtures/**', '.cache/**'],
     languageOptions: {
       parserOptions: {
         projectService: { allowDefaultProject: ['vitest.config.ts', 'renderer/vite.config.ts', 'scripts/dev/*.ts'] },

@@ -20,8 +20,11 @@ export interface WebContentsLike {
   on(event: 'will-navigate', listener: (event: { preventDefault(): void }, url: string) => void): void;
   on(event: 'will-attach-webview', listener: (event: { preventDefault(): void }) => void): void;
   setWindowOpenHandler(handler: (details: { url: string }) => { action: 'deny' | 'allow' }): void;
-  printToPDF(options: { printBackground?: boolean; pageSize?: string }): Promise<Uint8Array>;
+  printToPDF(options: { printBackground?: boolean; pageSize?: PaperSize }): Promise<Uint8Array>;
 }
+
+/** Paper names Electron's printToPDF accepts. */
+export type PaperSize = 'A0' | 'A1' | 'A2' | 'A3' | 'A4' | 'A5' | 'A6' | 'Legal' | 'Letter' | 'Tabloid' | 'Ledger';
 
 export interface BrowserWindowLike {
   webContents: WebContentsLike;
@@ -51,16 +54,38 @@ export interface BrowserWindowOptions {
   };
 }
 
+/** The standard menu roles main.ts uses (a subset of Electron's MenuItemConstructorOptions role). */
+export type MenuRole =
+  | 'quit'
+  | 'undo'
+  | 'redo'
+  | 'cut'
+  | 'copy'
+  | 'paste'
+  | 'selectAll'
+  | 'reload'
+  | 'toggleDevTools'
+  | 'resetZoom'
+  | 'zoomIn'
+  | 'zoomOut'
+  | 'togglefullscreen'
+  | 'minimize'
+  | 'close';
+
 export interface MenuItemTemplate {
   label?: string;
-  role?: string;
+  role?: MenuRole;
   type?: 'separator' | 'normal';
   accelerator?: string;
   submenu?: MenuItemTemplate[];
   click?: () => void;
 }
 
-export interface ElectronBoundary {
+/**
+ * `W` is the window class: our `BrowserWindowLike` for stand-ins, Electron's own `BrowserWindow` when the
+ * real module is checked against this boundary (test/types/electron-boundary.check.ts).
+ */
+export interface ElectronBoundary<W extends BrowserWindowLike = BrowserWindowLike> {
   app: {
     whenReady(): Promise<void>;
     getPath(name: 'userData'): string;
@@ -69,7 +94,7 @@ export interface ElectronBoundary {
     quit(): void;
     setName?(name: string): void;
   };
-  BrowserWindow: new (options: BrowserWindowOptions) => BrowserWindowLike;
+  BrowserWindow: new (options: BrowserWindowOptions) => W;
   ipcMain: {
     handle(channel: string, listener: (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>): void;
     on(channel: string, listener: (event: IpcMainEventLike) => void): void;
@@ -83,9 +108,15 @@ export interface ElectronBoundary {
     openPath(path: string): Promise<string>;
   };
   dialog: {
-    showSaveDialog(window: BrowserWindowLike, options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] }): Promise<{ canceled: boolean; filePath?: string }>;
+    showSaveDialog(window: W, options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] }): Promise<{ canceled: boolean; filePath?: string }>;
     showMessageBox(options: { type: 'info'; title: string; message: string; detail: string }): Promise<unknown>;
   };
+}
+
+/** The part of Electron's renderer-side API the preload uses. */
+export interface PreloadElectron {
+  contextBridge: { exposeInMainWorld(key: string, api: unknown): void };
+  ipcRenderer: { invoke(channel: string, ...args: unknown[]): Promise<unknown>; sendSync(channel: string): unknown };
 }
 
 /** IPC channel names shared by main and preload. */

@@ -67,7 +67,7 @@ export function applicationMenu(electron: ElectronBoundary, actions: { openDataF
   ];
 }
 
-export async function wireDesktopApp(electron: ElectronBoundary, context: ServiceContext, paths: DesktopPaths): Promise<DesktopApp> {
+export async function wireDesktopApp<W extends BrowserWindowLike>(electron: ElectronBoundary<W>, context: ServiceContext, paths: DesktopPaths): Promise<DesktopApp> {
   const { app, BrowserWindow, ipcMain, Menu, shell, dialog } = electron;
   await app.whenReady();
   const window = new BrowserWindow({

@@ -4,12 +4,7 @@
  * ipcRenderer. The allowlist comes from the main process (the contract's operation names), so this file
  * stays free of any module a sandboxed preload cannot load.
  */
-import { CALL_CHANNEL, OPERATIONS_CHANNEL, PRINT_CHANNEL } from './electron-boundary';
-
-interface PreloadElectron {
-  contextBridge: { exposeInMainWorld(key: string, api: unknown): void };
-  ipcRenderer: { invoke(channel: string, ...args: unknown[]): Promise<unknown>; sendSync(channel: string): unknown };
-}
+import { CALL_CHANNEL, OPERATIONS_CHANNEL, PRINT_CHANNEL, type PreloadElectron } from './electron-boundary';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports -- a sandboxed preload is CommonJS
 const { contextBridge, ipcRenderer } = require('electron') as PreloadElectron;

@@ -7,10 +7,11 @@ import { performance } from 'node:perf_hooks';
 import os from 'node:os';
 import { openStore } from '../../db/store';
 import { dispatch } from '../../electron/services/dispatch';
-import { tempDataDir } from '../support/host-fixture';
+import { removeTempDir, tempDir } from '../support/temp-dirs';
 
 async function loadOnce(): Promise<number> {
-  const store = openStore({ dataDir: tempDataDir('pairwright-bench-demo-') });
+  const dataDir = tempDir('pairwright-bench-demo-');
+  const store = openStore({ dataDir });
   try {
     const start = performance.now();
     const result = await dispatch({ store }, 'campaigns.loadDemo', {});
@@ -19,6 +20,7 @@ async function loadOnce(): Promise<number> {
     return elapsed;
   } finally {
     store.close();
+    removeTempDir(dataDir);
   }
 }
 

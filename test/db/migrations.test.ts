@@ -1,12 +1,12 @@
 /** Migrations on real SQLite files: from empty, from a previous version (with a backup), and failure rollback. */
 import Database from 'better-sqlite3';
-import { cpSync, existsSync, mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpSync, existsSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { defaultMigrationsDir, loadMigrations, migrate } from '../../db/migrate';
 import { openStore, STORE_FILE_NAME } from '../../db/store';
 import { tempDataDir } from '../support/host-fixture';
+import { tempDir } from '../support/temp-dirs';
 
 describe('migrations', () => {
   it('bring an empty store to the latest version with WAL and foreign keys on', () => {
@@ -23,7 +23,7 @@ describe('migrations', () => {
 
   it('migrate a store left at version 1 to the latest version, keeping its data', () => {
     const dataDir = tempDataDir();
-    const partialDir = mkdtempSync(join(tmpdir(), 'pairwright-migrations-'));
+    const partialDir = tempDir('pairwright-migrations-');
     cpSync(join(defaultMigrationsDir(), '0001_foundation.sql'), join(partialDir, '0001_foundation.sql'));
     const old = openStore({ dataDir, migrationsDir: partialDir });
     old.db.prepare("INSERT INTO campaigns (name, created_at, updated_at) VALUES ('Kept', 'x', 'x')").run();
@@ -38,7 +38,7 @@ describe('migrations', () => {
 
   it('back up the file before applying a pending migration', () => {
     const dataDir = tempDataDir();
-    const dir = mkdtempSync(join(tmpdir(), 'pairwright-migrations-'));
+    const dir = tempDir('pairwright-migrations-');
     cpSync(join(defaultMigrationsDir(), '0001_foundation.sql'), join(dir, '0001_foundation.sql'));
     const old = openStore({ dataDir, migrationsDir: dir });
     old.db.prepare("INSERT INTO campaigns (name, created_at, updated_at) VALUES ('Kept', 'x', 'x')").run();
@@ -59,7 +59,7 @@ describe('migrations', () => {
 
   it('roll back a failing migration whole and leave the version where it was', () => {
     const dataDir = tempDataDir();
-    const dir = mkdtempSync(join(tmpdir(), 'pairwright-migrations-'));
+    const dir = tempDir('pairwright-migrations-');
     cpSync(join(defaultMigrationsDir(), '0001_foundation.sql'), join(dir, '0001_foundation.sql'));
     openStore({ dataDir, migrationsDir: dir }).close();
     writeFileSync(join(dir, '0002_broken.sql'), 'CREATE TABLE half_done (id INTEGER);\nINSERT INTO no_such_table VALUES (1);\n');

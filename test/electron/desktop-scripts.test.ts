@@ -9,7 +9,7 @@ describe('npm start without the Electron binary', () => {
   it('explains what is missing and points to the browser host', () => {
     const run = spawnSync(process.execPath, ['scripts/start-electron.mjs'], {
       encoding: 'utf8',
-      env: { ...process.env, PAIRWRIGHT_ELECTRON_DIR: tempDataDir('no-electron-') },
+      env: { ...process.env, PAIRWRIGHT_ELECTRON_DIR: tempDataDir('pairwright-no-electron-') },
     });
     expect(run.status).toBe(1);
     expect(run.stderr).toMatch(/Electron is not installed/);

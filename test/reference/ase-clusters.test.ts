@@ -3,13 +3,13 @@
  * ase.cluster.Icosahedron, Octahedron(length 2n+1, cutoff n) = cuboctahedron, Octahedron(length 3L−2,
  * cutoff L−1) = regular truncated octahedron; and ase.io.read of the extended XYZ we write.
  */
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { buildCluster, type ClusterShape } from '../../shared-model/clusters/shapes';
 import { writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
 import { referenceAvailable, runPythonJson } from '../support/reference-tools';
+import { tempDir } from '../support/temp-dirs';
 
 const available = referenceAvailable({ python: 'ase' });
 
@@ -80,7 +80,7 @@ describe.skipIf(!available)('cluster builders and extended XYZ vs ASE', () => {
   it('ase.io.read reads our extended XYZ with the same species, positions and info', () => {
     const c = buildCluster('cuboctahedron', { shells: 2 }, 2.78);
     const symbols = Array.from({ length: c.atoms }, (_, i) => (i % 4 === 0 ? 'Pt' : 'Ni'));
-    const path = join(mkdtempSync(join(tmpdir(), 'pairwright-xyz-')), 'cluster.xyz');
+    const path = join(tempDir('pairwright-xyz-'), 'cluster.xyz');
     writeFileSync(path, writeExtendedXyz({ symbols, positions: c.positions }, { energy: -210.5, pair: 'Ni-Pt', note: 'a b' }));
     const read = runPythonJson<{ symbols: string[]; positions: number[][]; pbc: boolean[]; info: Record<string, string> }>(READ_XYZ, { path });
     expect(read.symbols).toEqual(symbols);

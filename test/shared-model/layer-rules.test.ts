@@ -5,10 +5,10 @@
  */
 import { ESLint } from 'eslint';
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { tempDir } from '../support/temp-dirs';
 
 const eslint = new ESLint({ cwd: process.cwd() });
 const fixture = (name: string) => readFileSync(join('test', 'fixtures', 'layer-rules', name), 'utf8');
@@ -74,7 +74,7 @@ describe('layer rules', () => {
   });
 
   it('shared-model compiler settings reject Node globals', () => {
-    const dir = mkdtempSync(join(tmpdir(), 'pairwright-layer-'));
+    const dir = tempDir('pairwright-layer-');
     writeFileSync(join(dir, 'uses-process.ts'), fixture('shared-model-uses-process.ts'));
     const config = JSON.parse(readFileSync('shared-model/tsconfig.json', 'utf8')) as { compilerOptions: { lib: string[]; types: string[] } };
     writeFileSync(

@@ -3,12 +3,10 @@
  * `host.url` is the host's first one-time login address: a browser page that opens it is logged in (the
  * session cookie stays with that browser context; opening the address again there just redirects).
  */
-import { mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { openStore, type Store } from '../../db/store';
 import { startHost, type RunningHost } from '../../electron/host/server';
 import { rendererDistDir } from '../../electron/paths';
+import { tempDir } from './temp-dirs';
 
 export interface HostFixture {
   host: RunningHost;
@@ -17,8 +15,9 @@ export interface HostFixture {
   stop(): Promise<void>;
 }
 
+/** A temporary data folder, removed after the test (or file) that made it: see temp-dirs.ts. */
 export function tempDataDir(prefix = 'pairwright-test-'): string {
-  return mkdtempSync(join(tmpdir(), prefix));
+  return tempDir(prefix);
 }
 
 export async function startTestHost(dataDir: string = tempDataDir(), port = 0): Promise<HostFixture> {
