@@ -1,5 +1,5 @@
 import { defineConfig } from 'vitest/config';
-import { TIMEOUTS } from './test/support/timeouts';
+import { TIMEOUTS } from './test/support/timeouts.ts';
 
 // Tiers (DEVELOPERS.md "Tests"): `npm run test:unit` runs the unit project only (model, db, services: no
 // browser, no child processes); `npm test` runs all three.

@@ -1,39 +1,44 @@
 /**
  * A user in Debian's Chromium designs batches (errors beside the fields, nothing saved until valid), saves
  * them, totals their reagents against the inventory, exports CSV and looks at the print layout.
- * Screenshots go to test-output/screenshots/.
+ * Screenshots go to test-output/screenshots/. Each test has its own host, store and page
+ * (test/support/browser-test.ts) and makes the batches it needs.
  */
 import { readFileSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { browserAvailable, launchBrowser, newTestPage, screenshotPath } from '../support/browser';
-import { startTestHost, type HostFixture } from '../support/host-fixture';
+import type { Page } from 'playwright-core';
+import { describe, expect } from 'vitest';
+import { browserAvailable, screenshotPath } from '../support/browser';
+import { browserTest as it, openApp, type BrowserTestHost } from '../support/browser-test';
 
 const available = browserAvailable();
 
+const form = (page: Page) => page.getByRole('form', { name: 'Batch design' });
+
+/** Opens Batch design with its example (4 nm Pt75Ni25 alloy) once the catalog has loaded. */
+async function openDesign(page: Page, host: BrowserTestHost): Promise<void> {
+  await openApp(page, host, { view: 'batch-design' });
+  await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Batch design');
+  await expect.poll(() => form(page).locator('select[name="precursorA"] option').count()).toBeGreaterThan(1);
+}
+
+/** Saves the example as "PtNi-01 4 nm alloy" and a 0.3 mmol scale-up as "PtNi-02 scale-up", as a user would. */
+async function saveTwoPtNiBatches(page: Page): Promise<void> {
+  await form(page).getByRole('button', { name: 'Reset to example' }).click();
+  await form(page).locator('input[name="name"]').fill('PtNi-01 4 nm alloy');
+  await form(page).getByRole('button', { name: 'Save as planned batch' }).click();
+  await expect.poll(() => page.locator('tr[data-batch="PtNi-01 4 nm alloy"]').count()).toBe(1);
+  await form(page).locator('input[name="amount"]').fill('0.3');
+  await form(page).locator('input[name="name"]').fill('PtNi-02 scale-up');
+  await form(page).getByRole('button', { name: 'Save as planned batch' }).click();
+  await expect.poll(() => page.locator('tr[data-batch="PtNi-02 scale-up"]').count()).toBe(1);
+}
+
 describe.skipIf(!available)('batch design and reagents in the browser host', () => {
-  let browser: Browser;
-  let fixture: HostFixture;
-  let page: Page;
+  it.override('pageOptions', { viewport: { width: 1500, height: 1000 }, acceptDownloads: true });
 
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    fixture = await startTestHost();
-    page = await newTestPage(browser, { viewport: { width: 1500, height: 1000 }, acceptDownloads: true }, 8000);
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await fixture?.stop();
-  });
-
-  const count = (table: string) => (fixture.store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
-  const form = () => page.getByRole('form', { name: 'Batch design' });
-
-  it('computes the example batch with checks and hazards', async () => {
-    await page.goto(`${fixture.host.url}#/batch-design`);
-    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Batch design');
-    await expect.poll(() => form().locator('select[name="precursorA"] option').count()).toBeGreaterThan(1);
-    await form().getByRole('button', { name: 'Compute' }).click();
+  it('computes the example batch with checks and hazards', async ({ page, host }) => {
+    await openDesign(page, host);
+    await form(page).getByRole('button', { name: 'Compute' }).click();
     // 4 nm Pt75Ni25: 2396.8 atoms (hand-worked in test/shared-model/recipes/particle.test.ts)
     await expect.poll(() => page.getByTestId('atoms-per-particle').textContent()).toContain('2,397');
     expect(await page.locator('[data-check="reduction-order"]').count()).toBeGreaterThan(0);
@@ -44,38 +49,35 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await page.screenshot({ path: screenshotPath('batch-design-ptni'), fullPage: true });
   });
 
-  it('shows bad input beside the field and saves nothing', async () => {
-    await form().locator('input[name="size.xB"]').fill('120');
-    await form().getByRole('button', { name: 'Compute' }).click();
+  it('shows bad input beside the field and saves nothing', async ({ page, host }) => {
+    await openDesign(page, host);
+    await form(page).locator('input[name="size.xB"]').fill('120');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
     await expect.poll(() => page.locator('[data-error-for="size.xB"]').textContent()).toMatch(/0 and 100 at\.%/);
-    await form().locator('input[name="name"]').fill('should not exist');
-    await form().getByRole('button', { name: 'Save as planned batch' }).click();
+    await form(page).locator('input[name="name"]').fill('should not exist');
+    await form(page).getByRole('button', { name: 'Save as planned batch' }).click();
     await expect.poll(() => page.locator('[data-error-for="size.xB"]').textContent()).toMatch(/0 and 100 at\.%/);
-    await form().locator('input[name="size.xB"]').fill('25');
-    await form().locator('select[name="reducer"]').selectOption('');
-    await form().getByRole('button', { name: 'Compute' }).click();
+    await form(page).locator('input[name="size.xB"]').fill('25');
+    await form(page).locator('select[name="reducer"]').selectOption('');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
     await expect.poll(() => page.locator('[data-error-for="reducer"]').textContent()).toMatch(/choose a reducer/);
-    await form().locator('select[name="precursorB"]').selectOption('');
-    await form().locator('select[name="reducer"]').selectOption('nabh4');
-    await form().getByRole('button', { name: 'Compute' }).click();
+    await form(page).locator('select[name="precursorB"]').selectOption('');
+    await form(page).locator('select[name="reducer"]').selectOption('nabh4');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
     await expect.poll(() => page.locator('[data-error-for="precursors"]').textContent()).toMatch(/choose a Ni precursor/);
     await page.screenshot({ path: screenshotPath('batch-design-errors'), fullPage: true });
-    expect(count('batches')).toBe(0);
+    expect(host.count('batches')).toBe(0);
   });
 
-  it('saves two batches and lists them', async () => {
-    await form().getByRole('button', { name: 'Reset to example' }).click();
-    await form().locator('input[name="name"]').fill('PtNi-01 4 nm alloy');
-    await form().getByRole('button', { name: 'Save as planned batch' }).click();
-    await expect.poll(() => page.locator('tr[data-batch="PtNi-01 4 nm alloy"]').count()).toBe(1);
-    await form().locator('input[name="amount"]').fill('0.3');
-    await form().locator('input[name="name"]').fill('PtNi-02 scale-up');
-    await form().getByRole('button', { name: 'Save as planned batch' }).click();
-    await expect.poll(() => page.locator('tr[data-batch="PtNi-02 scale-up"]').count()).toBe(1);
-    expect(count('batches')).toBe(2);
+  it('saves two batches and lists them', async ({ page, host }) => {
+    await openDesign(page, host);
+    await saveTwoPtNiBatches(page);
+    expect(host.count('batches')).toBe(2);
   });
 
-  it('records lots and stock dates of a saved batch; an old borohydride stock is flagged', async () => {
+  it('records lots and stock dates of a saved batch; an old borohydride stock is flagged', async ({ page, host }) => {
+    await openDesign(page, host);
+    await saveTwoPtNiBatches(page);
     await page.locator('tr[data-batch="PtNi-01 4 nm alloy"]').getByRole('button', { name: 'Open' }).click();
     await expect.poll(() => page.getByTestId('opened-batch').textContent()).toContain('PtNi-01');
     await page.getByLabel('Lot of Sodium borohydride').fill('BCBX9');
@@ -85,32 +87,35 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await page.getByRole('button', { name: 'Save lots and dates' }).click();
     // NaBH4 stock limit 0.5 h (catalog, common practice: made fresh)
     await expect.poll(() => page.locator('tr[data-record="nabh4"] td.stale').textContent()).toMatch(/make it fresh/);
-    expect(count('batch_lots')).toBe(1);
-    expect(count('batch_stocks')).toBe(1);
+    expect(host.count('batch_lots')).toBe(1);
+    expect(host.count('batch_stocks')).toBe(1);
     await page.screenshot({ path: screenshotPath('batch-design-records'), fullPage: true });
   });
 
-  it('warns of galvanic replacement for a gold shell on silver seeds', async () => {
-    await form().locator('input[name="elementA"]').fill('Ag');
-    await form().locator('input[name="elementB"]').fill('Au');
-    await form().locator('select[name="route"]').selectOption('seed-mediated');
-    await form().locator('select[name="target"]').selectOption('Ag@Au');
-    await form().locator('input[name="shell"]').fill('2');
-    await form().locator('input[name="seeds.diameterNm"]').fill('20');
-    await form().locator('input[name="seeds.particlesPerMl"]').fill('1e11');
-    await form().locator('input[name="seeds.volumeMl"]').fill('5');
-    await form().locator('select[name="precursorB"]').selectOption('haucl4-3h2o');
-    await form().locator('input[name="stockB"]').fill('10');
-    await form().locator('select[name="reducer"]').selectOption('ascorbic-acid');
-    await form().locator('input[name="reducer.excess"]').fill('4');
-    await form().getByRole('button', { name: 'Compute' }).click();
+  it('warns of galvanic replacement for a gold shell on silver seeds', async ({ page, host }) => {
+    await openDesign(page, host);
+    await form(page).locator('input[name="elementA"]').fill('Ag');
+    await form(page).locator('input[name="elementB"]').fill('Au');
+    await form(page).locator('select[name="route"]').selectOption('seed-mediated');
+    await form(page).locator('select[name="target"]').selectOption('Ag@Au');
+    await form(page).locator('input[name="shell"]').fill('2');
+    await form(page).locator('input[name="seeds.diameterNm"]').fill('20');
+    await form(page).locator('input[name="seeds.particlesPerMl"]').fill('1e11');
+    await form(page).locator('input[name="seeds.volumeMl"]').fill('5');
+    await form(page).locator('select[name="precursorB"]').selectOption('haucl4-3h2o');
+    await form(page).locator('input[name="stockB"]').fill('10');
+    await form(page).locator('select[name="reducer"]').selectOption('ascorbic-acid');
+    await form(page).locator('input[name="reducer.excess"]').fill('4');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
     const galvanic = page.locator('[data-check="galvanic-replacement"]');
     await expect.poll(() => galvanic.textContent()).toMatch(/3\.00 Ag atoms dissolve per Au atom/);
     expect(await galvanic.getAttribute('data-severity')).toBe('warning');
     await page.screenshot({ path: screenshotPath('batch-design-galvanic'), fullPage: true });
   });
 
-  it('totals the reagents of chosen batches against the inventory, with shortfalls, CSV and print layout', async () => {
+  it('totals the reagents of chosen batches against the inventory, with shortfalls, CSV and print layout', async ({ page, host }) => {
+    await openDesign(page, host);
+    await saveTwoPtNiBatches(page);
     await page.locator('[data-view="reagents"]').click();
     await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Reagents');
     await page.getByRole('checkbox', { name: /PtNi-01/ }).check();
@@ -145,7 +150,9 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await page.emulateMedia({ media: 'screen' });
   });
 
-  it('refuses an unparseable formula in the catalog beside the field', async () => {
+  it('refuses an unparseable formula in the catalog beside the field', async ({ page, host }) => {
+    await openApp(page, host, { view: 'reagents' });
+    await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Reagents');
     await page.locator('.catalog-editor > summary').click();
     const editor = page.getByRole('form', { name: 'Catalog reagent' });
     await editor.locator('input[name="key"]').fill('bad-salt');

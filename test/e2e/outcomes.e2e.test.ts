@@ -2,69 +2,60 @@
  * A user in Debian's Chromium records what characterization showed for a made Au–Pd batch: pastes TEM
  * diameters (first with a typo), records composition with a Cu grid, imports an EDX line scan, confirms the
  * suggested architecture and reads the campaign's prediction-vs-outcome table and confusion matrix.
- * Screenshots go to test-output/screenshots/.
+ * Screenshots go to test-output/screenshots/. Each test has its own host, store and page
+ * (test/support/browser-test.ts) and stores the planning side it needs through the API.
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect } from 'vitest';
 import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
-import { browserAvailable, launchBrowser, newTestPage, screenshotPath } from '../support/browser';
-import { dispatchValue } from '../support/dispatch';
-import { startTestHost, type HostFixture } from '../support/host-fixture';
+import { browserAvailable, screenshotPath } from '../support/browser';
+import { browserTest as it, openApp, type BrowserTestHost } from '../support/browser-test';
+import { TIMEOUTS } from '../support/timeouts';
 import { auPd } from '../support/sample-batches';
 import { positions, syntheticScan } from '../shared-model/characterization/synthetic-line-scan';
 
 const available = browserAvailable();
 
-describe.skipIf(!available)('results in the browser host', () => {
-  let browser: Browser;
-  let fixture: HostFixture;
-  let page: Page;
-
-  const api = <T>(name: string, input: unknown): Promise<T> => dispatchValue<T>({ store: fixture.store }, name, input);
-  const countRows = (table: string) => (fixture.store.db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
-
-  beforeAll(async () => {
-    browser = await launchBrowser();
-    fixture = await startTestHost();
-    // The planning side (campaign, pair, prediction, saved batch) is set up through the API.
-    const campaign = await api<Campaign>('campaigns.create', { name: 'Au-Pd screen' });
-    const pair = await api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
-    await api('prediction.save', { pair: 'Au-Pd', conditions: { xB: 0.5, diameterNm: 10, temperatureK: 300 }, pairId: pair.id });
-    await api<SavedBatch>('batches.save', {
-      name: 'AuPd 10 nm',
-      campaignId: campaign.id,
-      pairId: pair.id,
-      design: auPd,
-    });
-    // Generous default timeout: the whole suite runs browsers and fits side by side on two cores.
-    page = await newTestPage(browser, { viewport: { width: 1400, height: 1000 } }, 30000);
-    await page.goto(fixture.host.url);
-    await page.evaluate((id) => window.localStorage.setItem('pairwright.campaignId', String(id)), campaign.id);
-    await page.reload();
-    await page.locator('[data-view="results"]').waitFor({ timeout: 60000 });
-  }, 120_000);
-  afterAll(async () => {
-    await browser?.close();
-    await fixture?.stop();
+/** The planning side (campaign, pair, prediction, saved batch), stored through the API; opens Results on it. */
+async function openResultsOfPlannedBatch(page: Page, host: BrowserTestHost): Promise<SavedBatch> {
+  const campaign = await host.api<Campaign>('campaigns.create', { name: 'Au-Pd screen' });
+  const pair = await host.api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
+  await host.api('prediction.save', {
+    pair: 'Au-Pd',
+    conditions: { xB: 0.5, diameterNm: 10, temperatureK: 300 },
+    pairId: pair.id,
   });
+  const batch = await host.api<SavedBatch>('batches.save', {
+    name: 'AuPd 10 nm',
+    campaignId: campaign.id,
+    pairId: pair.id,
+    design: auPd,
+  });
+  await openApp(page, host, { campaignId: campaign.id, view: 'results' });
+  await expect.poll(() => page.getByTestId('batch-heading').textContent()).toMatch(/^AuPd 10 nm/);
+  return batch;
+}
 
-  it('opens the Results view on the campaign\'s batch', async () => {
-    await page.locator('[data-view="results"]').click();
+describe.skipIf(!available)('results in the browser host', () => {
+  it('opens the Results view on the campaign\'s batch', async ({ page, host }) => {
+    await openResultsOfPlannedBatch(page, host);
     await expect.poll(() => page.getByTestId('batch-heading').textContent()).toMatch(/AuPd 10 nm: Au–Pd, target alloy, 10 nm, 50.0 at.% Pd/);
     expect(await page.locator('[data-testid="predicted-label"]').textContent()).toMatch(/analytic/);
   });
 
-  it('shows a malformed row beside the field and stores nothing', async () => {
+  it('shows a malformed row beside the field and stores nothing', async ({ page, host }) => {
+    await openResultsOfPlannedBatch(page, host);
     const form = page.getByRole('form', { name: 'Import sizes' });
     await form.locator('textarea[name="csvText"]').fill('diameter\n9.6\n10.1\n1O.4\n10.8\n');
     await form.getByRole('button', { name: 'Import sizes' }).click();
     await expect.poll(() => form.locator('[data-error-for="csvText"]').textContent()).toBe('line 4: "1O.4" in column "diameter" is not a number');
-    expect(countRows('outcome_size_imports')).toBe(0);
+    expect(host.count('outcome_size_imports')).toBe(0);
   });
 
-  it('imports diameters and shows statistics with the histogram and fitted curve', async () => {
+  it('imports diameters and shows statistics with the histogram and fitted curve', async ({ page, host }) => {
+    await openResultsOfPlannedBatch(page, host);
     const form = page.getByRole('form', { name: 'Import sizes' });
     const diameters = [9.6, 10.1, 10.4, 10.8, 9.2, 11.3, 10.0, 9.9, 10.6, 12.1, 9.4, 10.2, 10.7, 9.8, 11.0];
     await form.locator('textarea[name="csvText"]').fill(`diameter;area\n${diameters.map((d) => `${String(d).replace('.', ',')};1`).join('\n')}\n`);
@@ -73,11 +64,12 @@ describe.skipIf(!available)('results in the browser host', () => {
     // Charts draw after their container is measured: poll.
     await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-reference-area').count()).toBeGreaterThan(2);
     await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-line-curve').count()).toBe(1);
-    expect(countRows('outcome_diameters')).toBe(15);
+    expect(host.count('outcome_diameters')).toBe(15);
     await page.locator('[aria-label="TEM sizes"]').screenshot({ path: screenshotPath('results-sizes') });
   });
 
-  it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async () => {
+  it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async ({ page, host }) => {
+    await openResultsOfPlannedBatch(page, host);
     const form = page.getByRole('form', { name: 'Record composition' });
     await form.locator('input[name="xB-0"]').fill('48');
     await form.locator('input[name="uncertainty-0"]').fill('2');
@@ -92,7 +84,10 @@ describe.skipIf(!available)('results in the browser host', () => {
     expect(await page.getByTestId('composition-warning-grid-metal').count()).toBe(0);
   });
 
-  it('imports a line scan, shows each model fit and the chosen one, and confirms the suggestion', async () => {
+  it('imports a line scan, shows each model fit and the chosen one, and confirms the suggestion', async ({ page, host }) => {
+    await openResultsOfPlannedBatch(page, host);
+    // Four model fits of a 51-point scan: background work on a shared machine.
+    page.setDefaultTimeout(TIMEOUTS.longWaitMs);
     const scan = syntheticScan(
       { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
       20,
@@ -111,11 +106,15 @@ describe.skipIf(!available)('results in the browser host', () => {
     await page.locator('[aria-label="EDX line scans"]').screenshot({ path: screenshotPath('results-line-scan') });
     await page.getByRole('button', { name: 'Confirm suggestion' }).click();
     await expect.poll(() => page.getByTestId('observed-label').textContent()).toMatch(/Pd@Au \(confirmed suggestion\)/);
-    expect(countRows('outcome_line_scan_points')).toBe(51);
+    expect(host.count('outcome_line_scan_points')).toBe(51);
     await page.screenshot({ path: screenshotPath('results-batch'), fullPage: true });
   });
 
-  it('shows the campaign table and the confusion heat-map with counts in the cells', async () => {
+  it('shows the campaign table and the confusion heat-map with counts in the cells', async ({ page, host }) => {
+    // Made and characterized: the observed architecture recorded through the API (as the Results view does).
+    const batch = await openResultsOfPlannedBatch(page, host);
+    await host.api('outcomes.setObserved', { batchId: batch.id, label: 'Pd@Au', decision: 'override', reason: 'EDX line scan: Au at the rim' });
+    await page.reload();
     await page.getByRole('button', { name: 'Per campaign' }).click();
     const row = page.locator('table[aria-label="Prediction vs outcome table"] tr[data-batch="AuPd 10 nm"]');
     await expect.poll(() => row.textContent()).toMatch(/Pd@Au/);

@@ -5,6 +5,7 @@
  */
 import { openStore, type Store } from '../../db/store';
 import { startHost, type RunningHost } from '../../electron/host/server';
+import { shutdownServices } from '../../electron/services/lifecycle';
 import { rendererDistDir } from '../../electron/paths';
 import { tempDir } from './temp-dirs';
 
@@ -27,9 +28,10 @@ export async function startTestHost(dataDir: string = tempDataDir(), port = 0): 
     host,
     store,
     dataDir,
+    // background jobs end first (as the real host does), then the store closes
     stop: async () => {
       await host.close();
-      store.close();
+      await shutdownServices(store);
     },
   };
 }

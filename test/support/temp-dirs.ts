@@ -22,6 +22,13 @@ export function tempDir(prefix = 'pairwright-test-'): string {
   return dir;
 }
 
+/** A temporary folder the caller removes itself (with removeTempDir), e.g. a host's store: closed, then removed. */
+export function tempDirRemovedByCaller(prefix: string): string {
+  if (!prefix.startsWith('pairwright-'))
+    throw new Error(`temp folder prefix must start with "pairwright-", got "${prefix}"`);
+  return mkdtempSync(join(tmpdir(), prefix));
+}
+
 export function removeTempDir(dir: string): void {
   rmSync(dir, { recursive: true, force: true });
   const index = made.findIndex((entry) => entry.dir === dir);
