@@ -11,7 +11,7 @@ describe.skipIf(!available)('glossary in the browser host', () => {
     const browser = await launchBrowser();
     const fixture = await startTestHost(tempDataDir());
     try {
-      const page = await newTestPage(browser, { viewport: { width: 1400, height: 900 } }, 10_000);
+      const page = await newTestPage(browser, { viewport: { width: 1400, height: 900 } });
       await page.goto(fixture.host.url);
       for (const view of VIEWS.filter((v) => v.ready)) {
         await page.locator(`button[data-view="${view.id}"]`).click();

@@ -23,7 +23,7 @@ describe.skipIf(!available)('logging in to the browser host', () => {
   });
 
   it('logs in with the printed address, drops the key from the address bar and hides the cookie from scripts', async () => {
-    const page = await newTestPage(browser, {}, 8000);
+    const page = await newTestPage(browser, {});
     const url = fixture.host.issueLoginUrl('/#/campaigns');
     await page.goto(url);
     await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Campaigns');
@@ -35,11 +35,11 @@ describe.skipIf(!available)('logging in to the browser host', () => {
   });
 
   it('shows a browser without the key only the login note, and a used key logs no one else in', async () => {
-    const owner = await newTestPage(browser, {}, 8000);
+    const owner = await newTestPage(browser, {});
     const url = fixture.host.issueLoginUrl();
     await owner.goto(url);
     await expect.poll(() => owner.locator('main h1').first().textContent()).toBeTruthy();
-    const stranger = await newTestPage(browser, {}, 8000);
+    const stranger = await newTestPage(browser, {});
     await stranger.goto(fixture.host.origin);
     expect(await stranger.locator('h1').textContent()).toBe('Pairwright');
     expect(await stranger.locator('body').textContent()).toContain('not logged in');

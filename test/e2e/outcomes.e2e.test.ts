@@ -113,7 +113,8 @@ describe.skipIf(!available)('results in the browser host', () => {
   it('shows the campaign table and the confusion heat-map with counts in the cells', async ({ page, host }) => {
     // Made and characterized: the observed architecture recorded through the API (as the Results view does).
     const batch = await openResultsOfPlannedBatch(page, host);
-    await host.api('outcomes.setObserved', { batchId: batch.id, label: 'Pd@Au', decision: 'override', reason: 'EDX line scan: Au at the rim' });
+    const observed = { label: 'Pd@Au', decision: 'override', reason: 'EDX line scan: Au at the rim' };
+    await host.api('outcomes.record', { batchId: batch.id, observed });
     await page.reload();
     await page.getByRole('button', { name: 'Per campaign' }).click();
     const row = page.locator('table[aria-label="Prediction vs outcome table"] tr[data-batch="AuPd 10 nm"]');
