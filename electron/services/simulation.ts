@@ -6,7 +6,7 @@
 import { getRun, listRuns } from '../../db/repositories/simulation';
 import { DomainError } from '../../shared-model/api/result';
 import { MIXING_RULE_DESCRIPTION, type simulationOperations } from '../../shared-model/api/simulation';
-import { CLUSTER_SHAPES } from '../../shared-model/clusters/shapes';
+import { PARTICLE_SHAPES } from '../../shared-model/geometry/shapes';
 import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
 import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
@@ -18,7 +18,7 @@ import type { HandlerMap } from './context';
 export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> = {
   'simulation.options': () => ({
     elements: GUPTA_ELEMENTS,
-    shapes: CLUSTER_SHAPES,
+    shapes: PARTICLE_SHAPES,
     limits: SIMULATION_LIMITS,
     mixingRule: MIXING_RULE_DESCRIPTION,
     engineVersion: ENGINE_VERSION,

@@ -4,7 +4,7 @@
  * detail, consumed once by the Simulation view).
  */
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
-import type { ParticleShape } from '../../shared-model/geometry/particle-sites';
+import type { ParticleShape } from '../../shared-model/geometry/shapes';
 
 /** A lattice Monte Carlo run asked for from another view: the Simulation form opens with these values. */
 export interface SimulationRequest {

@@ -7,7 +7,6 @@ import { z } from 'zod';
 import type { ClassificationThresholds } from '../architecture/classify';
 import type { ColumnSource, ElementRecord } from '../elements/element-table';
 import { METAL_SYMBOLS } from '../elements/symbols';
-import { PARTICLE_SHAPES } from '../geometry/particle-sites';
 import type { Isotherm } from '../prediction/isotherm';
 import { ISOTHERM_SWEEPS } from '../prediction/isotherm';
 import type { Prediction } from '../prediction/predict';
@@ -17,7 +16,7 @@ import { parseRankTarget, type RankTarget } from '../prediction/rank';
 import { SURFACE_FACETS } from '../prediction/segregation';
 import { DomainError } from './result';
 import { operation } from './operation';
-import { elementSymbolSchema, idSchema, pairTextSchema } from './schemas';
+import { elementSymbolSchema, idSchema, pairTextSchema, particleShapeSchema } from './schemas';
 
 const finite = (what: string) => z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, { error: 'must be a finite number' });
 
@@ -28,7 +27,6 @@ export const diameterNmSchema = finite('nm')
 export const temperatureKSchema = finite('K')
   .refine((t) => t > 0, { error: 'must be a positive temperature in K' })
   .refine((t) => t <= 5000, { error: 'must be at most 5000 K' });
-export const shapeSchema = z.enum(PARTICLE_SHAPES, { error: `must be one of: ${PARTICLE_SHAPES.join(', ')}` });
 export const facetSchema = z.enum(SURFACE_FACETS, { error: 'must be "111" or "100"' });
 export const environmentSchema = z.enum(ENVIRONMENTS, { error: `must be one of: ${ENVIRONMENTS.join(', ')}` });
 export const pressureBarSchema = finite('bar')
@@ -62,7 +60,7 @@ export const thresholdsSchema = z
 export const conditionsSchema = z.object({
   xB: xBSchema,
   diameterNm: diameterNmSchema,
-  shape: shapeSchema.default(PREDICTION_DEFAULTS.shape),
+  shape: particleShapeSchema.default(PREDICTION_DEFAULTS.shape),
   temperatureK: temperatureKSchema,
   facet: facetSchema.default(PREDICTION_DEFAULTS.facet),
   strainRule: strainRuleSchema.default(PREDICTION_DEFAULTS.strainRule),

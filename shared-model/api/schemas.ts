@@ -1,6 +1,7 @@
 /** zod building blocks shared by the API areas: ids, names, element symbols, pair strings. */
 import { z } from 'zod';
 import { isMetalSymbol, METAL_SYMBOLS } from '../elements/symbols';
+import { normaliseShapeName, PARTICLE_SHAPES } from '../geometry/shapes';
 
 export const idSchema = z.number({ error: 'must be a number' }).int('must be a whole number').positive('must be a positive id');
 
@@ -14,6 +15,14 @@ export const elementSymbolSchema = z
   .string({ error: 'must be an element symbol' })
   .trim()
   .refine(isMetalSymbol, { error: (issue) => `unknown element "${String(issue.input)}"; known metals: ${METAL_SYMBOLS.join(' ')}` });
+
+const shapeError = `must be one of: ${PARTICLE_SHAPES.join(', ')}`;
+
+/** A particle shape of the one list; "truncated octahedron" (the older spelling) is read as truncated-octahedron. */
+export const particleShapeSchema = z
+  .string({ error: shapeError })
+  .transform(normaliseShapeName)
+  .pipe(z.enum(PARTICLE_SHAPES, { error: shapeError }));
 
 /** "Pt-Ni", "Pt–Ni" or "PtNi" → ["Pt","Ni"]. */
 export function splitPair(text: string): [string, string] | null {

@@ -9,8 +9,7 @@
 import { z } from 'zod';
 import { DomainError } from './result';
 import { operation } from './operation';
-import { idSchema } from './schemas';
-import { CLUSTER_SHAPES } from '../clusters/shapes';
+import { idSchema, particleShapeSchema } from './schemas';
 import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../montecarlo/gupta-parameters';
 import { planSimulation, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
 import type { StructureEnergy } from '../montecarlo/gupta-energy';
@@ -45,7 +44,7 @@ const specShape = {
   elementA: guptaElementSchema,
   elementB: guptaElementSchema,
   xB: positiveNumber('atomic fraction of B').gt(0, 'must be above 0').lt(1, 'must be below 1'),
-  shape: z.enum(CLUSTER_SHAPES, { error: `must be one of: ${CLUSTER_SHAPES.join(', ')}` }),
+  shape: particleShapeSchema,
   shells: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
   diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
   temperatureK: positiveNumber('K')

@@ -21,13 +21,11 @@
  */
 import { invalid } from '../api/result';
 import { magicClusterAtoms, truncatedOctahedronAtoms } from '../geometry/magic-numbers';
+import { isParticleShape, PARTICLE_SHAPES, type ParticleShape } from '../geometry/shapes';
 import { pairsWithin } from './neighbours';
 
-export const CLUSTER_SHAPES = ['cuboctahedron', 'icosahedron', 'truncated-octahedron', 'sphere'] as const;
-export type ClusterShape = (typeof CLUSTER_SHAPES)[number];
-
 export interface ClusterGeometry {
-  shape: ClusterShape;
+  shape: ParticleShape;
   /** Shells around the centre (truncated octahedron: edge atoms − 1; sphere: radius in nearest-neighbour distances). */
   shells: number;
   atoms: number;
@@ -37,10 +35,6 @@ export interface ClusterGeometry {
   nearestNeighbourAngstrom: number;
   /** Diameter of a sphere holding the same atoms at bulk fcc density with this nearest-neighbour distance (nm). */
   equivalentDiameterNm: number;
-}
-
-export function isClusterShape(value: string): value is ClusterShape {
-  return (CLUSTER_SHAPES as readonly string[]).includes(value);
 }
 
 /** Volume-equivalent diameter (nm) of `atoms` fcc atoms with nearest-neighbour distance `nnAngstrom`. */
@@ -73,7 +67,7 @@ function fccSites(extent: number, parity: 0 | 1, keep: (x: number, y: number, z:
   return Float64Array.from(out);
 }
 
-function finish(shape: ClusterShape, shells: number, positions: Float64Array, nn: number): ClusterGeometry {
+function finish(shape: ParticleShape, shells: number, positions: Float64Array, nn: number): ClusterGeometry {
   const atoms = positions.length / 3;
   return { shape, shells, atoms, positions, nearestNeighbourAngstrom: nn, equivalentDiameterNm: equivalentDiameterNm(atoms, nn) };
 }
@@ -187,7 +181,7 @@ export function buildIcosahedron(shells: number, nnAngstrom: number): ClusterGeo
 }
 
 /** Closed-form atom count of a shape with `shells` shells (sphere: counted by building, it has no closed form). */
-export function shapeAtomCount(shape: ClusterShape, shells: number): number {
+export function shapeAtomCount(shape: ParticleShape, shells: number): number {
   switch (shape) {
     case 'cuboctahedron':
     case 'icosahedron':
@@ -206,7 +200,7 @@ export function sphereAtomEstimate(diameterNm: number, nnAngstrom: number): numb
 }
 
 /** The shell count of `shape` whose volume-equivalent diameter is nearest to `diameterNm`. */
-export function shellsForDiameter(shape: Exclude<ClusterShape, 'sphere'>, diameterNm: number, nnAngstrom: number): number {
+export function shellsForDiameter(shape: Exclude<ParticleShape, 'sphere'>, diameterNm: number, nnAngstrom: number): number {
   if (!Number.isFinite(diameterNm) || diameterNm <= 0) throw invalid('diameterNm', `diameter must be a positive number of nm, got ${diameterNm}`);
   requireNearestNeighbour(nnAngstrom);
   let best = 1;
@@ -226,8 +220,8 @@ export function shellsForDiameter(shape: Exclude<ClusterShape, 'sphere'>, diamet
 export type ClusterSize = { shells: number } | { diameterNm: number };
 
 /** Builds `shape` at the given size with nearest-neighbour distance `nnAngstrom`. */
-export function buildCluster(shape: ClusterShape, size: ClusterSize, nnAngstrom: number): ClusterGeometry {
-  if (!isClusterShape(shape)) throw invalid('shape', `unknown shape "${String(shape)}"; use one of ${CLUSTER_SHAPES.join(', ')}`);
+export function buildCluster(shape: ParticleShape, size: ClusterSize, nnAngstrom: number): ClusterGeometry {
+  if (!isParticleShape(shape)) throw invalid('shape', `unknown shape "${String(shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
   if ('diameterNm' in size) {
     if (!Number.isFinite(size.diameterNm) || size.diameterNm <= 0) throw invalid('diameterNm', `diameter must be a positive number of nm, got ${size.diameterNm}`);
     if (shape === 'sphere') {
@@ -249,7 +243,7 @@ export function buildCluster(shape: ClusterShape, size: ClusterSize, nnAngstrom:
 }
 
 /** Atom count a size would give, computed without building (closed forms; sphere by volume estimate). */
-export function predictedAtomCount(shape: ClusterShape, size: ClusterSize, nnAngstrom: number): number {
+export function predictedAtomCount(shape: ParticleShape, size: ClusterSize, nnAngstrom: number): number {
   if ('diameterNm' in size) {
     if (shape === 'sphere') return Math.round(sphereAtomEstimate(size.diameterNm, nnAngstrom));
     return shapeAtomCount(shape, shellsForDiameter(shape, size.diameterNm, nnAngstrom));

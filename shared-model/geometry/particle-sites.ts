@@ -13,12 +13,9 @@
 import { invalid } from '../api/result';
 import { monolayerThicknessNm } from './fcc';
 
-export const PARTICLE_SHAPES = ['cuboctahedron', 'icosahedron', 'truncated octahedron', 'sphere'] as const;
-export type ParticleShape = (typeof PARTICLE_SHAPES)[number];
+import { PARTICLE_SHAPES, type ParticleShape } from './shapes';
 
-export function isParticleShape(value: string): value is ParticleShape {
-  return (PARTICLE_SHAPES as readonly string[]).includes(value);
-}
+export { PARTICLE_SHAPES, isParticleShape, type ParticleShape } from './shapes';
 
 export interface ParticleSiteCounts {
   /** Expected number of atoms (real). */
@@ -130,7 +127,7 @@ export function particleSiteCounts(diameterNm: number, latticeNm: number, shape:
       const { surface, index } = interpolatedSurface(atoms, MACKAY);
       return { atoms, surfaceSites: Math.min(atoms, surface), shellIndex: index, shape };
     }
-    case 'truncated octahedron': {
+    case 'truncated-octahedron': {
       const { surface, index } = interpolatedSurface(atoms, TRUNCATED_OCTAHEDRON);
       return { atoms, surfaceSites: Math.min(atoms, surface), shellIndex: index, shape };
     }

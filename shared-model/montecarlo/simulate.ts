@@ -10,7 +10,8 @@
 import { DomainError, invalid } from '../api/result';
 import { DEFAULT_THRESHOLDS, type Classification, type ClassificationThresholds } from '../architecture/classify';
 import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../clusters/neighbours';
-import { buildCluster, isClusterShape, predictedAtomCount, CLUSTER_SHAPES, type ClusterGeometry, type ClusterShape, type ClusterSize } from '../clusters/shapes';
+import { buildCluster, predictedAtomCount, type ClusterGeometry, type ClusterSize } from '../clusters/shapes';
+import { isParticleShape, PARTICLE_SHAPES, type ParticleShape } from '../geometry/shapes';
 import type { SeededRandom } from '../random';
 import { analyseParticle, classifyParticle, describeSites, neighbourOrder, type ParticleAnalysis, type RadialLayer } from './analysis';
 import { detectEquilibration, type EquilibrationReport } from './equilibration';
@@ -42,7 +43,7 @@ export interface SimulationSpec {
   elementB: string;
   /** Atomic fraction of B, 0 < xB < 1. */
   xB: number;
-  shape: ClusterShape;
+  shape: ParticleShape;
   /** Give exactly one of shells and diameterNm. */
   shells?: number | undefined;
   diameterNm?: number | undefined;
@@ -99,7 +100,7 @@ export interface SimulationResult {
   elementA: string;
   elementB: string;
   pairRule: PairRule;
-  geometry: { shape: ClusterShape; shells: number; atoms: number; nearestNeighbourAngstrom: number; cutoffAngstrom: number; equivalentDiameterNm: number };
+  geometry: { shape: ParticleShape; shells: number; atoms: number; nearestNeighbourAngstrom: number; cutoffAngstrom: number; equivalentDiameterNm: number };
   atoms: number;
   countA: number;
   countB: number;
@@ -154,7 +155,7 @@ export function planSimulation(spec: SimulationSpec): SimulationPlan {
   if (a.symbol === b.symbol) throw invalid('elementB', `a pair needs two different metals, got ${a.symbol} twice`);
   const xB = requireFiniteNumber('xB', spec.xB);
   if (xB <= 0 || xB >= 1) throw invalid('xB', `xB must lie strictly between 0 and 1, got ${xB}`);
-  if (!isClusterShape(spec.shape)) throw invalid('shape', `unknown shape "${String(spec.shape)}"; use one of ${CLUSTER_SHAPES.join(', ')}`);
+  if (!isParticleShape(spec.shape)) throw invalid('shape', `unknown shape "${String(spec.shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
   const hasShells = spec.shells !== undefined && spec.shells !== null;
   const hasDiameter = spec.diameterNm !== undefined && spec.diameterNm !== null;
   if (hasShells === hasDiameter) throw invalid('shells', 'give the size either as shells or as diameterNm (exactly one)');

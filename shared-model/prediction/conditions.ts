@@ -7,7 +7,7 @@
  */
 import { DEFAULT_THRESHOLDS, type ClassificationThresholds } from '../architecture/classify';
 import { invalid } from '../api/result';
-import type { ParticleShape } from '../geometry/particle-sites';
+import type { ParticleShape } from '../geometry/shapes';
 import { DEFAULT_PRESSURE_BAR, type Environment } from './environment';
 import type { SurfaceFacet } from './segregation';
 

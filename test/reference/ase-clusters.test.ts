@@ -6,7 +6,8 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { buildCluster, type ClusterShape } from '../../shared-model/clusters/shapes';
+import { buildCluster } from '../../shared-model/clusters/shapes';
+import type { ParticleShape } from '../../shared-model/geometry/shapes';
 import { writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
 import { referenceAvailable, runPythonJson } from '../support/reference-tools';
 import { tempDir } from '../support/temp-dirs';
@@ -39,7 +40,7 @@ atoms = read(inp["path"], format="extxyz")
 print(json.dumps({"symbols": atoms.get_chemical_symbols(), "positions": atoms.get_positions().tolist(), "pbc": [bool(x) for x in atoms.pbc], "info": {k: str(v) for k, v in atoms.info.items()}}))
 `;
 
-function radiiOf(shape: ClusterShape, shells: number): number[] {
+function radiiOf(shape: ParticleShape, shells: number): number[] {
   const c = buildCluster(shape, { shells }, 1);
   const n = c.atoms;
   let cx = 0;

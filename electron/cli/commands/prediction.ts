@@ -11,7 +11,7 @@ import { formatTable } from '../table';
 const CONDITION_OPTIONS: Record<string, OptionSpec> = {
   xB: { type: 'string', description: 'atomic fraction of the second element B, 0 < xB < 1 (default 0.5)' },
   'diameter-nm': { type: 'string', description: 'particle diameter in nm (default 3)' },
-  shape: { type: 'string', description: 'cuboctahedron, icosahedron, "truncated octahedron" or sphere (default cuboctahedron)' },
+  shape: { type: 'string', description: 'cuboctahedron (default), icosahedron, truncated-octahedron or sphere' },
   'temperature-k': { type: 'string', description: 'synthesis or annealing temperature in K (default 600)' },
   facet: { type: 'string', description: 'surface facet of the segregation terms: 111 (default) or 100' },
   'strain-rule': { type: 'string', description: '"oversized solute" (default) or "any solute"' },

@@ -5,7 +5,7 @@
  * browser tab.
  */
 import { conditionsSchema } from '../../../shared-model/api/prediction';
-import { PARTICLE_SHAPES, type ParticleShape } from '../../../shared-model/geometry/particle-sites';
+import { isParticleShape, normaliseShapeName, type ParticleShape } from '../../../shared-model/geometry/shapes';
 import { PREDICTION_DEFAULTS, type ResolvedConditions } from '../../../shared-model/prediction/conditions';
 import type { SurfaceFacet } from '../../../shared-model/prediction/segregation';
 import { readUserNumber } from '../../../shared-model/text/user-number';
@@ -94,16 +94,17 @@ export function readKeptConditions(raw: string | null): ConditionsForm {
   }
   const value = parsed as Partial<ConditionsForm> | null;
   const kept = value?.text;
+  const shape = normaliseShapeName(String(value?.shape)); // copies from before the one spelling
   if (
     !kept ||
     typeof kept.atPercentB !== 'string' ||
     typeof kept.diameterNm !== 'string' ||
     typeof kept.temperatureK !== 'string' ||
-    !(PARTICLE_SHAPES as readonly string[]).includes(String(value?.shape)) ||
+    !isParticleShape(shape) ||
     (value?.facet !== '111' && value?.facet !== '100')
   ) {
     return DEFAULT_CONDITIONS_FORM;
   }
   const { atPercentB, diameterNm, temperatureK } = kept;
-  return { text: { atPercentB, diameterNm, temperatureK }, shape: value.shape as ParticleShape, facet: value.facet };
+  return { text: { atPercentB, diameterNm, temperatureK }, shape, facet: value.facet };
 }

@@ -7,10 +7,11 @@
  * the pair detail share them.
  */
 import { useEffect, useMemo, useState } from 'react';
-import { PARTICLE_SHAPES, type ParticleShape } from '../../../shared-model/geometry/particle-sites';
+import type { ParticleShape } from '../../../shared-model/geometry/shapes';
 import type { ResolvedConditions } from '../../../shared-model/prediction/conditions';
 import type { SurfaceFacet } from '../../../shared-model/prediction/segregation';
 import { Field } from '../components/Field';
+import { ShapeSelect } from '../components/ShapeSelect';
 import { readConditions, readKeptConditions, type ConditionsForm, type ConditionsTextField } from './conditions-form';
 
 export interface ConditionsState {
@@ -59,13 +60,7 @@ export function ConditionsBar(props: { state: ConditionsState; elementB?: string
         <input name="diameterNm" inputMode="decimal" value={state.text.diameterNm} onChange={(e) => state.setText('diameterNm', e.target.value)} />
       </Field>
       <Field label="Shape" name="shape" error={errors.shape}>
-        <select name="shape" value={state.shape} onChange={(e) => state.setShape(e.target.value as ParticleShape)}>
-          {PARTICLE_SHAPES.map((shape) => (
-            <option key={shape} value={shape}>
-              {shape}
-            </option>
-          ))}
-        </select>
+        <ShapeSelect name="shape" value={state.shape} onChange={state.setShape} />
       </Field>
       <Field label="Temperature, K" name="temperatureK" error={errors.temperatureK} hint="synthesis or annealing">
         <input name="temperatureK" inputMode="decimal" value={state.text.temperatureK} onChange={(e) => state.setText('temperatureK', e.target.value)} />

@@ -104,7 +104,7 @@ describe('simulation run form', () => {
       elementB: 'Ni',
       xB: 0.30000000000000004,
       diameterNm: 2.5,
-      shape: 'truncated octahedron' as const,
+      shape: 'truncated-octahedron' as const,
       temperatureK: 700,
       source: 'the pair detail of Pt-Ni',
     };

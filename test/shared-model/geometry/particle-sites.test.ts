@@ -43,7 +43,7 @@ describe('particleSiteCounts', () => {
     }
     for (let l = 2; l <= 6; l++) {
       const atoms = truncatedOctahedronAtoms(l);
-      const counts = particleSiteCounts(sphereDiameterForAtoms(atoms, A_PT_NM), A_PT_NM, 'truncated octahedron');
+      const counts = particleSiteCounts(sphereDiameterForAtoms(atoms, A_PT_NM), A_PT_NM, 'truncated-octahedron');
       expect(counts.surfaceSites).toBeCloseTo(truncatedOctahedronSurfaceAtoms(l), 6);
     }
   });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildCluster, type ClusterShape } from '../../../shared-model/clusters/shapes';
+import { buildCluster } from '../../../shared-model/clusters/shapes';
+import type { ParticleShape } from '../../../shared-model/geometry/shapes';
 import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../../../shared-model/clusters/neighbours';
 import { surfaceSites } from '../../../shared-model/montecarlo/analysis';
 import { bruteForceEnergyEv, totalEnergy } from '../../../shared-model/montecarlo/gupta-energy';
@@ -7,7 +8,7 @@ import { guptaElement } from '../../../shared-model/montecarlo/gupta-parameters'
 import { BOLTZMANN_EV_PER_K, binaryTables, configurationEnergyEv, SwapEngine } from '../../../shared-model/montecarlo/swap-engine';
 import { createRandom, type SeededRandom } from '../../../shared-model/random';
 
-function setup(shape: ClusterShape, shells: number, elementA: string, elementB: string, xB: number, rng: SeededRandom) {
+function setup(shape: ParticleShape, shells: number, elementA: string, elementB: string, xB: number, rng: SeededRandom) {
   const nn = (1 - xB) * guptaElement(elementA).r0Angstrom + xB * guptaElement(elementB).r0Angstrom;
   const geometry = buildCluster(shape, { shells }, nn);
   const list = buildNeighbourList(geometry.positions, FIVE_SHELL_CUTOFF_FACTOR * nn);
@@ -21,7 +22,7 @@ function setup(shape: ClusterShape, shells: number, elementA: string, elementB: 
 }
 
 describe('swap engine energy = brute-force O(N²) Gupta sum', () => {
-  const cases: [ClusterShape, number, string, string][] = [
+  const cases: [ParticleShape, number, string, string][] = [
     ['cuboctahedron', 4, 'Ag', 'Pd'],
     ['icosahedron', 4, 'Au', 'Pt'],
     ['truncated-octahedron', 2, 'Cu', 'Ni'],

@@ -1,18 +1,9 @@
 /** The Monte Carlo architecture beside the analytic prediction for the same pair, size and temperature. */
 import { useMemo } from 'react';
 import { describeArchitecture } from '../../../../shared-model/architecture/labels';
-import type { ClusterShape } from '../../../../shared-model/clusters/shapes';
-import type { ParticleShape } from '../../../../shared-model/geometry/particle-sites';
 import type { SimulationResult } from '../../../../shared-model/montecarlo/simulate';
 import { predictPair } from '../../../../shared-model/prediction/predict';
 import { pct } from './format';
-
-const PREDICTION_SHAPE: Record<ClusterShape, ParticleShape> = {
-  cuboctahedron: 'cuboctahedron',
-  icosahedron: 'icosahedron',
-  'truncated-octahedron': 'truncated octahedron',
-  sphere: 'sphere',
-};
 
 export function PredictionBeside(props: { result: SimulationResult; temperatureK: number }) {
   const { result } = props;
@@ -22,7 +13,7 @@ export function PredictionBeside(props: { result: SimulationResult; temperatureK
         value: predictPair(result.elementA, result.elementB, {
           xB: result.xB,
           diameterNm: result.geometry.equivalentDiameterNm,
-          shape: PREDICTION_SHAPE[result.geometry.shape],
+          shape: result.geometry.shape,
           temperatureK: props.temperatureK,
         }),
         error: null,

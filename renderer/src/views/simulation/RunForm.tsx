@@ -5,12 +5,12 @@
  */
 import { useEffect, useMemo, useState, type FormEvent } from 'react';
 import type { SimulationRunSummary } from '../../../../shared-model/api/simulation';
-import { CLUSTER_SHAPES, type ClusterShape } from '../../../../shared-model/clusters/shapes';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
 import { useAppState } from '../../app-state';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
+import { ShapeSelect } from '../../components/ShapeSelect';
 import {
   describeRequest,
   formFromRequest,
@@ -92,13 +92,7 @@ export function RunForm(props: {
         {text('xB', 'decimal')}
       </Field>
       <Field label="Shape" name="shape" error={errors.shape}>
-        <select name="shape" value={form.shape} onChange={(e) => set('shape', e.target.value as ClusterShape)}>
-          {CLUSTER_SHAPES.map((shape) => (
-            <option key={shape} value={shape}>
-              {shape}
-            </option>
-          ))}
-        </select>
+        <ShapeSelect name="shape" value={form.shape} onChange={(shape) => set('shape', shape)} />
       </Field>
       <div className="sim-radio" role="radiogroup" aria-label="Size given by">
         <label>

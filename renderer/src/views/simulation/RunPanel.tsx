@@ -1,6 +1,7 @@
 /** One run, polled while queued or running: progress bar, live traces and Cancel; its result once done. */
 import { useEffect, useState } from 'react';
 import type { SimulationRun } from '../../../../shared-model/api/simulation';
+import { shapeLabel } from '../../../../shared-model/geometry/shapes';
 import { call } from '../../api/client';
 import { Banner } from '../../components/Banner';
 import { pct } from './format';
@@ -58,7 +59,7 @@ export function RunPanel(props: { id: number; onChanged: () => void }) {
     <section className="card" aria-label={`Run ${run.id}`} data-testid="sim-run">
       <div className="view__header" style={{ marginBottom: 8 }}>
         <h2 className="card__title">
-          Run {run.id}: {spec.elementA}-{spec.elementB}, x({spec.elementB}) = {spec.xB}, {spec.shape}, {run.atoms}{' '}
+          Run {run.id}: {spec.elementA}-{spec.elementB}, x({spec.elementB}) = {spec.xB}, {shapeLabel(spec.shape)}, {run.atoms}{' '}
           atoms, {spec.anneal ? `${spec.anneal.startTemperatureK} → ` : ''}
           {spec.temperatureK} K
         </h2>

@@ -4,8 +4,7 @@
  * named), the planned size shown while typing, and taking over a request handed on by another view.
  */
 import type { OperationInput } from '../../../../shared-model/api/contract';
-import type { ClusterShape } from '../../../../shared-model/clusters/shapes';
-import type { ParticleShape } from '../../../../shared-model/geometry/particle-sites';
+import { shapeLabel, type ParticleShape } from '../../../../shared-model/geometry/shapes';
 import { planSimulation, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
 import { readOptionalUserNumber, readUserNumber } from '../../../../shared-model/text/user-number';
 import type { SimulationRequest } from '../../app-state';
@@ -14,7 +13,7 @@ export interface RunFormState {
   elementA: string;
   elementB: string;
   xB: string;
-  shape: ClusterShape;
+  shape: ParticleShape;
   sizeMode: 'shells' | 'diameter';
   shells: string;
   diameterNm: string;
@@ -111,18 +110,11 @@ export function planText(form: RunFormState): { text: string; ok: boolean } {
 }
 
 /** The hint under the shells field, which depends on the shape. */
-export function shellsHint(shape: ClusterShape): string {
+export function shellsHint(shape: ParticleShape): string {
   if (shape === 'truncated-octahedron') return 'edge atoms − 1';
   if (shape === 'sphere') return 'radius in nearest-neighbour distances';
   return '13, 55, 147, 309 … atoms';
 }
-
-const CLUSTER_SHAPE_OF: Record<ParticleShape, ClusterShape> = {
-  cuboctahedron: 'cuboctahedron',
-  icosahedron: 'icosahedron',
-  'truncated octahedron': 'truncated-octahedron',
-  sphere: 'sphere',
-};
 
 /** Short decimal text for a number from another view (0.30000000000000004 → "0.3"). */
 export const decimalText = (x: number): string => String(Number(x.toPrecision(6)));
@@ -134,7 +126,7 @@ export function formFromRequest(current: RunFormState, request: SimulationReques
     elementA: request.elementA,
     elementB: request.elementB,
     xB: decimalText(request.xB),
-    shape: CLUSTER_SHAPE_OF[request.shape],
+    shape: request.shape,
     sizeMode: 'diameter',
     diameterNm: decimalText(request.diameterNm),
     temperatureK: decimalText(request.temperatureK),
@@ -144,6 +136,6 @@ export function formFromRequest(current: RunFormState, request: SimulationReques
 /** The sentence above the form saying where its values came from. */
 export function describeRequest(request: SimulationRequest): string {
   const pair = `${request.elementA}-${request.elementB}, x(${request.elementB}) = ${decimalText(request.xB)}`;
-  const particle = `${decimalText(request.diameterNm)} nm ${request.shape}, ${decimalText(request.temperatureK)} K`;
+  const particle = `${decimalText(request.diameterNm)} nm ${shapeLabel(request.shape)}, ${decimalText(request.temperatureK)} K`;
   return `Filled in from ${request.source}: ${pair}, ${particle}. Check the sweeps and seed, then Run.`;
 }
