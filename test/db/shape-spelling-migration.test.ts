@@ -1,4 +1,4 @@
-/** Migration 0006 on a real SQLite file: predictions stored with the older shape spelling read the one spelling. */
+/** Migration 0007 on a real SQLite file: predictions stored with the older shape spelling read the one spelling. */
 import { cpSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -12,12 +12,12 @@ afterEach(() => {
   for (const folder of folders.splice(0)) rmSync(folder, { recursive: true, force: true });
 });
 
-describe('migration 0006: one shape spelling', () => {
+describe('migration 0007: one shape spelling', () => {
   it('rewrites "truncated octahedron" in stored predictions and leaves other shapes and fields alone', () => {
     const dataDir = tempDataDir();
     const before = mkdtempSync(join(tmpdir(), 'pairwright-migrations-'));
     folders.push(dataDir, before);
-    for (const file of readdirSync(defaultMigrationsDir()).filter((name) => name < '0006')) {
+    for (const file of readdirSync(defaultMigrationsDir()).filter((name) => name < '0007')) {
       cpSync(join(defaultMigrationsDir(), file), join(before, file));
     }
     const old = openStore({ dataDir, migrationsDir: before });
@@ -38,7 +38,7 @@ describe('migration 0006: one shape spelling', () => {
     old.close();
 
     const store = openStore({ dataDir });
-    expect(store.migration.applied).toContain('0006_one_shape_spelling');
+    expect(store.migration.applied).toContain('0007_one_shape_spelling');
     const rows = store.db.prepare('SELECT inputs_json, result_json FROM predictions ORDER BY id').all() as {
       inputs_json: string;
       result_json: string;
