@@ -22,7 +22,10 @@ export function analyseSizeCsv(input: SizeImportInput): SizePreview {
     ...(input.column !== undefined ? { column: input.column } : {}),
     decimalSeparator: input.decimalSeparator,
   });
-  const analysis = analyseSizes(imported.diametersNm, { targetDiameterNm: input.targetDiameterNm ?? null, precisionPercent: input.precisionPercent });
+  const analysis = analyseSizes(imported.diametersNm, {
+    targetDiameterNm: input.targetDiameterNm ?? null,
+    precisionPercent: input.precisionPercent,
+  });
   return { ...analysis, diametersNm: imported.diametersNm, column: imported.column, importNotes: imported.notes };
 }
 
@@ -59,7 +62,11 @@ export function analyseLineScanCsv(input: LineScanImportInput, elementA: string,
     latticeBNm: latticeNm[elementB] ?? null,
   });
   return {
-    points: imported.positionsNm.map((positionNm, i) => ({ positionNm, a: imported.signalA[i] as number, b: imported.signalB[i] as number })),
+    points: imported.positionsNm.map((positionNm, i) => ({
+      positionNm,
+      a: imported.signalA[i] as number,
+      b: imported.signalB[i] as number,
+    })),
     unit: imported.unit,
     columns: imported.columns,
     importNotes: imported.notes,

@@ -5,13 +5,11 @@
  */
 import { getBatchForOutcome, listCampaignBatches, type BatchForOutcome } from '../../db/repositories/batches';
 import { getCampaign } from '../../db/repositories/campaigns';
-import {
-  getObservation,
-  listCompositions,
-  listLineScans,
-  listOutcomeFiles,
-  listSizeImports,
-} from '../../db/repositories/outcomes';
+import { listCompositions } from '../../db/repositories/outcome-compositions';
+import { listOutcomeFiles } from '../../db/repositories/outcome-files';
+import { listLineScans } from '../../db/repositories/outcome-line-scans';
+import { getObservation } from '../../db/repositories/outcome-observations';
+import { listSizeImports } from '../../db/repositories/outcome-sizes';
 import { latestPredictionBefore } from '../../db/repositories/predictions';
 import { latestFinishedRun } from '../../db/repositories/simulation';
 import type { SqliteDatabase } from '../../db/store';

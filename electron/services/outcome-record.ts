@@ -7,14 +7,11 @@
  * the part's name.
  */
 import { getBatchForOutcome, type BatchForOutcome } from '../../db/repositories/batches';
-import {
-  addOutcomeFile,
-  insertComposition,
-  insertLineScan,
-  insertSizeImport,
-  setObservation,
-  setOutcomeNotes,
-} from '../../db/repositories/outcomes';
+import { insertComposition } from '../../db/repositories/outcome-compositions';
+import { addOutcomeFile } from '../../db/repositories/outcome-files';
+import { insertLineScan } from '../../db/repositories/outcome-line-scans';
+import { setObservation, setOutcomeNotes } from '../../db/repositories/outcome-observations';
+import { insertSizeImport } from '../../db/repositories/outcome-sizes';
 import type { SqliteDatabase } from '../../db/store';
 import {
   OUTCOME_PART_NAMES,

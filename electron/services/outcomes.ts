@@ -3,15 +3,15 @@
  * measured on a batch (outcome-record.ts); refits and removals of single records; the reads behind the
  * Results view (outcome-reads.ts).
  */
+import { removeOutcomeFile } from '../../db/repositories/outcome-files';
 import {
   getLineScan,
   lineScanElements,
   lineScanPoints,
   removeLineScan,
-  removeOutcomeFile,
-  removeSizeImport,
   updateLineScanFit,
-} from '../../db/repositories/outcomes';
+} from '../../db/repositories/outcome-line-scans';
+import { removeSizeImport } from '../../db/repositories/outcome-sizes';
 import type { outcomeAnalysisOperations, outcomeOperations } from '../../shared-model/api/outcomes';
 import { fitLineScan } from '../../shared-model/characterization/line-scan-fit';
 import type { HandlerMap } from './context';

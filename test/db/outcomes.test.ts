@@ -1,6 +1,7 @@
 /** Outcome repository on a real SQLite file: an import is all or nothing. */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { insertLineScan, insertSizeImport } from '../../db/repositories/outcomes';
+import { insertLineScan } from '../../db/repositories/outcome-line-scans';
+import { insertSizeImport } from '../../db/repositories/outcome-sizes';
 import { nowIso, openStore, type Store } from '../../db/store';
 import { fitLineScan } from '../../shared-model/characterization/line-scan-fit';
 import { analyseSizes } from '../../shared-model/characterization/size-analysis';
@@ -47,13 +48,38 @@ describe('outcome imports are one transaction', () => {
 
   it('a line scan is stored with every point, and a broken point rolls the scan back', () => {
     const scan = syntheticScan(
-      { kind: 'alloy', centerNm: 10, radiusNm: 5, coreRadiusNm: 3, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.5) },
+      {
+        kind: 'alloy',
+        centerNm: 10,
+        radiusNm: 5,
+        coreRadiusNm: 3,
+        probeSigmaNm: 0.6,
+        amplitudeA: 10,
+        amplitudeB: 8,
+        backgroundA: 5,
+        backgroundB: 3,
+        positionsNm: positions(0, 20, 0.5),
+      },
       20,
       1,
     );
     const analysis = fitLineScan(scan, { elementA: 'Au', elementB: 'Pd' });
-    const points = scan.positionsNm.map((positionNm, i) => ({ positionNm, a: scan.signalA[i] as number, b: scan.signalB[i] as number }));
-    const base = { batchId, name: 'p1', sourceFile: null, elementA: 'Au', elementB: 'Pd', unit: 'counts' as const, probeSigmaNm: null, importNotes: [], analysis };
+    const points = scan.positionsNm.map((positionNm, i) => ({
+      positionNm,
+      a: scan.signalA[i] as number,
+      b: scan.signalB[i] as number,
+    }));
+    const base = {
+      batchId,
+      name: 'p1',
+      sourceFile: null,
+      elementA: 'Au',
+      elementB: 'Pd',
+      unit: 'counts' as const,
+      probeSigmaNm: null,
+      importNotes: [],
+      analysis,
+    };
     const stored = insertLineScan(store.db, { ...base, points });
     expect(stored.points).toEqual(points);
     expect(stored.analysis.chosenModel).toBe(analysis.chosenModel);

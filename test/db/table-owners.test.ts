@@ -25,14 +25,14 @@ const TABLE_OWNERS: Record<string, string> = {
   batch_lots: 'batches.ts',
   batch_stocks: 'batches.ts',
   inventory: 'inventory.ts',
-  outcome_size_imports: 'outcomes.ts',
-  outcome_diameters: 'outcomes.ts',
-  outcome_compositions: 'outcomes.ts',
-  outcome_composition_measurements: 'outcomes.ts',
-  outcome_line_scans: 'outcomes.ts',
-  outcome_line_scan_points: 'outcomes.ts',
-  outcome_observations: 'outcomes.ts',
-  outcome_files: 'outcomes.ts',
+  outcome_size_imports: 'outcome-sizes.ts',
+  outcome_diameters: 'outcome-sizes.ts',
+  outcome_compositions: 'outcome-compositions.ts',
+  outcome_composition_measurements: 'outcome-compositions.ts',
+  outcome_line_scans: 'outcome-line-scans.ts',
+  outcome_line_scan_points: 'outcome-line-scans.ts',
+  outcome_observations: 'outcome-observations.ts',
+  outcome_files: 'outcome-files.ts',
 };
 
 /** A string literal is taken as SQL when it holds one of these upper-case keywords (the style of the code). */
