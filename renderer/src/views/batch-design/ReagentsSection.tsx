@@ -25,11 +25,7 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
       ) : null}
       {slots.map(({ slot, element, key, stock }) => (
         <div className="precursor-pair" key={slot}>
-          <Field
-            label={`${element || slot} precursor`}
-            name={`precursor${slot}`}
-            error={errors[`precursor${slot}`]}
-          >
+          <Field label={`${element || slot} precursor`} name={`precursor${slot}`} error={errors[`precursor${slot}`]}>
             <ReagentSelect
               name={`precursor${slot}`}
               value={key}

@@ -87,8 +87,7 @@ export const EXAMPLE_BATCH_FORM: BatchFormState = {
 
 /** The request read from the form, or the first input whose text is not a number (`field` = the input's name). */
 export type BatchFormReading =
-  | { ok: true; request: BatchDesignRequest }
-  | { ok: false; field: string; message: string };
+  { ok: true; request: BatchDesignRequest } | { ok: false; field: string; message: string };
 
 class InputRefusal extends Error {
   constructor(

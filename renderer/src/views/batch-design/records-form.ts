@@ -25,8 +25,7 @@ export function stocksFromDates(dates: Record<string, string>): { reagentKey: st
 }
 
 export type MeasuredReading =
-  | { ok: true; measured: { diameterNm?: number; particlesPerMl?: number } }
-  | { ok: false; message: string };
+  { ok: true; measured: { diameterNm?: number; particlesPerMl?: number } } | { ok: false; message: string };
 
 /** Measured diameter (nm) and particles per mL, each optional. */
 export function readMeasured(diameterText: string, concentrationText: string): MeasuredReading {

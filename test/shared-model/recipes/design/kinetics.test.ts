@@ -41,7 +41,10 @@ describe('reduction order in co-reduction', () => {
       elementB: 'Pt',
       route: 'organic',
       size: { kind: 'alloy', diameterNm: 4, xB: 0.5 },
-      precursors: [{ element: 'Pt', reagentKey: 'pt-acac2' }, { element: 'Fe', reagentKey: 'fe-co5' }],
+      precursors: [
+        { element: 'Pt', reagentKey: 'pt-acac2' },
+        { element: 'Fe', reagentKey: 'fe-co5' },
+      ],
       reducer: { reagentKey: 'hexadecanediol', excess: 3 },
       solvent: { reagentKey: 'octadecene', volumeMl: 20 },
     });
