@@ -93,6 +93,15 @@ describe('designing and saving batches', () => {
     expect(count('batches')).toBe(0);
   });
 
+  it('stores the composition as the atomic fraction x_B, the unit of predictions and outcomes', async () => {
+    const saved = await ok<SavedBatch>('batches.save', { name: 'PtNi 4 nm', design: ptNi });
+    expect(saved.input.size).toEqual({ kind: 'alloy', diameterNm: 4, xB: 0.25 });
+    const row = store.db.prepare('SELECT inputs FROM batches WHERE id = ?').get(saved.id) as { inputs: string };
+    expect(JSON.parse(row.inputs).size).toEqual({ kind: 'alloy', diameterNm: 4, xB: 0.25 });
+    // 4 nm Pt75Ni25: 2396.8 atoms (hand-worked in test/shared-model/recipes/particle.test.ts)
+    expect(saved.design.atomsPerParticle).toBeCloseTo(2396.8, 0);
+  });
+
   it('keeps a saved batch as computed when the catalog changes, and says so', async () => {
     const saved = await ok<SavedBatch>('batches.save', { name: 'PtNi 4 nm', design: ptNi, lots: [{ reagentKey: 'nabh4', lot: 'BCBX9' }] });
     expect(saved.status).toBe('planned');
