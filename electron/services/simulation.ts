@@ -11,7 +11,7 @@ import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo
 import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
 import { FIRE_DESCRIPTION, relaxStructure } from '../../shared-model/montecarlo/minimise';
-import { ENGINE_VERSION, rebuildGeometry, SIMULATION_LIMITS, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
+import { DEFAULT_STOPPING, ENGINE_VERSION, rebuildGeometry, SIMULATION_LIMITS, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
 import { queueFor } from '../workers/montecarlo-queue';
 import type { HandlerMap } from './context';
 
@@ -38,6 +38,8 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
       anneal: rest.anneal ?? null,
       seed: rest.seed,
       progressEverySweeps: rest.progressEverySweeps,
+      relaxation: rest.relaxation,
+      stopping: rest.stopping === undefined ? DEFAULT_STOPPING : rest.stopping,
     };
     for (const key of Object.keys(spec) as (keyof SimulationSpec)[]) if (spec[key] === undefined) delete spec[key];
     return queueFor(store).enqueue(spec, label, pairId ?? null);
@@ -69,8 +71,10 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
       throw new DomainError('internal', `run ${id} stored ${result.finalOccupation.length} occupations for ${geometry.atoms} sites; the geometry builder changed since (engine ${run.engineVersion})`);
     }
     const symbols = Array.from(result.finalOccupation, (c) => (c === 'B' ? result.elementB : result.elementA));
+    // Relaxed runs store where the atoms ended; rigid runs sit on the rebuilt sites.
+    const positions = result.finalPositionsAngstrom ? Float64Array.from(result.finalPositionsAngstrom) : geometry.positions;
     const content = writeExtendedXyz(
-      { symbols, positions: geometry.positions },
+      { symbols, positions },
       {
         energy: result.energyEv,
         pair: `${result.elementA}-${result.elementB}`,
@@ -81,6 +85,7 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
         sweeps: run.spec.sweeps,
         seed: run.spec.seed,
         cutoffAngstrom: result.geometry.cutoffAngstrom,
+        relaxation: result.relaxation?.mode ?? 'rigid',
         architecture: result.architecture,
         engine: result.engineVersion,
         run: id,

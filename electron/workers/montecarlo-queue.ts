@@ -28,7 +28,7 @@ import {
 } from '../../db/repositories/simulation';
 import type { SimulationRunSummary } from '../../shared-model/api/simulation';
 import { DomainError } from '../../shared-model/api/result';
-import { ENGINE_VERSION, planSimulation, type SimulationProgress, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
+import { engineVersionFor, planSimulation, type SimulationProgress, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
 import type { WorkerInput, WorkerMessage } from './montecarlo-messages';
 
 const HEARTBEAT_MS = 5_000;
@@ -88,7 +88,7 @@ export class MonteCarloQueue {
   /** Stores a new run as queued and starts it when a worker is free. */
   enqueue(spec: SimulationSpec, label: string, pairId: number | null): SimulationRunSummary {
     const plan = planSimulation(spec);
-    const summary = insertRun(this.store.db, { spec, label, pairId, engineVersion: ENGINE_VERSION, plannedAtoms: plan.atoms, totalSweeps: plan.totalSweeps, owner: this.owner });
+    const summary = insertRun(this.store.db, { spec, label, pairId, engineVersion: engineVersionFor(spec), plannedAtoms: plan.atoms, totalSweeps: plan.totalSweeps, owner: this.owner });
     this.waiting.push({ id: summary.id, spec });
     this.histories.set(summary.id, []);
     this.ensureHeartbeat();

@@ -11,7 +11,7 @@ import { DomainError } from './result';
 import { operation } from './operation';
 import { idSchema, particleShapeSchema } from './schemas';
 import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../montecarlo/gupta-parameters';
-import { planSimulation, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
+import { planSimulation, RELAXATION_MODES, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
 import type { StructureEnergy } from '../montecarlo/gupta-energy';
 
 /** `simulation.relax`: the minimised structure of a given cluster (FIRE on the off-lattice Gupta energy). */
@@ -63,6 +63,15 @@ const specShape = {
     .nullish(),
   seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
   progressEverySweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+  /** Rigid lattice or relaxed (swap + displacement); omitted: by the size-mismatch rule. */
+  relaxation: z.enum(RELAXATION_MODES, { error: `must be one of: ${RELAXATION_MODES.join(', ')}` }).optional(),
+  /** Stop at the answer (sweeps is then the cap); omitted: the default rule; null: run every sweep. */
+  stopping: z
+    .object({
+      surfaceStandardError: positiveNumber('fraction').gt(0, 'must be above 0').lt(0.5, 'must be below 0.5'),
+      minSweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(10, 'must be at least 10'),
+    })
+    .nullish(),
 };
 
 /** The model's own checks (a pair of different metals, one size given, atom and attempt caps), field named. */

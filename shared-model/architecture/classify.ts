@@ -14,6 +14,16 @@ export interface ClassificationThresholds {
   janusUnlikeRatio: number;
   /** Unlike-neighbour fraction relative to a random alloy above which the particle is called ordered (intermetallic). */
   intermetallicUnlikeRatio: number;
+  /**
+   * Janus rule on the separation numbers (used only when a model gives them): centre-of-mass offset of the
+   * two elements over the particle radius at or above which, with both elements on the surface and each
+   * in one connected domain, the particle is called Janus.
+   */
+  janusCentreOffset?: number;
+  /** Share of each element's atoms in its largest connected domain at or above which it counts as one domain. */
+  janusDomainShare?: number;
+  /** Smallest surface share each element must hold for both to count as exposed. */
+  janusSurfaceShare?: number;
 }
 
 export const DEFAULT_THRESHOLDS: ClassificationThresholds = Object.freeze({
@@ -21,6 +31,9 @@ export const DEFAULT_THRESHOLDS: ClassificationThresholds = Object.freeze({
   enrichedAlloyEnrichment: 0.15,
   janusUnlikeRatio: 0.6,
   intermetallicUnlikeRatio: 1.35,
+  janusCentreOffset: 0.3,
+  janusDomainShare: 0.9,
+  janusSurfaceShare: 0.1,
 });
 
 export const CLASSIFIER_VERSION = 'classify-1';
@@ -42,6 +55,14 @@ export interface ClassificationInput {
    * gives one: S < 0 (partial wetting) makes it Janus even if the isotherm puts one element outside.
    */
   spreadingJPerM2?: number;
+  /** Separation numbers of a particle model with positions (omitted otherwise). */
+  separation?: {
+    /** Centre-of-mass distance of the two elements over the particle radius. */
+    centreOfMassOffset: number;
+    /** Share of A's atoms, and of B's, in their largest connected domain. */
+    largestDomainShareA: number;
+    largestDomainShareB: number;
+  };
 }
 
 export interface Classification {
@@ -98,6 +119,19 @@ export function classifyArchitecture(
     distances.push(Math.abs(ratio - thresholds.janusUnlikeRatio) / thresholds.janusUnlikeRatio);
     distances.push(Math.abs(ratio - thresholds.intermetallicUnlikeRatio) / thresholds.intermetallicUnlikeRatio);
   }
+  const sep = input.separation;
+  const janusOffset = thresholds.janusCentreOffset;
+  let separatedJanus = false;
+  if (sep !== undefined && janusOffset !== undefined) {
+    const domainShare = thresholds.janusDomainShare ?? DEFAULT_THRESHOLDS.janusDomainShare ?? 0.9;
+    const surfaceShare = thresholds.janusSurfaceShare ?? DEFAULT_THRESHOLDS.janusSurfaceShare ?? 0.1;
+    if (!Number.isFinite(sep.centreOfMassOffset) || sep.centreOfMassOffset < 0) throw new RangeError(`centreOfMassOffset must be ≥ 0, got ${sep.centreOfMassOffset}`);
+    distances.push(Math.abs(sep.centreOfMassOffset - janusOffset) / janusOffset);
+    separatedJanus =
+      sep.centreOfMassOffset >= janusOffset &&
+      Math.min(sep.largestDomainShareA, sep.largestDomainShareB) >= domainShare &&
+      Math.min(input.surfaceXB, 1 - input.surfaceXB) >= surfaceShare;
+  }
   const margin = Math.min(1, ...distances);
 
   let kind: ArchitectureKind;
@@ -108,7 +142,7 @@ export function classifyArchitecture(
   } else if (enrichedElement !== null && enrichment >= thresholds.coreShellEnrichment) {
     kind = 'core@shell';
     label = coreShellLabel(otherElement, enrichedElement);
-  } else if (ratio !== undefined && ratio < thresholds.janusUnlikeRatio) {
+  } else if (separatedJanus || (ratio !== undefined && ratio < thresholds.janusUnlikeRatio)) {
     kind = 'Janus';
     label = 'Janus';
   } else if (ratio !== undefined && ratio > thresholds.intermetallicUnlikeRatio) {

@@ -3,22 +3,86 @@
  * cluster, place the atoms at random (seeded), optionally anneal from a high temperature down, run
  * Metropolis swap sweeps, detect equilibration by block averages, analyse and classify.
  *
- * A sweep is one swap attempt per atom (common practice). The lattice spacing of the particle is
- * Vegard's law between the two metals' fitted nearest-neighbour distances; sites stay fixed (no
- * relaxation), which is the known limit of a rigid-lattice model for size-mismatched pairs.
+ * Two kinds of run (`relaxation`):
+ * - rigid: atoms swap on fixed sites of a lattice at the Vegard spacing between the two metals' fitted
+ *   nearest-neighbour distances; a sweep is one swap attempt per atom (common practice). Exact and fast
+ *   for matched pairs; for size-mismatched pairs it favours mixing (it cannot relax the strain).
+ * - relaxed: the same start, first quenched (FIRE) on the off-lattice energy, then per sweep N rounds of
+ *   one displacement attempt and one swap attempt (`relaxed-engine.ts`); the displacement step is tuned
+ *   to 40–50 % acceptance during annealing and the first production sweeps, then held fixed; the final
+ *   configuration is quenched again for the reported relaxed energies.
+ * By default pairs whose nearest-neighbour distances differ by more than RELAXATION_MISMATCH_THRESHOLD
+ * run relaxed. A `stopping` rule ends the production in chunks once the energy trace is equilibrated and
+ * the standard error of the surface composition is below its target.
  */
 import { DomainError, invalid } from '../api/result';
-import { DEFAULT_THRESHOLDS, type Classification, type ClassificationThresholds } from '../architecture/classify';
+import { classifyArchitecture, DEFAULT_THRESHOLDS, type Classification, type ClassificationThresholds } from '../architecture/classify';
 import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../clusters/neighbours';
 import { buildCluster, predictedAtomCount, type ClusterGeometry, type ClusterSize } from '../clusters/shapes';
 import { isParticleShape, PARTICLE_SHAPES, type ParticleShape } from '../geometry/shapes';
 import type { SeededRandom } from '../random';
-import { analyseParticle, classifyParticle, describeSites, neighbourOrder, type ParticleAnalysis, type RadialLayer } from './analysis';
+import { analyseParticle, describeSites, neighbourOrder, type ParticleAnalysis, type RadialLayer } from './analysis';
 import { detectEquilibration, type EquilibrationReport } from './equilibration';
 import { GUPTA_ELEMENTS, guptaElement, guptaPair, type PairRule } from './gupta-parameters';
 import { binaryTables, configurationEnergyEv, SwapEngine } from './swap-engine';
+import { minimiseInPlace } from './minimise';
+import { OffLatticeGupta } from './offlattice-gupta';
+import { RelaxedEngine } from './relaxed-engine';
+import { analyseSeparation, type SeparationAnalysis } from './separation';
 
 export const ENGINE_VERSION = 'gupta-swap-mc-1';
+export const RELAXED_ENGINE_VERSION = 'gupta-relaxed-mc-1';
+
+export const RELAXATION_MODES = ['rigid', 'relaxed'] as const;
+export type RelaxationMode = (typeof RELAXATION_MODES)[number];
+
+/** Pairs whose nearest-neighbour distances differ by more than this share of their mean run relaxed by default. */
+export const RELAXATION_MISMATCH_THRESHOLD = 0.06;
+
+export const RIGID_DESIGN =
+  'rigid lattice: swap moves on fixed fcc/icosahedral sites at the Vegard spacing, five-shell Gupta sum; exact for size-matched pairs';
+export const RELAXED_DESIGN =
+  'relaxed: off-lattice Gupta energy (quintic per-pair switch between the 5th and 6th shells); the random start is quenched (FIRE), ' +
+  'then each sweep offers every atom one displacement (uniform in a cube, step tuned to 40–50 % acceptance during equilibration, then fixed) ' +
+  'and one swap; the final configuration is quenched again for the relaxed energies';
+export const SWAP_REALISM_NOTE =
+  'Swap moves exchange atoms anywhere in the particle: they find the equilibrium arrangement, which a real synthesis at low temperature may not reach in its time.';
+
+/** Engine version a run of `spec` records (rigid and relaxed runs are different engines). */
+export function engineVersionFor(spec: Pick<SimulationSpec, 'elementA' | 'elementB' | 'relaxation'>): string {
+  const mode = spec.relaxation ?? defaultRelaxation(spec.elementA, spec.elementB).mode;
+  return mode === 'relaxed' ? RELAXED_ENGINE_VERSION : ENGINE_VERSION;
+}
+
+/** Relative nearest-neighbour mismatch |r0_A − r0_B| / mean of the two Gupta metals. */
+export function sizeMismatch(elementA: string, elementB: string): number {
+  const a = guptaElement(elementA, 'elementA').r0Angstrom;
+  const b = guptaElement(elementB, 'elementB').r0Angstrom;
+  return Math.abs(a - b) / ((a + b) / 2);
+}
+
+/** The mode a pair runs in when the user does not choose, and why. */
+export function defaultRelaxation(elementA: string, elementB: string): { mode: RelaxationMode; reason: string } {
+  const mismatch = sizeMismatch(elementA, elementB);
+  const percent = (100 * mismatch).toFixed(1);
+  const limit = (100 * RELAXATION_MISMATCH_THRESHOLD).toFixed(0);
+  return mismatch > RELAXATION_MISMATCH_THRESHOLD
+    ? { mode: 'relaxed', reason: `nearest-neighbour distances differ by ${percent} % (more than ${limit} %): relaxed by default` }
+    : { mode: 'rigid', reason: `nearest-neighbour distances differ by ${percent} % (at most ${limit} %): rigid lattice by default` };
+}
+
+export interface StoppingRule {
+  /** Stop once the standard error of the surface composition is below this (fraction, e.g. 0.005). */
+  surfaceStandardError: number;
+  /** Never stop before this many production sweeps. */
+  minSweeps: number;
+}
+
+export const DEFAULT_STOPPING: StoppingRule = Object.freeze({ surfaceStandardError: 0.005, minSweeps: 100 });
+/** Production sweeps between two checks of the stopping rule. */
+export const STOPPING_CHUNK_SWEEPS = 20;
+/** Production sweeps of a relaxed run during which the displacement step is still tuned. */
+export const RELAXED_TUNING_SWEEPS = 20;
 
 /** Limits checked before any work starts (stated to the user in messages and docs). */
 export const SIMULATION_LIMITS = Object.freeze({
@@ -27,6 +91,8 @@ export const SIMULATION_LIMITS = Object.freeze({
   maxSweeps: 100_000,
   /** Attempts (atoms × all sweeps): 2 × 10⁹ is about half an hour at 10⁶ attempts/s. */
   maxAttempts: 2_000_000_000,
+  /** Relaxed runs: site-sweeps (atoms × sweeps) at ~10⁵/s is about half an hour at 2 × 10⁸. */
+  maxRelaxedAttempts: 200_000_000,
   /** Above this the rigid-lattice model has no meaning (every metal here melts far below it). */
   maxTemperatureK: 5000,
 });
@@ -56,6 +122,10 @@ export interface SimulationSpec {
   /** Progress callback period (sweeps); default: about 200 reports per run, at least one per 2 × 10⁵ attempts. */
   progressEverySweeps?: number | undefined;
   thresholds?: ClassificationThresholds | undefined;
+  /** Rigid or relaxed; omitted: by the size-mismatch rule (`defaultRelaxation`). */
+  relaxation?: RelaxationMode | undefined;
+  /** Stop the production at the answer (sweeps is then the cap); omitted or null: run all sweeps. */
+  stopping?: StoppingRule | null | undefined;
 }
 
 export interface SimulationPlan {
@@ -92,6 +162,31 @@ export interface SimulationTraces {
   temperatureK: number[];
   energyEv: number[];
   surfaceXB: number[];
+}
+
+/** How a run treated the positions of the atoms (stored with every result). */
+export interface RelaxationReport {
+  mode: RelaxationMode;
+  /** Why this mode: the user's choice or the size-mismatch rule. */
+  reason: string;
+  design: string;
+  sizeMismatch: number;
+  /** Relaxed runs only (null for rigid ones). */
+  displacementStepAngstrom: number | null;
+  displacementAcceptance: number | null;
+  swapAcceptance: number;
+  /** Energy of the final occupation quenched to its local minimum (relaxed runs; null for rigid). */
+  quenchedEnergyEv: number | null;
+  neighbourListBuilds: number | null;
+}
+
+export interface StoppingReport {
+  rule: StoppingRule | null;
+  /** Production sweeps actually run. */
+  sweepsTaken: number;
+  /** True when the rule was met before the cap. */
+  stoppedAtAnswer: boolean;
+  capSweeps: number;
 }
 
 export interface SimulationResult {
@@ -141,6 +236,13 @@ export interface SimulationResult {
   traces: SimulationTraces;
   /** 'A'/'B' per site, in the site order of the rebuilt geometry. */
   finalOccupation: string;
+  relaxation: RelaxationReport;
+  stopping: StoppingReport;
+  /** Centre-of-mass offset, interface and domains of the final configuration. */
+  separation: SeparationAnalysis;
+  /** Final positions (Å, x y z per atom, rounded to 1e-4) of a relaxed run; null for rigid runs (the sites). */
+  finalPositionsAngstrom: number[] | null;
+  kineticNote: string;
 }
 
 function requireFiniteNumber(field: string, value: unknown): number {
@@ -196,6 +298,15 @@ export function planSimulation(spec: SimulationSpec): SimulationPlan {
     if (!Number.isInteger(annealSweeps) || annealSweeps < 1) throw invalid('anneal.sweeps', `anneal.sweeps must be a whole number ≥ 1, got ${annealSweeps}`);
     if (annealSweeps > SIMULATION_LIMITS.maxSweeps) throw invalid('anneal.sweeps', `anneal.sweeps must be at most ${SIMULATION_LIMITS.maxSweeps}, got ${annealSweeps}`);
   }
+  if (spec.relaxation !== undefined && !(RELAXATION_MODES as readonly string[]).includes(spec.relaxation)) {
+    throw invalid('relaxation', `relaxation must be one of ${RELAXATION_MODES.join(', ')}, got "${String(spec.relaxation)}"`);
+  }
+  if (spec.stopping) {
+    const target = requireFiniteNumber('stopping.surfaceStandardError', spec.stopping.surfaceStandardError);
+    if (target <= 0 || target >= 0.5) throw invalid('stopping.surfaceStandardError', `the target standard error must lie between 0 and 0.5, got ${target}`);
+    const floor = requireFiniteNumber('stopping.minSweeps', spec.stopping.minSweeps);
+    if (!Number.isInteger(floor) || floor < 10) throw invalid('stopping.minSweeps', `stopping.minSweeps must be a whole number ≥ 10, got ${floor}`);
+  }
   const seed = requireFiniteNumber('seed', spec.seed);
   if (!Number.isInteger(seed)) throw invalid('seed', `seed must be a whole number, got ${seed}`);
   if (spec.progressEverySweeps !== undefined) {
@@ -204,6 +315,10 @@ export function planSimulation(spec: SimulationSpec): SimulationPlan {
   }
   const totalSweeps = sweeps + annealSweeps;
   const attempts = totalSweeps * atoms;
+  const relaxed = (spec.relaxation ?? defaultRelaxation(a.symbol, b.symbol).mode) === 'relaxed';
+  if (relaxed && attempts > SIMULATION_LIMITS.maxRelaxedAttempts) {
+    throw invalid('sweeps', `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} relaxed site-sweeps; the limit is ${SIMULATION_LIMITS.maxRelaxedAttempts.toExponential(0)} (about half an hour)`);
+  }
   if (attempts > SIMULATION_LIMITS.maxAttempts) {
     throw invalid('sweeps', `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} attempts; the limit is ${SIMULATION_LIMITS.maxAttempts.toExponential(0)} (about half an hour)`);
   }
@@ -231,6 +346,58 @@ function downsample(length: number, maxPoints: number): number[] {
   return picks;
 }
 
+/** What the sweep loop needs from either engine. */
+interface SweepEngine {
+  runSweep(temperatureK: number): void;
+  readonly energyEv: number;
+  readonly surfaceXB: number;
+  readonly species: Uint8Array;
+  readonly surfaceSites: number;
+  /** Attempts and accepted moves so far (all kinds). */
+  attempts(): number;
+  accepted(): number;
+}
+
+function rigidSweeps(engine: SwapEngine): SweepEngine {
+  return {
+    runSweep: (temperatureK) => void engine.runAttempts(engine.atoms, temperatureK),
+    get energyEv() {
+      return engine.energyEv;
+    },
+    get surfaceXB() {
+      return engine.surfaceXB;
+    },
+    species: engine.species,
+    surfaceSites: engine.surfaceSites,
+    attempts: () => engine.stats.attempts,
+    accepted: () => engine.stats.accepted,
+  };
+}
+
+function relaxedSweeps(engine: RelaxedEngine): SweepEngine {
+  return {
+    runSweep: (temperatureK) => engine.runSweep(temperatureK),
+    get energyEv() {
+      return engine.energyEv;
+    },
+    get surfaceXB() {
+      return engine.surfaceXB;
+    },
+    species: engine.species,
+    surfaceSites: engine.surfaceSites,
+    attempts: () => engine.stats.swapAttempts + engine.stats.displacementAttempts,
+    accepted: () => engine.stats.swapAccepted + engine.stats.displacementAccepted,
+  };
+}
+
+/** Energy per atom of the given positions made entirely of `symbol`, relaxed to the local minimum (eV). */
+function relaxedPureEnergyPerAtomEv(symbol: string, positions: Float64Array): number {
+  const model = new OffLatticeGupta([symbol]);
+  const copy = Float64Array.from(positions);
+  const atoms = positions.length / 3;
+  return minimiseInPlace(model, copy, new Uint8Array(atoms), { forceToleranceEvPerAngstrom: 1e-3 }).energyEv / atoms;
+}
+
 export function runSimulation(spec: SimulationSpec, random: SeededRandom, callbacks: SimulationCallbacks = {}): SimulationResult {
   const plan = planSimulation(spec);
   const now = callbacks.now ?? Date.now;
@@ -243,6 +410,10 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   const sites = describeSites(list, geometry.positions, nn);
   const n = geometry.atoms;
   const countB = Math.min(n - 1, Math.max(1, Math.round(spec.xB * n)));
+  const chosen = spec.relaxation
+    ? { mode: spec.relaxation, reason: `${spec.relaxation} run chosen by the user` }
+    : defaultRelaxation(elementA.symbol, elementB.symbol);
+  const relaxed = chosen.mode === 'relaxed';
 
   // Random initial placement (partial Fisher–Yates with the seeded generator).
   const order = new Int32Array(n);
@@ -256,42 +427,82 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   const species = new Uint8Array(n);
   for (let k = 0; k < countB; k++) species[order[k]!] = 1;
 
-  const tables = binaryTables(elementA.symbol, elementB.symbol, list);
-  const engine = new SwapEngine(list, geometry.positions, tables, species, sites.surface, random);
+  const started = now();
+  let rigidEngine: SwapEngine | null = null;
+  let relaxedEngine: RelaxedEngine | null = null;
+  let model: OffLatticeGupta | null = null;
+  let engine: SweepEngine;
+  if (relaxed) {
+    model = new OffLatticeGupta([elementA.symbol, elementB.symbol]);
+    const start = Float64Array.from(geometry.positions);
+    minimiseInPlace(model, start, species, { forceToleranceEvPerAngstrom: 1e-2, maxIterations: 2000 });
+    relaxedEngine = new RelaxedEngine(model, start, species, sites.surface, random, 0.05);
+    engine = relaxedSweeps(relaxedEngine);
+  } else {
+    const tables = binaryTables(elementA.symbol, elementB.symbol, list);
+    rigidEngine = new SwapEngine(list, geometry.positions, tables, species, sites.surface, random);
+    engine = rigidSweeps(rigidEngine);
+  }
   const initialEnergy = engine.energyEv;
   const annealSweeps = spec.anneal ? spec.anneal.sweeps : 0;
-  const totalSweeps = plan.totalSweeps;
+  const capSweeps = plan.totalSweeps;
+  const stopping = spec.stopping ?? null;
   // Default report period: about 200 reports per run, but at least one per 2 × 10⁵ attempts (~0.2 s) for live traces.
-  const every = spec.progressEverySweeps ?? Math.max(1, Math.min(Math.round(totalSweeps / 200), Math.round(200_000 / n)));
-  const orderEvery = Math.max(1, Math.floor(spec.sweeps / 200));
+  const every = spec.progressEverySweeps ?? Math.max(1, Math.min(Math.round(capSweeps / 200), Math.round((relaxed ? 20_000 : 200_000) / n)));
+  const orderEvery = stopping ? 1 : Math.max(1, Math.floor(spec.sweeps / 200));
+  const tuningEnd = annealSweeps + (relaxed ? RELAXED_TUNING_SWEEPS : 0);
 
-  const energyTrace = new Float64Array(totalSweeps);
-  const surfaceTrace = new Float64Array(totalSweeps);
-  const temperatureTrace = new Float64Array(totalSweeps);
+  const energyTrace = new Float64Array(capSweeps);
+  const surfaceTrace = new Float64Array(capSweeps);
+  const temperatureTrace = new Float64Array(capSweeps);
   const orderSweeps: number[] = [];
   const orderRatios: number[] = [];
   let lastReportAttempts = 0;
   let lastReportAccepted = 0;
-  const started = now();
-  for (let sweep = 0; sweep < totalSweeps; sweep++) {
-    if (callbacks.shouldCancel?.()) throw new DomainError('cancelled', `the run was cancelled after ${sweep} of ${totalSweeps} sweeps`);
+  let sweepsRun = 0;
+  let stoppedAtAnswer = false;
+  let reportedTotal = capSweeps;
+  for (let sweep = 0; sweep < capSweeps; sweep++) {
+    if (callbacks.shouldCancel?.()) throw new DomainError('cancelled', `the run was cancelled after ${sweep} of ${capSweeps} sweeps`);
     const temperatureK = scheduledTemperatureK(spec, sweep);
-    engine.runAttempts(n, temperatureK);
+    const movesBefore = relaxedEngine ? { ...relaxedEngine.stats } : null;
+    engine.runSweep(temperatureK);
+    if (relaxedEngine && movesBefore && sweep < tuningEnd) {
+      const tried = relaxedEngine.stats.displacementAttempts - movesBefore.displacementAttempts;
+      if (tried > 0) relaxedEngine.tuneStep((relaxedEngine.stats.displacementAccepted - movesBefore.displacementAccepted) / tried);
+    }
     energyTrace[sweep] = engine.energyEv;
     surfaceTrace[sweep] = engine.surfaceXB;
     temperatureTrace[sweep] = temperatureK;
+    sweepsRun = sweep + 1;
     if (sweep >= annealSweeps && (sweep - annealSweeps) % orderEvery === orderEvery - 1) {
       orderSweeps.push(sweep);
       orderRatios.push(neighbourOrder(list, nn, engine.species).unlikeNeighbourRatio);
     }
-    if ((sweep + 1) % every === 0 || sweep === totalSweeps - 1) {
-      const attempts = engine.stats.attempts - lastReportAttempts;
-      const accepted = engine.stats.accepted - lastReportAccepted;
-      lastReportAttempts = engine.stats.attempts;
-      lastReportAccepted = engine.stats.accepted;
+    const production = sweep + 1 - annealSweeps;
+    let stopNow = false;
+    if (stopping && production >= stopping.minSweeps && production % STOPPING_CHUNK_SWEEPS === 0 && sweep + 1 >= tuningEnd) {
+      const energyReport = detectEquilibration(energyTrace.subarray(annealSweeps, sweep + 1));
+      if (energyReport.equilibrated) {
+        const from = Math.max(annealSweeps + energyReport.equilibratedFromSample, tuningEnd);
+        if (sweep + 1 - from >= 20) {
+          const surfaceReport = detectEquilibration(surfaceTrace.subarray(from, sweep + 1));
+          stopNow = surfaceReport.standardError < stopping.surfaceStandardError;
+        }
+      }
+    }
+    if (stopNow) {
+      stoppedAtAnswer = true;
+      reportedTotal = sweep + 1;
+    }
+    if ((sweep + 1) % every === 0 || sweep === capSweeps - 1 || stopNow) {
+      const attempts = engine.attempts() - lastReportAttempts;
+      const accepted = engine.accepted() - lastReportAccepted;
+      lastReportAttempts = engine.attempts();
+      lastReportAccepted = engine.accepted();
       callbacks.onProgress?.({
         sweep: sweep + 1,
-        totalSweeps,
+        totalSweeps: reportedTotal,
         phase: sweep < annealSweeps ? 'anneal' : 'production',
         temperatureK,
         energyEv: engine.energyEv,
@@ -300,20 +511,22 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
         acceptance: attempts > 0 ? accepted / attempts : 0,
       });
     }
+    if (stopNow) break;
   }
+  const totalSweeps = sweepsRun;
   const elapsedMs = Math.max(now() - started, 1e-3);
   const accumulated = engine.energyEv;
-  const finalEnergy = engine.recomputeEnergy();
+  const finalEnergy = rigidEngine ? rigidEngine.recomputeEnergy() : relaxedEngine!.recomputeEnergy();
   const energyDriftEv = accumulated - initialEnergy - (finalEnergy - initialEnergy);
 
-  const production = energyTrace.subarray(annealSweeps);
+  const production = energyTrace.subarray(annealSweeps, totalSweeps);
   const equilibration = detectEquilibration(production);
-  const fromSweep = annealSweeps + equilibration.equilibratedFromSample;
+  const fromSweep = Math.min(totalSweeps - 1, Math.max(annealSweeps + equilibration.equilibratedFromSample, Math.min(tuningEnd, totalSweeps - 1)));
   let surfaceSum = 0;
   for (let s = fromSweep; s < totalSweeps; s++) surfaceSum += surfaceTrace[s]!;
   const samples = totalSweeps - fromSweep;
   const surfaceXB = surfaceSum / samples;
-  const surfaceReport = detectEquilibration(surfaceTrace.subarray(fromSweep));
+  const surfaceReport = detectEquilibration(surfaceTrace.subarray(fromSweep, totalSweeps));
   let ratioSum = 0;
   let ratioCount = 0;
   for (let k = 0; k < orderSweeps.length; k++) {
@@ -323,14 +536,42 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
     }
   }
   const final = analyseParticle(sites, engine.species, elementA.symbol, elementB.symbol);
+  const finalPositions = relaxedEngine ? relaxedEngine.positions : geometry.positions;
+  const separation = analyseSeparation(list, nn, finalPositions, engine.species, elementA.symbol, elementB.symbol);
   const unlikeNeighbourRatio = ratioCount > 0 ? ratioSum / ratioCount : final.order.unlikeNeighbourRatio;
   const thresholds = spec.thresholds ?? DEFAULT_THRESHOLDS;
-  const classification = classifyParticle(elementA.symbol, elementB.symbol, countB / n, surfaceXB, unlikeNeighbourRatio, thresholds);
+  const classification = classifyArchitecture(
+    {
+      elementA: elementA.symbol,
+      elementB: elementB.symbol,
+      xB: countB / n,
+      surfaceXB,
+      unlikeNeighbourRatio,
+      separation: {
+        centreOfMassOffset: separation.centreOfMassOffset,
+        largestDomainShareA: separation.domains[elementA.symbol]!.largestDomainShare,
+        largestDomainShareB: separation.domains[elementB.symbol]!.largestDomainShare,
+      },
+    },
+    thresholds,
+  );
 
-  const pureA = configurationEnergyEv(list, binaryTables(elementA.symbol, elementA.symbol, list, elementA.r0Angstrom / nn), new Uint8Array(n)) / n;
-  const pureB = configurationEnergyEv(list, binaryTables(elementB.symbol, elementB.symbol, list, elementB.r0Angstrom / nn), new Uint8Array(n)) / n;
   const x = countB / n;
-  const mixingEnergyPerAtomEv = finalEnergy / n - (1 - x) * pureA - x * pureB;
+  let pureA: number;
+  let pureB: number;
+  let quenchedEnergyEv: number | null = null;
+  let mixingEnergyPerAtomEv: number;
+  if (relaxedEngine && model) {
+    const quenched = Float64Array.from(relaxedEngine.positions);
+    quenchedEnergyEv = minimiseInPlace(model, quenched, relaxedEngine.species, { forceToleranceEvPerAngstrom: 1e-3 }).energyEv;
+    pureA = relaxedPureEnergyPerAtomEv(elementA.symbol, Float64Array.from(geometry.positions, (v) => (v * elementA.r0Angstrom) / nn));
+    pureB = relaxedPureEnergyPerAtomEv(elementB.symbol, Float64Array.from(geometry.positions, (v) => (v * elementB.r0Angstrom) / nn));
+    mixingEnergyPerAtomEv = quenchedEnergyEv / n - (1 - x) * pureA - x * pureB;
+  } else {
+    pureA = configurationEnergyEv(list, binaryTables(elementA.symbol, elementA.symbol, list, elementA.r0Angstrom / nn), new Uint8Array(n)) / n;
+    pureB = configurationEnergyEv(list, binaryTables(elementB.symbol, elementB.symbol, list, elementB.r0Angstrom / nn), new Uint8Array(n)) / n;
+    mixingEnergyPerAtomEv = finalEnergy / n - (1 - x) * pureA - x * pureB;
+  }
 
   const picks = downsample(totalSweeps, 500);
   const traces: SimulationTraces = {
@@ -342,9 +583,28 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   let occupation = '';
   for (let i = 0; i < n; i++) occupation += engine.species[i] ? 'B' : 'A';
 
-  const attempts = engine.stats.attempts;
+  const attempts = engine.attempts();
+  const accepted = engine.accepted();
+  const moves = relaxedEngine?.stats;
+  const relaxation: RelaxationReport = {
+    mode: chosen.mode,
+    reason: chosen.reason,
+    design: relaxed ? RELAXED_DESIGN : RIGID_DESIGN,
+    sizeMismatch: sizeMismatch(elementA.symbol, elementB.symbol),
+    displacementStepAngstrom: relaxedEngine ? relaxedEngine.stepAngstrom : null,
+    displacementAcceptance: moves && moves.displacementAttempts > 0 ? moves.displacementAccepted / moves.displacementAttempts : null,
+    swapAcceptance: moves
+      ? moves.swapAttempts > 0
+        ? moves.swapAccepted / moves.swapAttempts
+        : 0
+      : attempts > 0
+        ? accepted / attempts
+        : 0,
+    quenchedEnergyEv,
+    neighbourListBuilds: relaxedEngine ? relaxedEngine.neighbourListBuilds : null,
+  };
   return {
-    engineVersion: ENGINE_VERSION,
+    engineVersion: relaxed ? RELAXED_ENGINE_VERSION : ENGINE_VERSION,
     spec: { ...spec },
     elementA: elementA.symbol,
     elementB: elementB.symbol,
@@ -354,7 +614,7 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
       shells: geometry.shells,
       atoms: n,
       nearestNeighbourAngstrom: nn,
-      cutoffAngstrom: cutoff,
+      cutoffAngstrom: relaxed && model ? model.maxCutoffAngstrom : cutoff,
       equivalentDiameterNm: geometry.equivalentDiameterNm,
     },
     atoms: n,
@@ -377,14 +637,19 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
     classification,
     architecture: classification.label,
     attempts,
-    accepted: engine.stats.accepted,
-    acceptance: attempts > 0 ? engine.stats.accepted / attempts : 0,
+    accepted,
+    acceptance: attempts > 0 ? accepted / attempts : 0,
     attemptsPerSecond: attempts / (elapsedMs / 1000),
     elapsedMs,
     energyDriftEv,
-    equilibration,
+    equilibration: { ...equilibration, equilibratedFromSample: fromSweep - annealSweeps },
     traces,
     finalOccupation: occupation,
+    relaxation,
+    stopping: { rule: stopping, sweepsTaken: totalSweeps - annealSweeps, stoppedAtAnswer, capSweeps: spec.sweeps },
+    separation,
+    finalPositionsAngstrom: relaxedEngine ? Array.from(relaxedEngine.positions, (v) => Math.round(v * 1e4) / 1e4) : null,
+    kineticNote: SWAP_REALISM_NOTE,
   };
 }
 

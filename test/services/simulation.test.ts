@@ -6,6 +6,8 @@ import { dispatch } from '../../electron/services/dispatch';
 import { queueFor } from '../../electron/workers/montecarlo-queue';
 import type { SimulationRun, SimulationRunSummary, XyzExport } from '../../shared-model/api/simulation';
 import type { StructureEnergy } from '../../shared-model/montecarlo/gupta-energy';
+import { readExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
+import { DEFAULT_STOPPING, RELAXED_ENGINE_VERSION } from '../../shared-model/montecarlo/simulate';
 import { magicClusterAtoms } from '../../shared-model/geometry/magic-numbers';
 import { dispatchValue } from '../support/dispatch';
 import { tempDataDir } from '../support/host-fixture';
@@ -33,9 +35,32 @@ async function waitForEnd(id: number, timeoutMs = 60_000): Promise<SimulationRun
   }
 }
 
-const small = { elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 3, temperatureK: 600, sweeps: 150, seed: 7 };
+const small = { elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 3, temperatureK: 600, sweeps: 150, seed: 7, stopping: null };
 
 describe('simulation service', () => {
+  it('by default a run stops at the answer (the default rule is stored) and a size-mismatched pair runs relaxed', async () => {
+    const { stopping: _fixed, ...byDefault } = small;
+    const started = await value<SimulationRunSummary>('simulation.start', { ...byDefault, sweeps: 2000 });
+    const ended = await waitForEnd(started.id);
+    expect(ended.status).toBe('done');
+    const run = await value<SimulationRun>('simulation.get', { id: started.id });
+    expect(run.spec.stopping).toEqual(DEFAULT_STOPPING);
+    expect(run.result?.stopping.stoppedAtAnswer).toBe(true);
+    expect(run.result?.stopping.sweepsTaken).toBeLessThan(2000);
+    expect(run.result?.surfaceXBStandardError).toBeLessThan(DEFAULT_STOPPING.surfaceStandardError);
+    const mismatched = await value<SimulationRunSummary>('simulation.start', { ...small, elementA: 'Au', elementB: 'Ni', shells: 2, sweeps: 30 });
+    expect(mismatched.engineVersion).toBe(RELAXED_ENGINE_VERSION);
+    expect((await waitForEnd(mismatched.id)).status).toBe('done');
+    const relaxed = await value<SimulationRun>('simulation.get', { id: mismatched.id });
+    expect(relaxed.result?.relaxation.mode).toBe('relaxed');
+    expect(relaxed.result?.engineVersion).toBe(RELAXED_ENGINE_VERSION);
+    // The export writes where the atoms ended, not the lattice sites.
+    const xyz = await value<{ content: string }>('simulation.exportXyz', { id: mismatched.id });
+    const frame = readExtendedXyz(xyz.content);
+    expect(frame.info.relaxation).toBe('relaxed');
+    expect(frame.positions[0]).toBeCloseTo(relaxed.result!.finalPositionsAngstrom![0]!, 6);
+  });
+
   it('start returns at once with a queued/running run; the worker finishes it; get, list and export read it back', async () => {
     const started = await value<SimulationRunSummary>('simulation.start', { ...small, label: 'first' });
     expect(['queued', 'running']).toContain(started.status);
@@ -72,7 +97,7 @@ describe('simulation service', () => {
   });
 
   it('several runs queue, and cancel stops a queued and a running run', async () => {
-    const long = { ...small, shells: 6, sweeps: 50_000 };
+    const long = { ...small, shells: 6, sweeps: 50_000, stopping: null };
     const first = await value<SimulationRunSummary>('simulation.start', long);
     const queued: SimulationRunSummary[] = [];
     const concurrency = queueFor(store).concurrency;
@@ -133,7 +158,7 @@ describe('simulation service', () => {
   });
 
   it('a run left behind by a process that ended is reported as interrupted', async () => {
-    const started = await value<SimulationRunSummary>('simulation.start', { ...small, shells: 6, sweeps: 50_000 });
+    const started = await value<SimulationRunSummary>('simulation.start', { ...small, shells: 6, sweeps: 50_000, stopping: null });
     await value('simulation.cancel', { id: started.id });
     await queueFor(store).whenIdle();
     // Simulate a dead owner: a queued row whose heartbeat is old.

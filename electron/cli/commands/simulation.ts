@@ -54,6 +54,12 @@ export function simulationJson(run: SimulationRun, result: SimulationResult) {
     equilibrated: result.equilibration.equilibrated,
     equilibratedFromSweep: result.equilibration.equilibratedFromSample + (run.spec.anneal?.sweeps ?? 0),
     engineVersion: result.engineVersion,
+    relaxation: result.relaxation,
+    sweepsTaken: result.stopping.sweepsTaken,
+    stoppedAtAnswer: result.stopping.stoppedAtAnswer,
+    stopping: result.stopping,
+    separation: result.separation,
+    kineticNote: result.kineticNote,
   };
 }
 
@@ -66,11 +72,19 @@ function simulationText(run: SimulationRun, result: SimulationResult): string {
   ]);
   return [
     `run ${run.id}: ${result.elementA}-${result.elementB}, x(${result.elementB}) = ${f(result.xB, 3)}, ${result.geometry.shape} with ${result.geometry.shells} shells (${result.atoms} atoms, ≈${f(result.geometry.equivalentDiameterNm, 3)} nm)`,
-    `${run.spec.anneal ? `annealed ${run.spec.anneal.startTemperatureK} K → ` : ''}${run.spec.temperatureK} K, ${run.spec.sweeps} sweeps, seed ${run.spec.seed}`,
+    `${run.spec.anneal ? `annealed ${run.spec.anneal.startTemperatureK} K → ` : ''}${run.spec.temperatureK} K, ` +
+      `${result.stopping.sweepsTaken} sweeps${result.stopping.stoppedAtAnswer ? ` (stopped at the answer; cap ${run.spec.sweeps})` : ''}, seed ${run.spec.seed}`,
+    `${result.relaxation.mode}: ${result.relaxation.reason}`,
+    `separation: centres of mass ${f(result.separation.centreOfMassDistanceAngstrom, 3)} Å apart (${f(result.separation.centreOfMassOffset, 2)} of the radius), ` +
+      `${result.separation.interfaceAtoms} atoms at the A–B interface (≈${f(result.separation.interfaceAreaNm2, 3)} nm²), domains ` +
+      Object.entries(result.separation.domains)
+        .map(([symbol, d]) => `${symbol} ${d.domains}`)
+        .join(', '),
     `architecture: ${result.architecture}  (surface x(${result.elementB}) = ${f(result.surfaceXB, 3)} ± ${f(result.surfaceXBStandardError, 2)}, Warren–Cowley α = ${f(result.warrenCowley, 3)})`,
     `energy ${f(result.energyEv, 8)} eV (${f(result.energyPerAtomEv, 6)} eV/atom), mixing ${f(result.mixingEnergyPerAtomEv, 3)} eV/atom`,
     `acceptance ${f(result.acceptance, 3)}, ${Math.round(result.attemptsPerSecond).toLocaleString('en-US')} attempts/s, ${result.equilibration.equilibrated ? 'equilibrated' : 'NOT equilibrated (drift in the last quarters; run longer)'}`,
     `unlike pairs: ${result.pairRule.description}`,
+    result.kineticNote,
     '',
     profile,
   ].join('\n');
@@ -108,7 +122,9 @@ export const simulationCommands: CliCommand[] = [
       shells: { type: 'string', description: 'shells around the centre atom (or give --diameter-nm)' },
       'diameter-nm': { type: 'string', description: 'particle diameter in nm (nearest closed shell; sphere: cut)' },
       'temperature-k': { type: 'string', description: 'temperature in K, required' },
-      sweeps: { type: 'string', description: 'sweeps (one swap attempt per atom each), required' },
+      sweeps: { type: 'string', description: 'most sweeps to run (one swap attempt per atom each), required; the run stops earlier at the answer' },
+      relaxation: { type: 'string', description: 'rigid or relaxed (default: relaxed when the metals differ in size by more than 6 %)' },
+      'fixed-sweeps': { type: 'boolean', description: 'run every sweep instead of stopping once the surface composition is known to ±0.005' },
       'anneal-from-k': { type: 'string', description: 'anneal: start temperature in K, cooled to --temperature-k first' },
       'anneal-sweeps': { type: 'string', description: 'anneal: sweeps spent cooling (default 1000 when --anneal-from-k is given)' },
       seed: { type: 'string', description: 'random seed (default 1)' },
@@ -129,6 +145,8 @@ export const simulationCommands: CliCommand[] = [
       const annealSweeps = integerOption(args, 'anneal-sweeps');
       if (annealSweeps !== undefined && annealFrom === undefined) throw new CliError('--anneal-sweeps needs --anneal-from-k');
       const shape = optionalString(args, 'shape') ?? 'cuboctahedron';
+      const relaxation = optionalString(args, 'relaxation');
+      if (relaxation !== undefined && relaxation !== 'rigid' && relaxation !== 'relaxed') throw new CliError(`--relaxation must be rigid or relaxed, got "${relaxation}"`);
       const started = await context.call('simulation.start', {
         elementA,
         elementB,
@@ -142,6 +160,8 @@ export const simulationCommands: CliCommand[] = [
         anneal: annealFrom === undefined ? null : { startTemperatureK: annealFrom, sweeps: annealSweeps ?? 1000 },
         seed: integerOption(args, 'seed') ?? 1,
         label: optionalString(args, 'label') ?? '',
+        ...(relaxation !== undefined ? { relaxation } : {}),
+        ...(args.values['fixed-sweeps'] === true ? { stopping: null } : {}),
       });
       const ended = await waitForRun(context, started.id);
       if (ended.status !== 'done') throw new CliError(`run ${ended.id} ${ended.status}: ${ended.error ?? 'no result'}`);

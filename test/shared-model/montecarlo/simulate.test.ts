@@ -138,8 +138,12 @@ describe('surface enrichment direction vs published expectations and the analyti
       expect(result.classification.enrichedElement).toBe(surface);
       const shift = surface === pair[1] ? result.surfaceXB - result.xB : result.xB - result.surfaceXB;
       expect(shift).toBeGreaterThan(minimumShift);
-      // The label comes from the shared classifier with the particle's own numbers.
-      expect(['surface-enriched alloy', `${pair[0]}@${pair[1]}`, `${pair[1]}@${pair[0]}`]).toContain(result.architecture);
+      // The label comes from the shared classifier with the particle's own numbers. A relaxed run of an
+      // immiscible pair (Ag–Ni: miscibility gap across the phase diagram, from memory) whose minority
+      // cannot cover the surface separates into domains: Janus is then the right label.
+      const labels = ['surface-enriched alloy', `${pair[0]}@${pair[1]}`, `${pair[1]}@${pair[0]}`];
+      if (result.relaxation.mode === 'relaxed') labels.push('Janus');
+      expect(labels).toContain(result.architecture);
       const analytic = predictPair(pair[0], pair[1], { xB: result.xB, diameterNm: result.geometry.equivalentDiameterNm, shape: 'cuboctahedron', temperatureK: 600 });
       expect(analytic.surfaceElement).toBe(surface);
     });
