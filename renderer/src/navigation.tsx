@@ -5,6 +5,7 @@
 import type { ComponentType } from 'react';
 import { ComingView } from './components/ComingView';
 import { BatchDesignView } from './views/BatchDesignView';
+import { BenchSheetView } from './views/BenchSheetView';
 import { CampaignsView } from './views/CampaignsView';
 import { ResultsView } from './views/ResultsView';
 import { ReagentsView } from './views/ReagentsView';
@@ -33,5 +34,6 @@ export const VIEWS: ViewEntry[] = [
   { id: 'simulation', label: 'Simulation', group: 'Predict', component: SimulationView, ready: true },
   { id: 'batch-design', label: 'Batch design', group: 'Plan', component: BatchDesignView, ready: true },
   { id: 'reagents', label: 'Reagents', group: 'Plan', component: ReagentsView, ready: true },
+  { id: 'bench-sheet', label: 'Bench sheet', group: 'Plan', component: BenchSheetView, ready: true },
   { id: 'results', label: 'Results', group: 'Learn', component: ResultsView, ready: true },
 ];

@@ -33,7 +33,7 @@ export function procedureFor(
 ): ProcedureStep[] {
   const precursors = or(names(reagents, 'metal-precursor'), 'the metal precursor(s)');
   const reducer = or(names(reagents, 'reducer'), 'the reducer');
-  const capping = or(names(reagents, 'capping-agent'), 'the capping agent');
+  const capping = or(names(reagents, 'capping-agent'), 'the capping agent (if any)');
   const solvent = or(names(reagents, 'solvent'), 'the solvent');
   const steps: string[] = (() => {
     switch (route) {
