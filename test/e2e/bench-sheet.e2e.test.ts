@@ -24,7 +24,7 @@ describe.skipIf(!available)('bench sheet in the browser host', () => {
       const context = { store: fixture.store };
       const campaign = await dispatchValue<Campaign>(context, 'campaigns.create', { name: 'Sheet campaign' });
       await dispatchValue(context, 'batches.save', { name: 'PtNi-e2e', campaignId: campaign.id, design: ptNi });
-      const page = await newTestPage(browser, { viewport: { width: 1400, height: 900 } }, 10_000);
+      const page = await newTestPage(browser, { viewport: { width: 1400, height: 900 } });
       await page.goto(fixture.host.url);
       await page.evaluate((id) => window.localStorage.setItem('pairwright.campaignId', String(id)), campaign.id);
       await page.goto(`${fixture.host.url}#/bench-sheet`);
