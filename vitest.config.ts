@@ -1,9 +1,15 @@
 import { defineConfig } from 'vitest/config';
 import { TIMEOUTS } from './test/support/timeouts.ts';
 
-// Tiers (DEVELOPERS.md "Tests"): `npm run test:unit` runs the unit project only (model, db, services: no
+// Tiers (DEVELOPERS.md "Tests"): `npm run test:unit` runs the unit project only (model, db, services, renderer form models: no
 // browser, no child processes); `npm test` runs all three.
-const UNIT = ['test/shared-model/**/*.test.ts', 'test/db/**/*.test.ts', 'test/services/**/*.test.ts'];
+const UNIT = [
+  'test/shared-model/**/*.test.ts',
+  'test/db/**/*.test.ts',
+  'test/services/**/*.test.ts',
+  // renderer form models: pure modules, no browser
+  'test/renderer/**/*.test.ts',
+];
 // Lints and compiles fixtures in child processes: tooling, not the model.
 const UNIT_EXCLUDE = ['test/shared-model/layer-rules.test.ts'];
 

@@ -3,6 +3,7 @@
  * line in `commands/index.ts`. Commands call the same service functions as the app, through `call`.
  */
 import type { OperationInput, OperationName, OperationOutput } from '../../shared-model/api/contract';
+import { readUserNumber } from '../../shared-model/text/user-number';
 
 export type OptionSpec = { type: 'string' | 'boolean'; short?: string; multiple?: boolean; description: string };
 
@@ -54,13 +55,18 @@ export function optionalString(args: ParsedArgs, name: string): string | undefin
   return typeof value === 'string' ? value : undefined;
 }
 
-/** Parses a numeric option; bad text names the option. */
+/** Reads typed number text with the one reader (shared-model/text/user-number.ts); a refusal names `what`. */
+export function readNumberText(text: string, what: string): number {
+  if (text.trim() === '') throw new CliError(`${what} must be a number, got nothing`);
+  const result = readUserNumber(text);
+  if (!result.ok) throw new CliError(`${what} must be a number: ${result.message}`);
+  return result.value;
+}
+
+/** Parses a numeric option (decimal comma accepted, thousands separators refused); bad text names the option. */
 export function optionalNumber(args: ParsedArgs, name: string): number | undefined {
   const value = optionalString(args, name);
-  if (value === undefined) return undefined;
-  const number = Number(value.replace(',', '.'));
-  if (value.trim() === '' || !Number.isFinite(number)) throw new CliError(`--${name} must be a number, got "${value}"`);
-  return number;
+  return value === undefined ? undefined : readNumberText(value, `--${name}`);
 }
 
 export function requirePositional(args: ParsedArgs, index: number, name: string): string {

@@ -9,7 +9,7 @@ import type { BatchDesignRequest } from '../../../shared-model/recipes/design-in
 import { ROUTES } from '../../../shared-model/recipes/design-input';
 import type { ReagentList } from '../../../shared-model/recipes/reagent-list';
 import { splitPair } from '../../../shared-model/api/schemas';
-import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
+import { CliError, optionalNumber, optionalString, readNumberText, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
 import { formatTable } from '../table';
 import { resolveCampaign } from './campaigns';
 
@@ -47,10 +47,9 @@ const RECIPE_OPTIONS: Record<string, OptionSpec> = {
 };
 
 function precursorOption(text: string): { element: string; reagentKey: string; stockMm?: number } {
-  const match = /^([A-Z][a-z]?)=([a-z0-9-]+)(?:@([0-9.eE+-]+))?$/.exec(text.trim());
+  const match = /^([A-Z][a-z]?)=([a-z0-9-]+)(?:@([^@\s]+))?$/.exec(text.trim());
   if (!match) throw new CliError(`--precursor "${text}" must look like Pt=h2ptcl6-6h2o or Pt=h2ptcl6-6h2o@20 (stock mM)`);
-  const stock = match[3] === undefined ? undefined : Number(match[3]);
-  if (stock !== undefined && !Number.isFinite(stock)) throw new CliError(`--precursor "${text}": stock concentration must be a number (mM)`);
+  const stock = match[3] === undefined ? undefined : readNumberText(match[3], `--precursor "${text}": the stock concentration (mM)`);
   return { element: match[1] as string, reagentKey: match[2] as string, ...(stock !== undefined ? { stockMm: stock } : {}) };
 }
 

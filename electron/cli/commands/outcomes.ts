@@ -10,6 +10,7 @@ import {
   CliError,
   optionalNumber,
   optionalString,
+  readNumberText,
   requirePositional,
   requireString,
   type CliCommand,
@@ -51,8 +52,8 @@ export function parseAtPercent(text: string, option: string): { xB: number; unce
   const match = /^\s*([0-9]+(?:[.,][0-9]+)?)\s*(?:(?:±|\+-|\+\/-)\s*([0-9]+(?:[.,][0-9]+)?))?\s*$/.exec(text);
   if (!match)
     throw new CliError(`--${option} must be at.% of B with an optional uncertainty, e.g. 48±2, got "${text}"`);
-  const value = Number((match[1] as string).replace(',', '.'));
-  const uncertainty = match[2] !== undefined ? Number(match[2].replace(',', '.')) : null;
+  const value = readNumberText(match[1] as string, `--${option}`);
+  const uncertainty = match[2] !== undefined ? readNumberText(match[2], `--${option} uncertainty`) : null;
   return { xB: value / 100, uncertaintyXB: uncertainty === null ? null : uncertainty / 100 };
 }
 

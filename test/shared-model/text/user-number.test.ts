@@ -48,9 +48,15 @@ describe('readUserNumber', () => {
 
 describe('naming the field', () => {
   it('puts the field name in front of every refusal and leaves values alone', () => {
-    expect(readUserNumber('abc', 'temperature, K')).toEqual({ ok: false, message: 'temperature, K: "abc" is not a number' });
+    expect(readUserNumber('abc', 'temperature, K')).toEqual({
+      ok: false,
+      message: 'temperature, K: "abc" is not a number',
+    });
     expect(readUserNumber('', '--sweeps')).toEqual({ ok: false, message: '--sweeps: enter a number' });
-    expect(readUserNumber('1,234.5', 'diameter, nm')).toMatchObject({ ok: false, message: /^diameter, nm: "1,234.5" has more than one/ });
+    expect(readUserNumber('1,234.5', 'diameter, nm')).toMatchObject({
+      ok: false,
+      message: /^diameter, nm: "1,234.5" has more than one/,
+    });
     expect(readOptionalUserNumber('x', 'seed')).toEqual({ ok: false, message: 'seed: "x" is not a number' });
     expect(readUserNumber('2,5', 'diameter, nm')).toEqual({ ok: true, value: 2.5 });
     expect(readOptionalUserNumber(' ', 'seed')).toEqual({ ok: true, value: undefined });

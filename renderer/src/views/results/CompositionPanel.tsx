@@ -7,23 +7,8 @@ import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
 import { atPct } from './format';
+import { emptyRow, readCompositionForm, type RowDraft } from './composition-form';
 import { partError } from './part-error';
-
-interface RowDraft {
-  method: CompositionMethod;
-  xBPct: string;
-  uncertaintyPct: string;
-  lines: string;
-}
-
-const emptyRow = (method: CompositionMethod): RowDraft => ({ method, xBPct: '', uncertaintyPct: '', lines: '' });
-
-function percentToFraction(text: string): number | null {
-  const trimmed = text.trim();
-  if (trimmed === '') return null;
-  const value = Number(trimmed.replace(',', '.'));
-  return Number.isFinite(value) ? value / 100 : Number.NaN;
-}
 
 function CompositionTable(props: { record: CompositionRecord; elementB: string }) {
   const { comparison } = props.record;
@@ -91,20 +76,12 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
   const submit = async (event: FormEvent) => {
     event.preventDefault();
     const filled = rows.filter((row) => row.xBPct.trim() !== '');
-    const nominalXB = percentToFraction(nominal);
-    const answer = await call('outcomes.record', {
-      batchId: outcome.batchId,
-      composition: {
-        nominalXB,
-        gridMetal: grid.trim() === '' ? null : grid.trim(),
-        measurements: filled.map((row) => ({
-          method: row.method,
-          xB: percentToFraction(row.xBPct) ?? Number.NaN,
-          uncertaintyXB: percentToFraction(row.uncertaintyPct),
-          ...(row.lines.trim() ? { lines: row.lines.trim() } : {}),
-        })),
-      },
-    });
+    const reading = readCompositionForm(nominal, grid, rows);
+    if (!reading.ok) {
+      show(reading.error);
+      return;
+    }
+    const answer = await call('outcomes.record', { batchId: outcome.batchId, composition: reading.value });
     const result = answer.ok ? answer : { ...answer, error: partError(answer.error, 'composition') };
     if (!result.ok) {
       // measurements.N.field refers to the N-th filled row; map it back to the row shown.

@@ -4,6 +4,7 @@ import { CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Toolti
 import type { BatchOutcome, LineScanRecord } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
+import { optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import { Banner } from '../../components/Banner';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
@@ -58,8 +59,12 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
   const { errors, general, show, clear } = useFieldErrors();
   const refit = async (event: FormEvent) => {
     event.preventDefault();
-    const probeSigmaNm = sigma.trim() === '' ? null : Number(sigma.replace(',', '.'));
-    const result = await call('outcomes.refitLineScan', { id: scan.id, probeSigmaNm });
+    const sigmaReading = readForm(() => optionalFieldNumber(sigma, 'probeSigmaNm', 'probe σ, nm'));
+    if (!sigmaReading.ok) {
+      show(sigmaReading.error);
+      return;
+    }
+    const result = await call('outcomes.refitLineScan', { id: scan.id, probeSigmaNm: sigmaReading.value });
     if (!result.ok) {
       show(result.error);
       return;
@@ -160,15 +165,14 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
   const { errors, general, show, clear } = useFieldErrors();
   const submit = async (event: FormEvent) => {
     event.preventDefault();
+    const sigmaReading = readForm(() => optionalFieldNumber(sigma, 'probeSigmaNm', 'probe σ, nm'));
+    if (!sigmaReading.ok) {
+      show(sigmaReading.error);
+      return;
+    }
     const result = await call('outcomes.record', {
       batchId: outcome.batchId,
-      lineScan: {
-        csvText,
-        name,
-        sourceFile,
-        unit,
-        probeSigmaNm: sigma.trim() === '' ? null : Number(sigma.replace(',', '.')),
-      },
+      lineScan: { csvText, name, sourceFile, unit, probeSigmaNm: sigmaReading.value },
     });
     if (!result.ok) {
       show(partError(result.error, 'lineScan'), { positionsNm: 'csvText', signalA: 'csvText', signalB: 'csvText' });

@@ -4,6 +4,7 @@ import { CartesianGrid, ComposedChart, Legend, Line, ReferenceArea, ResponsiveCo
 import type { BatchOutcome, SizeRecord } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
+import { fieldNumber, optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import { Banner } from '../../components/Banner';
 import { ConfirmDialog } from '../../components/ConfirmDialog';
 import { Field } from '../../components/Field';
@@ -117,8 +118,15 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
 
   const submit = async (event: FormEvent) => {
     event.preventDefault();
-    const targetNm = target.trim() === '' ? null : Number(target.replace(',', '.'));
-    const precisionPercent = Number(precision.replace(',', '.'));
+    const numbers = readForm(() => ({
+      targetNm: optionalFieldNumber(target, 'targetDiameterNm', 'target diameter, nm'),
+      precisionPercent: fieldNumber(precision, 'precisionPercent', 'precision of the mean, ± %'),
+    }));
+    if (!numbers.ok) {
+      show(numbers.error);
+      return;
+    }
+    const { targetNm, precisionPercent } = numbers.value;
     const result = await call('outcomes.record', {
       batchId: props.outcome.batchId,
       sizes: {

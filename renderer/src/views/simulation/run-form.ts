@@ -6,7 +6,7 @@
 import type { OperationInput } from '../../../../shared-model/api/contract';
 import { shapeLabel, type ParticleShape } from '../../../../shared-model/geometry/shapes';
 import { planSimulation, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
-import { readOptionalUserNumber, readUserNumber } from '../../../../shared-model/text/user-number';
+import { fieldNumber, optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import type { SimulationRequest } from '../../app-state';
 
 export interface RunFormState {
@@ -41,58 +41,38 @@ export const INITIAL_RUN_FORM: RunFormState = {
   seed: '1',
 };
 
-/** The input read from the form, or the first field that does not hold a number (field = the API's path). */
 type SimulationStartInput = OperationInput<'simulation.start'>;
 
+/** The input read from the form, or the first field that does not hold a number (field = the API's path). */
 export type RunFormReading = { ok: true; input: SimulationStartInput } | { ok: false; field: string; message: string };
 
-class FieldRefusal extends Error {
-  constructor(
-    readonly field: string,
-    message: string,
-  ) {
-    super(message);
-  }
-}
-
-function required(text: string, field: string, label: string): number {
-  const result = readUserNumber(text, label);
-  if (!result.ok) throw new FieldRefusal(field, result.message);
-  return result.value;
-}
-
-function optional(text: string, field: string, label: string): number | undefined {
-  const result = readOptionalUserNumber(text, label);
-  if (!result.ok) throw new FieldRefusal(field, result.message);
-  return result.value;
-}
+const optional = (text: string, field: string, label: string) => optionalFieldNumber(text, field, label) ?? undefined;
 
 /** Reads the typed text; range checks are left to the contract (zod) so the form and the API say the same. */
 export function readRunForm(form: RunFormState): RunFormReading {
-  try {
-    const input: SimulationStartInput = {
+  const reading = readForm(
+    (): SimulationStartInput => ({
       elementA: form.elementA,
       elementB: form.elementB,
-      xB: required(form.xB, 'xB', `x(${form.elementB})`),
+      xB: fieldNumber(form.xB, 'xB', `x(${form.elementB})`),
       shape: form.shape,
       ...(form.sizeMode === 'shells'
         ? { shells: optional(form.shells, 'shells', 'shells') }
         : { diameterNm: optional(form.diameterNm, 'diameterNm', 'diameter, nm') }),
-      temperatureK: required(form.temperatureK, 'temperatureK', 'temperature, K'),
-      sweeps: required(form.sweeps, 'sweeps', 'sweeps'),
+      temperatureK: fieldNumber(form.temperatureK, 'temperatureK', 'temperature, K'),
+      sweeps: fieldNumber(form.sweeps, 'sweeps', 'sweeps'),
       anneal: form.anneal
         ? {
-            startTemperatureK: required(form.annealStartK, 'anneal.startTemperatureK', 'anneal start, K'),
-            sweeps: required(form.annealSweeps, 'anneal.sweeps', 'cooling sweeps'),
+            startTemperatureK: fieldNumber(form.annealStartK, 'anneal.startTemperatureK', 'anneal start, K'),
+            sweeps: fieldNumber(form.annealSweeps, 'anneal.sweeps', 'cooling sweeps'),
           }
         : null,
       seed: optional(form.seed, 'seed', 'seed') ?? 1,
-    };
-    return { ok: true, input };
-  } catch (error) {
-    if (error instanceof FieldRefusal) return { ok: false, field: error.field, message: error.message };
-    throw error;
-  }
+    }),
+  );
+  return reading.ok
+    ? { ok: true, input: reading.value }
+    : { ok: false, field: reading.error.field, message: reading.error.message };
 }
 
 /** The planned size, or the first problem, computed in the page with the model's own checks. */
