@@ -56,17 +56,23 @@ export function sizeHistogram(
     const fd = iqr > 0 ? (2 * iqr) / Math.cbrt(n) : range / Math.max(5, Math.ceil(Math.log2(n) + 1));
     width = niceStep(Math.min(Math.max(fd, range / 40), range / 5));
   }
-  const start = Math.floor(min / width) * width;
-  const binCount = Math.max(1, Math.floor((max - start) / width) + 1);
+  // Bins are integer multiples of the width; a diameter's bin is ⌊d / width⌋ minus the first bin's number, with a
+  // tiny relative allowance so a value on an edge (6.8 / 0.1 = 67.99999999999999) counts in the bin starting there.
+  const binNumber = (d: number): number => Math.floor(d / width + 1e-9);
+  const firstBin = binNumber(min);
+  const binCount = binNumber(max) - firstBin + 1;
+  const edge = (k: number): number => Number(((firstBin + k) * width).toPrecision(12));
   const bins: HistogramBin[] = [];
   for (let i = 0; i < binCount; i++) {
-    const fromNm = start + i * width;
-    bins.push({ fromNm, toNm: fromNm + width, centerNm: fromNm + width / 2, count: 0 });
+    const fromNm = edge(i);
+    const toNm = edge(i + 1);
+    bins.push({ fromNm, toNm, centerNm: (fromNm + toNm) / 2, count: 0 });
   }
   for (const d of sorted) {
-    const index = Math.min(binCount - 1, Math.floor((d - start) / width));
+    const index = Math.min(binCount - 1, Math.max(0, binNumber(d) - firstBin));
     (bins[index] as HistogramBin).count++;
   }
+  const start = edge(0);
   const curve: SizeHistogram['curve'] = [];
   if (fit) {
     const points = options.curvePoints ?? 120;
