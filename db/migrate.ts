@@ -1,12 +1,13 @@
 /**
  * Numbered SQL migrations (`db/migrations/NNNN_name.sql`), each applied in its own transaction and
  * recorded in `PRAGMA user_version`. Before the first pending migration touches an existing store, the
- * file is copied (SQLite `VACUUM INTO`, a consistent snapshot) into `backups/` beside it.
+ * file is copied (SQLite `VACUUM INTO`, a consistent snapshot) into `backups/` beside it (see backup.ts).
  */
 import type Database from 'better-sqlite3';
-import { chmodSync, closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, statSync } from 'node:fs';
-import { basename, dirname, join } from 'node:path';
+import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { snapshotToBackups } from './backup';
 
 export interface Migration {
   version: number;
@@ -43,16 +44,8 @@ export function loadMigrations(dir: string = defaultMigrationsDir()): Migration[
 
 function backupBeforeMigrating(db: Database.Database, dbPath: string, fromVersion: number): string | null {
   if (fromVersion === 0 || !existsSync(dbPath) || statSync(dbPath).size === 0) return null;
-  const dir = join(dirname(dbPath), 'backups');
-  mkdirSync(dir, { recursive: true, mode: 0o700 });
-  chmodSync(dir, 0o700);
-  const stamp = new Date().toISOString().replace(/[:.]/g, '-');
-  const target = join(dir, `${basename(dbPath, '.sqlite')}-v${fromVersion}-${stamp}.sqlite`);
-  // Owner-only from the start: VACUUM INTO accepts an existing empty file.
-  closeSync(openSync(target, 'wx', 0o600));
-  // VACUUM INTO writes a consistent snapshot even while other connections use the file.
-  db.prepare('VACUUM INTO ?').run(target);
-  return target;
+  // The caller has run the integrity check: a damaged file never gets here (its copy would be worthless).
+  return snapshotToBackups(db, dirname(dbPath), fromVersion, 'migration');
 }
 
 export function migrate(db: Database.Database, options: { dbPath: string; migrationsDir?: string | undefined }): MigrationReport {

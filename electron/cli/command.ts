@@ -13,6 +13,12 @@ export interface CliContext {
   /** Reads a file the user named (path relative to the working directory). */
   readTextFile(path: string): string;
   writeTextFile(path: string, text: string): void;
+  /** Store maintenance that needs the store closed (restore, full check); the store is not opened for these. */
+  maintenance: {
+    dataDir: string;
+    restore(file: string): Promise<{ restoredFrom: string; previousStoreKeptAt: string | null; fromSchemaVersion: number; schemaVersion: number }>;
+    check(): { path: string; schemaVersion: number };
+  };
 }
 
 export interface ParsedArgs {

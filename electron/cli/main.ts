@@ -10,7 +10,7 @@ import type { OperationInput, OperationName, OperationOutput } from '../../share
 import { defaultDataDir } from '../paths';
 import { dispatchKnown } from '../services/dispatch';
 import type { ServiceContext } from '../services/context';
-import { closeWorkspace, openWorkspace } from '../services/workspace';
+import { checkWorkspace, closeWorkspace, isStoreRefusal, openWorkspace, restoreWorkspace } from '../services/workspace';
 import { CliError, type CliCommand, type CliContext, type OptionSpec } from './command';
 import { commands } from './commands/index';
 
@@ -18,6 +18,7 @@ const GLOBAL_OPTIONS: Record<string, OptionSpec> = {
   json: { type: 'boolean', description: 'print JSON for scripts' },
   data: { type: 'string', description: 'folder of the store (default: the desktop app\'s data folder)' },
   help: { type: 'boolean', short: 'h', description: 'show help' },
+  debug: { type: 'boolean', description: 'print the stack trace of an unexpected failure' },
 };
 
 function usageLine(command: CliCommand): string {
@@ -43,17 +44,32 @@ export function helpText(selected?: CliCommand): string {
   return lines.join('\n');
 }
 
+/** The positions of words that may name the command: not options, and not the value of a global option. */
+function wordPositions(argv: readonly string[]): number[] {
+  const positions: number[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i] as string;
+    if (arg.startsWith('-')) {
+      const name = arg.replace(/^--?/, '');
+      if (!name.includes('=') && GLOBAL_OPTIONS[name]?.type === 'string') i++; // `--data DIR demo`
+      continue;
+    }
+    positions.push(i);
+  }
+  return positions;
+}
+
 function findCommand(argv: readonly string[]): { command: CliCommand; rest: string[] } | null {
-  const words = argv.filter((arg) => !arg.startsWith('-'));
+  const positions = wordPositions(argv);
+  const words = positions.map((position) => argv[position]);
   let best: CliCommand | null = null;
   for (const command of commands) {
     const matches = command.words.every((word, index) => words[index] === word);
     if (matches && (!best || command.words.length > best.words.length)) best = command;
   }
   if (!best) return null;
-  const rest = [...argv];
-  for (const word of best.words) rest.splice(rest.indexOf(word), 1);
-  return { command: best, rest };
+  const used = new Set(positions.slice(0, best.words.length));
+  return { command: best, rest: argv.filter((_arg, index) => !used.has(index)) };
 }
 
 export interface CliRunResult {
@@ -96,13 +112,20 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
         }
       },
       writeTextFile: (path, text) => writeFileSync(resolve(path), text, 'utf8'),
+      maintenance: {
+        dataDir,
+        restore: (file) => restoreWorkspace(dataDir, file),
+        check: () => checkWorkspace(dataDir),
+      },
     };
     const output = await command.run({ positionals: parsed.positionals, values: parsed.values }, context);
     const stdout = parsed.values.json === true ? JSON.stringify(output.json, null, 2) : output.text;
     return { exitCode: 0, stdout, stderr: '' };
   } catch (error) {
-    if (error instanceof CliError) return { exitCode: 2, stdout: '', stderr: `pairwright: ${error.message}` };
-    const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
+    if (error instanceof CliError || isStoreRefusal(error)) return { exitCode: 2, stdout: '', stderr: `pairwright: ${error.message}` };
+    const debug = argv.includes('--debug');
+    const message = error instanceof Error ? error.message : String(error);
+    const detail = debug && error instanceof Error ? (error.stack ?? message) : `${message} (run again with --debug for details)`;
     return { exitCode: 1, stdout: '', stderr: `pairwright: unexpected failure: ${detail}` };
   } finally {
     const opened = workspace as ServiceContext | null;

@@ -57,14 +57,46 @@ export function isTrustedSender(event: IpcMainInvokeEventLike, window: BrowserWi
   }
 }
 
-export function applicationMenu(electron: ElectronBoundary, actions: { openDataFolder: () => void; about: () => void }): MenuItemTemplate[] {
+export interface MenuActions {
+  openDataFolder: () => void;
+  backUp: () => void;
+  about: () => void;
+}
+
+export function applicationMenu(electron: ElectronBoundary, actions: MenuActions): MenuItemTemplate[] {
+  const file: MenuItemTemplate[] = [
+    { label: 'Open data folder', click: actions.openDataFolder },
+    { label: 'Back up the store…', click: actions.backUp },
+    { type: 'separator' },
+    { role: 'quit' },
+  ];
   return [
-    { label: 'File', submenu: [{ label: 'Open data folder', click: actions.openDataFolder }, { type: 'separator' }, { role: 'quit' }] },
+    { label: 'File', submenu: file },
     { label: 'Edit', submenu: [{ role: 'undo' }, { role: 'redo' }, { type: 'separator' }, { role: 'cut' }, { role: 'copy' }, { role: 'paste' }, { role: 'selectAll' }] },
     { label: 'View', submenu: [{ role: 'reload' }, { role: 'toggleDevTools' }, { type: 'separator' }, { role: 'resetZoom' }, { role: 'zoomIn' }, { role: 'zoomOut' }, { type: 'separator' }, { role: 'togglefullscreen' }] },
     { label: 'Window', submenu: [{ role: 'minimize' }, { role: 'close' }] },
     { label: 'Help', submenu: [{ label: `About Pairwright ${electron.app.getVersion()}`, click: actions.about }] },
   ];
+}
+
+/** File → Back up the store…: the user picks a new file; the service writes it with SQLite's online backup API. */
+export async function backUpFromMenu<W extends BrowserWindowLike>(electron: ElectronBoundary<W>, window: W, context: ServiceContext): Promise<void> {
+  const stamp = new Date().toISOString().slice(0, 10);
+  const choice = await electron.dialog.showSaveDialog(window, {
+    title: 'Back up the store',
+    defaultPath: join(context.store.dataDir, 'backups', `pairwright-backup-${stamp}.sqlite`),
+    filters: [{ name: 'Pairwright store', extensions: ['sqlite'] }],
+  });
+  if (choice.canceled || !choice.filePath) return;
+  const result = await dispatch(context, 'backups.create', { to: choice.filePath });
+  await electron.dialog.showMessageBox({
+    type: 'info',
+    title: 'Back up the store',
+    message: result.ok ? 'Backup written' : 'Backup not written',
+    detail: result.ok
+      ? `${(result.value as { path: string }).path}\nRestore it with: pairwright restore <file> (with Pairwright closed).`
+      : result.error.message,
+  });
 }
 
 export async function wireDesktopApp<W extends BrowserWindowLike>(electron: ElectronBoundary<W>, context: ServiceContext, paths: DesktopPaths): Promise<DesktopApp> {
@@ -129,6 +161,9 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(electron: Elec
       applicationMenu(electron, {
         openDataFolder: () => {
           shell.openPath(context.store.dataDir).catch((error: unknown) => console.error('[pairwright] could not open data folder:', error));
+        },
+        backUp: () => {
+          backUpFromMenu(electron, window, context).catch((error: unknown) => console.error('[pairwright] backup failed:', error));
         },
         about: () => {
           dialog

@@ -3,6 +3,7 @@
  * operation in the contract, so a new operation does not compile until its service is registered here.
  */
 import type { OperationName } from '../../shared-model/api/contract';
+import { backupHandlers } from './backups';
 import { batchHandlers } from './batches';
 import { benchSheetHandlers } from './bench-sheet';
 import { campaignHandlers } from './campaigns';
@@ -23,4 +24,5 @@ export const handlers: HandlerMap<OperationName> = {
   ...batchHandlers,
   ...benchSheetHandlers,
   ...simulationHandlers,
+  ...backupHandlers,
 };

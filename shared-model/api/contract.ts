@@ -4,6 +4,7 @@
  * is derived from this record. A new capability adds its own `*Operations` record here.
  */
 import type { z } from 'zod';
+import { backupOperations } from './backups';
 import { batchOperations } from './batches';
 import { benchSheetOperations } from './bench-sheet';
 import { campaignOperations } from './campaigns';
@@ -24,6 +25,7 @@ export const operations = {
   ...batchOperations,
   ...benchSheetOperations,
   ...simulationOperations,
+  ...backupOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
 export type Operations = typeof operations;

@@ -33,6 +33,7 @@ const TABLE_OWNERS: Record<string, string> = {
   outcome_line_scan_points: 'outcome-line-scans.ts',
   outcome_observations: 'outcome-observations.ts',
   outcome_files: 'outcome-files.ts',
+  settings: 'settings.ts',
 };
 
 /** A string literal is taken as SQL when it holds one of these upper-case keywords (the style of the code). */

@@ -2,6 +2,8 @@
  * Logging in to the browser host in Debian's Chromium: the printed one-time address logs a browser in (cookie
  * not readable by scripts), a browser without it sees only the login note, and a used address logs no one else in.
  */
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { browserAvailable, launchBrowser, newTestPage } from '../support/browser';
@@ -49,5 +51,14 @@ describe.skipIf(!available)('logging in to the browser host', () => {
     expect(await stranger.locator('main').count()).toBe(0);
     await owner.context().close();
     await stranger.context().close();
+  });
+
+  it('backs up the store from the Campaigns view', async () => {
+    const page = await newTestPage(browser, {});
+    await page.goto(fixture.host.issueLoginUrl('/#/campaigns'));
+    await page.getByRole('button', { name: 'Back up now' }).click();
+    await expect.poll(() => page.getByTestId('backup-result').textContent()).toMatch(/Backed up to .*backups.*-manual\.sqlite/);
+    expect(readdirSync(join(fixture.dataDir, 'backups')).filter((name) => name.endsWith('-manual.sqlite')).length).toBe(1);
+    await page.context().close();
   });
 });

@@ -37,6 +37,7 @@ function standInElectron() {
   const appListeners = new Map<string, Listener>();
   let quitCalls = 0;
   let savePath: string | null = null;
+  const messages: string[] = [];
   class FakeWindow implements BrowserWindowLike {
     webContents = {
       id: 7,
@@ -69,7 +70,7 @@ function standInElectron() {
     shell: { openExternal: async (url) => void opened.push(url), openPath: async () => '' },
     dialog: {
       showSaveDialog: async () => (savePath === null ? { canceled: true } : { canceled: false, filePath: savePath }),
-      showMessageBox: async () => ({}),
+      showMessageBox: async (options) => void messages.push(`${options.message}: ${options.detail}`),
     },
   };
   return {
@@ -91,6 +92,7 @@ function standInElectron() {
       return menu;
     },
     appListeners,
+    messages,
     get quitCalls() {
       return quitCalls;
     },
@@ -199,5 +201,21 @@ describe('Electron main process wiring', () => {
     expect(fake.menu.map((item) => item.label)).toEqual(['File', 'Edit', 'View', 'Window', 'Help']);
     const roles = fake.menu.flatMap((item) => item.submenu ?? []).map((item) => item.role).filter(Boolean);
     expect(roles).toEqual(expect.arrayContaining(['quit', 'undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'reload', 'minimize']));
+  });
+
+  it('backs the store up from File → Back up the store… to the file the user chose', async () => {
+    const fake = await wired();
+    const item = fake.menu[0]?.submenu?.find((entry) => entry.label === 'Back up the store…');
+    expect(item?.click).toBeTypeOf('function');
+    const target = join(tempDataDir(), 'menu-backup.sqlite');
+    fake.chooseSavePath(target);
+    item?.click?.();
+    await expect.poll(() => fake.messages.length).toBe(1);
+    expect(fake.messages[0]).toMatch(/^Backup written: .*menu-backup\.sqlite/);
+    expect(readFileSync(target).subarray(0, 15).toString('latin1')).toBe('SQLite format 3');
+    fake.chooseSavePath(null);
+    item?.click?.();
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(fake.messages.length).toBe(1);
   });
 });

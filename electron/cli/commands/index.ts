@@ -8,6 +8,7 @@ import { outcomeCommands } from './outcomes';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
 import { simulationCommands } from './simulation';
+import { storeCommands } from './store';
 
 export const commands: CliCommand[] = [
   ...campaignCommands,
@@ -17,5 +18,6 @@ export const commands: CliCommand[] = [
   ...batchCommands,
   ...benchSheetCommands,
   ...outcomeCommands,
+  ...storeCommands,
   ...helpCommands,
 ];

@@ -4,6 +4,7 @@ import type { Campaign } from '../../../shared-model/api/campaigns';
 import { call } from '../api/client';
 import { useFieldErrors, useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
+import { BackupButton } from '../components/BackupButton';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { PairsPanel } from './PairsPanel';
@@ -130,6 +131,7 @@ export function CampaignsView() {
         <label className="toggle">
           <input type="checkbox" checked={showArchived} onChange={(event) => setShowArchived(event.target.checked)} /> show archived
         </label>
+        <BackupButton />
       </header>
       {campaigns.error ? <Banner tone="error">{campaigns.error.message}</Banner> : null}
       {campaigns.data && list.length === 0 && !showArchived ? (
