@@ -63,7 +63,7 @@ describe('backup and restore', () => {
     const aside = new Database(report.previousStoreKeptAt, { readonly: true });
     expect(aside.prepare("SELECT count(*) AS n FROM campaigns WHERE name = 'Written after the backup'").get()).toEqual({ n: 1 });
     aside.close();
-    expect(report.previousStoreKeptAt).toMatch(/backups[/\\]pairwright-v6-.*-before-restore\.sqlite$/);
+    expect(report.previousStoreKeptAt).toMatch(/backups[/\\]pairwright-v\d+-.*-before-restore\.sqlite$/);
   });
 
   it('refuses a damaged, foreign, empty or newer file and changes nothing', async () => {
@@ -116,7 +116,7 @@ describe('backup and restore', () => {
     openStore({ dataDir }).close(); // just created: nothing to back up
     expect(backupFiles()).toEqual([]);
     openStore({ dataDir }).close();
-    expect(backupFiles()).toEqual([expect.stringMatching(/^pairwright-v6-.*-daily\.sqlite$/)]);
+    expect(backupFiles()).toEqual([expect.stringMatching(/^pairwright-v\d+-.*-daily\.sqlite$/)]);
     openStore({ dataDir }).close();
     expect(backupFiles().length).toBe(1);
 
