@@ -16,22 +16,25 @@ const withText = (field: keyof typeof DEFAULT_CONDITIONS_FORM.text, value: strin
 describe('prediction conditions form', () => {
   it('starts from the model defaults, shown in at.%', () => {
     expect(DEFAULT_CONDITIONS_FORM).toEqual({
-      text: { atPercentB: '50', diameterNm: '3', temperatureK: '600' },
+      text: { atPercentB: '50', diameterNm: '3', temperatureK: '600', timeH: '1' },
       shape: PREDICTION_DEFAULTS.shape,
       facet: PREDICTION_DEFAULTS.facet,
+      environment: 'vacuum',
     });
     expect(readConditions(DEFAULT_CONDITIONS_FORM)).toEqual({ conditions: PREDICTION_DEFAULTS, errors: {} });
   });
 
   it('reads decimal commas and gives the same conditions the contract gives the API', () => {
-    const form = { ...withText('diameterNm', '2,5'), facet: '100' as const };
-    const reading = readConditions({ ...form, text: { ...form.text, atPercentB: '30' } });
+    const form = { ...withText('diameterNm', '2,5'), facet: '100' as const, environment: 'CO' as const };
+    const reading = readConditions({ ...form, text: { ...form.text, atPercentB: '30', timeH: '0,5' } });
     const api = conditionsSchema.parse({
       xB: 0.3,
       diameterNm: 2.5,
       temperatureK: 600,
       shape: 'cuboctahedron',
       facet: '100',
+      environment: 'CO',
+      timeH: 0.5,
     });
     expect(reading).toEqual({ conditions: api, errors: {} });
   });
@@ -39,7 +42,7 @@ describe('prediction conditions form', () => {
   it('names every field that does not hold a number', () => {
     const form = {
       ...withText('diameterNm', 'big'),
-      text: { atPercentB: '1.234,5', diameterNm: 'big', temperatureK: '' },
+      text: { atPercentB: '1.234,5', diameterNm: 'big', temperatureK: '', timeH: '1' },
     };
     expect(readConditions(form)).toEqual({
       conditions: null,
@@ -61,11 +64,15 @@ describe('prediction conditions form', () => {
     expect(readConditions(withText('temperatureK', '6000')).errors).toEqual({
       temperatureK: 'temperature, K: must be at most 5000 K',
     });
+    expect(readConditions(withText('timeH', '0')).errors).toEqual({ timeH: 'time, h: must be a positive time in hours' });
   });
 
   it('keeps the typed text for the tab, and falls back to the defaults on a damaged copy', () => {
-    const kept = { text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x' }, shape: 'sphere', facet: '100' };
+    const kept = { text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x', timeH: '2' }, shape: 'sphere', facet: '100', environment: 'H2' };
     expect(readKeptConditions(JSON.stringify(kept))).toEqual(kept);
+    // a copy kept before the time and environment inputs existed: those two take their defaults
+    const older = { text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x' }, shape: 'sphere', facet: '100' };
+    expect(readKeptConditions(JSON.stringify(older))).toEqual({ ...older, text: { ...older.text, timeH: '1' }, environment: 'vacuum' });
     expect(readKeptConditions(null)).toBe(DEFAULT_CONDITIONS_FORM);
     expect(readKeptConditions('{not json')).toBe(DEFAULT_CONDITIONS_FORM);
     expect(readKeptConditions(JSON.stringify({ ...kept, shape: 'cube' }))).toBe(DEFAULT_CONDITIONS_FORM);

@@ -7,7 +7,7 @@ import { useMemo, useState, type KeyboardEvent } from 'react';
 import { DomainError } from '../../../shared-model/api/result';
 import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
 import type { Prediction } from '../../../shared-model/prediction/predict';
-import { describeRankTarget, rankPairs, type RankTarget } from '../../../shared-model/prediction/rank';
+import { describeRankTarget, qualifiesFor, rankPairs, type RankTarget } from '../../../shared-model/prediction/rank';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { PairDetail } from './PairDetail';
@@ -19,20 +19,40 @@ interface Row {
   p: Prediction;
 }
 
-type SortKey = 'rank' | 'pair' | 'architecture' | 'confidence' | 'surface' | 'enrichment' | 'surfaceEnergy' | 'chemical' | 'elastic' | 'mixing';
+type SortKey =
+  | 'rank'
+  | 'pair'
+  | 'architecture'
+  | 'asMade'
+  | 'confidence'
+  | 'surface'
+  | 'enrichment'
+  | 'surfaceEnergy'
+  | 'chemical'
+  | 'elastic'
+  | 'adsorbate'
+  | 'mixing'
+  | 'air';
 
 const COLUMNS: Array<{ key: SortKey; label: string; numeric: boolean; value: (r: Row) => number | string }> = [
   { key: 'rank', label: '#', numeric: true, value: (r) => r.rank },
   { key: 'pair', label: 'pair', numeric: false, value: (r) => r.p.pair },
   { key: 'architecture', label: 'predicted', numeric: false, value: (r) => r.p.architecture },
+  { key: 'asMade', label: 'as made', numeric: false, value: (r) => r.p.verdicts.asMade },
   { key: 'confidence', label: 'confidence', numeric: true, value: (r) => r.p.confidence },
   { key: 'surface', label: 'at surface', numeric: false, value: (r) => r.p.surfaceElement ?? '' },
   { key: 'enrichment', label: 'E', numeric: true, value: (r) => r.p.enrichment },
   { key: 'surfaceEnergy', label: 'γ term, eV', numeric: true, value: (r) => r.p.terms.surfaceEnergy },
   { key: 'chemical', label: 'chemical, eV', numeric: true, value: (r) => r.p.terms.chemical },
   { key: 'elastic', label: 'elastic, eV', numeric: true, value: (r) => r.p.terms.elastic },
+  { key: 'adsorbate', label: 'adsorbate, eV', numeric: true, value: (r) => r.p.terms.adsorbate },
   { key: 'mixing', label: 'ΔHmix, kJ/mol', numeric: true, value: (r) => r.p.mixingEnthalpyKjPerMol },
+  { key: 'air', label: 'in air', numeric: false, value: (r) => airText(r) },
 ];
+
+function airText(r: Row): string {
+  return r.p.oxidation.oxidisingInAir.length === 0 ? '—' : r.p.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ');
+}
 
 const TARGET_KINDS = ['alloy', 'core@shell any', 'core@shell with', 'Janus', 'intermetallic'] as const;
 type TargetKind = (typeof TARGET_KINDS)[number];
@@ -69,7 +89,9 @@ export function CandidatesView() {
     if (conditions === null) return { rows: [], errors: {}, target: '' };
     try {
       const target = toTarget(targetKind, shell);
-      const ranked = rankPairs(parseElementList(elementsText), target, conditions);
+      const all = rankPairs(parseElementList(elementsText), target, conditions);
+      // Janus is a yes/no question of the wetting criterion: only the pairs that qualify (as the API answers)
+      const ranked = target.kind === 'Janus' ? all.filter((r) => qualifiesFor(target, r.prediction)) : all;
       return { rows: ranked.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction })), errors: {}, target: describeRankTarget(target) };
     } catch (error) {
       if (!(error instanceof DomainError)) throw error;
@@ -177,13 +199,19 @@ export function CandidatesView() {
                     {row.p.pair}
                   </th>
                   <td>{row.p.architecture}</td>
-                  <td>{row.p.confidence.toFixed(2)}</td>
+                  <td>{row.p.verdicts.asMade}</td>
+                  <td>
+                    {row.p.confidence.toFixed(2)}
+                    {row.p.certainty.uncertain ? <span className="small muted"> uncertain</span> : null}
+                  </td>
                   <td>{row.p.surfaceElement ?? '—'}</td>
                   <td>{row.p.enrichment.toFixed(2)}</td>
                   <td>{fmt(row.p.terms.surfaceEnergy)}</td>
                   <td>{fmt(row.p.terms.chemical)}</td>
                   <td>{fmt(row.p.terms.elastic)}</td>
+                  <td>{fmt(row.p.terms.adsorbate)}</td>
                   <td>{fmt(row.p.mixingEnthalpyKjPerMol, 1)}</td>
+                  <td>{airText(row)}</td>
                   <td className="notes-cell small">{row.p.reason}</td>
                 </tr>
               ))}

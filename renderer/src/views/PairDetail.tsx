@@ -14,8 +14,16 @@ import { call } from '../api/client';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
+import { FlaskTerms, FlaskVerdicts } from './FlaskTerms';
 
 const pct = (x: number) => `${(100 * x).toFixed(1)} %`;
+const TERM_NAMES = {
+  surfaceEnergy: 'surface energy',
+  chemical: 'chemical (regular solution)',
+  elastic: 'elastic strain',
+  adsorbate: 'adsorbate (environment)',
+  total: 'total',
+} as const;
 const ev = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(3)} eV`;
 
 function IsothermChart(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; sweep: IsothermSweep }) {
@@ -123,6 +131,7 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
         )}{' '}
         Confidence {p.confidence.toFixed(2)}.
       </p>
+      <FlaskVerdicts prediction={p} />
       <p className="muted">{p.reason}</p>
       <table className="data-table" aria-label="Segregation terms">
         <thead>
@@ -138,9 +147,9 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
           </tr>
         </thead>
         <tbody>
-          {(['surfaceEnergy', 'chemical', 'elastic', 'total'] as const).map((key) => (
+          {(['surfaceEnergy', 'chemical', 'elastic', 'adsorbate', 'total'] as const).map((key) => (
             <tr key={key}>
-              <th scope="row">{key === 'surfaceEnergy' ? 'surface energy' : key === 'chemical' ? 'chemical (regular solution)' : key === 'elastic' ? 'elastic strain' : 'total'}</th>
+              <th scope="row">{TERM_NAMES[key]}</th>
               <td>{ev(p.terms[key])}</td>
               <td>{ev(p.segregation.bInA[key])}</td>
               <td>{ev(p.segregation.aInB[key])}</td>
@@ -152,6 +161,7 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
         Miedema ΔHmix {p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical {p.mixingChemicalKjPerMol.toFixed(1)}, elastic {p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×
         {p.unlikeNeighbourRatio.toFixed(2)} of random{p.miscibilityGap ? ', inside the miscibility gap' : ''}. ({p.facet}) facet, strain rule “{p.strainRule}”, model {p.modelVersion}.
       </p>
+      <FlaskTerms prediction={p} />
       {p.flags.length > 0 ? (
         <ul className="small">
           {p.flags.map((flag) => (

@@ -7,15 +7,17 @@
 import { conditionsSchema } from '../../../shared-model/api/prediction';
 import { isParticleShape, normaliseShapeName, type ParticleShape } from '../../../shared-model/geometry/shapes';
 import { PREDICTION_DEFAULTS, type ResolvedConditions } from '../../../shared-model/prediction/conditions';
+import { ENVIRONMENTS, type Environment } from '../../../shared-model/prediction/environment';
 import type { SurfaceFacet } from '../../../shared-model/prediction/segregation';
 import { readUserNumber } from '../../../shared-model/text/user-number';
 
-export type ConditionsTextField = 'atPercentB' | 'diameterNm' | 'temperatureK';
+export type ConditionsTextField = 'atPercentB' | 'diameterNm' | 'temperatureK' | 'timeH';
 
 export interface ConditionsForm {
   text: Record<ConditionsTextField, string>;
   shape: ParticleShape;
   facet: SurfaceFacet;
+  environment: Environment;
 }
 
 /** Short decimal text of a default (0.5 → "50" at.%). */
@@ -26,9 +28,11 @@ export const DEFAULT_CONDITIONS_FORM: ConditionsForm = {
     atPercentB: text(100 * PREDICTION_DEFAULTS.xB),
     diameterNm: text(PREDICTION_DEFAULTS.diameterNm),
     temperatureK: text(PREDICTION_DEFAULTS.temperatureK),
+    timeH: text(PREDICTION_DEFAULTS.timeH),
   },
   shape: PREDICTION_DEFAULTS.shape,
   facet: PREDICTION_DEFAULTS.facet,
+  environment: PREDICTION_DEFAULTS.environment,
 };
 
 /** Field names of the contract (xB, diameterNm, temperatureK) → the inputs of this bar. */
@@ -38,12 +42,15 @@ export const CONDITION_FIELD_ALIASES: Record<string, string> = {
   temperatureK: 'temperatureK',
   shape: 'shape',
   facet: 'facet',
+  timeH: 'timeH',
+  environment: 'environment',
 };
 
 const LABELS: Record<ConditionsTextField, string> = {
   atPercentB: 'composition, at.%',
   diameterNm: 'diameter, nm',
   temperatureK: 'temperature, K',
+  timeH: 'time, h',
 };
 
 export type ConditionsReading =
@@ -57,13 +64,13 @@ export type ConditionsReading =
 export function readConditions(form: ConditionsForm): ConditionsReading {
   const numbers: Partial<Record<ConditionsTextField, number>> = {};
   const errors: Record<string, string> = {};
-  for (const field of ['atPercentB', 'diameterNm', 'temperatureK'] as const) {
+  for (const field of ['atPercentB', 'diameterNm', 'temperatureK', 'timeH'] as const) {
     const result = readUserNumber(form.text[field], LABELS[field]);
     if (result.ok) numbers[field] = result.value;
     else errors[field] = result.message;
   }
-  const { atPercentB, diameterNm, temperatureK } = numbers;
-  if (atPercentB === undefined || diameterNm === undefined || temperatureK === undefined)
+  const { atPercentB, diameterNm, temperatureK, timeH } = numbers;
+  if (atPercentB === undefined || diameterNm === undefined || temperatureK === undefined || timeH === undefined)
     return { conditions: null, errors };
   const parsed = conditionsSchema.safeParse({
     xB: atPercentB / 100,
@@ -71,6 +78,8 @@ export function readConditions(form: ConditionsForm): ConditionsReading {
     temperatureK,
     shape: form.shape,
     facet: form.facet,
+    timeH,
+    environment: form.environment,
   });
   if (parsed.success) return { conditions: parsed.data, errors: {} };
   const issue = parsed.error.issues[0];
@@ -106,5 +115,15 @@ export function readKeptConditions(raw: string | null): ConditionsForm {
     return DEFAULT_CONDITIONS_FORM;
   }
   const { atPercentB, diameterNm, temperatureK } = kept;
-  return { text: { atPercentB, diameterNm, temperatureK }, shape, facet: value.facet };
+  // entries kept before the time and environment inputs existed take their defaults
+  const timeH = typeof kept.timeH === 'string' ? kept.timeH : DEFAULT_CONDITIONS_FORM.text.timeH;
+  const environment = (ENVIRONMENTS as readonly string[]).includes(String(value.environment))
+    ? (value.environment as Environment)
+    : DEFAULT_CONDITIONS_FORM.environment;
+  return {
+    text: { atPercentB, diameterNm, temperatureK, timeH },
+    shape,
+    facet: value.facet,
+    environment,
+  };
 }

@@ -9,6 +9,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import type { ParticleShape } from '../../../shared-model/geometry/shapes';
 import type { ResolvedConditions } from '../../../shared-model/prediction/conditions';
+import { ENVIRONMENTS, ENVIRONMENT_LABELS, type Environment } from '../../../shared-model/prediction/environment';
 import type { SurfaceFacet } from '../../../shared-model/prediction/segregation';
 import { Field } from '../components/Field';
 import { ShapeSelect } from '../components/ShapeSelect';
@@ -21,6 +22,8 @@ export interface ConditionsState {
   setText: (field: ConditionsTextField, value: string) => void;
   setShape: (shape: ParticleShape) => void;
   setFacet: (facet: SurfaceFacet) => void;
+  environment: Environment;
+  setEnvironment: (environment: Environment) => void;
   conditions: ResolvedConditions | null;
   errors: Record<string, string>;
 }
@@ -32,10 +35,11 @@ export function useConditions(): ConditionsState {
   const [text, setTextState] = useState(initial.text);
   const [shape, setShape] = useState<ParticleShape>(initial.shape);
   const [facet, setFacet] = useState<SurfaceFacet>(initial.facet);
+  const [environment, setEnvironment] = useState<Environment>(initial.environment);
   useEffect(() => {
-    window.sessionStorage.setItem(STORAGE_KEY, JSON.stringify({ text, shape, facet } satisfies ConditionsForm));
-  }, [text, shape, facet]);
-  const { conditions, errors } = useMemo(() => readConditions({ text, shape, facet }), [text, shape, facet]);
+    window.sessionStorage.setItem(STORAGE_KEY, JSON.stringify({ text, shape, facet, environment } satisfies ConditionsForm));
+  }, [text, shape, facet, environment]);
+  const { conditions, errors } = useMemo(() => readConditions({ text, shape, facet, environment }), [text, shape, facet, environment]);
   return {
     text,
     shape,
@@ -43,6 +47,8 @@ export function useConditions(): ConditionsState {
     setText: (field, value) => setTextState((current) => ({ ...current, [field]: value })),
     setShape,
     setFacet,
+    environment,
+    setEnvironment,
     conditions,
     errors,
   };
@@ -64,6 +70,18 @@ export function ConditionsBar(props: { state: ConditionsState; elementB?: string
       </Field>
       <Field label="Temperature, K" name="temperatureK" error={errors.temperatureK} hint="synthesis or annealing">
         <input name="temperatureK" inputMode="decimal" value={state.text.temperatureK} onChange={(e) => state.setText('temperatureK', e.target.value)} />
+      </Field>
+      <Field label="Time, h" name="timeH" error={errors.timeH} hint="at that temperature">
+        <input name="timeH" inputMode="decimal" value={state.text.timeH} onChange={(e) => state.setText('timeH', e.target.value)} />
+      </Field>
+      <Field label="Environment" name="environment" error={errors.environment} hint="gas or ligand">
+        <select name="environment" value={state.environment} onChange={(e) => state.setEnvironment(e.target.value as Environment)}>
+          {ENVIRONMENTS.map((environment) => (
+            <option key={environment} value={environment}>
+              {ENVIRONMENT_LABELS[environment]}
+            </option>
+          ))}
+        </select>
       </Field>
       <Field label="Facet" name="facet" error={errors.facet} hint="of the segregation terms">
         <select name="facet" value={state.facet} onChange={(e) => state.setFacet(e.target.value as SurfaceFacet)}>
