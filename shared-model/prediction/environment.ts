@@ -31,11 +31,11 @@ export const ENVIRONMENTS = ['vacuum', 'H2', 'CO', 'O2', 'ligand'] as const;
 export type Environment = (typeof ENVIRONMENTS)[number];
 
 export const ENVIRONMENT_LABELS: Readonly<Record<Environment, string>> = {
-  vacuum: 'vacuum / inert gas',
-  H2: 'hydrogen (H₂)',
-  CO: 'carbon monoxide (CO)',
-  O2: 'oxygen / air (O₂)',
-  ligand: 'strongly binding ligand (thiol, amine)',
+  vacuum: 'vacuum / inert',
+  H2: 'H₂',
+  CO: 'CO',
+  O2: 'O₂ / air',
+  ligand: 'ligand (thiol, amine)',
 };
 
 export type Adsorbate = 'H' | 'CO' | 'O' | 'SR';

@@ -96,6 +96,23 @@ export function BatchResult(props: { design: BatchDesign }) {
         ) : null}
       </section>
 
+      {d.asMade ? (
+        <section className="card" aria-label="Expected as made">
+          <h2 className="card__title">Expected as made</h2>
+          <p>
+            As made: <strong data-testid="batch-as-made">{d.asMade.label}</strong> ({d.asMade.basis === 'kinetic' ? 'kinetics decide' : 'equilibrium reached'}) · after annealing:{' '}
+            <strong>{d.asMade.afterAnnealing}</strong>
+          </p>
+          <p className="small muted" data-testid="batch-as-made-text">
+            {d.asMade.text}
+          </p>
+          {d.asMade.oxidation !== '' ? (
+            <p className="small" data-testid="batch-oxidation">
+              {d.asMade.oxidation}
+            </p>
+          ) : null}
+        </section>
+      ) : null}
       <section className="card" aria-label="Checks">
         <h2 className="card__title">Kinetic and practical checks</h2>
         <p className="muted small">Safety warnings are in the hazard block below.</p>

@@ -38,10 +38,10 @@ const COLUMNS: Array<{ key: SortKey; label: string; numeric: boolean; value: (r:
   { key: 'rank', label: '#', numeric: true, value: (r) => r.rank },
   { key: 'pair', label: 'pair', numeric: false, value: (r) => r.p.pair },
   { key: 'architecture', label: 'predicted', numeric: false, value: (r) => r.p.architecture },
-  { key: 'asMade', label: 'as made', numeric: false, value: (r) => r.p.verdicts.asMade },
   { key: 'confidence', label: 'confidence', numeric: true, value: (r) => r.p.confidence },
   { key: 'surface', label: 'at surface', numeric: false, value: (r) => r.p.surfaceElement ?? '' },
   { key: 'enrichment', label: 'E', numeric: true, value: (r) => r.p.enrichment },
+  { key: 'asMade', label: 'as made', numeric: false, value: (r) => r.p.verdicts.asMade },
   { key: 'surfaceEnergy', label: 'γ term, eV', numeric: true, value: (r) => r.p.terms.surfaceEnergy },
   { key: 'chemical', label: 'chemical, eV', numeric: true, value: (r) => r.p.terms.chemical },
   { key: 'elastic', label: 'elastic, eV', numeric: true, value: (r) => r.p.terms.elastic },
@@ -199,13 +199,13 @@ export function CandidatesView() {
                     {row.p.pair}
                   </th>
                   <td>{row.p.architecture}</td>
-                  <td>{row.p.verdicts.asMade}</td>
                   <td>
                     {row.p.confidence.toFixed(2)}
                     {row.p.certainty.uncertain ? <span className="small muted"> uncertain</span> : null}
                   </td>
                   <td>{row.p.surfaceElement ?? '—'}</td>
                   <td>{row.p.enrichment.toFixed(2)}</td>
+                  <td>{row.p.verdicts.asMade}</td>
                   <td>{fmt(row.p.terms.surfaceEnergy)}</td>
                   <td>{fmt(row.p.terms.chemical)}</td>
                   <td>{fmt(row.p.terms.elastic)}</td>

@@ -6,6 +6,7 @@
 import type { Prediction } from '../../../shared-model/prediction/predict';
 import { ENVIRONMENT_LABELS } from '../../../shared-model/prediction/environment';
 
+const signed = (x: number, digits: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(digits)}`;
 const jm2 = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(2)} J/m²`;
 
 function nm(x: number): string {
@@ -45,7 +46,7 @@ export function FlaskTerms(props: { prediction: Prediction }) {
           ? 'none in vacuum'
           : a.missing !== null
             ? a.missing
-            : `${a.adsorbate} on ${p.elementA} ${a.energyAEv?.toFixed(1)} eV, on ${p.elementB} ${a.energyBEv?.toFixed(1)} eV; coverage ${a.coverage.toFixed(2)} per surface atom at ${p.pressureBar} bar → ${a.termBEv.toFixed(2)} eV for ${p.elementB} at the surface${a.drawnOut ? ` (draws ${a.drawnOut} out)` : ''}; ${a.source}`}
+            : `${a.adsorbate} on ${p.elementA} ${signed(a.energyAEv ?? 0, 1)} eV, on ${p.elementB} ${signed(a.energyBEv ?? 0, 1)} eV; coverage ${a.coverage.toFixed(2)} per surface atom at ${p.pressureBar} bar → ${signed(a.termBEv, 2)} eV for ${p.elementB} at the surface${a.drawnOut ? ` (draws ${a.drawnOut} out)` : ''}; ${a.source}`}
       </p>
       <p data-testid="term-wetting">
         <strong>Wetting</strong>:{' '}
