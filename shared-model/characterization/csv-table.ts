@@ -10,6 +10,7 @@
  */
 import Papa from 'papaparse/papaparse.js';
 import { invalid } from '../api/result';
+import { PLAIN_NUMBER } from '../text/user-number';
 
 export type DecimalSeparator = 'auto' | '.' | ',';
 
@@ -29,7 +30,8 @@ export interface CsvTable {
 }
 
 const NUMBER_DOT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
-const NUMBER_COMMA = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/;
+/** With decimal commas a field is a number in the typed-number reader's sense (one "." or ","). */
+const NUMBER_COMMA = PLAIN_NUMBER;
 
 /** Parses one field as a number; null when it is not one. */
 export function parseNumberField(raw: string, decimalComma: boolean): number | null {
