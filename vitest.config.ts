@@ -38,6 +38,8 @@ export default defineConfig({
           ],
         },
       },
+      // Attacks, crashes, fuzzing (`npm run test:trust`; .ci/run runs them through `npm test`).
+      { extends: true, test: { name: 'trust', include: ['test/trust/**/*.test.ts'] } },
       {
         extends: true,
         test: { name: 'browser', include: ['test/e2e/**/*.test.ts'], testTimeout: TIMEOUTS.browserTestMs },

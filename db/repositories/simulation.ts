@@ -192,3 +192,16 @@ export function latestFinishedRun(
     ? { label: row.label, engineVersion: row.engine_version, createdAt: row.created_at }
     : null;
 }
+
+/** Owners (process tags) of runs still queued or running. */
+export function unfinishedRunOwners(db: SqliteDatabase): string[] {
+  const rows = db.prepare("SELECT DISTINCT owner FROM simulation_runs WHERE status IN ('queued', 'running')").all() as { owner: string }[];
+  return rows.map((row) => row.owner);
+}
+
+/** Ends the queued and running runs of one owner as failed with the reason (its process is gone). */
+export function markOwnerRunsInterrupted(db: SqliteDatabase, owner: string, reason: string): number {
+  return db
+    .prepare("UPDATE simulation_runs SET status = 'failed', error = ?, finished_at = ? WHERE owner = ? AND status IN ('queued', 'running')")
+    .run(reason, nowIso(), owner).changes;
+}

@@ -6,6 +6,7 @@
 import { StoreOpenError } from '../../db/integrity';
 import { restoreStore, RestoreError } from '../../db/restore';
 import { openStore, type OpenStoreOptions } from '../../db/store';
+import { interruptRunsOfDeadProcesses } from '../workers/montecarlo-queue';
 import type { ServiceContext } from './context';
 import { shutdownServices } from './lifecycle';
 
@@ -13,7 +14,9 @@ export type WorkspaceOptions = OpenStoreOptions;
 
 /** Opens (creating or migrating as needed) the store in `options.dataDir` and returns the services' context. */
 export function openWorkspace(options: WorkspaceOptions): ServiceContext {
-  return { store: openStore(options) };
+  const store = openStore(options);
+  interruptRunsOfDeadProcesses(store);
+  return { store };
 }
 
 /** Stops background jobs (Monte Carlo runs are stored as cancelled), then closes the store. */

@@ -25,6 +25,8 @@ import {
   saveProgress,
   saveResult,
   touchHeartbeat,
+  unfinishedRunOwners,
+  markOwnerRunsInterrupted,
 } from '../../db/repositories/simulation';
 import type { SimulationRunSummary } from '../../shared-model/api/simulation';
 import { DomainError } from '../../shared-model/api/result';
@@ -32,6 +34,35 @@ import { engineVersionFor, planSimulation, type SimulationProgress, type Simulat
 import type { WorkerInput, WorkerMessage } from './montecarlo-messages';
 
 const HEARTBEAT_MS = 5_000;
+/** At most this many runs wait to start per process; more is refused with a message (a bound on memory). */
+export const MAX_QUEUED = 200;
+export const APP_CLOSED = 'cancelled (app closed)';
+
+/** True when a process with this id exists (EPERM: it exists but belongs to another account). */
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    return (error as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/**
+ * At start: runs left queued or running by a process of this machine that no longer exists (killed, crashed) are
+ * marked interrupted at once, instead of after SILENT_AFTER_MS without heartbeat. Returns how many were marked.
+ */
+export function interruptRunsOfDeadProcesses(store: Store): number {
+  let marked = 0;
+  for (const owner of unfinishedRunOwners(store.db)) {
+    const pid = Number.parseInt(owner.split('-')[0] ?? '', 10);
+    if (!Number.isInteger(pid) || pid <= 0 || pid === process.pid || processAlive(pid)) continue;
+    const reason = `interrupted: the Pairwright process running it (pid ${pid}) ended before the run finished; start it again`;
+    marked += markOwnerRunsInterrupted(store.db, owner, reason);
+  }
+  return marked;
+}
+
 /** A run whose owner has not refreshed its heartbeat for this long is reported as interrupted. */
 export const SILENT_AFTER_MS = 60_000;
 const CANCEL_GRACE_MS = 10_000;
@@ -85,8 +116,14 @@ export class MonteCarloQueue {
     return this.store.db.open;
   }
 
-  /** Stores a new run as queued and starts it when a worker is free. */
+  /** Stores a new run as queued and starts it when a worker is free; refuses when MAX_QUEUED runs wait already. */
   enqueue(spec: SimulationSpec, label: string, pairId: number | null): SimulationRunSummary {
+    if (this.waiting.length >= MAX_QUEUED) {
+      throw new DomainError(
+        'conflict',
+        `the run queue is full: ${MAX_QUEUED} runs are waiting to start; cancel some or wait for them to finish`,
+      );
+    }
     const plan = planSimulation(spec);
     const summary = insertRun(this.store.db, { spec, label, pairId, engineVersion: engineVersionFor(spec), plannedAtoms: plan.atoms, totalSweeps: plan.totalSweeps, owner: this.owner });
     this.waiting.push({ id: summary.id, spec });
@@ -145,12 +182,17 @@ export class MonteCarloQueue {
     return new Promise((resolve) => this.idleWaiters.push(resolve));
   }
 
-  /** Stops every worker (closing the store or the app); their runs end as cancelled. */
+  /**
+   * Stops every worker (closing the store or the app); their runs end as 'cancelled (app closed)'. Each run is
+   * stored as ended before its worker is stopped, so the worker's exit is not mistaken for a failure.
+   */
   async close(): Promise<void> {
-    for (const entry of this.waiting.splice(0)) if (this.dbOpen) markEnded(this.store.db, entry.id, 'cancelled', 'Pairwright closed before the run started');
+    for (const entry of this.waiting.splice(0)) {
+      if (this.dbOpen) markEnded(this.store.db, entry.id, 'cancelled', `${APP_CLOSED}: Pairwright closed before the run started`);
+    }
     const runs = [...this.active.values()];
+    for (const run of runs) this.finish(run, () => markEnded(this.store.db, run.id, 'cancelled', `${APP_CLOSED}: Pairwright closed during the run`));
     await Promise.all(runs.map((run) => run.worker.terminate()));
-    for (const run of runs) this.finish(run, () => markEnded(this.store.db, run.id, 'cancelled', 'Pairwright closed during the run'));
     if (this.heartbeat) clearInterval(this.heartbeat);
     this.heartbeat = null;
   }
