@@ -12,6 +12,7 @@ import { outcomeAnalysisHandlers, outcomeHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
 import { predictionHandlers } from './prediction';
+import { screenHandlers } from './screen';
 import { simulationHandlers } from './simulation';
 
 export const handlers: HandlerMap<OperationName> = {
@@ -25,4 +26,5 @@ export const handlers: HandlerMap<OperationName> = {
   ...benchSheetHandlers,
   ...simulationHandlers,
   ...backupHandlers,
+  ...screenHandlers,
 };

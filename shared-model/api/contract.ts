@@ -13,6 +13,7 @@ import type { OperationSpec } from './operation';
 import { outcomeAnalysisOperations, outcomeOperations } from './outcomes';
 import { pairOperations } from './pairs';
 import { predictionOperations } from './prediction';
+import { screenOperations } from './screen';
 import { simulationOperations } from './simulation';
 
 export const operations = {
@@ -26,6 +27,7 @@ export const operations = {
   ...benchSheetOperations,
   ...simulationOperations,
   ...backupOperations,
+  ...screenOperations,
 } satisfies Record<string, OperationSpec<z.ZodType, unknown>>;
 
 export type Operations = typeof operations;

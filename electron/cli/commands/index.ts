@@ -7,6 +7,7 @@ import { helpCommands } from './help';
 import { outcomeCommands } from './outcomes';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
+import { screenCommands } from './screen';
 import { simulationCommands } from './simulation';
 import { storeCommands } from './store';
 
@@ -15,6 +16,7 @@ export const commands: CliCommand[] = [
   ...pairCommands,
   ...predictionCommands,
   ...simulationCommands,
+  ...screenCommands,
   ...batchCommands,
   ...benchSheetCommands,
   ...outcomeCommands,
