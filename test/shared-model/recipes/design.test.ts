@@ -5,7 +5,7 @@ import { batchDesignInputSchema, type BatchDesignRequest } from '../../../shared
 import { seedsFromBatch, seedBatchMetal } from '../../../shared-model/recipes/lineage';
 import { prepareReagent } from '../../../shared-model/recipes/reagent';
 import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
-import { auSeeds, ptNi } from '../../support/sample-batches';
+import { auOnAg, auSeeds, ptNi, ptNiPolyol } from '../../support/sample-batches';
 
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 // Kittel, Introduction to Solid State Physics, 8th ed. (from memory)
@@ -87,18 +87,8 @@ describe('co-reduction of a Pt75Ni25 alloy, worked by hand', () => {
 });
 
 describe('seed-mediated growth', () => {
-  const agAu: BatchDesignRequest = {
-    elementA: 'Au',
-    elementB: 'Ag',
-    target: 'Ag@Au',
-    route: 'seed-mediated',
-    size: { kind: 'core-shell', shellMonolayers: 2 },
-    batchVolumeMl: 20,
-    seeds: { metal: 'Ag', diameterNm: 20, metalMm: 0.5, volumeMl: 5 },
-    precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 10 }],
-    reducer: { reagentKey: 'ascorbic-acid', excess: 4, stockMm: 100 },
-    capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
-  };
+  // Au shell on 20 nm Ag seeds: the galvanic-replacement case (test/support/sample-batches.ts)
+  const agAu = auOnAg;
 
   it('Au shell on Ag seeds: galvanic replacement quantified, three Ag per Au', () => {
     const d = design(agAu);
@@ -167,21 +157,7 @@ describe('seed-mediated growth', () => {
 
 describe('other routes', () => {
   it('polyol: ethylene glycol is solvent and reducer, its electron excess is reported', () => {
-    const d = design({
-      elementA: 'Pt',
-      elementB: 'Ni',
-      target: 'alloy',
-      route: 'polyol',
-      size: { kind: 'alloy', diameterNm: 5, xB: 0.5 },
-      amount: { kind: 'total-metal', totalMetalMmol: 0.2 },
-      batchVolumeMl: 20,
-      precursors: [
-        { element: 'Pt', reagentKey: 'pt-acac2' },
-        { element: 'Ni', reagentKey: 'ni-acetate-4h2o' },
-      ],
-      solvent: { reagentKey: 'ethylene-glycol', volumeMl: 20 },
-      capping: { reagentKey: 'pvp', molPerMolMetal: 10 },
-    });
+    const d = design(ptNiPolyol);
     expect(d.reagents.filter((r) => r.key === 'ethylene-glycol')).toHaveLength(1);
     // 20 mL × 1.113 g/mL = 22.26 g / 62.068 g/mol = 358.6 mmol EG; × 2 e⁻ = 717.3 mmol e⁻
     // need: 0.1 × 2 (Pt II) + 0.1 × 2 (Ni II) = 0.4 mmol e⁻ → 1793-fold

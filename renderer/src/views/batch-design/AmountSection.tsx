@@ -1,7 +1,7 @@
 /** How much: total metal or particle concentration (not for seeded growth), batch volume, temperature. */
 import { Field } from '../../components/Field';
 import type { BatchFormState } from './batch-form';
-import { Section, type SectionProps } from './form-parts';
+import { DecimalInput, Section, type SectionProps } from './form-parts';
 
 export function AmountSection({ form, set, errors }: SectionProps) {
   return (
@@ -13,12 +13,7 @@ export function AmountSection({ form, set, errors }: SectionProps) {
           error={errors.amount}
         >
           <span className="input-with-unit">
-            <input
-              name="amount"
-              inputMode="decimal"
-              value={form.amountValue}
-              onChange={(e) => set('amountValue')(e.target.value)}
-            />
+            <DecimalInput name="amount" value={form.amountValue} onChange={set('amountValue')} />
             <select
               aria-label="Amount given as"
               value={form.amountKind}
@@ -31,20 +26,10 @@ export function AmountSection({ form, set, errors }: SectionProps) {
         </Field>
       ) : null}
       <Field label="Batch volume (mL)" name="batchVolumeMl" error={errors.batchVolumeMl}>
-        <input
-          name="batchVolumeMl"
-          inputMode="decimal"
-          value={form.batchVolumeMl}
-          onChange={(e) => set('batchVolumeMl')(e.target.value)}
-        />
+        <DecimalInput name="batchVolumeMl" value={form.batchVolumeMl} onChange={set('batchVolumeMl')} />
       </Field>
       <Field label="Highest temperature (°C)" name="temperatureC" error={errors.temperatureC} hint="default by route">
-        <input
-          name="temperatureC"
-          inputMode="decimal"
-          value={form.temperatureC}
-          onChange={(e) => set('temperatureC')(e.target.value)}
-        />
+        <DecimalInput name="temperatureC" value={form.temperatureC} onChange={set('temperatureC')} />
       </Field>
     </Section>
   );

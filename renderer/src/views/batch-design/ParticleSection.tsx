@@ -1,7 +1,7 @@
 /** The particle: how its size is given (alloy, core + shell, overall + shell, one metal) and its numbers. */
 import { Field } from '../../components/Field';
 import type { SizeKind } from './batch-form';
-import { ElementSelect, Section, type SectionProps } from './form-parts';
+import { DecimalInput, ElementSelect, Section, type SectionProps } from './form-parts';
 
 export function ParticleSection({ form, set, errors }: SectionProps) {
   const seedMode = form.route === 'seed-mediated';
@@ -26,22 +26,12 @@ export function ParticleSection({ form, set, errors }: SectionProps) {
           name="size.diameterNm"
           error={errors['size.diameterNm']}
         >
-          <input
-            name="size.diameterNm"
-            inputMode="decimal"
-            value={form.diameterNm}
-            onChange={(e) => set('diameterNm')(e.target.value)}
-          />
+          <DecimalInput name="size.diameterNm" value={form.diameterNm} onChange={set('diameterNm')} />
         </Field>
       ) : null}
       {!seedMode && kind === 'alloy' ? (
         <Field label={`Composition (at.% ${form.elementB || 'B'})`} name="size.xB" error={errors['size.xB']}>
-          <input
-            name="size.xB"
-            inputMode="decimal"
-            value={form.compositionPct}
-            onChange={(e) => set('compositionPct')(e.target.value)}
-          />
+          <DecimalInput name="size.xB" value={form.compositionPct} onChange={set('compositionPct')} />
         </Field>
       ) : null}
       {!seedMode && kind === 'single-metal' ? (
@@ -56,23 +46,13 @@ export function ParticleSection({ form, set, errors }: SectionProps) {
       ) : null}
       {!seedMode && kind === 'core-shell' ? (
         <Field label="Core diameter (nm)" name="size.coreDiameterNm" error={errors['size.coreDiameterNm']}>
-          <input
-            name="size.coreDiameterNm"
-            inputMode="decimal"
-            value={form.coreDiameterNm}
-            onChange={(e) => set('coreDiameterNm')(e.target.value)}
-          />
+          <DecimalInput name="size.coreDiameterNm" value={form.coreDiameterNm} onChange={set('coreDiameterNm')} />
         </Field>
       ) : null}
       {hasShell ? (
         <Field label={`Shell (${overall ? 'nm' : form.shellUnit})`} name="shell" error={errors.shell}>
           <span className="input-with-unit">
-            <input
-              name="shell"
-              inputMode="decimal"
-              value={form.shellValue}
-              onChange={(e) => set('shellValue')(e.target.value)}
-            />
+            <DecimalInput name="shell" value={form.shellValue} onChange={set('shellValue')} />
             {!overall ? (
               <select
                 aria-label="Shell unit"

@@ -1,11 +1,7 @@
 /** Catalog reagents of the batch: a precursor (and stock) per metal, reducer, capping agent, solvent. */
 import type { CatalogReagent } from '../../../../shared-model/api/batches';
 import { Field } from '../../components/Field';
-import { ReagentSelect, Section, type SectionProps } from './form-parts';
-
-function numberInput(name: string, value: string, onChange: (value: string) => void) {
-  return <input name={name} inputMode="decimal" value={value} onChange={(e) => onChange(e.target.value)} />;
-}
+import { DecimalInput, ReagentSelect, Section, type SectionProps } from './form-parts';
 
 export function ReagentsSection({ form, set, errors, catalog }: SectionProps & { catalog: CatalogReagent[] }) {
   const precursorsOf = (element: string) => catalog.filter((r) => r.metal?.symbol === element);
@@ -38,7 +34,7 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
             />
           </Field>
           <Field label="Stock (mM)" name={`stock${slot}`} error={errors[`stock${slot}`]}>
-            {numberInput(`stock${slot}`, stock, set(slot === 'A' ? 'stockA' : 'stockB'))}
+            <DecimalInput name={`stock${slot}`} value={stock} onChange={set(slot === 'A' ? 'stockA' : 'stockB')} />
           </Field>
         </div>
       ))}
@@ -52,10 +48,10 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
         />
       </Field>
       <Field label="Excess (× electron balance)" name="reducer.excess" error={errors['reducer.excess']}>
-        {numberInput('reducer.excess', form.reducerExcess, set('reducerExcess'))}
+        <DecimalInput name={'reducer.excess'} value={form.reducerExcess} onChange={set('reducerExcess')} />
       </Field>
       <Field label="Reducer stock (mM)" name="reducer.stockMm" error={errors['reducer.stockMm']}>
-        {numberInput('reducer.stockMm', form.reducerStock, set('reducerStock'))}
+        <DecimalInput name={'reducer.stockMm'} value={form.reducerStock} onChange={set('reducerStock')} />
       </Field>
       <Field label="Capping agent" name="capping" error={errors.capping}>
         <ReagentSelect
@@ -72,7 +68,7 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
           name="capping.molPerMolMetal"
           error={errors['capping.molPerMolMetal']}
         >
-          {numberInput('capping.molPerMolMetal', form.cappingRatio, set('cappingRatio'))}
+          <DecimalInput name={'capping.molPerMolMetal'} value={form.cappingRatio} onChange={set('cappingRatio')} />
         </Field>
       ) : null}
       <Field label="Solvent" name="solvent" error={errors.solvent} hint="water makes up the volume if none">
@@ -86,7 +82,7 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
       </Field>
       {form.solventKey ? (
         <Field label="Solvent volume (mL)" name="solvent.volumeMl" error={errors['solvent.volumeMl']}>
-          {numberInput('solvent.volumeMl', form.solventVolumeMl, set('solventVolumeMl'))}
+          <DecimalInput name={'solvent.volumeMl'} value={form.solventVolumeMl} onChange={set('solventVolumeMl')} />
         </Field>
       ) : null}
     </Section>

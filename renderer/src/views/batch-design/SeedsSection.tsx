@@ -1,7 +1,7 @@
 /** Seeds of a seed-mediated batch: a saved seed batch (its measured values are used) or typed values. */
 import type { BatchSummary } from '../../../../shared-model/api/batches';
 import { Field } from '../../components/Field';
-import { ElementSelect, Section, type SectionProps } from './form-parts';
+import { DecimalInput, ElementSelect, Section, type SectionProps } from './form-parts';
 
 export function SeedsSection({ form, set, errors, batches }: SectionProps & { batches: BatchSummary[] }) {
   const concLabel = form.seedConcKind === 'particles' ? 'Seeds per mL' : 'Seed metal (mM)';
@@ -35,21 +35,11 @@ export function SeedsSection({ form, set, errors, batches }: SectionProps & { ba
       {form.seedBatchId === '' ? (
         <>
           <Field label="Seed diameter (nm)" name="seeds.diameterNm" error={errors['seeds.diameterNm']}>
-            <input
-              name="seeds.diameterNm"
-              inputMode="decimal"
-              value={form.seedDiameterNm}
-              onChange={(e) => set('seedDiameterNm')(e.target.value)}
-            />
+            <DecimalInput name="seeds.diameterNm" value={form.seedDiameterNm} onChange={set('seedDiameterNm')} />
           </Field>
           <Field label={concLabel} name="seeds.particlesPerMl" error={errors['seeds.particlesPerMl']}>
             <span className="input-with-unit">
-              <input
-                name="seeds.particlesPerMl"
-                inputMode="decimal"
-                value={form.seedConc}
-                onChange={(e) => set('seedConc')(e.target.value)}
-              />
+              <DecimalInput name="seeds.particlesPerMl" value={form.seedConc} onChange={set('seedConc')} />
               <select
                 aria-label="Seed concentration unit"
                 value={form.seedConcKind}
@@ -63,12 +53,7 @@ export function SeedsSection({ form, set, errors, batches }: SectionProps & { ba
         </>
       ) : null}
       <Field label="Seed volume used (mL)" name="seeds.volumeMl" error={errors['seeds.volumeMl']}>
-        <input
-          name="seeds.volumeMl"
-          inputMode="decimal"
-          value={form.seedVolumeMl}
-          onChange={(e) => set('seedVolumeMl')(e.target.value)}
-        />
+        <DecimalInput name="seeds.volumeMl" value={form.seedVolumeMl} onChange={set('seedVolumeMl')} />
       </Field>
     </Section>
   );

@@ -57,3 +57,10 @@ export function ElementSelect(props: {
     </select>
   );
 }
+
+/** A text input for a typed number (the form model reads it: decimal comma, exponent). */
+export function DecimalInput(props: { name: string; value: string; onChange: (value: string) => void }) {
+  return (
+    <input name={props.name} inputMode="decimal" value={props.value} onChange={(e) => props.onChange(e.target.value)} />
+  );
+}
