@@ -1,4 +1,4 @@
-// Bundles the Electron main process, the preload, the Monte Carlo worker and the `pairwright` CLI into
+// Bundles the Electron main process, the preload, the Monte Carlo worker, the `pairwright` CLI and the browser host into
 // dist-electron/, and copies the SQL migrations beside them. Used by `npm start`, `npm run dist` and `npm run build`
 // (bin/pairwright.mjs runs the CLI bundle when it is newer than the sources: it starts several times faster than
 // running the TypeScript through tsx). The renderer is built separately by vite (dist/renderer).
@@ -26,6 +26,15 @@ export async function buildDesktop() {
     ...common,
     entryPoints: [join(root, 'electron', 'cli', 'bin.ts')],
     outfile: join(out, 'cli.mjs'),
+    format: 'esm',
+    sourcemap: false,
+    banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
+  });
+  // the browser host of `npm run serve` (scripts/serve.mjs runs it when it is newer than the sources)
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'host', 'serve.ts')],
+    outfile: join(out, 'serve.mjs'),
     format: 'esm',
     sourcemap: false,
     banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },

@@ -1,0 +1,2 @@
+export function staleRendererSource(): string | null;
+export function staleHostSource(): string | null;
