@@ -100,7 +100,13 @@ export function getBatch(db: SqliteDatabase, id: number, field = 'id'): StoredBa
 
 export function listBatchSummaries(
   db: SqliteDatabase,
-  filter: { campaignId?: number; status?: BatchStatus },
+  filter: {
+    campaignId?: number | undefined;
+    status?: BatchStatus | undefined;
+    statuses?: readonly BatchStatus[] | undefined;
+    /** Batches of these campaigns are left out (archived campaigns); batches of no campaign stay. */
+    excludeCampaignIds?: readonly number[] | undefined;
+  },
 ): BatchSummary[] {
   const where: string[] = [];
   const params: (string | number)[] = [];
@@ -111,6 +117,14 @@ export function listBatchSummaries(
   if (filter.status !== undefined) {
     where.push('status = ?');
     params.push(filter.status);
+  }
+  if (filter.statuses !== undefined) {
+    where.push('status IN (SELECT value FROM json_each(?))');
+    params.push(JSON.stringify(filter.statuses));
+  }
+  if (filter.excludeCampaignIds !== undefined && filter.excludeCampaignIds.length > 0) {
+    where.push('(campaign_id IS NULL OR campaign_id NOT IN (SELECT value FROM json_each(?)))');
+    params.push(JSON.stringify(filter.excludeCampaignIds));
   }
   const rows = db
     .prepare(

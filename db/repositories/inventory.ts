@@ -76,3 +76,12 @@ export function removeInventory(db: SqliteDatabase, id: number): void {
   const info = db.prepare('DELETE FROM inventory WHERE id = ?').run(id);
   if (info.changes === 0) throw new DomainError('not_found', `no inventory entry with id ${id}`, 'id');
 }
+
+/** Changes a row's amount by `delta` (in its unit; it may go below zero); null when the row is gone. */
+export function adjustInventory(db: SqliteDatabase, id: number, delta: number): { before: number; after: number } | null {
+  const row = db.prepare('SELECT amount FROM inventory WHERE id = ?').get(id) as { amount: number } | undefined;
+  if (!row) return null;
+  const after = row.amount + delta;
+  db.prepare('UPDATE inventory SET amount = ?, updated_at = ? WHERE id = ?').run(after, nowIso(), id);
+  return { before: row.amount, after };
+}

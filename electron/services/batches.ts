@@ -3,7 +3,8 @@
  * batch, measured values first), asks the thermodynamic model where the pair's surface element sits,
  * designs the batch, and keeps saved batches as computed (catalog edits are shown, never applied).
  */
-import { getCampaign } from '../../db/repositories/campaigns';
+import { listBatchHistory } from '../../db/repositories/batch-history';
+import { getCampaign, listCampaigns } from '../../db/repositories/campaigns';
 import { getPair } from '../../db/repositories/pairs';
 import {
   getBatch,
@@ -11,13 +12,12 @@ import {
   listBatchSummaries,
   removeBatch,
   updateBatchRecords,
-  updateBatchStatus,
   type StoredBatch,
 } from '../../db/repositories/batches';
 import { addCatalogReagent, currentRevisions, editCatalogReagent, listCatalog } from '../../db/repositories/catalog';
 import { listInventory, removeInventory, upsertInventory } from '../../db/repositories/inventory';
 import { nowIso, type SqliteDatabase } from '../../db/store';
-import { statusMoveAllowed, type batchOperations, type CatalogChange, type SavedBatch } from '../../shared-model/api/batches';
+import type { batchOperations, CatalogChange, SavedBatch } from '../../shared-model/api/batches';
 import { DomainError, invalid } from '../../shared-model/api/result';
 import { asMadeForBatch } from '../../shared-model/prediction/as-made';
 import { designBatch, type BatchDesign, type SurfaceAnswer, type SurfaceQuestion } from '../../shared-model/recipes/design';
@@ -26,6 +26,7 @@ import { seedBatchMetal, seedsFromBatch } from '../../shared-model/recipes/linea
 import { prepareReagent } from '../../shared-model/recipes/reagent';
 import { buildReagentList, reagentListCsv, type ReagentList } from '../../shared-model/recipes/reagent-list';
 import { stockAges } from '../../shared-model/recipes/stocks';
+import { setBatchStatus } from './batch-status';
 import type { HandlerMap } from './context';
 
 /** Replaces the seeds of a growth batch by its seed batch's measured (else planned) size and concentration. */
@@ -33,6 +34,13 @@ export function resolveLineage(db: SqliteDatabase, input: BatchDesignInput): Bat
   const seeds = input.seeds;
   if (!seeds?.seedBatchId) return input;
   const seedBatch = getBatch(db, seeds.seedBatchId, 'seeds.seedBatchId');
+  if (seedBatch.status === 'planned') {
+    throw invalid(
+      'seeds.seedBatchId',
+      `batch #${seedBatch.id} "${seedBatch.name}" is still planned: only a made or characterized batch can give ` +
+        'seeds (mark it made first)',
+    );
+  }
   const metal = seedBatchMetal({ id: seedBatch.id, name: seedBatch.name, design: seedBatch.design });
   if (metal !== seeds.metal) throw invalid('seeds.metal', `batch #${seedBatch.id} made ${metal} seeds, not ${seeds.metal}`);
   const resolved = seedsFromBatch({ id: seedBatch.id, name: seedBatch.name, design: seedBatch.design, measured: seedBatch.measured }, metal, seeds.volumeMl);
@@ -116,6 +124,7 @@ function toSavedBatch(db: SqliteDatabase, batch: StoredBatch): SavedBatch {
     seedBatchId: batch.seedBatchId,
     measured: batch.measured,
     notes: batch.notes,
+    history: listBatchHistory(db, batch.id),
     createdAt: batch.createdAt,
     updatedAt: batch.updatedAt,
   };
@@ -183,16 +192,17 @@ export const batchHandlers: HandlerMap<keyof typeof batchOperations> = {
     return toSavedBatch(db, saved);
   },
 
-  'batches.list': (input, { store }) => listBatchSummaries(store.db, input),
+  'batches.list': (input, { store }) => {
+    const { includeArchived, ...filter } = input;
+    const archived = includeArchived || filter.campaignId !== undefined ? [] : listCampaigns(store.db, true).filter((c) => c.archived).map((c) => c.id);
+    return listBatchSummaries(store.db, { ...filter, excludeCampaignIds: archived });
+  },
 
   'batches.get': (input, { store }) => toSavedBatch(store.db, getBatch(store.db, input.id)),
 
   'batches.setStatus': (input, { store }) => {
-    const current = getBatch(store.db, input.id);
-    if (!statusMoveAllowed(current.status, input.status)) {
-      throw invalid('status', `a ${current.status} batch can move to ${current.status === 'planned' ? 'made' : current.status === 'made' ? 'characterized (or back to planned)' : 'planned'}, not to ${input.status}`);
-    }
-    return toSavedBatch(store.db, updateBatchStatus(store.db, input.id, input.status, input.measured));
+    const { batch, inventoryEffect } = setBatchStatus(store.db, input);
+    return { ...toSavedBatch(store.db, batch), inventoryEffect };
   },
 
   'batches.record': (input, { store }) => {

@@ -252,7 +252,8 @@ function recordOutcome(batch: SavedBatch, outcome: DemoOutcome, context: Service
 
 function advance(batch: SavedBatch, statuses: readonly ('made' | 'characterized')[], context: ServiceContext): void {
   for (const status of statuses) {
-    step(context, `status of "${batch.name}"`, 'batches.setStatus', { id: batch.id, status });
+    // Demo batches never touch the inventory: a real one must not lose invented amounts.
+    step(context, `status of "${batch.name}"`, 'batches.setStatus', { id: batch.id, status, inventory: false });
   }
 }
 

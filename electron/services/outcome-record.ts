@@ -4,7 +4,8 @@
  * call is the suggestion an observed "confirmed" refers to). Each part is analysed from its raw data and
  * stored beside its result and the analysis version. A failure in any part rolls back every part, and the
  * error names the part: its field is `<part>.<field>` (e.g. `lineScan.csvText`), its message starts with
- * the part's name.
+ * the part's name. A measurement moves the batch and its campaign pair to characterized, in the same
+ * transaction (batch-status.ts).
  */
 import { getBatchForOutcome, type BatchForOutcome } from '../../db/repositories/batches';
 import { insertComposition } from '../../db/repositories/outcome-compositions';
@@ -23,8 +24,11 @@ import { DomainError, invalid } from '../../shared-model/api/result';
 import { formatArchitecture, parseArchitecture } from '../../shared-model/architecture/labels';
 import { compareComposition } from '../../shared-model/characterization/composition';
 import { ANALYSIS_VERSION } from '../../shared-model/characterization/version';
+import { characterizedByOutcome } from './batch-status';
 import { analyseLineScanCsv, analyseSizeCsv } from './outcome-analysis';
 import { batchOutcome, suggestionFor } from './outcome-reads';
+
+const MEASUREMENT_PARTS: ReadonlySet<OutcomePart> = new Set(['sizes', 'composition', 'lineScan', 'observed']);
 
 type Part<Name extends OutcomePart> = NonNullable<OutcomeRecordInput[Name]>;
 
@@ -158,6 +162,12 @@ export function recordOutcome(db: SqliteDatabase, input: OutcomeRecordInput): Re
     store('observed', (observed) => storeObserved(db, batch, observed));
     store('notes', (notes) => setOutcomeNotes(db, batch.id, notes));
     store('files', (files) => storeFiles(db, batch, files));
-    return { recorded, outcome: batchOutcome(db, batch.id) };
+    // A measurement (not notes or file paths alone) makes the batch, and its campaign pair, characterized.
+    const measured = recorded.filter((part) => MEASUREMENT_PARTS.has(part));
+    const statusChanges =
+      measured.length > 0
+        ? characterizedByOutcome(db, batch.id, measured.map((part) => OUTCOME_PART_NAMES[part]))
+        : { batch: null, pair: null };
+    return { recorded, outcome: batchOutcome(db, batch.id), statusChanges };
   })();
 }

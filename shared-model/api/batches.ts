@@ -10,6 +10,7 @@ import type { BatchDesignInput } from '../recipes/design-input';
 import type { BatchDesign } from '../recipes/design';
 import { reagentInputSchema, type Reagent } from '../recipes/reagent';
 import { INVENTORY_UNITS, type InventoryItem, type ReagentList } from '../recipes/reagent-list';
+import type { InventoryMovement, UnmatchedReagent } from '../recipes/inventory-use';
 import type { StockAge } from '../recipes/stocks';
 import { operation } from './operation';
 import { idSchema, nameSchema } from './schemas';
@@ -49,6 +50,33 @@ export interface MeasuredSeeds {
   particlesPerMl: number | null;
 }
 
+/** One line of a batch's history (status moves and the inventory they moved), oldest first. */
+export interface BatchHistoryLine {
+  id: number;
+  event: 'status' | 'stock-taken' | 'stock-returned';
+  fromStatus: BatchStatus | null;
+  toStatus: BatchStatus | null;
+  text: string;
+  movements: { inventoryId: number; reagentKey: string; delta: number; unit: string }[];
+  /** For stock-taken: the line that gave the reagents back (null while in force). */
+  restoredBy: number | null;
+  at: string;
+}
+
+/** What a status move did to the inventory: taken when marked made, given back when that is undone. */
+export interface InventoryEffect {
+  kind: 'used' | 'restored';
+  movements: InventoryMovement[];
+  unmatched: UnmatchedReagent[];
+  /** Stocks that went below zero, rows removed since: said to the user, never hidden. */
+  warnings: string[];
+}
+
+export interface StatusChange extends SavedBatch {
+  /** null when the move touched no inventory (e.g. made → characterized, or the inventory switch off). */
+  inventoryEffect: InventoryEffect | null;
+}
+
 export interface SavedBatch {
   id: number;
   name: string;
@@ -67,6 +95,7 @@ export interface SavedBatch {
   seedBatchId: number | null;
   measured: MeasuredSeeds | null;
   notes: string;
+  history: BatchHistoryLine[];
   createdAt: string;
   updatedAt: string;
 }
@@ -124,20 +153,30 @@ export const batchOperations = {
   }),
   'batches.list': operation<BatchSummary[]>()({
     kind: 'query',
-    summary: 'List saved batches',
-    input: z.object({ campaignId: idSchema.optional(), status: statusSchema.optional() }),
+    summary:
+      "List saved batches, newest first (archived campaigns' batches only with includeArchived; " +
+      'statuses: only those, e.g. made and characterized for seed batches)',
+    input: z.object({
+      campaignId: idSchema.optional(),
+      status: statusSchema.optional(),
+      statuses: z.array(statusSchema).min(1, 'name at least one status').optional(),
+      includeArchived: z.boolean({ error: 'must be true or false' }).default(false),
+    }),
   }),
   'batches.get': operation<SavedBatch>()({
     kind: 'query',
     summary: 'One saved batch with catalog changes since and stock ages',
     input: z.object({ id: idSchema }),
   }),
-  'batches.setStatus': operation<SavedBatch>()({
+  'batches.setStatus': operation<StatusChange>()({
     kind: 'command',
-    summary: 'Move a batch planned → made → characterized (measured seed size and concentration may be recorded)',
+    summary:
+      'Move a batch planned → made → characterized (measured seed size and concentration may be recorded); ' +
+      'made takes its reagents from the inventory, back to planned gives them back (inventory: false leaves it)',
     input: z.object({
       id: idSchema,
       status: statusSchema,
+      inventory: z.boolean({ error: 'must be true or false' }).default(true),
       measured: z.object({ diameterNm: positiveMeasure('measured diameter (nm)'), particlesPerMl: positiveMeasure('measured concentration (particles/mL)') }).optional(),
     }),
   }),

@@ -251,6 +251,11 @@ export const OUTCOME_PART_NAMES: Record<OutcomePart, string> = {
 export interface RecordedOutcome {
   recorded: OutcomePart[];
   outcome: BatchOutcome;
+  /** What the record moved: the batch and its campaign pair to characterized (null when already so). */
+  statusChanges: {
+    batch: { from: string; to: string } | null;
+    pair: { id: number; from: string; to: string } | null;
+  };
 }
 
 const observedLabelSchema = z

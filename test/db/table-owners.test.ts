@@ -24,6 +24,7 @@ const TABLE_OWNERS: Record<string, string> = {
   batches: 'batches.ts',
   batch_lots: 'batches.ts',
   batch_stocks: 'batches.ts',
+  batch_history: 'batch-history.ts',
   inventory: 'inventory.ts',
   outcome_size_imports: 'outcome-sizes.ts',
   outcome_diameters: 'outcome-sizes.ts',
