@@ -82,6 +82,8 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     await expect.poll(() => page.getByTestId('sim-status').textContent(), { timeout: 60_000 }).toBe('done');
     await expect.poll(() => page.getByTestId('sim-architecture').textContent()).toMatch(/Ag|alloy/);
     expect(await page.getByTestId('sim-prediction-architecture').textContent()).toBeTruthy();
+    // equilibrium vs what a 1 h synthesis at that temperature reaches (interdiffusion length vs radius)
+    expect(await page.getByTestId('sim-kinetics').textContent()).toMatch(/L = √\(D̃t\) = .* vs radius/);
     expect(await page.getByTestId('radial-profile').locator('.recharts-xAxis .recharts-cartesian-axis-tick').count()).toBe(5); // centre, S−3 … surface
     expect(await page.getByTestId('particle-cross-section').locator('circle').count()).toBeGreaterThan(10);
     expect(await page.getByTestId('particle-surface').locator('circle').count()).toBeGreaterThan(50);

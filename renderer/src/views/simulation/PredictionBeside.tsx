@@ -1,4 +1,7 @@
-/** The Monte Carlo architecture beside the analytic prediction for the same pair, size and temperature. */
+/**
+ * The Monte Carlo architecture beside the analytic prediction for the same pair, size and temperature, and
+ * whether a synthesis of 1 h at that temperature reaches it (interdiffusion length against the radius).
+ */
 import { useMemo } from 'react';
 import { describeArchitecture } from '../../../../shared-model/architecture/labels';
 import type { SimulationResult } from '../../../../shared-model/montecarlo/simulate';
@@ -49,6 +52,11 @@ export function PredictionBeside(props: { result: SimulationResult; temperatureK
           <div className="small">no analytic prediction: {prediction.error}</div>
         )}
       </div>
+      {prediction.value ? (
+        <p className="small muted" data-testid="sim-kinetics" style={{ gridColumn: '1 / -1' }}>
+          Both are equilibrium arrangements. In a synthesis of {prediction.value.timeH} h at {props.temperatureK} K: {prediction.value.verdicts.text}.
+        </p>
+      ) : null}
     </div>
   );
 }
