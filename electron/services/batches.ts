@@ -151,7 +151,12 @@ function checkStocks(db: SqliteDatabase, stocks: readonly StockRecord[]): void {
 function reagentListFor(db: SqliteDatabase, batchIds: readonly number[]): ReagentList {
   const batches = batchIds.map((id, index) => getBatch(db, id, `batchIds.${index}`));
   return buildReagentList(
-    batches.map((b) => ({ batchId: b.id, batchName: b.name, reagents: b.design.reagents })),
+    batches.map((b) => ({
+      batchId: b.id,
+      batchName: b.name,
+      reagents: b.design.reagents,
+      context: { temperatureC: b.design.temperatureC, metals: b.design.metals.map((m) => m.element), aqueous: b.design.aqueous },
+    })),
     listInventory(db),
     listCatalog(db),
   );

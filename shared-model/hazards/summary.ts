@@ -76,6 +76,48 @@ export function reagentHazardBlock(profile: ReagentHazardProfile): ReagentHazard
 export interface SummaryContext extends IncompatibilityContext {
   /** Include the dry-nanopowder and aqua-regia glassware cautions (true for a synthesis). */
   benchCautions?: boolean;
+  /**
+   * Warnings worked out elsewhere (per batch, see batchWarnings) used instead of the rules over all the
+   * profiles together: reagents of different batches never meet in one flask.
+   */
+  warnings?: readonly IncompatibilityWarning[];
+}
+
+/** The reagents of one batch, for warnings that only reagents present together can trigger. */
+export interface BatchHazardProfiles {
+  batchId: number;
+  batchName: string;
+  profiles: readonly ReagentHazardProfile[];
+  context?: IncompatibilityContext;
+}
+
+export interface BatchWarning extends IncompatibilityWarning {
+  /** The batches it applies to (the same warning word for word in several batches is given once). */
+  batchIds: number[];
+}
+
+/**
+ * Incompatibility warnings batch by batch (each batch's reagents and conditions alone), each message led
+ * by the batches it applies to; the same warning in several batches is given once, naming them all.
+ */
+export function batchWarnings(batches: readonly BatchHazardProfiles[]): BatchWarning[] {
+  const merged = new Map<string, { warning: IncompatibilityWarning; batches: { id: number; name: string }[] }>();
+  for (const batch of batches) {
+    for (const warning of incompatibilityWarnings(batch.profiles, batch.context ?? {})) {
+      const key = `${warning.id}\u0000${warning.message}`;
+      const entry = merged.get(key) ?? { warning, batches: [] };
+      if (!entry.batches.some((b) => b.id === batch.batchId)) entry.batches.push({ id: batch.batchId, name: batch.batchName });
+      merged.set(key, entry);
+    }
+  }
+  return [...merged.values()].map(({ warning, batches: inBatches }) => {
+    const named = inBatches.map((b) => `#${b.id} ${b.name}`).join(', ');
+    return {
+      ...warning,
+      message: `${inBatches.length === 1 ? 'Batch' : 'Batches'} ${named}: ${warning.message}`,
+      batchIds: inBatches.map((b) => b.id),
+    };
+  });
 }
 
 export function summarizeHazards(profiles: readonly ReagentHazardProfile[], context: SummaryContext = {}): HazardSummary {
@@ -89,7 +131,7 @@ export function summarizeHazards(profiles: readonly ReagentHazardProfile[], cont
   }
   const codes = sortHCodes(byCode.keys());
   const hazards = codes.map((code) => ({ code, text: hazardStatement(code).text, reagents: [...(byCode.get(code) ?? [])] }));
-  const warnings = incompatibilityWarnings(profiles, context);
+  const warnings = context.warnings ? [...context.warnings] : incompatibilityWarnings(profiles, context);
   if (context.benchCautions) warnings.push(...standingBenchCautions());
   const streamIds = new Set<WasteStreamId>(profiles.map((p) => p.wasteStream));
   if (context.metals && context.metals.length > 0) streamIds.add(motherLiquorStream(context.metals, context.aqueous ?? false));

@@ -1,11 +1,13 @@
 /**
  * Reagent list for a set of planned batches: totals per reagent against the inventory the user keeps
- * (amount on hand, location, lot), shortfalls, a hazard summary across the list, and CSV export.
+ * (amount on hand, location, lot), shortfalls, stock-solution volumes, a hazard summary across the list
+ * (incompatibilities batch by batch: reagents of different batches never share a flask), and CSV export.
  * Comparisons are made in mass (mg): inventory volumes are converted with the reagent's density.
  */
 import Papa from 'papaparse';
 import { invalid } from '../api/result';
-import { summarizeHazards, type HazardSummary, type ReagentHazardProfile } from '../hazards/summary';
+import type { IncompatibilityContext } from '../hazards/incompatibilities';
+import { batchWarnings, summarizeHazards, type HazardSummary, type ReagentHazardProfile } from '../hazards/summary';
 import type { DesignedReagent } from './design';
 import type { Reagent } from './reagent';
 
@@ -24,6 +26,8 @@ export interface BatchReagents {
   batchId: number;
   batchName: string;
   reagents: readonly DesignedReagent[];
+  /** The batch's temperature, metals and solvent, for the warnings that depend on them. */
+  context?: IncompatibilityContext;
 }
 
 export type ReagentListStatus = 'enough' | 'short' | 'not in inventory' | 'cannot compare';
@@ -38,6 +42,8 @@ export interface ReagentListLine {
   totalMassMg: number | null;
   /** Neat-liquid volume in total (mL) for liquids; null for solids. */
   totalVolumeMl: number | null;
+  /** Stock-solution volume to pipette in total (mL), over the uses given as a stock; null when none is. */
+  totalStockVolumeMl: number | null;
   batchIds: number[];
   onHandMg: number | null;
   onHandText: string;
@@ -93,6 +99,7 @@ export function buildReagentList(batches: readonly BatchReagents[], inventory: r
           totalAmountMmol: 0,
           totalMassMg: 0,
           totalVolumeMl: reagent && (reagent.form === 'liquid' || reagent.form === 'solution') ? 0 : null,
+          totalStockVolumeMl: null,
           batchIds: [],
           onHandMg: null,
           onHandText: '',
@@ -107,6 +114,7 @@ export function buildReagentList(batches: readonly BatchReagents[], inventory: r
       line.totalAmountMmol = line.totalAmountMmol === null || use.amountMmol === null ? null : line.totalAmountMmol + use.amountMmol;
       line.totalMassMg = (line.totalMassMg ?? 0) + use.massMg;
       if (line.totalVolumeMl !== null && reagent?.densityGPerMl) line.totalVolumeMl += use.massMg / 1000 / reagent.densityGPerMl;
+      if (use.stockMm !== null && use.volumeMl !== null) line.totalStockVolumeMl = (line.totalStockVolumeMl ?? 0) + use.volumeMl;
       if (!line.batchIds.includes(batch.batchId)) line.batchIds.push(batch.batchId);
       lines.set(use.key, line);
     }
@@ -137,17 +145,38 @@ export function buildReagentList(batches: readonly BatchReagents[], inventory: r
   }
 
   const ordered = [...lines.values()].sort((a, b) => a.name.localeCompare(b.name));
-  const profiles: ReagentHazardProfile[] = ordered.flatMap((line) => {
-    const reagent = byKey.get(line.key);
-    return reagent
-      ? [{ key: reagent.key, name: reagent.name, hCodes: reagent.hCodes, signalWord: reagent.signalWord, tags: reagent.tags, wasteStream: reagent.wasteStream, ...(line.totalAmountMmol !== null ? { amountMmol: line.totalAmountMmol } : {}) }]
-      : [];
-  });
+  const profile = (key: string, amountMmol: number | null): ReagentHazardProfile[] => {
+    const reagent = byKey.get(key);
+    if (!reagent) return [];
+    const { name, hCodes, signalWord, tags, wasteStream } = reagent;
+    return [{ key, name, hCodes, signalWord, tags, wasteStream, ...(amountMmol !== null ? { amountMmol } : {}) }];
+  };
+  const profiles = ordered.flatMap((line) => profile(line.key, line.totalAmountMmol));
+  // Incompatibilities only within a batch (its reagents share a flask), summarised batch by batch.
+  const warnings = batchWarnings(
+    batches.map((batch) => ({
+      batchId: batch.batchId,
+      batchName: batch.batchName,
+      profiles: batchProfiles(batch).flatMap(([key, amountMmol]) => profile(key, amountMmol)),
+      ...(batch.context ? { context: batch.context } : {}),
+    })),
+  );
   return {
     batchIds: batches.map((b) => b.batchId),
     lines: ordered,
-    hazardSummary: summarizeHazards(profiles),
+    hazardSummary: summarizeHazards(profiles, { warnings }),
   };
+}
+
+/** Each reagent of a batch once (seeds and unweighed lines left out, as in the totals), with its amount. */
+function batchProfiles(batch: BatchReagents): [string, number | null][] {
+  const amounts = new Map<string, number | null>();
+  for (const use of batch.reagents) {
+    if (use.role === 'seeds' || use.massMg === null) continue;
+    const sum = amounts.has(use.key) ? amounts.get(use.key) ?? null : 0;
+    amounts.set(use.key, sum === null || use.amountMmol === null ? null : sum + use.amountMmol);
+  }
+  return [...amounts];
 }
 
 function rounded(value: number | null, digits = 4): string {
@@ -164,6 +193,7 @@ export function reagentListCsv(list: ReagentList): string {
     total_mmol: rounded(line.totalAmountMmol),
     total_mass_mg: rounded(line.totalMassMg),
     total_volume_ml: rounded(line.totalVolumeMl),
+    total_stock_ml: rounded(line.totalStockVolumeMl),
     batches: line.batchIds.join('; '),
     on_hand: line.onHandText,
     location: line.locations.join('; '),
@@ -174,7 +204,7 @@ export function reagentListCsv(list: ReagentList): string {
     signal_word: line.signalWord ?? '',
   }));
   return Papa.unparse(rows, {
-    columns: ['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word'],
+    columns: ['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'total_stock_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word'],
     newline: '\n',
   });
 }

@@ -62,8 +62,23 @@ describe('pairwright recipe / reagents / catalog', () => {
     expect(pt?.status).toBe('not in inventory');
     const list = runPairwright(['batches', 'list', '--data', data]);
     expect(list.stdout).toMatch(/PtNi B\s+Pt-Ni\s+alloy\s+co-reduction/);
+    // 1 g of H2PtCl6·6H2O in stock; the batch takes 0.075 mmol × 517.91 g/mol = 38.84 mg = 0.03884 g
+    const added = runPairwright(['inventory', 'add', 'h2ptcl6-6h2o', '1', 'g', '--location', 'desiccator 2', '--data', data]);
+    expect(added.status, added.stderr).toBe(0);
+    // 5 mg of NiCl2·6H2O; the batch takes 0.025 mmol × 237.69 g/mol = 5.94 mg: the stock goes below zero
+    runPairwright(['inventory', 'add', 'nicl2-6h2o', '5', 'mg', '--data', data]);
     const moved = runPairwright(['batches', 'status', String(first.batchId), 'made', '--data', data]);
+    expect(moved.status, moved.stderr).toBe(0);
     expect(moved.stdout).toContain('is made');
+    expect(moved.stdout).toMatch(/taken from the inventory:\n.*-0\.03884 g \(now 0\.9612 g\)/);
+    expect(moved.stdout).toMatch(/warning: Nickel.*now shows -0\.94/);
+    expect(moved.stdout).toMatch(/not matched: Sodium borohydride: not in the inventory/);
+    const stock = runPairwrightJson<{ reagentKey: string; amount: number }[]>(['inventory', '--data', data]);
+    expect(stock.find((i) => i.reagentKey === 'h2ptcl6-6h2o')?.amount).toBeCloseTo(1 - 0.075 * 0.5179097, 6);
+    const undone = runPairwright(['batches', 'status', String(first.batchId), 'planned', '--data', data]);
+    expect(undone.stdout).toMatch(/given back to the inventory:\n.*\+0\.03884 g \(now 1 g\)/);
+    const after = runPairwrightJson<{ reagentKey: string; amount: number }[]>(['inventory', '--data', data]);
+    expect(after.map((i) => i.amount)).toEqual([1, 5].map((v) => expect.closeTo(v, 9)));
   }, SLOW);
 
   it('lists the catalog as JSON', () => {

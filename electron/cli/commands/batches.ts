@@ -2,7 +2,7 @@
  * `pairwright recipe`, `pairwright reagents`, `pairwright catalog`, `pairwright batches …`: batch design
  * from the command line, with the same services as the app.
  */
-import type { BatchStatus, BatchSummary, CatalogReagent } from '../../../shared-model/api/batches';
+import type { BatchStatus, BatchSummary, CatalogReagent, InventoryRecord, StatusChange } from '../../../shared-model/api/batches';
 import { BATCH_STATUSES } from '../../../shared-model/api/batches';
 import type { BatchDesign } from '../../../shared-model/recipes/design';
 import type { BatchDesignRequest } from '../../../shared-model/recipes/design-input';
@@ -322,7 +322,65 @@ export const batchCommands: CliCommand[] = [
         status: requirePositional(args, 1, 'status') as BatchStatus,
         ...(diameter !== undefined || conc !== undefined ? { measured: { ...(diameter !== undefined ? { diameterNm: diameter } : {}), ...(conc !== undefined ? { particlesPerMl: conc } : {}) } } : {}),
       });
-      return { json: batch, text: `batch ${batch.id} "${batch.name}" is ${batch.status}` };
+      return { json: batch, text: statusText(batch) };
+    },
+  },
+  {
+    words: ['inventory'],
+    args: '',
+    summary: 'List the inventory (amount on hand, location, lot)',
+    options: {},
+    run: async (_args, context) => {
+      const items = await context.call('inventory.list', {});
+      return { json: items, text: inventoryTable(items) };
+    },
+  },
+  {
+    words: ['inventory', 'add'],
+    args: '<reagent key> <amount> <mg|g|kg|mL|L>',
+    summary: 'Add an inventory entry (see pairwright catalog for the keys)',
+    options: {
+      location: { type: 'string', description: 'where it is kept' },
+      lot: { type: 'string', description: 'lot number' },
+    },
+    run: async (args, context) => {
+      const item = await context.call('inventory.upsert', {
+        reagentKey: requirePositional(args, 0, 'reagent key'),
+        amount: readNumberText(requirePositional(args, 1, 'amount'), '<amount>'),
+        unit: requirePositional(args, 2, 'unit') as InventoryRecord['unit'],
+        location: optionalString(args, 'location') ?? '',
+        lot: optionalString(args, 'lot') ?? '',
+      });
+      return { json: item, text: `inventory #${item.id}: ${item.reagentName} ${item.amount} ${item.unit}` };
     },
   },
 ];
+
+function inventoryTable(items: readonly InventoryRecord[]): string {
+  if (items.length === 0) return 'The inventory is empty (pairwright inventory add <reagent key> <amount> <unit>).';
+  return formatTable(items, [
+    { header: '#', value: (i) => i.id },
+    { header: 'reagent', value: (i) => i.reagentName },
+    { header: 'amount', value: (i) => Number(i.amount.toPrecision(6)) },
+    { header: 'unit', value: (i) => i.unit },
+    { header: 'location', value: (i) => i.location },
+    { header: 'lot', value: (i) => i.lot },
+  ]);
+}
+
+/** The new status, then what it did to the inventory: taken or given back, warnings, unmatched reagents. */
+function statusText(change: StatusChange): string {
+  const lines = [`batch ${change.id} "${change.name}" is ${change.status}`];
+  const effect = change.inventoryEffect;
+  if (!effect) return lines.join('\n');
+  const shown = (value: number) => String(Number(value.toPrecision(4)));
+  lines.push(effect.kind === 'used' ? 'taken from the inventory:' : 'given back to the inventory:');
+  if (effect.movements.length === 0) lines.push('  nothing');
+  for (const m of effect.movements) {
+    const sign = m.delta < 0 ? '-' : '+';
+    lines.push(`  ${m.reagentName}: ${sign}${shown(Math.abs(m.delta))} ${m.unit} (now ${shown(m.after)} ${m.unit})`);
+  }
+  for (const warning of effect.warnings) lines.push(`warning: ${warning}`);
+  for (const u of effect.unmatched) lines.push(`not matched: ${u.reagentName}: ${u.reason}`);
+  return lines.join('\n');
+}

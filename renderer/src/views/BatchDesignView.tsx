@@ -28,7 +28,13 @@ import './batches.css';
 export function BatchDesignView() {
   const { campaignId, revision, bumpRevision } = useAppState();
   const catalogQuery = useQuery('reagents.catalog', {}, `catalog:${revision}`);
-  const batchesQuery = useQuery('batches.list', {}, `batches:${revision}`);
+  // The current campaign's batches (archived campaigns' batches hidden); the switch shows every batch.
+  const [everyBatch, setEveryBatch] = useState(false);
+  const listScope = everyBatch || campaignId === null ? { includeArchived: everyBatch } : { campaignId };
+  const batchesQuery = useQuery('batches.list', listScope, `batches:${JSON.stringify(listScope)}:${revision}`);
+  // Seeds come only from batches that were made (or characterized), of the same scope.
+  const seedScope = { ...listScope, statuses: ['made' as const, 'characterized' as const] };
+  const seedsQuery = useQuery('batches.list', seedScope, `seed-batches:${JSON.stringify(seedScope)}:${revision}`);
   const pairsQuery = useQuery('pairs.list', campaignId ? { campaignId } : null, `pairs:${campaignId}:${revision}`);
   const [form, setForm] = useState<BatchFormState>(EXAMPLE_BATCH_FORM);
   const [design, setDesign] = useState<BatchDesign | null>(null);
@@ -113,7 +119,7 @@ export function BatchDesignView() {
           general={general}
           catalog={catalog}
           pairs={pairsQuery.data ?? []}
-          batches={batchesQuery.data ?? []}
+          batches={seedsQuery.data ?? []}
           name={name}
           onName={setName}
           saved={saved}
@@ -130,6 +136,10 @@ export function BatchDesignView() {
           )}
           <section className="card" aria-label="Saved batches">
             <h2 className="card__title">Saved batches</h2>
+            <label className="small">
+              <input type="checkbox" checked={everyBatch} onChange={(e) => setEveryBatch(e.target.checked)} /> Show
+              every campaign’s batches, archived ones too
+            </label>
             {batchesQuery.error ? <Banner tone="error">{batchesQuery.error.message}</Banner> : null}
             <SavedBatches
               batches={batchesQuery.data ?? []}

@@ -1,5 +1,5 @@
 /**
- * Reagents: pick planned batches → totals per reagent against the inventory (shortfalls highlighted),
+ * Reagents: pick the current campaign's planned batches → totals per reagent against the inventory (shortfalls highlighted),
  * hazard summary across the list, CSV export and a printable page; the inventory and the catalog are
  * edited here too. The parts live in ./reagents/ (the form models in reagent-form.ts and inventory-form.ts,
  * testable without a browser).
@@ -18,12 +18,20 @@ import { ReagentTotals } from './reagents/ReagentTotals';
 import './batches.css';
 
 export function ReagentsView() {
-  const { revision, bumpRevision } = useAppState();
+  const { campaignId, revision, bumpRevision } = useAppState();
   const [showAll, setShowAll] = useState(false);
+  const [everyCampaign, setEveryCampaign] = useState(false);
+  const scope = everyCampaign || campaignId === null ? { includeArchived: everyCampaign } : { campaignId };
+  const batchFilter = showAll ? scope : { ...scope, status: 'planned' as const };
   const batchesQuery = useQuery(
     'batches.list',
-    showAll ? {} : { status: 'planned' },
-    `reagents-batches:${showAll}:${revision}`,
+    batchFilter,
+    `reagents-batches:${JSON.stringify(batchFilter)}:${revision}`,
+  );
+  const campaignsQuery = useQuery('campaigns.list', { includeArchived: true }, `reagents-campaigns:${revision}`);
+  const campaignNames = useMemo(
+    () => new Map((campaignsQuery.data ?? []).map((c) => [c.id, c.name])),
+    [campaignsQuery.data],
   );
   const catalogQuery = useQuery('reagents.catalog', {}, `reagents-catalog:${revision}`);
   const inventoryQuery = useQuery('inventory.list', {}, `inventory:${revision}`);
@@ -75,6 +83,9 @@ export function ReagentsView() {
             error={batchesQuery.error}
             showAll={showAll}
             onShowAll={setShowAll}
+            everyCampaign={everyCampaign}
+            onEveryCampaign={setEveryCampaign}
+            campaignName={campaignId !== null ? (campaignNames.get(campaignId) ?? null) : null}
             selected={selected}
             onToggle={toggle}
           />
@@ -101,6 +112,20 @@ export function ReagentsView() {
                 </button>
               </span>
             </div>
+            {chosen.length > 0 ? (
+              <ul className="small" aria-label="Batches in this list">
+                {(batchesQuery.data ?? [])
+                  .filter((b) => chosen.includes(b.id))
+                  .map((b) => (
+                    <li key={b.id}>
+                      #{b.id} {b.name}, saved {b.createdAt.slice(0, 10)} —{' '}
+                      {b.campaignId !== null
+                        ? `campaign ${campaignNames.get(b.campaignId) ?? `#${b.campaignId}`}`
+                        : 'no campaign'}
+                    </li>
+                  ))}
+              </ul>
+            ) : null}
             {message ? (
               <div className="no-print">
                 <Banner tone="info">{message}</Banner>
@@ -113,7 +138,13 @@ export function ReagentsView() {
               <ReagentTotals list={list} />
             )}
           </section>
-          {list ? <HazardBlock summary={list.hazardSummary} title="Hazard summary across the list" perReagent /> : null}
+          {list ? (
+            <HazardBlock
+              summary={list.hazardSummary}
+              title="Hazard summary across the list (incompatibilities batch by batch)"
+              perReagent
+            />
+          ) : null}
           <CatalogEditor catalog={catalogQuery.data ?? []} onSaved={bumpRevision} />
         </div>
       </div>

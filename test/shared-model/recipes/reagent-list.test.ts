@@ -89,7 +89,7 @@ describe('reagent list across batches', () => {
     const csv = reagentListCsv(list);
     const parsed = Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual(['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word']);
+    expect(parsed.meta.fields).toEqual(['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'total_stock_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word']);
     const row = parsed.data.find((d) => d.formula === 'H2PtCl6·6H2O');
     expect(Number(row?.total_mass_mg)).toBeCloseTo(90.63, 1);
     expect(row?.status).toBe('short');
@@ -104,5 +104,83 @@ describe('inventory units', () => {
     expect(inventoryMassMg({ amount: 0.001, unit: 'kg' }, null)).toBe(1000);
     expect(inventoryMassMg({ amount: 1, unit: 'L' }, 0.813)).toBeCloseTo(813000, 6);
     expect(inventoryMassMg({ amount: 1, unit: 'mL' }, null)).toBeNull();
+  });
+});
+
+describe('hazard cautions over a reagent list: incompatibilities only within a batch', () => {
+  // NaBH4 with an acid releases hydrogen violently ("danger", incompatibilities.ts, common practice);
+  // HAuCl4·3H2O is tagged as an acid. In one batch together: the danger line; in two batches: none.
+  const borohydrideOnly: BatchDesignRequest = {
+    elementA: 'Ni',
+    elementB: 'Pt',
+    target: 'alloy',
+    route: 'co-reduction',
+    size: { kind: 'single-metal', element: 'Ni', diameterNm: 5 },
+    amount: { kind: 'total-metal', totalMetalMmol: 0.05 },
+    batchVolumeMl: 50,
+    precursors: [{ element: 'Ni', reagentKey: 'nicl2-6h2o', stockMm: 20 }],
+    reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+  };
+  const goldOnly: BatchDesignRequest = {
+    elementA: 'Au',
+    elementB: 'Pt',
+    target: 'alloy',
+    route: 'co-reduction',
+    size: { kind: 'single-metal', element: 'Au', diameterNm: 15 },
+    amount: { kind: 'total-metal', totalMetalMmol: 0.025 },
+    batchVolumeMl: 100,
+    precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
+    reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
+  };
+  const goldWithBorohydride: BatchDesignRequest = { ...goldOnly, reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 } };
+  const lines = (request: BatchDesignRequest) => design(request).reagents;
+  const hydrolysis = (list: ReturnType<typeof buildReagentList>) =>
+    list.hazardSummary.warnings.filter((w) => w.id === 'borohydride-hydrolysis');
+
+  it('borohydride in one batch and a gold salt in another give no acid "danger" line', () => {
+    const list = buildReagentList(
+      [
+        { batchId: 1, batchName: 'Ni seeds', reagents: lines(borohydrideOnly), context: { aqueous: true } },
+        { batchId: 2, batchName: 'Au citrate', reagents: lines(goldOnly), context: { aqueous: true } },
+      ],
+      [],
+      catalog,
+    );
+    const found = hydrolysis(list);
+    expect(found.map((w) => w.severity)).toEqual(['caution']); // borohydride with water, in batch 1 only
+    expect(found[0]?.message).toMatch(/^Batch #1 Ni seeds: /);
+    expect(found[0]?.message).not.toMatch(/acid/);
+  });
+
+  it('the same two reagents in one batch do give it, naming that batch', () => {
+    const list = buildReagentList(
+      [
+        { batchId: 2, batchName: 'Au citrate', reagents: lines(goldOnly), context: { aqueous: true } },
+        { batchId: 5, batchName: 'Au borohydride', reagents: lines(goldWithBorohydride), context: { aqueous: true } },
+      ],
+      [],
+      catalog,
+    );
+    const found = hydrolysis(list);
+    expect(found.map((w) => w.severity)).toEqual(['danger']);
+    expect(found[0]?.message).toMatch(/^Batch #5 Au borohydride: .*acid/);
+  });
+
+  it('totals the stock-solution volumes to pipette per reagent', () => {
+    const one = design(ptNi);
+    const list = buildReagentList(
+      [
+        { batchId: 3, batchName: 'A', reagents: one.reagents },
+        { batchId: 4, batchName: 'B', reagents: one.reagents },
+      ],
+      [],
+      catalog,
+    );
+    // H2PtCl6: 0.075 mmol from a 20 mM stock = 3.75 mL per batch, 7.5 mL for two (hand-worked)
+    const platinum = list.lines.find((l) => l.key === 'h2ptcl6-6h2o');
+    expect(platinum?.totalStockVolumeMl).toBeCloseTo(7.5, 9);
+    const borohydride = list.lines.find((l) => l.key === 'nabh4');
+    const perBatch = one.reagents.find((r) => r.key === 'nabh4')?.volumeMl ?? Number.NaN;
+    expect(borohydride?.totalStockVolumeMl).toBeCloseTo(2 * perBatch, 9);
   });
 });

@@ -20,6 +20,15 @@ export function OpenedBatchBanner({ batch }: { batch: SavedBatch }) {
         .filter((s) => s.stale)
         .map((s) => ` The ${s.name} stock is ${formatNumber(s.ageHours, 3)} h old, beyond its limit.`)}
       {batch.lots.length > 0 ? ` Lots: ${batch.lots.map((l) => `${l.reagentKey} ${l.lot}`).join(', ')}.` : ''}
+      {batch.history.length > 0 ? (
+        <ol className="small" aria-label="Batch history">
+          {batch.history.map((line) => (
+            <li key={line.id}>
+              {line.at.slice(0, 16).replace('T', ' ')} — {line.text}
+            </li>
+          ))}
+        </ol>
+      ) : null}
     </Banner>
   );
 }

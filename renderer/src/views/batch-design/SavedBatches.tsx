@@ -1,9 +1,13 @@
-/** The saved batches: open one, move it planned → made → characterized (with measured values), use as seeds. */
+/**
+ * The saved batches: open one, move it planned → made (its reagents leave the inventory) → characterized
+ * (with measured values), undo made (they come back), use as seeds.
+ */
 import { useState } from 'react';
-import type { BatchSummary } from '../../../../shared-model/api/batches';
+import type { BatchSummary, StatusChange } from '../../../../shared-model/api/batches';
 import { call } from '../../api/client';
 import { Banner } from '../../components/Banner';
 import { formatNumber } from '../BatchResult';
+import { InventoryEffectNote } from './InventoryEffectNote';
 import { readMeasured } from './records-form';
 
 type Measured = { diameterNm?: number; particlesPerMl?: number };
@@ -18,12 +22,14 @@ export function SavedBatches(props: {
   const [measuring, setMeasuring] = useState<number | null>(null);
   const [diameter, setDiameter] = useState('');
   const [conc, setConc] = useState('');
+  const [changed, setChanged] = useState<StatusChange | null>(null);
   const move = async (batch: BatchSummary, status: 'made' | 'characterized' | 'planned', measured?: Measured) => {
     const result = await call('batches.setStatus', { id: batch.id, status, ...(measured ? { measured } : {}) });
     if (!result.ok) setError(result.error.message);
     else {
       setError(null);
       setMeasuring(null);
+      setChanged(result.value);
       props.onChanged();
     }
   };
@@ -33,11 +39,12 @@ export function SavedBatches(props: {
     else void move(batch, 'characterized', reading.measured);
   };
   if (props.batches.length === 0) {
-    return <p className="muted">No saved batches yet. Compute a batch and save it as planned.</p>;
+    return <p className="muted">No saved batches here yet. Compute a batch and save it as planned.</p>;
   }
   return (
     <>
       {error ? <Banner tone="error">{error}</Banner> : null}
+      {changed ? <InventoryEffectNote change={changed} /> : null}
       <table className="data-table" aria-label="Saved batches">
         <thead>
           <tr>
@@ -74,6 +81,16 @@ export function SavedBatches(props: {
                 {b.status === 'planned' ? (
                   <button type="button" className="button--quiet" onClick={() => void move(b, 'made')}>
                     Mark made
+                  </button>
+                ) : null}
+                {b.status === 'made' ? (
+                  <button type="button" className="button--quiet" onClick={() => void move(b, 'planned')}>
+                    Undo made
+                  </button>
+                ) : null}
+                {b.status === 'characterized' ? (
+                  <button type="button" className="button--quiet" onClick={() => void move(b, 'planned')}>
+                    Back to planned
                   </button>
                 ) : null}
                 {b.status === 'made' && measuring !== b.id ? (

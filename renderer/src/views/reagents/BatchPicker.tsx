@@ -1,4 +1,7 @@
-/** The batches to total: planned ones, or all of them; ticking one adds it to the reagent list. */
+/**
+ * The batches to total: the current campaign's planned ones (or all its batches; or every campaign's,
+ * archived too); ticking one adds it to the reagent list.
+ */
 import type { BatchSummary } from '../../../../shared-model/api/batches';
 import type { ApiError } from '../../../../shared-model/api/result';
 import { Banner } from '../../components/Banner';
@@ -8,6 +11,9 @@ export function BatchPicker(props: {
   error: ApiError | null;
   showAll: boolean;
   onShowAll: (showAll: boolean) => void;
+  everyCampaign: boolean;
+  onEveryCampaign: (everyCampaign: boolean) => void;
+  campaignName: string | null;
   selected: number[];
   onToggle: (id: number) => void;
 }) {
@@ -18,6 +24,21 @@ export function BatchPicker(props: {
         <input type="checkbox" checked={props.showAll} onChange={(e) => props.onShowAll(e.target.checked)} /> include
         made and characterized
       </label>
+      <label className="toggle">
+        <input
+          type="checkbox"
+          checked={props.everyCampaign}
+          onChange={(e) => props.onEveryCampaign(e.target.checked)}
+        />{' '}
+        every campaign’s batches, archived ones too
+      </label>
+      <p className="muted small">
+        {props.everyCampaign
+          ? 'All batches.'
+          : props.campaignName
+            ? `Batches of ${props.campaignName}.`
+            : 'No campaign chosen: batches of the open campaigns.'}
+      </p>
       {props.error ? <Banner tone="error">{props.error.message}</Banner> : null}
       {props.batches.length === 0 ? (
         <p className="muted">No {props.showAll ? '' : 'planned '}batches. Save one in Batch design.</p>

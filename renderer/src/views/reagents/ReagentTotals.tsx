@@ -1,4 +1,7 @@
-/** Totals per reagent over the chosen batches against the inventory; shortfalls highlighted. */
+/**
+ * Totals per reagent over the chosen batches against the inventory; shortfalls highlighted. "Total stock
+ * mL" is the stock-solution volume to pipette (uses given as a stock); a neat liquid's volume is shown under it.
+ */
 import type { ReagentList } from '../../../../shared-model/recipes/reagent-list';
 import { formatNumber } from '../BatchResult';
 
@@ -10,7 +13,7 @@ export function ReagentTotals(props: { list: ReagentList }) {
           <th>Reagent</th>
           <th>Formula</th>
           <th className="num">Total mg</th>
-          <th className="num">Total mL</th>
+          <th className="num">Total stock mL</th>
           <th>On hand</th>
           <th>Location · lot</th>
           <th className="num">Short by (mg)</th>
@@ -33,7 +36,12 @@ export function ReagentTotals(props: { list: ReagentList }) {
             </td>
             <td>{line.formula}</td>
             <td className="num">{formatNumber(line.totalMassMg)}</td>
-            <td className="num">{formatNumber(line.totalVolumeMl)}</td>
+            <td className="num" data-column="stock-ml">
+              {line.totalStockVolumeMl !== null ? formatNumber(line.totalStockVolumeMl) : '—'}
+              {line.totalVolumeMl !== null && line.totalVolumeMl > 0 ? (
+                <div className="muted small">{formatNumber(line.totalVolumeMl)} mL neat</div>
+              ) : null}
+            </td>
             <td>{line.onHandText || '—'}</td>
             <td className="small">
               {line.locations.join('; ')}
