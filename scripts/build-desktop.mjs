@@ -40,6 +40,7 @@ export async function buildDesktop() {
     banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
   });
   await build({ ...common, entryPoints: [join(root, 'electron', 'workers', 'montecarlo-worker.ts')], outfile: join(out, 'montecarlo-worker.mjs'), format: 'esm' });
+  await build({ ...common, entryPoints: [join(root, 'electron', 'workers', 'learn-worker.ts')], outfile: join(out, 'learn-worker.mjs'), format: 'esm' });
   rmSync(join(out, 'migrations'), { recursive: true, force: true });
   cpSync(join(root, 'db', 'migrations'), join(out, 'migrations'), { recursive: true });
 }

@@ -8,6 +8,7 @@ import { batchHandlers } from './batches';
 import { benchSheetHandlers } from './bench-sheet';
 import { campaignHandlers } from './campaigns';
 import type { HandlerMap } from './context';
+import { learnHandlers } from './learn';
 import { outcomeAnalysisHandlers, outcomeHandlers } from './outcomes';
 import { elementHandlers } from './elements';
 import { pairHandlers } from './pairs';
@@ -16,6 +17,7 @@ import { screenHandlers } from './screen';
 import { simulationHandlers } from './simulation';
 
 export const handlers: HandlerMap<OperationName> = {
+  ...learnHandlers,
   ...outcomeAnalysisHandlers,
   ...outcomeHandlers,
   ...campaignHandlers,

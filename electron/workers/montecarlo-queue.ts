@@ -9,11 +9,7 @@
  * interrupted by whoever reads it next.
  */
 import { randomBytes } from 'node:crypto';
-import { existsSync, readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import { availableParallelism } from 'node:os';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { Store } from '../../db/store';
 import {
@@ -32,6 +28,7 @@ import type { SimulationRunSummary } from '../../shared-model/api/simulation';
 import { DomainError } from '../../shared-model/api/result';
 import { engineVersionFor, planSimulation, type SimulationProgress, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
 import type { WorkerInput, WorkerMessage } from './montecarlo-messages';
+import { workerEntry } from './worker-entry';
 
 const HEARTBEAT_MS = 5_000;
 /** At most this many runs wait to start per process; more is refused with a message (a bound on memory). */
@@ -68,24 +65,6 @@ export const SILENT_AFTER_MS = 60_000;
 const CANCEL_GRACE_MS = 10_000;
 const PROGRESS_WRITE_MS = 250;
 const MAX_HISTORY = 5_000;
-
-/**
- * How to start a worker: the bundled .mjs beside the desktop bundle when it exists; otherwise (tests,
- * CLI, browser host, all run through tsx) a small bootstrap that registers tsx in the worker thread and
- * imports the TypeScript source.
- */
-function workerEntry(): { url: URL } | { code: string } {
-  const bundled = new URL('./montecarlo-worker.mjs', import.meta.url);
-  if (bundled.protocol === 'file:' && existsSync(fileURLToPath(bundled))) return { url: bundled };
-  const source = new URL('./montecarlo-worker.ts', import.meta.url).href;
-  const tsxPackage = createRequire(import.meta.url).resolve('tsx/package.json');
-  const manifest = JSON.parse(readFileSync(tsxPackage, 'utf8')) as { exports: Record<string, { import?: { default?: string } }> };
-  const apiPath = manifest.exports['./esm/api']?.import?.default;
-  if (!apiPath) throw new Error('tsx/esm/api has no ESM entry; cannot start the Monte Carlo worker from source');
-  const api = pathToFileURL(join(dirname(tsxPackage), apiPath)).href;
-  const code = `import(${JSON.stringify(api)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(source)}); }).catch((error) => { console.error(error); process.exit(1); });`;
-  return { code };
-}
 
 interface ActiveRun {
   id: number;
@@ -214,7 +193,7 @@ export class MonteCarloQueue {
 
   private start(id: number, spec: SimulationSpec): void {
     const cancelBuffer = new SharedArrayBuffer(4);
-    const entry = workerEntry();
+    const entry = workerEntry('montecarlo-worker');
     const input: WorkerInput = { spec, cancelBuffer };
     const worker = 'url' in entry ? new Worker(entry.url, { workerData: input }) : new Worker(entry.code, { eval: true, workerData: input });
     const run: ActiveRun = { id, worker, cancel: new Int32Array(cancelBuffer), lastWrite: 0, cancelTimer: null, finished: false };

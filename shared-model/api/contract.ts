@@ -9,6 +9,7 @@ import { batchOperations } from './batches';
 import { benchSheetOperations } from './bench-sheet';
 import { campaignOperations } from './campaigns';
 import { elementOperations } from './elements';
+import { learnOperations } from './learn';
 import type { OperationSpec } from './operation';
 import { outcomeAnalysisOperations, outcomeOperations } from './outcomes';
 import { pairOperations } from './pairs';
@@ -17,6 +18,7 @@ import { screenOperations } from './screen';
 import { simulationOperations } from './simulation';
 
 export const operations = {
+  ...learnOperations,
   ...outcomeAnalysisOperations,
   ...outcomeOperations,
   ...campaignOperations,

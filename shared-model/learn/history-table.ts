@@ -7,6 +7,7 @@
  * file may use decimal commas). All rows or none: every bad cell is reported with its line, column and value.
  */
 import { DomainError } from '../api/result';
+import { splitPair } from '../api/schemas';
 import { parseArchitecture } from '../architecture/labels';
 import { readCsvTable, parseNumberField, type CsvTable } from '../characterization/csv-table';
 import { isMetalSymbol } from '../elements/symbols';
@@ -124,16 +125,14 @@ export function parseHistoryTable(text: string, field = 'csvText'): HistoryTable
       errors.push(`line ${row.line}, column ${column}, value "${value}": ${why}`);
     const before = errors.length;
     const pairText = cell(row.fields, 'pair');
-    const m = /^([A-Za-z]{1,2})\s*[-–/]\s*([A-Za-z]{1,2})$/.exec(pairText);
-    const sym = (s: string) => s.charAt(0).toUpperCase() + s.slice(1).toLowerCase();
+    const parts = splitPair(pairText);
     let a = '';
     let b = '';
-    if (!m) bad('pair', pairText, 'write the pair as two element symbols joined by "-", e.g. Pt-Ni');
+    if (!parts) bad('pair', pairText, 'write the pair as two element symbols joined by "-", e.g. Pt-Ni');
     else {
-      a = sym(m[1] as string);
-      b = sym(m[2] as string);
-      if (!isMetalSymbol(a)) bad('pair', pairText, `unknown element "${m[1]}"`);
-      else if (!isMetalSymbol(b)) bad('pair', pairText, `unknown element "${m[2]}"`);
+      [a, b] = parts;
+      if (!isMetalSymbol(a)) bad('pair', pairText, `unknown element "${a}"`);
+      else if (!isMetalSymbol(b)) bad('pair', pairText, `unknown element "${b}"`);
       else if (a === b) bad('pair', pairText, 'a pair needs two different elements');
     }
     const number = (name: string, check: (v: number) => string | null): number => {

@@ -35,6 +35,11 @@ const TABLE_OWNERS: Record<string, string> = {
   outcome_observations: 'outcome-observations.ts',
   outcome_files: 'outcome-files.ts',
   settings: 'settings.ts',
+  history_imports: 'learning.ts',
+  history_outcomes: 'learning.ts',
+  metal_prices: 'learning.ts',
+  learn_models: 'learning.ts',
+  learn_proposals: 'learning.ts',
 };
 
 /** A string literal is taken as SQL when it holds one of these upper-case keywords (the style of the code). */

@@ -4,6 +4,7 @@ import { batchCommands } from './batches';
 import { benchSheetCommands } from './bench-sheet';
 import { campaignCommands } from './campaigns';
 import { helpCommands } from './help';
+import { learnCommands } from './learn';
 import { outcomeCommands } from './outcomes';
 import { pairCommands } from './pairs';
 import { predictionCommands } from './prediction';
@@ -21,5 +22,6 @@ export const commands: CliCommand[] = [
   ...benchSheetCommands,
   ...outcomeCommands,
   ...storeCommands,
+  ...learnCommands,
   ...helpCommands,
 ];

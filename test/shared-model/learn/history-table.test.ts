@@ -2,6 +2,7 @@
  * History table import (issue 11): columns, decimal commas with semicolons, all-or-nothing errors naming
  * line, column and value.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseHistoryTable } from '../../../shared-model/learn/history-table';
 import { demoHistoryCsv, DEMO_HISTORY_ROWS } from '../../../shared-model/learn/demo-history';
@@ -70,5 +71,9 @@ describe('parseHistoryTable', () => {
     const t = parseHistoryTable(demoHistoryCsv());
     expect(t.rows).toHaveLength(DEMO_HISTORY_ROWS);
     expect(t.rows.every((r) => r.notes.includes('demo data'))).toBe(true);
+  });
+
+  it('docs/demo-history.csv is the table the generator writes (regenerate it when the generator changes)', () => {
+    expect(readFileSync(new URL('../../../docs/demo-history.csv', import.meta.url), 'utf8')).toBe(demoHistoryCsv());
   });
 });

@@ -1,0 +1,220 @@
+/**
+ * Learning service (issue 11): history import (one transaction, all rows or none; the same table twice is
+ * refused unless duplicates are allowed), metal prices, retrain as a job in a worker thread (the review is
+ * stored as a model with its version and the ids of the outcomes it was trained on), the stored review,
+ * and proposals from the stored model (stored with the model version and those ids).
+ */
+import { getCampaign } from '../../db/repositories/campaigns';
+import {
+  findImportByFingerprint,
+  insertHistoryImport,
+  insertMetalPrice,
+  insertModel,
+  insertProposals,
+  latestMetalPrices,
+  latestModel,
+  listHistoryImports,
+  listHistoryOutcomes,
+  listMetalPrices,
+  removeHistoryImport,
+  type HistoryImportRecord,
+} from '../../db/repositories/learning';
+import { listPairs } from '../../db/repositories/pairs';
+import type { Store } from '../../db/store';
+import type { HistoryImportSummary, learnOperations, ProposalSet, ReviewView } from '../../shared-model/api/learn';
+import { DomainError } from '../../shared-model/api/result';
+import { buildCandidates, candidateConditions, DEFAULT_GRID } from '../../shared-model/learn/candidates';
+import { parseHistoryTable } from '../../shared-model/learn/history-table';
+import { prepareOutcomes, type LearningOutcome } from '../../shared-model/learn/outcome-model';
+import { proposeBatches } from '../../shared-model/learn/proposals';
+import { DEFAULT_REVIEW_SETTINGS, type ModelReview, type ReviewSettings } from '../../shared-model/learn/review';
+import { LEARN_MODEL_VERSION } from '../../shared-model/learn/outcome-model';
+import { parseRankTarget } from '../../shared-model/prediction/rank';
+import { learnJobsFor } from '../workers/learn-jobs';
+import type { HandlerMap } from './context';
+
+const summaryOf = (r: HistoryImportRecord): HistoryImportSummary => ({
+  id: r.id,
+  campaignId: r.campaignId,
+  fileName: r.fileName,
+  rowCount: r.rowCount,
+  createdAt: r.createdAt,
+});
+
+/** The outcomes the campaign's model learns from: its imported history. */
+function campaignOutcomes(store: Store, campaignId: number): LearningOutcome[] {
+  return listHistoryOutcomes(store.db, campaignId).map(({ importId: _i, line: _l, notes: _n, ...o }) => o);
+}
+
+/** The campaign's elements: those of its candidate pairs and of its outcomes. */
+function campaignElements(store: Store, campaignId: number, outcomes: readonly LearningOutcome[]): string[] {
+  const symbols = new Set<string>();
+  for (const p of listPairs(store.db, campaignId)) {
+    symbols.add(p.elementA);
+    symbols.add(p.elementB);
+  }
+  for (const o of outcomes) {
+    symbols.add(o.elementA);
+    symbols.add(o.elementB);
+  }
+  return [...symbols].sort();
+}
+
+function withoutFit(review: ModelReview): ReviewView {
+  if (review.status !== 'ready') return review;
+  const { fitted: _fitted, ...rest } = review;
+  return rest;
+}
+
+type ReadyReview = Extract<ModelReview, { status: 'ready' }>;
+
+export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
+  'learn.importHistory': ({ campaignId, csvText, fileName, allowDuplicates }, { store }) => {
+    getCampaign(store.db, campaignId);
+    const table = parseHistoryTable(csvText, 'csvText');
+    const previous = findImportByFingerprint(store.db, campaignId, table.fingerprint);
+    if (previous && !allowDuplicates) {
+      throw new DomainError(
+        'conflict',
+        `this table (${table.rows.length} rows) was already imported into the campaign ` +
+          `on ${previous.createdAt.slice(0, 10)}${previous.fileName ? ` from ${previous.fileName}` : ''}; ` +
+          'import it again only if you mean to add every row twice ' +
+          '(allow duplicates)',
+        'csvText',
+      );
+    }
+    const record = insertHistoryImport(store.db, {
+      campaignId,
+      fileName: fileName ?? null,
+      fingerprint: table.fingerprint,
+      rows: table.rows,
+    });
+    const labels: Record<string, number> = {};
+    for (const r of table.rows) labels[r.observed] = (labels[r.observed] ?? 0) + 1;
+    return {
+      import: summaryOf(record),
+      rows: table.rows.length,
+      labels,
+      notes: table.notes,
+      duplicateOf: previous ? summaryOf(previous) : null,
+    };
+  },
+
+  'learn.history': ({ campaignId }, { store }) => {
+    getCampaign(store.db, campaignId);
+    return {
+      imports: listHistoryImports(store.db, campaignId).map(summaryOf),
+      outcomes: listHistoryOutcomes(store.db, campaignId).map((o) => ({
+        id: o.id,
+        importId: o.importId,
+        line: o.line,
+        pair: `${o.elementA}-${o.elementB}`,
+        xB: o.xB,
+        diameterNm: o.diameterNm,
+        temperatureK: o.temperatureK,
+        route: o.route,
+        observed: o.observed,
+        madeOn: o.madeOn,
+        notes: o.notes,
+      })),
+    };
+  },
+
+  'learn.removeImport': ({ importId }, { store }) => ({ removed: removeHistoryImport(store.db, importId) }),
+
+  'learn.setPrice': (input, { store }) => insertMetalPrice(store.db, input),
+
+  'learn.prices': (_input, { store }) => ({ latest: latestMetalPrices(store.db), all: listMetalPrices(store.db) }),
+
+  'learn.retrain': ({ campaignId, priorWeight, C }, { store }) => {
+    getCampaign(store.db, campaignId);
+    const outcomes = campaignOutcomes(store, campaignId);
+    if (outcomes.length === 0) {
+      throw new DomainError(
+        'invalid_input',
+        'the campaign has no outcomes to learn from; import a history table first (Results → Import history)',
+        'campaignId',
+      );
+    }
+    const elements = campaignElements(store, campaignId, outcomes);
+    const settings: ReviewSettings = { ...DEFAULT_REVIEW_SETTINGS, C, priorWeight, grid: DEFAULT_GRID };
+    return learnJobsFor(store).start(campaignId, { outcomes, elements, settings }, (review) =>
+      insertModel(store.db, {
+        campaignId,
+        modelVersion: LEARN_MODEL_VERSION,
+        trainedOn: review.trainedOn,
+        settings,
+        review,
+      }),
+    );
+  },
+
+  'learn.job': ({ jobId }, { store }) => learnJobsFor(store).get(jobId),
+
+  'learn.cancel': ({ jobId }, { store }) => learnJobsFor(store).cancel(jobId),
+
+  'learn.review': ({ campaignId }, { store }) => {
+    getCampaign(store.db, campaignId);
+    const model = latestModel<ModelReview>(store.db, campaignId);
+    if (!model) return { stored: null };
+    const trained = new Set(model.trainedOn);
+    const newOutcomes = campaignOutcomes(store, campaignId).filter((o) => !trained.has(o.id)).length;
+    const review = withoutFit(model.review);
+    return {
+      stored: {
+        modelId: model.id,
+        modelVersion: model.modelVersion,
+        trainedOn: model.trainedOn,
+        createdAt: model.createdAt,
+        newOutcomes,
+        review,
+      },
+    };
+  },
+
+  'learn.propose': (input, { store }): ProposalSet => {
+    getCampaign(store.db, input.campaignId);
+    const target = parseRankTarget(input.target);
+    const model = latestModel<ModelReview>(store.db, input.campaignId);
+    if (!model)
+      throw new DomainError(
+        'conflict',
+        'the campaign has no learned model yet; retrain first (Model review → Retrain, or pairwright learn)',
+        'campaignId',
+      );
+    if (model.review.status !== 'ready') {
+      throw new DomainError('conflict', `the latest model could not be trained: ${model.review.message}`, 'campaignId');
+    }
+    const fitted = (model.review as ReadyReview).fitted;
+    const settingsUsed = model.settings as ReviewSettings;
+    const candidates = buildCandidates(candidateConditions(fitted.elements, settingsUsed.grid ?? DEFAULT_GRID));
+    const outcomes = prepareOutcomes(campaignOutcomes(store, input.campaignId)).all;
+    const result = proposeBatches(fitted, candidates, outcomes, latestMetalPrices(store.db), {
+      target,
+      count: input.count,
+      explorationSlots: Math.min(input.explorationSlots, input.count),
+      includeFailed: input.includeFailed,
+      metalMmolPerBatch: input.metalMmolPerBatch,
+      seed: input.seed,
+    });
+    const settings = { ...input, target: input.target };
+    const id = insertProposals(store.db, {
+      campaignId: input.campaignId,
+      modelId: model.id,
+      modelVersion: model.modelVersion,
+      trainedOn: model.trainedOn,
+      target: input.target,
+      settings,
+      proposals: result,
+    });
+    return {
+      id,
+      modelId: model.id,
+      modelVersion: model.modelVersion,
+      trainedOn: model.trainedOn,
+      target: input.target,
+      metalMmolPerBatch: input.metalMmolPerBatch,
+      ...result,
+    };
+  },
+};
