@@ -49,7 +49,7 @@ CREATE TABLE learn_models (
   campaign_id INTEGER NOT NULL REFERENCES campaigns (id) ON DELETE CASCADE,
   model_version TEXT NOT NULL,
   trained_on TEXT NOT NULL CHECK (json_valid(trained_on)),
-  settings TEXT NOT NULL CHECK (json_valid(settings)),
+  options TEXT NOT NULL CHECK (json_valid(options)),
   review TEXT NOT NULL CHECK (json_valid(review)),
   created_at TEXT NOT NULL
 );
@@ -62,7 +62,7 @@ CREATE TABLE learn_proposals (
   model_version TEXT NOT NULL,
   trained_on TEXT NOT NULL CHECK (json_valid(trained_on)),
   target TEXT NOT NULL,
-  settings TEXT NOT NULL CHECK (json_valid(settings)),
+  options TEXT NOT NULL CHECK (json_valid(options)),
   proposals TEXT NOT NULL CHECK (json_valid(proposals)),
   created_at TEXT NOT NULL
 );

@@ -204,7 +204,7 @@ interface ModelRow {
   campaign_id: number;
   model_version: string;
   trained_on: string;
-  settings: string;
+  options: string;
   review: string;
   created_at: string;
 }
@@ -215,7 +215,7 @@ function toModel<Review>(r: ModelRow): StoredModel<Review> {
     campaignId: r.campaign_id,
     modelVersion: r.model_version,
     trainedOn: JSON.parse(r.trained_on) as string[],
-    settings: JSON.parse(r.settings) as unknown,
+    settings: JSON.parse(r.options) as unknown,
     review: JSON.parse(r.review) as Review,
     createdAt: r.created_at,
   };
@@ -227,7 +227,7 @@ export function insertModel(
 ): number {
   const info = db
     .prepare(
-      `INSERT INTO learn_models (campaign_id, model_version, trained_on, settings, review, created_at)
+      `INSERT INTO learn_models (campaign_id, model_version, trained_on, options, review, created_at)
        VALUES (?, ?, ?, ?, ?, ?)`,
     )
     .run(
@@ -263,7 +263,7 @@ export function insertProposals(
   const info = db
     .prepare(
       `INSERT INTO learn_proposals
-         (campaign_id, model_id, model_version, trained_on, target, settings, proposals, created_at)
+         (campaign_id, model_id, model_version, trained_on, target, options, proposals, created_at)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
     )
     .run(
