@@ -1,5 +1,5 @@
 /**
- * Learning tables (migration 0009_learning.sql): imported history tables and their rows, metal prices, fitted
+ * Learning tables (migration 0010_learning.sql): imported history tables and their rows, metal prices, fitted
  * models with the outcome ids they were trained on, and proposals made from a model. An import writes its
  * table row and all its outcome rows in one transaction.
  */
