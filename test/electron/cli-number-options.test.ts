@@ -25,8 +25,12 @@ describe('numeric CLI options', () => {
     expect(refusal(() => optionalNumber(args({ 'diameter-nm': 'abc' }), 'diameter-nm'))).toBe(
       '--diameter-nm must be a number: "abc" is not a number',
     );
-    expect(refusal(() => optionalNumber(args({ volume: '1,000.5' }), 'volume'))).toMatch(/^--volume must be a number: .*more than one/);
-    expect(refusal(() => optionalNumber(args({ volume: ' ' }), 'volume'))).toBe('--volume must be a number, got nothing');
+    expect(refusal(() => optionalNumber(args({ volume: '1,000.5' }), 'volume'))).toMatch(
+      /^--volume must be a number: .*more than one/,
+    );
+    expect(refusal(() => optionalNumber(args({ volume: ' ' }), 'volume'))).toBe(
+      '--volume must be a number, got nothing',
+    );
   });
 
   it('reads at.% with an uncertainty through the same reader (48,5±2 → 0.485 ± 0.02)', () => {

@@ -64,15 +64,26 @@ describe('prediction conditions form', () => {
     expect(readConditions(withText('temperatureK', '6000')).errors).toEqual({
       temperatureK: 'temperature, K: must be at most 5000 K',
     });
-    expect(readConditions(withText('timeH', '0')).errors).toEqual({ timeH: 'time, h: must be a positive time in hours' });
+    expect(readConditions(withText('timeH', '0')).errors).toEqual({
+      timeH: 'time, h: must be a positive time in hours',
+    });
   });
 
   it('keeps the typed text for the tab, and falls back to the defaults on a damaged copy', () => {
-    const kept = { text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x', timeH: '2' }, shape: 'sphere', facet: '100', environment: 'H2' };
+    const kept = {
+      text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x', timeH: '2' },
+      shape: 'sphere',
+      facet: '100',
+      environment: 'H2',
+    };
     expect(readKeptConditions(JSON.stringify(kept))).toEqual(kept);
     // a copy kept before the time and environment inputs existed: those two take their defaults
     const older = { text: { atPercentB: '25', diameterNm: '4,5', temperatureK: 'x' }, shape: 'sphere', facet: '100' };
-    expect(readKeptConditions(JSON.stringify(older))).toEqual({ ...older, text: { ...older.text, timeH: '1' }, environment: 'vacuum' });
+    expect(readKeptConditions(JSON.stringify(older))).toEqual({
+      ...older,
+      text: { ...older.text, timeH: '1' },
+      environment: 'vacuum',
+    });
     expect(readKeptConditions(null)).toBe(DEFAULT_CONDITIONS_FORM);
     expect(readKeptConditions('{not json')).toBe(DEFAULT_CONDITIONS_FORM);
     expect(readKeptConditions(JSON.stringify({ ...kept, shape: 'cube' }))).toBe(DEFAULT_CONDITIONS_FORM);

@@ -44,7 +44,10 @@ describe('composition form', () => {
         ],
       },
     });
-    expect(readCompositionForm('', '', [])).toEqual({ ok: true, value: { nominalXB: null, gridMetal: null, measurements: [] } });
+    expect(readCompositionForm('', '', [])).toEqual({
+      ok: true,
+      value: { nominalXB: null, gridMetal: null, measurements: [] },
+    });
   });
 
   it('names the row as shown on screen when its value is not a number', () => {

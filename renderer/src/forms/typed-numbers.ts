@@ -37,7 +37,8 @@ export function readForm<T>(read: () => T): FormReading<T> {
   try {
     return { ok: true, value: read() };
   } catch (error) {
-    if (error instanceof FieldRefusal) return { ok: false, error: { code: 'invalid_input', message: error.message, field: error.field } };
+    if (error instanceof FieldRefusal)
+      return { ok: false, error: { code: 'invalid_input', message: error.message, field: error.field } };
     throw error;
   }
 }

@@ -93,7 +93,13 @@ describe('catalog reagent form', () => {
 
 describe('inventory form', () => {
   it('reads the amount with a decimal comma, and names it when it is not a number', () => {
-    const form = { ...EMPTY_INVENTORY_FORM, reagentKey: 'nabh4', amount: '2,5', unit: 'g' as const, location: 'shelf 1' };
+    const form = {
+      ...EMPTY_INVENTORY_FORM,
+      reagentKey: 'nabh4',
+      amount: '2,5',
+      unit: 'g' as const,
+      location: 'shelf 1',
+    };
     expect(readInventoryForm(form)).toEqual({
       ok: true,
       value: { reagentKey: 'nabh4', amount: 2.5, unit: 'g', location: 'shelf 1', lot: '' },

@@ -14,7 +14,13 @@ import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
 import { formatNumber } from '../BatchResult';
-import { EMPTY_REAGENT, fromCatalog, readReagentForm, REAGENT_FIELD_ALIASES, type ReagentFormState } from './reagent-form';
+import {
+  EMPTY_REAGENT,
+  fromCatalog,
+  readReagentForm,
+  REAGENT_FIELD_ALIASES,
+  type ReagentFormState,
+} from './reagent-form';
 
 export function CatalogEditor(props: { catalog: CatalogReagent[]; onSaved: () => void }) {
   const [f, setF] = useState<ReagentFormState>(EMPTY_REAGENT);
@@ -36,7 +42,9 @@ export function CatalogEditor(props: { catalog: CatalogReagent[]; onSaved: () =>
     }
     clear();
     const molarMass = formatNumber(result.value.molarMassGPerMol, 6);
-    setDone(`${editing ? 'Saved revision' : 'Added'} ${result.value.revision} of ${result.value.name} (${molarMass} g/mol).`);
+    setDone(
+      `${editing ? 'Saved revision' : 'Added'} ${result.value.revision} of ${result.value.name} (${molarMass} g/mol).`,
+    );
     setEditing(null);
     setF(EMPTY_REAGENT);
     props.onSaved();
@@ -102,7 +110,11 @@ export function CatalogEditor(props: { catalog: CatalogReagent[]; onSaved: () =>
           <input name="metalSymbol" value={f.metalSymbol} onChange={(e) => set('metalSymbol')(e.target.value)} />
         </Field>
         <Field label="Oxidation state" name="oxidationState" error={errors.oxidationState}>
-          <input name="oxidationState" value={f.oxidationState} onChange={(e) => set('oxidationState')(e.target.value)} />
+          <input
+            name="oxidationState"
+            value={f.oxidationState}
+            onChange={(e) => set('oxidationState')(e.target.value)}
+          />
         </Field>
         <Field label="Reduction couple" name="coupleId" error={errors.coupleId}>
           <select name="coupleId" value={f.coupleId} onChange={(e) => set('coupleId')(e.target.value)}>
@@ -115,7 +127,11 @@ export function CatalogEditor(props: { catalog: CatalogReagent[]; onSaved: () =>
           </select>
         </Field>
         <Field label="Reducer half-reaction" name="reducerHalfReactionId" error={errors.reducerHalfReactionId}>
-          <select name="reducerHalfReactionId" value={f.reducerHalfReactionId} onChange={(e) => set('reducerHalfReactionId')(e.target.value)}>
+          <select
+            name="reducerHalfReactionId"
+            value={f.reducerHalfReactionId}
+            onChange={(e) => set('reducerHalfReactionId')(e.target.value)}
+          >
             <option value="">none</option>
             {Object.values(REDUCER_HALF_REACTIONS).map((h) => (
               <option key={h.id} value={h.id}>
@@ -157,7 +173,10 @@ export function CatalogEditor(props: { catalog: CatalogReagent[]; onSaved: () =>
         {general ? <Banner tone="error">{general}</Banner> : null}
         {done ? <Banner tone="info">{done}</Banner> : null}
       </form>
-      <p className="muted small">Hazard data you enter are your typical classification; verify them with your supplier's SDS. Saved batches keep the values they were computed with.</p>
+      <p className="muted small">
+        Hazard data you enter are your typical classification; verify them with your supplier's SDS. Saved batches keep
+        the values they were computed with.
+      </p>
     </details>
   );
 }

@@ -43,7 +43,12 @@ export function InventoryForm(props: { catalog: CatalogReagent[]; onSaved: () =>
       </Field>
       <Field label="Amount on hand" name="amount" error={errors.amount}>
         <span className="input-with-unit">
-          <input name="amount" inputMode="decimal" value={form.amount} onChange={(e) => set('amount', e.target.value)} />
+          <input
+            name="amount"
+            inputMode="decimal"
+            value={form.amount}
+            onChange={(e) => set('amount', e.target.value)}
+          />
           <select
             aria-label="Unit"
             name="unit"

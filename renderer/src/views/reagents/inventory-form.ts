@@ -11,7 +11,13 @@ export interface InventoryFormState {
   lot: string;
 }
 
-export const EMPTY_INVENTORY_FORM: InventoryFormState = { reagentKey: '', amount: '', unit: 'g', location: '', lot: '' };
+export const EMPTY_INVENTORY_FORM: InventoryFormState = {
+  reagentKey: '',
+  amount: '',
+  unit: 'g',
+  location: '',
+  lot: '',
+};
 
 /** The entry to store; the amount's range and the reagent are checked by the contract. */
 export function readInventoryForm(f: InventoryFormState): FormReading<OperationInput<'inventory.upsert'>> {

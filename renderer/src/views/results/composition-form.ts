@@ -19,13 +19,21 @@ export const emptyRow = (method: CompositionMethod): RowDraft => ({ method, xBPc
 type CompositionInput = NonNullable<OperationInput<'outcomes.record'>['composition']>;
 
 /** The composition part to record, or the error to show beside the input at fault. */
-export function readCompositionForm(nominal: string, grid: string, rows: readonly RowDraft[]): FormReading<CompositionInput> {
+export function readCompositionForm(
+  nominal: string,
+  grid: string,
+  rows: readonly RowDraft[],
+): FormReading<CompositionInput> {
   return readForm(() => {
     const nominalPct = optionalFieldNumber(nominal, 'nominalXB', 'nominal at.%');
     const measurements = rows.flatMap((row, i) => {
       if (row.xBPct.trim() === '') return [];
       const xBPct = fieldNumber(row.xBPct, `measurements.${i}.xB`, `${row.method} at.%`);
-      const uncertaintyPct = optionalFieldNumber(row.uncertaintyPct, `measurements.${i}.uncertaintyXB`, `${row.method} ± at.%`);
+      const uncertaintyPct = optionalFieldNumber(
+        row.uncertaintyPct,
+        `measurements.${i}.uncertaintyXB`,
+        `${row.method} ± at.%`,
+      );
       return [
         {
           method: row.method,
