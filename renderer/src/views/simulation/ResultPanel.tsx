@@ -44,6 +44,11 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
   const [error, setError] = useState<string | null>(null);
   const eq = result.equilibration;
   const surfaceB = `${pct(result.surfaceXB)} ± ${(100 * result.surfaceXBStandardError).toFixed(1)}`;
+  // Runs stored before relaxation and separation were added carry neither.
+  const stored = result as Partial<SimulationResult>;
+  const relaxation = stored.relaxation;
+  const separation = stored.separation;
+  const stopping = stored.stopping;
   return (
     <div className="stack" data-testid="sim-result">
       <PredictionBeside result={result} temperatureK={run.spec.temperatureK} />
@@ -60,12 +65,52 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
         <Stat label="atoms / surface sites" value={`${result.atoms} / ${result.surfaceSites}`} />
         <Stat label="acceptance" value={pct(result.acceptance)} />
         <Stat label="speed" value={`${Math.round(result.attemptsPerSecond).toLocaleString('en-US')} /s`} />
+        {stopping ? (
+          <Stat
+            label="sweeps taken"
+            value={`${stopping.sweepsTaken}${stopping.stoppedAtAnswer ? ' (stopped at the answer)' : ''}`}
+            testId="sim-sweeps-taken"
+          />
+        ) : null}
+        {separation ? (
+          <>
+            <Stat
+              label="centres of mass apart"
+              value={`${separation.centreOfMassDistanceAngstrom.toFixed(2)} Å (${num(separation.centreOfMassOffset, 2)} R)`}
+              testId="sim-com-offset"
+            />
+            <Stat
+              label="A–B interface"
+              value={`${separation.interfaceAtoms} atoms, ≈${separation.interfaceAreaNm2.toFixed(1)} nm²`}
+              testId="sim-interface"
+            />
+            <Stat
+              label="connected domains"
+              value={Object.entries(separation.domains)
+                .map(([symbol, d]) => `${symbol} ${d.domains}`)
+                .join(', ')}
+              testId="sim-domains"
+            />
+          </>
+        ) : null}
       </div>
+      {relaxation ? (
+        <p className="small" data-testid="sim-relaxation">
+          <strong>{relaxation.mode === 'relaxed' ? 'Relaxed run' : 'Rigid lattice'}</strong> ({relaxation.reason}): {relaxation.design}
+          {relaxation.displacementStepAngstrom !== null
+            ? `; displacement step ${relaxation.displacementStepAngstrom.toFixed(3)} Å, acceptance ${pct(relaxation.displacementAcceptance ?? 0)}`
+            : ''}
+          ; swap acceptance {pct(relaxation.swapAcceptance)}.
+        </p>
+      ) : null}
+      <p className="small muted" data-testid="sim-kinetic-note">
+        {result.kineticNote ?? ''}
+      </p>
       <p className="small muted">
         {eq.equilibrated ? 'Equilibrated' : 'Not equilibrated (energy still drifting in the last quarters: run longer)'}
         ; averages from sweep {eq.equilibratedFromSample + (run.spec.anneal?.sweeps ?? 0) + 1}. Unlike pairs:{' '}
-        {result.pairRule.description}. Rigid lattice (no relaxation) at the Vegard spacing{' '}
-        {result.geometry.nearestNeighbourAngstrom.toFixed(3)} Å; engine {result.engineVersion}.
+        {result.pairRule.description}. Sites at the Vegard spacing {result.geometry.nearestNeighbourAngstrom.toFixed(3)} Å;
+        engine {result.engineVersion}.
       </p>
       <div className="sim-charts">
         <RadialProfile result={result} />
@@ -74,6 +119,7 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
           occupation={result.finalOccupation}
           elementA={result.elementA}
           elementB={result.elementB}
+          positions={stored.finalPositionsAngstrom ?? null}
         />
       </div>
       <Traces points={resultPoints(result)} elementB={result.elementB} xB={result.xB} />
