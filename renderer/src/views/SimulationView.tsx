@@ -14,6 +14,7 @@ import { useQuery } from '../api/hooks';
 import { Banner } from '../components/Banner';
 import { RunForm } from './simulation/RunForm';
 import { RunPanel } from './simulation/RunPanel';
+import { ScreenPanel } from './simulation/ScreenPanel';
 import { StoredRuns } from './simulation/StoredRuns';
 import './simulation/simulation.css';
 
@@ -51,6 +52,12 @@ export function SimulationView() {
             />
           ) : null}
           <StoredRuns runs={list} selected={selected} onSelect={setSelected} />
+          <ScreenPanel
+            onOpen={(runId) => {
+              setSelected(runId);
+              reload();
+            }}
+          />
         </div>
         <div>
           {selected !== null ? (

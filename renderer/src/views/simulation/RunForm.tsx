@@ -15,6 +15,7 @@ import {
   describeRequest,
   formFromRequest,
   INITIAL_RUN_FORM,
+  modeText,
   planText,
   readRunForm,
   shellsHint,
@@ -126,9 +127,21 @@ export function RunForm(props: {
       <Field label="Temperature, K" name="temperatureK" error={errors.temperatureK}>
         {text('temperatureK', 'decimal')}
       </Field>
-      <Field label="Sweeps" name="sweeps" error={errors.sweeps} hint="one swap attempt per atom each">
+      <Field label="Sweeps (most)" name="sweeps" error={errors.sweeps} hint="one swap attempt per atom each">
         {text('sweeps', 'numeric')}
       </Field>
+      <Field label="Atoms" name="relaxation" error={errors.relaxation}>
+        <select name="relaxation" value={form.relaxation} onChange={(e) => set('relaxation', e.target.value as RunFormState['relaxation'])}>
+          <option value="auto">by size mismatch (relaxed above 6 %)</option>
+          <option value="rigid">rigid lattice (swap moves only)</option>
+          <option value="relaxed">relaxed (swap + displacement moves)</option>
+        </select>
+      </Field>
+      <label style={{ gridColumn: '1 / -1' }}>
+        <input type="checkbox" name="stopAtAnswer" checked={form.stopAtAnswer} onChange={(e) => set('stopAtAnswer', e.target.checked)} /> Stop at
+        the answer: once equilibrated and the surface composition is known to ±0.005 (at least 100 sweeps; the sweeps
+        above are the cap)
+      </label>
       <Field label="Seed" name="seed" error={errors.seed}>
         {text('seed', 'numeric')}
       </Field>
@@ -165,6 +178,10 @@ export function RunForm(props: {
         data-testid="sim-plan"
       >
         {plan.text}
+      </p>
+      <p className="small" style={{ gridColumn: '1 / -1', margin: 0 }} data-testid="sim-mode">
+        {modeText(form)} Swap moves exchange atoms anywhere in the particle: they find the equilibrium arrangement,
+        which a real synthesis at low temperature may not reach.
       </p>
       <p className="small muted" style={{ gridColumn: '1 / -1', margin: 0 }} data-testid="sim-mixing-rule">
         Gupta potential, Cleri &amp; Rosato (1993) parameters, five neighbour shells; {props.mixingRule}.

@@ -5,7 +5,8 @@
  */
 import type { OperationInput } from '../../../../shared-model/api/contract';
 import { shapeLabel, type ParticleShape } from '../../../../shared-model/geometry/shapes';
-import { planSimulation, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
+import { defaultRelaxation, planSimulation, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
+import { isGuptaElement } from '../../../../shared-model/montecarlo/gupta-parameters';
 import { fieldNumber, optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import type { SimulationRequest } from '../../app-state';
 
@@ -23,6 +24,10 @@ export interface RunFormState {
   annealStartK: string;
   annealSweeps: string;
   seed: string;
+  /** 'auto': by the size-mismatch rule. */
+  relaxation: 'auto' | 'rigid' | 'relaxed';
+  /** Stop at the answer (the default rule); off: run every sweep. */
+  stopAtAnswer: boolean;
 }
 
 export const INITIAL_RUN_FORM: RunFormState = {
@@ -39,6 +44,8 @@ export const INITIAL_RUN_FORM: RunFormState = {
   annealStartK: '1500',
   annealSweeps: '500',
   seed: '1',
+  relaxation: 'auto',
+  stopAtAnswer: true,
 };
 
 type SimulationStartInput = OperationInput<'simulation.start'>;
@@ -68,6 +75,8 @@ export function readRunForm(form: RunFormState): RunFormReading {
           }
         : null,
       seed: optional(form.seed, 'seed', 'seed') ?? 1,
+      ...(form.relaxation !== 'auto' ? { relaxation: form.relaxation } : {}),
+      ...(form.stopAtAnswer ? {} : { stopping: null }),
     }),
   );
   return reading.ok
@@ -118,4 +127,12 @@ export function describeRequest(request: SimulationRequest): string {
   const pair = `${request.elementA}-${request.elementB}, x(${request.elementB}) = ${decimalText(request.xB)}`;
   const particle = `${decimalText(request.diameterNm)} nm ${shapeLabel(request.shape)}, ${decimalText(request.temperatureK)} K`;
   return `Filled in from ${request.source}: ${pair}, ${particle}. Check the sweeps and seed, then Run.`;
+}
+
+/** Which mode the run will use and why (the size-mismatch rule unless the user chose). */
+export function modeText(form: RunFormState): string {
+  if (form.relaxation !== 'auto') return `${form.relaxation === 'relaxed' ? 'Relaxed' : 'Rigid lattice'}: chosen.`;
+  if (!isGuptaElement(form.elementA) || !isGuptaElement(form.elementB) || form.elementA === form.elementB) return '';
+  const rule = defaultRelaxation(form.elementA, form.elementB);
+  return `${rule.mode === 'relaxed' ? 'Relaxed' : 'Rigid lattice'}: ${rule.reason}.`;
 }
