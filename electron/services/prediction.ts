@@ -4,7 +4,7 @@ import type { predictionOperations } from '../../shared-model/api/prediction';
 import { ELEMENT_COLUMN_SOURCES, ELEMENT_RECORDS } from '../../shared-model/elements/element-table';
 import { computeIsotherm } from '../../shared-model/prediction/isotherm';
 import { predictPair, type Prediction } from '../../shared-model/prediction/predict';
-import { describeRankTarget, qualifiesFor, rankPairs } from '../../shared-model/prediction/rank';
+import { describeRankTarget, rankPairs, splitByTarget } from '../../shared-model/prediction/rank';
 import type { HandlerMap } from './context';
 
 /** A plain copy (the lazily built `reason` becomes a data property) that any transport can carry. */
@@ -16,13 +16,17 @@ export const predictionHandlers: HandlerMap<keyof typeof predictionOperations> =
   'prediction.predict': (input) => plain(predictPair(input.pair.elementA, input.pair.elementB, input.conditions)),
   'prediction.rank': (input) => {
     const ranked = rankPairs(input.elements, input.target, input.conditions);
-    // Janus is a yes/no question of the wetting criterion: list only the pairs that qualify
-    const rows = input.target.kind === 'Janus' ? ranked.filter((row) => qualifiesFor(input.target, row.prediction)) : ranked;
-    const kept = input.limit === undefined ? rows : rows.slice(0, input.limit);
+    // the answer to the question asked: only the pairs that meet the target; the rest on request
+    const { meeting, missing } = splitByTarget(ranked, input.target);
+    const kept = input.limit === undefined ? meeting : meeting.slice(0, input.limit);
+    const shownMissing = input.all === true ? missing : meeting.length === 0 ? missing.slice(0, 3) : [];
     return {
       target: describeRankTarget(input.target),
       conditions: input.conditions,
       rows: kept.map((row) => ({ rank: row.rank, score: row.score, prediction: plain(row.prediction) })),
+      meeting: meeting.length,
+      ranked: ranked.length,
+      missing: shownMissing.map((row) => ({ rank: row.rank, score: row.score, prediction: plain(row.prediction), miss: row.miss })),
     };
   },
   'prediction.isotherm': (input) => computeIsotherm(input.pair.elementA, input.pair.elementB, input.conditions, input.sweep, input.points),

@@ -100,10 +100,21 @@ export interface RankRow {
   prediction: Prediction;
 }
 
+export interface MissRow extends RankRow {
+  /** Why the pair does not meet the target, e.g. "Ag goes to the surface, not Pt". */
+  miss: string;
+}
+
 export interface RankResult {
   target: string;
   conditions: z.output<typeof conditionsSchema>;
+  /** Only the pairs whose prediction meets the target, best first. */
   rows: RankRow[];
+  /** How many pairs meet the target (before any limit) and how many were ranked. */
+  meeting: number;
+  ranked: number;
+  /** With `all`: every other pair, closest first; when none meets the target: the closest three. */
+  missing: MissRow[];
 }
 
 export interface SavedPrediction {
@@ -129,12 +140,13 @@ export const predictionOperations = {
   }),
   'prediction.rank': operation<RankResult>()({
     kind: 'query',
-    summary: 'Rank every pair of an element set for a target architecture',
+    summary: 'Rank the pairs of an element set that meet a target architecture (all: the rest too, with why they miss)',
     input: z.object({
       elements: elementListSchema,
       target: rankTargetSchema,
       conditions: conditionsSchema,
       limit: z.number({ error: 'must be a number' }).int('must be a whole number').min(1, 'must be at least 1').max(1000, 'must be at most 1000').optional(),
+      all: z.boolean({ error: 'must be true or false' }).optional(),
     }),
   }),
   'prediction.isotherm': operation<Isotherm>()({

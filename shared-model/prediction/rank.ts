@@ -93,9 +93,14 @@ export function scoreFromNumbers(target: RankTarget, enrichedElement: string | n
   }
 }
 
-/** Whether the predicted architecture is the kind the target asks for (core@shell:X: X in the shell). */
+/**
+ * Whether the predicted architecture is the kind the target asks for (core@shell:X: X in the shell; alloy:
+ * a random or surface-enriched alloy).
+ */
 export function qualifiesFor(target: RankTarget, p: Prediction): boolean {
   if (target.kind === 'core@shell') return p.architectureKind === 'core@shell' && (target.shellElement === undefined || p.surfaceElement === target.shellElement);
+  // a surface-enriched alloy is still one mixed phase; its score counts the enrichment against it
+  if (target.kind === 'alloy') return p.architectureKind === 'alloy' || p.architectureKind === 'surface-enriched alloy';
   return p.architectureKind === target.kind;
 }
 
@@ -156,4 +161,53 @@ export function rankPairs(elements: readonly string[] | 'all', target: RankTarge
     throw invalid('target', `the shell element ${parsed.shellElement} is not among the elements to rank`);
   }
   return rankContexts(pairContexts(list), parsed, conditions);
+}
+
+/** Why a prediction does not meet the target, in the user's words (e.g. "Ag goes to the surface, not Pt"). */
+export function missReason(target: RankTarget, p: Prediction): string {
+  const predicted = `predicted ${p.architecture}`;
+  if (target.kind === 'core@shell') {
+    if (target.shellElement !== undefined && p.surfaceElement !== null && p.surfaceElement !== target.shellElement) {
+      return `${p.surfaceElement} goes to the surface, not ${target.shellElement}`;
+    }
+    if (p.architectureKind === 'core@shell') return predicted;
+    if (p.surfaceElement !== null) return `${predicted}: ${p.surfaceElement} enriched at the surface (E = ${p.enrichment.toFixed(2)}), no full shell`;
+    return `${predicted}: no shell forms`;
+  }
+  if (target.kind === 'alloy') return `${predicted}: the elements do not stay mixed`;
+  if (target.kind === 'Janus') return `${predicted}: not two exposed lobes`;
+  return `${predicted}: no ordered compound`;
+}
+
+export interface MissedPair extends RankedPair {
+  /** Why the pair does not meet the target. */
+  readonly miss: string;
+}
+
+export interface TargetRanking {
+  /** The pairs whose prediction meets the target, best score first, ranked 1..n. */
+  meeting: RankedPair[];
+  /** The other pairs, closest first (score, then the prediction's confidence), ranked after the meeting ones. */
+  missing: MissedPair[];
+}
+
+/**
+ * Splits a ranking into the pairs that meet the target and the rest: a ranking answers the question asked,
+ * so the rest are shown only on request (or, when nothing meets the target, as the closest).
+ */
+export function splitByTarget(rows: readonly RankedPair[], target: RankTarget): TargetRanking {
+  const meeting: RankedPair[] = [];
+  const missed: Array<{ row: RankedPair; miss: string }> = [];
+  for (const row of rows) {
+    if (qualifiesFor(target, row.prediction)) meeting.push(row);
+    else missed.push({ row, miss: missReason(target, row.prediction) });
+  }
+  meeting.forEach((row, i) => Object.assign(row, { rank: i + 1 }));
+  // closest first: the higher score, then (for equal scores, often 0) the less certain miss
+  missed.sort((x, y) => y.row.score - x.row.score || x.row.prediction.confidence - y.row.prediction.confidence || (x.row.pair < y.row.pair ? -1 : 1));
+  const missing = missed.map(({ row, miss }, i) => {
+    Object.assign(row, { rank: meeting.length + i + 1 });
+    return Object.assign(row, { miss }) as MissedPair;
+  });
+  return { meeting, missing };
 }

@@ -19,13 +19,15 @@ describe.skipIf(!available)('flask conditions in the browser host', () => {
 
   it('Candidates under CO at 350 K for 2 h: Pd comes out of Ag–Pd; the detail shows as made and after annealing', async ({ page, host }) => {
     await openApp(page, host, { view: 'candidates' });
+    // Ag@Pd does not meet the default target (alloy): it is listed once the rest are shown
+    await page.getByRole('button', { name: /^Show the rest/ }).click();
     await expect.poll(() => rows(page).count()).toBe(21);
     await input(page, 'environment').selectOption('CO');
     await input(page, 'temperatureK').fill('350');
     await input(page, 'timeH').fill('2');
     await input(page, 'filter').fill('Pd-Ag');
     await expect.poll(() => rows(page).count()).toBe(1);
-    await expect.poll(async () => (await rows(page).first().locator('td').nth(1).textContent())?.trim()).toBe('Ag@Pd');
+    await expect.poll(async () => (await rows(page).first().locator('td').nth(2).textContent())?.trim()).toBe('Ag@Pd');
     await rows(page).first().click();
     const detail = page.getByRole('region', { name: 'Pair detail Pd-Ag' });
     await expect.poll(() => detail.getByTestId('verdict-after-annealing').textContent()).toBe('Ag@Pd');
@@ -39,7 +41,7 @@ describe.skipIf(!available)('flask conditions in the browser host', () => {
 
   it('a bad time is named beside its input; Janus lists only qualifying pairs', async ({ page, host }) => {
     await openApp(page, host, { view: 'candidates' });
-    await expect.poll(() => rows(page).count()).toBe(21);
+    await expect.poll(() => rows(page).count()).toBeGreaterThan(0);
     await input(page, 'timeH').fill('0');
     await expect.poll(() => page.locator('[data-error-for="timeH"]').textContent()).toMatch(/positive time in hours/);
     expect(await rows(page).count()).toBe(0);

@@ -10,6 +10,7 @@ import { dispatch } from '../../electron/services/dispatch';
 import type { SavedBatch } from '../../shared-model/api/batches';
 import type { Campaign } from '../../shared-model/api/campaigns';
 import type { CandidatePair } from '../../shared-model/api/pairs';
+import type { RankResult } from '../../shared-model/api/prediction';
 import { browserAvailable, launchBrowser, screenshotPath } from '../support/browser';
 import { startTestHost, tempDataDir, type HostFixture } from '../support/host-fixture';
 import { auPd } from '../support/sample-batches';
@@ -44,11 +45,46 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
   const rows = () => page.locator('table[aria-label="Ranked candidates"] tbody tr');
   const input = (name: string) => page.locator(`[data-testid="candidates-view"] [name="${name}"]`);
 
-  it('ranks the 21 pairs of the seven default metals', async () => {
+  const SEVEN = ['Pt', 'Pd', 'Au', 'Ag', 'Ni', 'Cu', 'Co'];
+  /** The API's answer for the same question (the page runs the same shared-model code in the browser). */
+  const expected = (target: string, xB: number) =>
+    api<RankResult>('prediction.rank', { elements: SEVEN, target, conditions: { xB, diameterNm: 3, temperatureK: 600 }, all: true });
+  const showRest = () => page.getByRole('button', { name: /^Show the rest/ });
+
+  it('lists only the pairs that meet the target, best first, each with its score; the rest on request, marked', async () => {
     await page.goto(fixture.host.url);
     await page.locator('[data-view="candidates"]').click();
-    await expect.poll(() => rows().count()).toBe(21);
+    await input('elements').fill(SEVEN.join(', '));
+    await input('target').selectOption('alloy');
+    const answer = await expected('alloy', 0.5);
+    expect(answer.meeting).toBeGreaterThan(0);
+    expect(answer.meeting).toBeLessThan(21);
+    await expect.poll(() => rows().count()).toBe(answer.meeting);
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(answer.rows.map((r) => r.prediction.pair));
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[1]?.textContent))).toEqual(answer.rows.map((r) => r.score.toFixed(3)));
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-meets')))).toEqual(answer.rows.map(() => 'yes'));
+    expect(await page.getByTestId('ranking-count').textContent()).toMatch(new RegExp(`${answer.meeting} of 21 pairs meet the target`));
     await page.screenshot({ path: screenshotPath('candidates'), fullPage: true });
+    await showRest().click();
+    await expect.poll(() => rows().count()).toBe(21);
+    const missed = page.locator('table[aria-label="Ranked candidates"] tbody tr[data-meets="no"]');
+    expect(await missed.count()).toBe(21 - answer.meeting);
+    for (const text of await missed.locator('[data-testid="meets"]').allTextContents()) expect(text).toMatch(/^no: predicted .+/);
+    await page.getByRole('button', { name: /^Hide the pairs that miss/ }).click();
+    await expect.poll(() => rows().count()).toBe(answer.meeting);
+  });
+
+  it('when no pair meets the target (core@shell with Pt in the shell), says so and shows the closest three', async () => {
+    const answer = await expected('core@shell:Pt', 0.5);
+    expect(answer.meeting).toBe(0);
+    await input('target').selectOption('core@shell with');
+    await input('shell').fill('Pt');
+    await expect.poll(() => page.getByRole('status').filter({ hasText: /No pair of these elements meets/ }).count()).toBe(1);
+    await expect.poll(() => rows().count()).toBe(3);
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(answer.missing.slice(0, 3).map((r) => r.prediction.pair));
+    expect(await rows().locator('[data-testid="meets"]').allTextContents()).toEqual(answer.missing.slice(0, 3).map((r) => `no: ${r.miss}`));
+    await page.screenshot({ path: screenshotPath('candidates-none-meets'), fullPage: true });
+    await input('target').selectOption('alloy');
   });
 
   it('shows a bad composition beside its field and recomputes as soon as it is fixed', async () => {
@@ -57,20 +93,26 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     expect(await rows().count()).toBe(0);
     await page.screenshot({ path: screenshotPath('candidates-bad-composition'), fullPage: true });
     await input('atPercentB').fill('30');
-    await expect.poll(() => rows().count()).toBe(21);
+    const alloyAt30 = await expected('alloy', 0.3);
+    await expect.poll(() => rows().count()).toBe(alloyAt30.meeting);
     await input('elements').fill('Pt, Pd, Xx');
     await expect.poll(() => page.locator('[data-error-for="elements"]').textContent()).toMatch(/unknown element "Xx"/);
-    await input('elements').fill('Pt, Pd, Au, Ag, Ni, Cu, Co');
-    await expect.poll(() => rows().count()).toBe(21);
+    await input('elements').fill(SEVEN.join(', '));
+    await expect.poll(() => rows().count()).toBe(alloyAt30.meeting);
   });
 
-  it('targets core@shell with Au in the shell: Au-covered pairs first', async () => {
+  it('targets core@shell with Au in the shell: only Au-covered pairs', async () => {
     await input('target').selectOption('core@shell with');
     await input('shell').fill('Au');
-    await expect.poll(async () => (await rows().first().locator('td').nth(3).textContent())?.trim()).toBe('Au');
+    const answer = await expected('core@shell:Au', 0.3);
+    expect(answer.meeting).toBeGreaterThan(0);
+    await expect.poll(() => rows().count()).toBe(answer.meeting);
+    for (const text of await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[4]?.textContent))) expect(text).toBe('Au');
   });
 
   it('sorts by a column and filters', async () => {
+    await showRest().click();
+    await expect.poll(() => rows().count()).toBe(21);
     await page.getByRole('button', { name: /^confidence/ }).click();
     await expect.poll(() => page.locator('th[aria-sort="descending"]').count()).toBe(1);
     await input('filter').fill('Ag');

@@ -114,6 +114,7 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     const candidate = (name: string) => page.locator(`[data-testid="candidates-view"] [name="${name}"]`);
     const rows = () => page.locator('table[aria-label="Ranked candidates"] tbody tr');
     await page.locator('[data-view="candidates"]').click();
+    await page.getByRole('button', { name: /^Show the rest/ }).click(); // every pair, whether or not it meets the target
     await candidate('atPercentB').fill('25');
     await candidate('diameterNm').fill('2.5');
     await candidate('shape').selectOption('icosahedron');

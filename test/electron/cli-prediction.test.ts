@@ -25,11 +25,38 @@ describe('pairwright prediction commands', () => {
     expect(Object.keys(p.terms).sort()).toEqual(['adsorbate', 'chemical', 'elastic', 'surfaceEnergy', 'total']);
   });
 
-  it('rank --elements … --target alloy --json ranks the 21 pairs', () => {
+  it('rank --elements … --target alloy --json lists only the pairs predicted to stay alloyed, out of 21', () => {
     const out = runPairwrightJson<RankResult>(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'alloy', ...data]);
-    expect(out.rows).toHaveLength(21);
+    expect(out.ranked).toBe(21);
+    expect(out.rows).toHaveLength(out.meeting);
     expect(out.rows[0]?.rank).toBe(1);
+    for (const row of out.rows) expect(['alloy', 'surface-enriched alloy']).toContain(row.prediction.architectureKind);
+    expect(out.missing).toEqual([]);
     expect(out.target).toBe('alloy');
+  });
+
+  it('rank --target core@shell:Au lists only Au-shelled pairs; --all adds the rest, marked with why', () => {
+    const args = ['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'core@shell:Au', ...data];
+    const out = runPairwrightJson<RankResult>(args);
+    expect(out.rows.length).toBeGreaterThan(0);
+    for (const row of out.rows) expect(row.prediction.surfaceElement).toBe('Au');
+    expect(out.missing).toEqual([]);
+    const all = runPairwrightJson<RankResult>([...args, '--all']);
+    expect(all.rows.length + all.missing.length).toBe(21);
+    expect(all.missing.find((row) => row.prediction.pair === 'Au-Ag')?.miss).toBe('Ag goes to the surface, not Au');
+    const text = runPairwright([...args, '--all']);
+    expect(text.stdout).toMatch(/\d+ of 21 pairs meet the target/);
+    expect(text.stdout).toMatch(/Not meeting core@shell with Au in the shell:/);
+  });
+
+  it('rank --target core@shell:Pt: none of the seven meets it; says so and shows the closest three', () => {
+    const run = runPairwright(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'core@shell:Pt', ...data]);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/0 of 21 pairs meet the target/);
+    expect(run.stdout).toMatch(/No pair meets core@shell with Pt in the shell; the closest:/);
+    const out = runPairwrightJson<RankResult>(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'core@shell:Pt', ...data]);
+    expect(out.rows).toEqual([]);
+    expect(out.missing).toHaveLength(3);
   });
 
   it('human output for predict names the surface element and the terms', () => {

@@ -2,11 +2,11 @@
  * `pairwright elements`, `pairwright predict A-B`, `pairwright rank --elements … --target …`:
  * the segregation prediction from the command line (same services as the app).
  */
-import type { ConditionsInput } from '../../../shared-model/api/prediction';
+import type { ConditionsInput, MissRow, RankRow } from '../../../shared-model/api/prediction';
 import { PREDICTION_DEFAULTS } from '../../../shared-model/prediction/conditions';
 import type { Prediction } from '../../../shared-model/prediction/predict';
 import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
-import { formatTable } from '../table';
+import { formatTable, type Column } from '../table';
 
 const CONDITION_OPTIONS: Record<string, OptionSpec> = {
   xB: { type: 'string', description: 'atomic fraction of the second element B, 0 < xB < 1 (default 0.5)' },
@@ -67,6 +67,20 @@ function describePrediction(p: Prediction): string {
   ].join('\n');
 }
 
+const RANK_COLUMNS: Array<Column<RankRow>> = [
+  { header: '#', value: (r) => r.rank, align: 'right' },
+  { header: 'pair', value: (r) => r.prediction.pair },
+  { header: 'score', value: (r) => r.score.toFixed(3), align: 'right' },
+  { header: 'architecture', value: (r) => r.prediction.architecture },
+  { header: 'conf.', value: (r) => `${r.prediction.confidence.toFixed(2)}${r.prediction.certainty.uncertain ? ' uncertain' : ''}`, align: 'right' },
+  { header: 'as made', value: (r) => r.prediction.verdicts.asMade },
+  { header: 'in air', value: (r) => r.prediction.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ') || '-' },
+  { header: 'surface', value: (r) => r.prediction.surfaceElement ?? '-' },
+  { header: 'E', value: (r) => r.prediction.enrichment.toFixed(2), align: 'right' },
+  { header: 'ΔHmix kJ/mol', value: (r) => r.prediction.mixingEnthalpyKjPerMol.toFixed(1), align: 'right' },
+  { header: 'why', value: (r) => r.prediction.reason },
+];
+
 export const predictionCommands: CliCommand[] = [
   {
     words: ['elements'],
@@ -110,12 +124,13 @@ export const predictionCommands: CliCommand[] = [
   {
     words: ['rank'],
     args: '',
-    summary: 'Rank every pair of an element set for a target: rank --elements Pt,Pd,Au,Ag,Ni,Cu,Co --target alloy',
+    summary: 'The pairs of an element set that meet a target, best first: rank --elements Pt,Pd,Au,Ag,Ni,Cu,Co --target core@shell:Pt [--all]',
     options: {
       ...CONDITION_OPTIONS,
       elements: { type: 'string', description: 'comma-separated symbols, or "all" (default all)' },
       target: { type: 'string', description: 'alloy, core@shell, core@shell:X (X in the shell), Janus or intermetallic (default alloy)' },
       limit: { type: 'string', description: 'print only the best N pairs' },
+      all: { type: 'boolean', description: 'also list the pairs that do not meet the target, with why' },
     },
     run: async (args, context) => {
       const list = optionalString(args, 'elements') ?? 'all';
@@ -127,22 +142,23 @@ export const predictionCommands: CliCommand[] = [
         target: optionalString(args, 'target') ?? 'alloy',
         conditions: conditionsFrom(args),
         ...(limit !== undefined ? { limit } : {}),
+        ...(args.values.all === true ? { all: true } : {}),
       });
-      const text =
-        `target: ${result.target}; xB ${result.conditions.xB}, ${result.conditions.diameterNm} nm ${result.conditions.shape}, ${result.conditions.temperatureK} K for ${result.conditions.timeH} h, ${result.conditions.environment}\n` +
-        formatTable(result.rows, [
-          { header: '#', value: (r) => r.rank, align: 'right' },
-          { header: 'pair', value: (r) => r.prediction.pair },
-          { header: 'score', value: (r) => r.score.toFixed(3), align: 'right' },
-          { header: 'architecture', value: (r) => r.prediction.architecture },
-          { header: 'conf.', value: (r) => `${r.prediction.confidence.toFixed(2)}${r.prediction.certainty.uncertain ? ' uncertain' : ''}`, align: 'right' },
-          { header: 'as made', value: (r) => r.prediction.verdicts.asMade },
-          { header: 'in air', value: (r) => r.prediction.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ') || '-' },
-          { header: 'surface', value: (r) => r.prediction.surfaceElement ?? '-' },
-          { header: 'E', value: (r) => r.prediction.enrichment.toFixed(2), align: 'right' },
-          { header: 'ΔHmix kJ/mol', value: (r) => r.prediction.mixingEnthalpyKjPerMol.toFixed(1), align: 'right' },
-          { header: 'why', value: (r) => r.prediction.reason },
-        ]);
+      const header =
+        `target: ${result.target}; xB ${result.conditions.xB}, ${result.conditions.diameterNm} nm ${result.conditions.shape}, ` +
+        `${result.conditions.temperatureK} K for ${result.conditions.timeH} h, ${result.conditions.environment}\n` +
+        `${result.meeting} of ${result.ranked} pairs meet the target`;
+      const parts = [header];
+      if (result.rows.length > 0) parts.push(formatTable(result.rows, RANK_COLUMNS));
+      if (result.missing.length > 0) {
+        parts.push(
+          result.meeting === 0
+            ? `No pair meets ${result.target}; the closest:`
+            : `Not meeting ${result.target}:`,
+          formatTable(result.missing, [...RANK_COLUMNS.slice(0, 3), { header: 'not met because', value: (r: MissRow) => r.miss }, ...RANK_COLUMNS.slice(3)]),
+        );
+      } else if (result.meeting < result.ranked) parts.push(`(${result.ranked - result.meeting} pairs that miss it: add --all)`);
+      const text = parts.join('\n');
       return { json: result, text };
     },
   },

@@ -7,7 +7,7 @@ import { useMemo, useState, type KeyboardEvent } from 'react';
 import { DomainError } from '../../../shared-model/api/result';
 import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
 import type { Prediction } from '../../../shared-model/prediction/predict';
-import { describeRankTarget, qualifiesFor, rankPairs, type RankTarget } from '../../../shared-model/prediction/rank';
+import { describeRankTarget, rankPairs, splitByTarget, type RankTarget } from '../../../shared-model/prediction/rank';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { PairDetail } from './PairDetail';
@@ -17,11 +17,14 @@ interface Row {
   rank: number;
   score: number;
   p: Prediction;
+  /** Why the pair does not meet the target; null when it does. */
+  miss: string | null;
 }
 
 type SortKey =
   | 'rank'
   | 'pair'
+  | 'score'
   | 'architecture'
   | 'asMade'
   | 'confidence'
@@ -37,6 +40,7 @@ type SortKey =
 const COLUMNS: Array<{ key: SortKey; label: string; numeric: boolean; value: (r: Row) => number | string }> = [
   { key: 'rank', label: '#', numeric: true, value: (r) => r.rank },
   { key: 'pair', label: 'pair', numeric: false, value: (r) => r.p.pair },
+  { key: 'score', label: 'score', numeric: true, value: (r) => r.score },
   { key: 'architecture', label: 'predicted', numeric: false, value: (r) => r.p.architecture },
   { key: 'confidence', label: 'confidence', numeric: true, value: (r) => r.p.confidence },
   { key: 'surface', label: 'at surface', numeric: false, value: (r) => r.p.surfaceElement ?? '' },
@@ -72,6 +76,16 @@ function toTarget(kind: TargetKind, shell: string): RankTarget {
   }
 }
 
+interface Ranking {
+  meeting: Row[];
+  missing: Row[];
+  errors: Record<string, string>;
+  target: string;
+}
+
+/** How many of the closest pairs are shown when none meets the target. */
+const CLOSEST = 3;
+
 const fmt = (x: number, digits = 2) => (x >= 0 ? '+' : '−') + Math.abs(x).toFixed(digits);
 
 export function CandidatesView() {
@@ -83,26 +97,38 @@ export function CandidatesView() {
   const [sort, setSort] = useState<{ key: SortKey; direction: 1 | -1 }>({ key: 'rank', direction: 1 });
   const [cursor, setCursor] = useState(0);
   const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
+  const [showRest, setShowRest] = useState(false);
   const conditions = conditionsState.conditions;
 
-  const ranking = useMemo((): { rows: Row[]; errors: Record<string, string>; target: string } => {
-    if (conditions === null) return { rows: [], errors: {}, target: '' };
+  const ranking = useMemo((): Ranking => {
+    const none: Ranking = { meeting: [], missing: [], errors: {}, target: '' };
+    if (conditions === null) return none;
     try {
       const target = toTarget(targetKind, shell);
-      const all = rankPairs(parseElementList(elementsText), target, conditions);
-      // Janus is a yes/no question of the wetting criterion: only the pairs that qualify (as the API answers)
-      const ranked = target.kind === 'Janus' ? all.filter((r) => qualifiesFor(target, r.prediction)) : all;
-      return { rows: ranked.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction })), errors: {}, target: describeRankTarget(target) };
+      // the question asked: only the pairs that meet the target (as the API answers); the rest on request
+      const { meeting, missing } = splitByTarget(rankPairs(parseElementList(elementsText), target, conditions), target);
+      return {
+        meeting: meeting.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction, miss: null })),
+        missing: missing.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction, miss: r.miss })),
+        errors: {},
+        target: describeRankTarget(target),
+      };
     } catch (error) {
       if (!(error instanceof DomainError)) throw error;
       const field = error.field === 'target' ? 'shell' : 'elements';
-      return { rows: [], errors: { [field]: error.message }, target: '' };
+      return { ...none, errors: { [field]: error.message } };
     }
   }, [conditions, elementsText, targetKind, shell]);
 
+  const noneMeets = ranking.target !== '' && ranking.meeting.length === 0;
+  const shown = useMemo(
+    () => [...ranking.meeting, ...(showRest ? ranking.missing : noneMeets ? ranking.missing.slice(0, CLOSEST) : [])],
+    [ranking, showRest, noneMeets],
+  );
+
   const visible = useMemo(() => {
     const needle = filter.trim().toLowerCase();
-    const kept = needle === '' ? ranking.rows : ranking.rows.filter((r) => `${r.p.pair} ${r.p.architecture} ${r.p.surfaceElement ?? ''}`.toLowerCase().includes(needle));
+    const kept = needle === '' ? shown : shown.filter((r) => `${r.p.pair} ${r.p.architecture} ${r.p.surfaceElement ?? ''}`.toLowerCase().includes(needle));
     const column = COLUMNS.find((c) => c.key === sort.key) ?? COLUMNS[0];
     if (!column) return kept;
     return [...kept].sort((x, y) => {
@@ -111,7 +137,7 @@ export function CandidatesView() {
       const order = typeof a === 'number' && typeof b === 'number' ? a - b : String(a).localeCompare(String(b));
       return sort.direction * order || x.rank - y.rank;
     });
-  }, [ranking.rows, filter, sort]);
+  }, [shown, filter, sort]);
 
   const active = Math.min(cursor, Math.max(0, visible.length - 1));
   const onKey = (event: KeyboardEvent<HTMLDivElement>) => {
@@ -165,8 +191,24 @@ export function CandidatesView() {
       {conditions === null ? <Banner tone="error">Fix the highlighted condition to see the ranking.</Banner> : null}
       <div className="card">
         <h2 className="card__title">
-          {ranking.target ? `Best for ${ranking.target}` : 'Ranking'} <span className="muted small">({visible.length} of {ranking.rows.length} pairs; ↑/↓ to move, Enter to open)</span>
+          {ranking.target ? `Best for ${ranking.target}` : 'Ranking'}{' '}
+          <span className="muted small" data-testid="ranking-count">
+            ({ranking.meeting.length} of {ranking.meeting.length + ranking.missing.length} pairs meet the target; {visible.length} shown; ↑/↓ to move, Enter to open)
+          </span>
         </h2>
+        {noneMeets ? (
+          <Banner tone="info">
+            No pair of these elements meets {ranking.target} under these conditions; {showRest ? 'all pairs' : `the closest ${Math.min(CLOSEST, ranking.missing.length)}`} are shown, each with why
+            it misses.
+          </Banner>
+        ) : null}
+        {ranking.missing.length > 0 ? (
+          <p>
+            <button type="button" className="button--quiet" aria-pressed={showRest} onClick={() => setShowRest((v) => !v)}>
+              {showRest ? 'Hide the pairs that miss the target' : `Show the rest (${ranking.missing.length} pairs that miss the target)`}
+            </button>
+          </p>
+        ) : null}
         <div style={{ maxHeight: 480, overflow: 'auto' }} tabIndex={0} onKeyDown={onKey} role="region" aria-label="Ranked pairs, use arrow keys" data-testid="ranking-region">
           <table className="data-table" aria-label="Ranked candidates" aria-rowcount={visible.length}>
             <thead>
@@ -179,6 +221,7 @@ export function CandidatesView() {
                     </button>
                   </th>
                 ))}
+                <th scope="col">meets the target?</th>
                 <th scope="col">why</th>
               </tr>
             </thead>
@@ -189,6 +232,8 @@ export function CandidatesView() {
                   aria-selected={index === active}
                   style={index === active ? { background: 'rgba(59, 130, 246, 0.14)', cursor: 'pointer' } : { cursor: 'pointer' }}
                   data-pair={row.p.pair}
+                  data-meets={row.miss === null ? 'yes' : 'no'}
+                  className={row.miss === null ? undefined : 'muted'}
                   onClick={() => {
                     setCursor(index);
                     setOpen({ a: row.p.elementA, b: row.p.elementB });
@@ -198,6 +243,7 @@ export function CandidatesView() {
                   <th scope="row" className="pair-symbol">
                     {row.p.pair}
                   </th>
+                  <td>{row.score.toFixed(3)}</td>
                   <td>{row.p.architecture}</td>
                   <td>
                     {row.p.confidence.toFixed(2)}
@@ -212,6 +258,9 @@ export function CandidatesView() {
                   <td>{fmt(row.p.terms.adsorbate)}</td>
                   <td>{fmt(row.p.mixingEnthalpyKjPerMol, 1)}</td>
                   <td>{airText(row)}</td>
+                  <td className="small" data-testid="meets">
+                    {row.miss === null ? 'yes' : `no: ${row.miss}`}
+                  </td>
                   <td className="notes-cell small">{row.p.reason}</td>
                 </tr>
               ))}
