@@ -22,7 +22,7 @@ export async function dispatchKnown<Name extends OperationName>(
   try {
     return ok(await runOperation(context, name, rawInput));
   } catch (error) {
-    return errorToResult(name, error);
+    return errorToResult(name, error, rawInput);
   }
 }
 
@@ -61,14 +61,33 @@ export function runOperationInTransaction<Name extends OperationName>(
   return output;
 }
 
+/** The top-level field of the input with the longest text or list (the likeliest cause of an allocation failure). */
+function largestField(input: unknown): string | null {
+  if (typeof input !== 'object' || input === null) return null;
+  let best: string | null = null;
+  let bestSize = -1;
+  for (const [key, value] of Object.entries(input)) {
+    const size = typeof value === 'string' || Array.isArray(value) ? value.length : typeof value === 'object' && value !== null ? Object.keys(value).length : 0;
+    if (size > bestSize) [best, bestSize] = [key, size];
+  }
+  return best;
+}
+
 function errorToResult(
   name: string,
   error: unknown,
+  input: unknown,
 ): { ok: false; error: { code: DomainError['code']; message: string; field?: string } } {
   if (error instanceof DomainError) return fail(error.code, error.message, error.field);
   if (error instanceof RangeError) {
-    // Model code signals bad arguments this way; the message names the argument.
     console.error(`[pairwright] ${name}:`, error);
+    // The engine's own RangeErrors (an array too large to allocate, a stack too deep) name no argument: name the
+    // input's largest field instead, so the user knows what to shrink.
+    if (/typed array length|Array buffer allocation|Invalid array length|call stack size/i.test(error.message)) {
+      const field = largestField(input);
+      return fail('invalid_input', `${field ?? 'the input'} is too large or too deeply nested to compute (${error.message})`, field ?? undefined);
+    }
+    // Model code signals bad arguments this way; the message names the argument.
     return fail('invalid_input', error.message);
   }
   console.error(`[pairwright] ${name} failed:`, error);

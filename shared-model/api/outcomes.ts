@@ -14,6 +14,16 @@ import type { SizeAnalysis } from '../characterization/size-analysis';
 import { operation } from './operation';
 import { elementSymbolSchema, idSchema, pairTextSchema } from './schemas';
 
+
+/**
+ * A STEM probe's σ, nm: 0.01–50 (aberration-corrected probes are ~0.05 nm wide, broad scans a few nm; common
+ * practice). 1e-6 or 1e6 nm once made a line-scan fit run for minutes.
+ */
+const probeSigmaSchema = z
+  .number({ error: 'must be a number of nm' })
+  .min(0.01, 'must be at least 0.01 nm')
+  .max(50, 'must be at most 50 nm');
+
 export interface SizeRecord extends SizeAnalysis {
   id: number;
   batchId: number;
@@ -220,12 +230,7 @@ const lineScanImportFields = {
   bColumn: columnSchema.optional(),
   unit: z.enum(['auto', 'counts', 'atPercent'], { error: 'must be auto, counts or atPercent' }).default('auto'),
   decimalSeparator: decimalSchema,
-  probeSigmaNm: z
-    .number({ error: 'must be a number of nm' })
-    .positive('must be greater than 0')
-    .max(50, 'must be at most 50 nm')
-    .nullable()
-    .default(null),
+  probeSigmaNm: probeSigmaSchema.nullable().default(null),
 };
 
 const filePathSchema = z
@@ -357,11 +362,7 @@ export const outcomeOperations = {
     summary: 'Fit a stored line scan again (current analysis version, optionally a given probe σ)',
     input: z.object({
       id: idSchema,
-      probeSigmaNm: z
-        .number({ error: 'must be a number of nm' })
-        .positive('must be greater than 0')
-        .nullable()
-        .optional(),
+      probeSigmaNm: probeSigmaSchema.nullable().optional(),
     }),
   }),
   'outcomes.removeLineScan': operation<{ removed: number }>()({

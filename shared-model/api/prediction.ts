@@ -26,6 +26,8 @@ export const diameterNmSchema = finite('nm')
   .refine((d) => d <= 1000, { error: 'must be at most 1000 nm' });
 export const temperatureKSchema = finite('K')
   .refine((t) => t > 0, { error: 'must be a positive temperature in K' })
+  // At least 1 K: the models are for synthesis and annealing temperatures; a denormal such as 5e-324 K is refused.
+  .refine((t) => t <= 0 || t >= 1, { error: 'must be at least 1 K' })
   .refine((t) => t <= 5000, { error: 'must be at most 5000 K' });
 export const facetSchema = z.enum(SURFACE_FACETS, { error: 'must be "111" or "100"' });
 export const environmentSchema = z.enum(ENVIRONMENTS, { error: `must be one of: ${ENVIRONMENTS.join(', ')}` });

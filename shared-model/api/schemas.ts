@@ -5,11 +5,18 @@ import { normaliseShapeName, PARTICLE_SHAPES } from '../geometry/shapes';
 
 export const idSchema = z.number({ error: 'must be a number' }).int('must be a whole number').positive('must be a positive id');
 
+/** True when text holds a NUL or another control character that no name or note should carry (tab and newline pass). */
+export function hasControlCharacters(text: string): boolean {
+  // eslint-disable-next-line no-control-regex
+  return /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(text);
+}
+
 export const nameSchema = z
   .string({ error: 'must be text' })
   .trim()
   .min(1, 'must not be empty')
-  .max(120, 'must be at most 120 characters');
+  .max(120, 'must be at most 120 characters')
+  .refine((text) => !hasControlCharacters(text), 'must not contain control characters such as NUL');
 
 export const elementSymbolSchema = z
   .string({ error: 'must be an element symbol' })

@@ -92,6 +92,24 @@ function parseProperties(spec: string): PropertyColumn[] {
  * x y z. A periodic cell (Lattice with pbc true) is refused: the energy of a structure here is that of
  * a free cluster.
  */
+/** Two atoms closer than this are taken as one place (0.0001 Å; far below any bond length, common practice). */
+const SAME_PLACE_ANGSTROM = 1e-4;
+
+/** Refuses two atoms at the same position, naming both lines (an energy or a swap there is meaningless). */
+function checkDistinctPositions(positions: Float64Array, firstLineIndex: number): void {
+  const seen = new Map<string, number>();
+  const atoms = positions.length / 3;
+  for (let i = 0; i < atoms; i++) {
+    const key = [0, 1, 2].map((d) => Math.round((positions[3 * i + d] as number) / SAME_PLACE_ANGSTROM)).join(',');
+    const earlier = seen.get(key);
+    if (earlier !== undefined) {
+      const at = [0, 1, 2].map((d) => positions[3 * i + d]).join(' ');
+      throw invalid('xyz', `lines ${firstLineIndex + earlier + 1} and ${firstLineIndex + i + 1}: two atoms at the same position (${at} Å)`);
+    }
+    seen.set(key, i);
+  }
+}
+
 export function readExtendedXyz(text: string): XyzFrame {
   const lines = text.replace(/\r\n?/g, '\n').split('\n');
   let start = 0;
@@ -100,6 +118,11 @@ export function readExtendedXyz(text: string): XyzFrame {
   const countText = lines[start]!.trim();
   const atoms = Number(countText);
   if (!Number.isInteger(atoms) || atoms < 1) throw invalid('xyz', `line ${start + 1} must be the number of atoms, got "${countText}"`);
+  // Checked before any array is sized by it: a huge count would otherwise be a RangeError from the allocation.
+  const atomLines = lines.length - start - 2;
+  if (atoms > atomLines) {
+    throw invalid('xyz', `line ${start + 1}: expected ${atoms} atom lines, the file has at most ${Math.max(0, atomLines)}`);
+  }
   const info = parseCommentLine(lines[start + 1] ?? '');
   if (info.Lattice !== undefined) {
     const pbc = (info.pbc ?? 'T T T').trim().split(/\s+/);
@@ -135,5 +158,6 @@ export function readExtendedXyz(text: string): XyzFrame {
       positions[3 * i + d] = value;
     }
   }
+  checkDistinctPositions(positions, start + 2);
   return { symbols, positions, info };
 }

@@ -6,7 +6,6 @@
  */
 import { execFile, spawnSync } from 'node:child_process';
 import { chmodSync, copyFileSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -15,6 +14,9 @@ import { callApi, logIn } from '../support/http-client';
 import { inCi } from '../support/reference-tools';
 
 const run = promisify(execFile);
+// The test run's own temp folder (TMPDIR) is private to this account, so the other account could not even walk
+// to the data folder; these folders go to the system's /tmp (world-traversable) and are removed in afterAll.
+const SYSTEM_TMP = '/tmp';
 const attackerUser = process.env.PAIRWRIGHT_ATTACKER_USER ?? '';
 const NODE = process.execPath;
 
@@ -46,13 +48,13 @@ describe.skipIf(missing !== null)('another local account against the browser hos
   let dataDir: string;
 
   beforeAll(async () => {
-    parent = mkdtempSync(join(tmpdir(), 'pairwright-uid-'));
+    parent = mkdtempSync(join(SYSTEM_TMP, 'pairwright-uid-'));
     chmodSync(parent, 0o755); // the attacker may walk up to the data folder itself
     dataDir = join(parent, 'data');
     fixture = await startTestHost(dataDir);
     const cookie = await logIn(fixture.host); // a live session exists while the attacker guesses
     expect((await callApi(fixture.host, cookie, 'campaigns.create', { name: 'Owner only' })).status).toBe(200);
-    scriptDir = mkdtempSync(join(tmpdir(), 'pairwright-attacker-'));
+    scriptDir = mkdtempSync(join(SYSTEM_TMP, 'pairwright-attacker-'));
     chmodSync(scriptDir, 0o755);
     copyFileSync(join(import.meta.dirname, 'attacker.mjs'), join(scriptDir, 'attacker.mjs'));
     chmodSync(join(scriptDir, 'attacker.mjs'), 0o644);
