@@ -10,6 +10,7 @@ import {
   CliError,
   optionalNumber,
   optionalString,
+  readNumberText,
   requirePositional,
   requireString,
   type CliCommand,
@@ -132,8 +133,7 @@ export const learnCommands: CliCommand[] = [
     run: async (args, context) => {
       const symbol = requirePositional(args, 0, 'metal');
       const priceText = requirePositional(args, 1, 'price per gram');
-      const pricePerGram = Number(priceText.replace(',', '.'));
-      if (!Number.isFinite(pricePerGram)) throw new CliError(`<price per gram> must be a number, got "${priceText}"`);
+      const pricePerGram = readNumberText(priceText, '<price per gram>');
       const price = await context.call('learn.setPrice', {
         symbol,
         pricePerGram,
