@@ -4,7 +4,9 @@ import { INITIAL_RUN_FORM, modeText, readRunForm } from '../../../renderer/src/v
 
 describe('run form: relaxation and stopping', () => {
   it('says which mode the pair runs in by default, and why', () => {
-    expect(modeText({ ...INITIAL_RUN_FORM, elementA: 'Au', elementB: 'Ni' })).toMatch(/^Relaxed: nearest-neighbour distances differ by 14\.\d %/);
+    expect(modeText({ ...INITIAL_RUN_FORM, elementA: 'Au', elementB: 'Ni' })).toMatch(
+      /^Relaxed: nearest-neighbour distances differ by 14\.\d %/,
+    );
     expect(modeText(INITIAL_RUN_FORM)).toMatch(/^Rigid lattice: .*at most 6 %/);
     expect(modeText({ ...INITIAL_RUN_FORM, relaxation: 'relaxed' })).toBe('Relaxed: chosen.');
   });
