@@ -134,7 +134,7 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     // 0.075 + 0.225 mmol × 517.91 g/mol = 155.4 mg needed, 100 mg on hand
     await expect.poll(() => ptRow.getAttribute('data-status')).toBe('short');
     expect(await ptRow.getAttribute('class')).toContain('row--short');
-    expect(await page.locator('[aria-label="Hazard summary across the list"] tr[data-hcode="H334"]').count()).toBe(1);
+    expect(await page.locator('[aria-label^="Hazard summary across the list"] tr[data-hcode="H334"]').count()).toBe(1);
     await page.screenshot({ path: screenshotPath('reagents-list'), fullPage: true });
 
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV' }).click()]);

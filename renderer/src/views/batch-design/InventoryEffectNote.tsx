@@ -11,8 +11,7 @@ export function InventoryEffectNote({ change }: { change: StatusChange }) {
   const tone = effect.warnings.length > 0 ? 'caution' : 'info';
   return (
     <Banner tone={tone} testId="inventory-effect">
-      {head}{' '}
-      {effect.movements.length > 0 ? `${verb}:` : `${verb}: nothing.`}
+      {head} {effect.movements.length > 0 ? `${verb}:` : `${verb}: nothing.`}
       {effect.movements.length > 0 ? (
         <ul>
           {effect.movements.map((m) => (
