@@ -2,13 +2,43 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 
-const nodeBuiltins = ['node:*', 'fs', 'fs/*', 'path', 'os', 'child_process', 'worker_threads', 'http', 'https', 'net', 'crypto', 'url', 'stream', 'util', 'events', 'module', 'process', 'buffer', 'zlib'];
+const nodeBuiltins = [
+  'node:*',
+  'fs',
+  'fs/*',
+  'path',
+  'os',
+  'child_process',
+  'worker_threads',
+  'http',
+  'https',
+  'net',
+  'crypto',
+  'url',
+  'stream',
+  'util',
+  'events',
+  'module',
+  'process',
+  'buffer',
+  'zlib',
+];
 
 const forbid = (groups, message) => ['error', { patterns: groups.map((group) => ({ group: [group], message })) }];
 
 export default tseslint.config(
   {
-    ignores: ['node_modules/**', 'dist/**', 'dist-electron/**', 'release/**', '.tsbuild/**', 'test-output/**', '.native/**', 'test/fixtures/**', '.cache/**'],
+    ignores: [
+      'node_modules/**',
+      'dist/**',
+      'dist-electron/**',
+      'release/**',
+      '.tsbuild/**',
+      'test-output/**',
+      '.native/**',
+      'test/fixtures/**',
+      '.cache/**',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,
@@ -29,9 +59,15 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: nodeBuiltins, message: 'shared-model is pure: no Node built-ins (see DEVELOPERS.md, layer rules).' },
+            {
+              group: nodeBuiltins,
+              message: 'shared-model is pure: no Node built-ins (see DEVELOPERS.md, layer rules).',
+            },
             { group: ['electron', 'electron/*'], message: 'shared-model must not import electron.' },
-            { group: ['better-sqlite3', '**/db/**', '../db', '../../db'], message: 'shared-model must not import the store.' },
+            {
+              group: ['better-sqlite3', '**/db/**', '../db', '../../db'],
+              message: 'shared-model must not import the store.',
+            },
             { group: ['react', 'react-dom', '**/renderer/**'], message: 'shared-model must not import UI code.' },
           ],
         },
@@ -58,7 +94,13 @@ export default tseslint.config(
     files: ['electron/**/*.ts', 'electron/**/*.cts'],
     ignores: ['electron/desktop/**'],
     rules: {
-      'no-restricted-imports': ['error', forbid(['electron', 'electron/*'], "Only electron/desktop/ imports 'electron' (see DEVELOPERS.md, layer rules).")[1]],
+      'no-restricted-imports': [
+        'error',
+        forbid(
+          ['electron', 'electron/*'],
+          "Only electron/desktop/ imports 'electron' (see DEVELOPERS.md, layer rules).",
+        )[1],
+      ],
     },
   },
   {
@@ -69,7 +111,11 @@ export default tseslint.config(
         {
           patterns: [
             { group: ['electron', 'electron/*'], message: "The CLI and the browser host never import 'electron'." },
-            { group: ['**/db/**', 'better-sqlite3'], message: 'The CLI and the browser host reach the store through services (electron/services/workspace.ts and dispatch), never db/ directly.' },
+            {
+              group: ['**/db/**', 'better-sqlite3'],
+              message:
+                'The CLI and the browser host reach the store through services (electron/services/workspace.ts and dispatch), never db/ directly.',
+            },
           ],
         },
       ],
@@ -78,7 +124,10 @@ export default tseslint.config(
   {
     files: ['electron/**/*.ts', 'electron/**/*.cts'],
     rules: {
-      'no-restricted-syntax': ['error', { selector: "ImportDeclaration[source.value=/renderer/]", message: 'electron/ must not import renderer code.' }],
+      'no-restricted-syntax': [
+        'error',
+        { selector: 'ImportDeclaration[source.value=/renderer/]', message: 'electron/ must not import renderer code.' },
+      ],
     },
   },
   {
@@ -101,7 +150,10 @@ export default tseslint.config(
         {
           patterns: [
             { group: nodeBuiltins, message: 'renderer runs in the browser: no Node built-ins.' },
-            { group: ['electron', 'electron/*', '**/electron/**'], message: 'renderer reaches data only through the api client.' },
+            {
+              group: ['electron', 'electron/*', '**/electron/**'],
+              message: 'renderer reaches data only through the api client.',
+            },
             { group: ['better-sqlite3', '**/db/**'], message: 'renderer reaches data only through the api client.' },
           ],
         },

@@ -21,7 +21,8 @@ export interface BackupFile {
   bytes: number;
 }
 
-const BACKUP_NAME = /^pairwright-v(\d+)-(\d{4}-\d{2}-\d{2})T(\d{2})-(\d{2})-(\d{2})-(\d{3})Z-(migration|daily|manual|before-restore)\.sqlite$/;
+const BACKUP_NAME =
+  /^pairwright-v(\d+)-(\d{4}-\d{2}-\d{2})T(\d{2})-(\d{2})-(\d{2})-(\d{3})Z-(migration|daily|manual|before-restore)\.sqlite$/;
 
 export function ensureBackupsDir(dataDir: string): string {
   const dir = backupsDirOf(dataDir);
@@ -40,7 +41,12 @@ export function backupFileName(schemaVersion: number, reason: BackupReason, at: 
 }
 
 /** A consistent snapshot of `db` into the backups folder (VACUUM INTO accepts an existing empty file). */
-export function snapshotToBackups(db: Database.Database, dataDir: string, schemaVersion: number, reason: BackupReason): string {
+export function snapshotToBackups(
+  db: Database.Database,
+  dataDir: string,
+  schemaVersion: number,
+  reason: BackupReason,
+): string {
   const target = join(ensureBackupsDir(dataDir), backupFileName(schemaVersion, reason));
   createOwnerOnlyFile(target);
   try {

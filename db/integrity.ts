@@ -57,11 +57,19 @@ export function assertSound(db: Database.Database, path: string, dataDir: string
     const corrupt = code === 'SQLITE_CORRUPT';
     const problem: StoreProblem = notDb ? 'not_a_store' : corrupt ? 'damaged' : 'unreadable';
     const what = notDb ? 'is not an SQLite database' : corrupt ? 'is damaged' : 'cannot be read';
-    throw new StoreOpenError(problem, path, `The store ${path} ${what}: ${describeSqliteFailure(error)}. ${restoreAdvice(dataDir)}`);
+    throw new StoreOpenError(
+      problem,
+      path,
+      `The store ${path} ${what}: ${describeSqliteFailure(error)}. ${restoreAdvice(dataDir)}`,
+    );
   }
   if (problems.length > 0) {
     const shown = problems.slice(0, 3).join('; ');
     const more = problems.length > 3 ? ` (and ${problems.length - 3} more)` : '';
-    throw new StoreOpenError('damaged', path, `The store ${path} is damaged (SQLite ${level} check: ${shown}${more}). ${restoreAdvice(dataDir)}`);
+    throw new StoreOpenError(
+      'damaged',
+      path,
+      `The store ${path} is damaged (SQLite ${level} check: ${shown}${more}). ${restoreAdvice(dataDir)}`,
+    );
   }
 }

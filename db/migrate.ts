@@ -28,7 +28,9 @@ export function defaultMigrationsDir(): string {
 }
 
 export function loadMigrations(dir: string = defaultMigrationsDir()): Migration[] {
-  const files = readdirSync(dir).filter((file) => /^\d{4}_[a-z0-9_]+\.sql$/.test(file)).sort();
+  const files = readdirSync(dir)
+    .filter((file) => /^\d{4}_[a-z0-9_]+\.sql$/.test(file))
+    .sort();
   const migrations = files.map((file) => ({
     version: Number.parseInt(file.slice(0, 4), 10),
     name: file.replace(/\.sql$/, ''),
@@ -36,7 +38,9 @@ export function loadMigrations(dir: string = defaultMigrationsDir()): Migration[
   }));
   migrations.forEach((migration, index) => {
     if (migration.version !== index + 1) {
-      throw new Error(`migrations must be numbered 0001, 0002, … without gaps; found ${migration.name} at position ${index + 1}`);
+      throw new Error(
+        `migrations must be numbered 0001, 0002, … without gaps; found ${migration.name} at position ${index + 1}`,
+      );
     }
   });
   return migrations;
@@ -48,7 +52,10 @@ function backupBeforeMigrating(db: Database.Database, dbPath: string, fromVersio
   return snapshotToBackups(db, dirname(dbPath), fromVersion, 'migration');
 }
 
-export function migrate(db: Database.Database, options: { dbPath: string; migrationsDir?: string | undefined }): MigrationReport {
+export function migrate(
+  db: Database.Database,
+  options: { dbPath: string; migrationsDir?: string | undefined },
+): MigrationReport {
   const migrations = loadMigrations(options.migrationsDir);
   const fromVersion = db.pragma('user_version', { simple: true }) as number;
   const latest = migrations.length;

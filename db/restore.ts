@@ -40,12 +40,23 @@ function checkCandidate(file: string, migrationsDir: string | undefined): { vers
   }
   try {
     const problems = integrityProblems(db, 'full');
-    if (problems.length > 0) throw new RestoreError(`${file} is damaged (SQLite integrity check: ${problems.slice(0, 3).join('; ')}); choose another backup`);
+    if (problems.length > 0)
+      throw new RestoreError(
+        `${file} is damaged (SQLite integrity check: ${problems.slice(0, 3).join('; ')}); choose another backup`,
+      );
     const version = db.pragma('user_version', { simple: true }) as number;
     const latest = loadMigrations(migrationsDir).length;
-    if (version > latest) throw new RestoreError(`${file} is at schema version ${version}, newer than this Pairwright (${latest}); update Pairwright first`);
-    const hasCampaigns = db.prepare("SELECT count(*) AS n FROM sqlite_master WHERE type = 'table' AND name = 'campaigns'").get() as { n: number };
-    if (version < 1 || hasCampaigns.n === 0) throw new RestoreError(`${file} is an SQLite file but not a Pairwright store (no schema version or campaigns table)`);
+    if (version > latest)
+      throw new RestoreError(
+        `${file} is at schema version ${version}, newer than this Pairwright (${latest}); update Pairwright first`,
+      );
+    const hasCampaigns = db
+      .prepare("SELECT count(*) AS n FROM sqlite_master WHERE type = 'table' AND name = 'campaigns'")
+      .get() as { n: number };
+    if (version < 1 || hasCampaigns.n === 0)
+      throw new RestoreError(
+        `${file} is an SQLite file but not a Pairwright store (no schema version or campaigns table)`,
+      );
     return { version, db };
   } catch (error) {
     db.close();
@@ -70,7 +81,9 @@ function quiesceCurrent(path: string): number {
     if (error instanceof RestoreError) throw error;
     const code = (error as { code?: unknown }).code;
     if (code === 'SQLITE_BUSY' || code === 'SQLITE_LOCKED') {
-      throw new RestoreError(`the store ${path} is in use by another program; close the desktop app and stop the browser host, then restore`);
+      throw new RestoreError(
+        `the store ${path} is in use by another program; close the desktop app and stop the browser host, then restore`,
+      );
     }
     // A damaged current store cannot be checkpointed; it is moved aside as it is (with its WAL).
     console.warn(`[pairwright] the current store could not be checkpointed before the restore: ${String(error)}`);

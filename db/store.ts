@@ -95,7 +95,11 @@ export function openStore(options: OpenStoreOptions): Store {
     db = new Database(path, options.nativeBinding ? { nativeBinding: options.nativeBinding } : {});
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
-    throw new StoreOpenError('unreadable', path, `The store ${path} cannot be opened: ${reason}. ${restoreAdvice(dataDir)}`);
+    throw new StoreOpenError(
+      'unreadable',
+      path,
+      `The store ${path} cannot be opened: ${reason}. ${restoreAdvice(dataDir)}`,
+    );
   }
   try {
     db.pragma('busy_timeout = 5000');
@@ -108,7 +112,8 @@ export function openStore(options: OpenStoreOptions): Store {
     db.pragma('foreign_keys = ON');
     const migration = migrate(db, { dbPath: path, migrationsDir: options.migrationsDir });
     if (migration.backupPath !== null) pruneBackups(dataDir, backupsKept(db));
-    if (!justCreated && migration.fromVersion > 0 && options.dailyBackup !== false) takeDailyBackup(db, dataDir, migration.toVersion);
+    if (!justCreated && migration.fromVersion > 0 && options.dailyBackup !== false)
+      takeDailyBackup(db, dataDir, migration.toVersion);
     return { db, path, dataDir, migration, close: () => db.close() };
   } catch (error) {
     db.close();

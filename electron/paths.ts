@@ -8,7 +8,10 @@ import { fileURLToPath } from 'node:url';
 
 export const PRODUCT_NAME = 'Pairwright';
 
-export function defaultDataDir(env: NodeJS.ProcessEnv = process.env, platform: NodeJS.Platform = process.platform): string {
+export function defaultDataDir(
+  env: NodeJS.ProcessEnv = process.env,
+  platform: NodeJS.Platform = process.platform,
+): string {
   if (env.PAIRWRIGHT_DATA) return resolve(env.PAIRWRIGHT_DATA);
   if (platform === 'win32') return join(env.APPDATA ?? join(homedir(), 'AppData', 'Roaming'), PRODUCT_NAME);
   if (platform === 'darwin') return join(homedir(), 'Library', 'Application Support', PRODUCT_NAME);

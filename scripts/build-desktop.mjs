@@ -13,22 +13,38 @@ const out = join(root, 'dist-electron');
 export async function buildDesktop() {
   rmSync(join(out, 'main.mjs'), { force: true });
   mkdirSync(out, { recursive: true });
-  const common = { bundle: true, platform: 'node', target: 'node20', sourcemap: true, logLevel: 'warning', external: ['electron', 'better-sqlite3', 'playwright-core'] };
+  const common = {
+    bundle: true,
+    platform: 'node',
+    target: 'node20',
+    sourcemap: true,
+    logLevel: 'warning',
+    external: ['electron', 'better-sqlite3', 'playwright-core'],
+  };
   await build({
     ...common,
     entryPoints: [join(root, 'electron', 'desktop', 'entry.ts')],
     outfile: join(out, 'main.mjs'),
     format: 'esm',
-    banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);",
+    },
   });
-  await build({ ...common, entryPoints: [join(root, 'electron', 'desktop', 'preload.cts')], outfile: join(out, 'preload.cjs'), format: 'cjs' });
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'desktop', 'preload.cts')],
+    outfile: join(out, 'preload.cjs'),
+    format: 'cjs',
+  });
   await build({
     ...common,
     entryPoints: [join(root, 'electron', 'cli', 'bin.ts')],
     outfile: join(out, 'cli.mjs'),
     format: 'esm',
     sourcemap: false,
-    banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);",
+    },
   });
   // the browser host of `npm run serve` (scripts/serve.mjs runs it when it is newer than the sources)
   await build({
@@ -37,10 +53,22 @@ export async function buildDesktop() {
     outfile: join(out, 'serve.mjs'),
     format: 'esm',
     sourcemap: false,
-    banner: { js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __pairwrightRequire } from 'node:module'; const require = __pairwrightRequire(import.meta.url);",
+    },
   });
-  await build({ ...common, entryPoints: [join(root, 'electron', 'workers', 'montecarlo-worker.ts')], outfile: join(out, 'montecarlo-worker.mjs'), format: 'esm' });
-  await build({ ...common, entryPoints: [join(root, 'electron', 'workers', 'learn-worker.ts')], outfile: join(out, 'learn-worker.mjs'), format: 'esm' });
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'workers', 'montecarlo-worker.ts')],
+    outfile: join(out, 'montecarlo-worker.mjs'),
+    format: 'esm',
+  });
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'workers', 'learn-worker.ts')],
+    outfile: join(out, 'learn-worker.mjs'),
+    format: 'esm',
+  });
   rmSync(join(out, 'migrations'), { recursive: true, force: true });
   cpSync(join(root, 'db', 'migrations'), join(out, 'migrations'), { recursive: true });
 }

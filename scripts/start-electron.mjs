@@ -20,12 +20,21 @@ function electronBinary() {
   try {
     // PAIRWRIGHT_ELECTRON_DIR points at another electron package folder (tests use an empty one).
     const override = process.env.PAIRWRIGHT_ELECTRON_DIR;
-    electronPackage = override ? require.resolve(join(override, 'package.json')) : require.resolve('electron/package.json');
+    electronPackage = override
+      ? require.resolve(join(override, 'package.json'))
+      : require.resolve('electron/package.json');
   } catch {
-    return { error: 'Electron is not installed. It is an optional dependency whose install downloads the Electron binary; that download failed or was skipped on this machine.' };
+    return {
+      error:
+        'Electron is not installed. It is an optional dependency whose install downloads the Electron binary; that download failed or was skipped on this machine.',
+    };
   }
   const pathFile = join(dirname(electronPackage), 'path.txt');
-  if (!existsSync(pathFile)) return { error: 'the electron package is present but its binary was never downloaded (node_modules/electron/path.txt is missing).' };
+  if (!existsSync(pathFile))
+    return {
+      error:
+        'the electron package is present but its binary was never downloaded (node_modules/electron/path.txt is missing).',
+    };
   const binary = join(dirname(electronPackage), 'dist', readFileSync(pathFile, 'utf8').trim());
   if (!existsSync(binary)) return { error: `the Electron binary ${binary} is missing.` };
   const version = JSON.parse(readFileSync(electronPackage, 'utf8')).version;
@@ -45,12 +54,47 @@ function ensureElectronSqlite(electronVersion) {
   if (!existsSync(built)) {
     console.log(`Building better-sqlite3 for Electron ${electronVersion} in ${workDir} (once) …`);
     mkdirSync(dirname(workDir), { recursive: true });
-    cpSync(dirname(require.resolve('better-sqlite3/package.json')), workDir, { recursive: true, filter: (src) => !src.includes(`${join('build', 'Release')}`) });
-    const prebuilt = run(process.execPath, [require.resolve('prebuild-install/bin.js'), '--runtime', 'electron', '--target', electronVersion, '--arch', process.arch], { cwd: workDir });
+    cpSync(dirname(require.resolve('better-sqlite3/package.json')), workDir, {
+      recursive: true,
+      filter: (src) => !src.includes(`${join('build', 'Release')}`),
+    });
+    const prebuilt = run(
+      process.execPath,
+      [
+        require.resolve('prebuild-install/bin.js'),
+        '--runtime',
+        'electron',
+        '--target',
+        electronVersion,
+        '--arch',
+        process.arch,
+      ],
+      { cwd: workDir },
+    );
     if (!prebuilt) {
       const npmCli = process.env.npm_execpath;
-      const compiled = npmCli && run(process.execPath, [npmCli, 'exec', '--yes', '--', 'node-gyp', 'rebuild', '--release', `--target=${electronVersion}`, '--runtime=electron', '--dist-url=https://electronjs.org/headers'], { cwd: workDir });
-      if (!compiled || !existsSync(built)) fail('could not build better-sqlite3 for Electron (no prebuilt binary and node-gyp failed). See the output above.');
+      const compiled =
+        npmCli &&
+        run(
+          process.execPath,
+          [
+            npmCli,
+            'exec',
+            '--yes',
+            '--',
+            'node-gyp',
+            'rebuild',
+            '--release',
+            `--target=${electronVersion}`,
+            '--runtime=electron',
+            '--dist-url=https://electronjs.org/headers',
+          ],
+          { cwd: workDir },
+        );
+      if (!compiled || !existsSync(built))
+        fail(
+          'could not build better-sqlite3 for Electron (no prebuilt binary and node-gyp failed). See the output above.',
+        );
     }
   }
   mkdirSync(dirname(target), { recursive: true });
@@ -65,10 +109,22 @@ if (electron.error) {
       '  Without Electron you can use the same app in your browser: npm run serve',
   );
 }
-if (!run(process.execPath, [join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--config', 'renderer/vite.config.ts'])) fail('the renderer build failed (see above).');
+if (
+  !run(process.execPath, [
+    join(root, 'node_modules', 'vite', 'bin', 'vite.js'),
+    'build',
+    '--config',
+    'renderer/vite.config.ts',
+  ])
+)
+  fail('the renderer build failed (see above).');
 await buildDesktop();
 ensureElectronSqlite(electron.version);
 const env = { ...process.env };
 delete env.ELECTRON_RUN_AS_NODE;
-const launched = spawnSync(electron.binary, [join(root, 'dist-electron', 'main.mjs')], { stdio: 'inherit', cwd: root, env });
+const launched = spawnSync(electron.binary, [join(root, 'dist-electron', 'main.mjs')], {
+  stdio: 'inherit',
+  cwd: root,
+  env,
+});
 process.exit(launched.status ?? 1);

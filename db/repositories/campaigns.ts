@@ -29,7 +29,8 @@ function toCampaign(row: CampaignRow, pairCount: number): Campaign {
 }
 
 function nameTaken(db: SqliteDatabase, name: string, exceptId?: number): boolean {
-  const row = db.prepare('SELECT id FROM campaigns WHERE name = ? COLLATE NOCASE').get(name) as { id: number } | undefined;
+  const row = db.prepare('SELECT id FROM campaigns WHERE name = ? COLLATE NOCASE').get(name) as
+    { id: number } | undefined;
   return row !== undefined && row.id !== exceptId;
 }
 
@@ -45,13 +46,24 @@ export function findCampaignByName(db: SqliteDatabase, name: string): Campaign |
 }
 
 export function listCampaigns(db: SqliteDatabase, includeArchived: boolean): Campaign[] {
-  const rows = db.prepare(`${SELECT} ${includeArchived ? '' : 'WHERE c.archived = 0'} ORDER BY c.archived, c.updated_at DESC, c.id DESC`).all() as CampaignRow[];
-  const counts = countPairsByCampaign(db, rows.map((row) => row.id));
+  const rows = db
+    .prepare(
+      `${SELECT} ${includeArchived ? '' : 'WHERE c.archived = 0'} ORDER BY c.archived, c.updated_at DESC, c.id DESC`,
+    )
+    .all() as CampaignRow[];
+  const counts = countPairsByCampaign(
+    db,
+    rows.map((row) => row.id),
+  );
   return rows.map((row) => toCampaign(row, counts.get(row.id) ?? 0));
 }
 
-export function createCampaign(db: SqliteDatabase, input: { name: string; description: string; isDemo?: boolean }): Campaign {
-  if (nameTaken(db, input.name)) throw new DomainError('conflict', `a campaign named "${input.name}" already exists`, 'name');
+export function createCampaign(
+  db: SqliteDatabase,
+  input: { name: string; description: string; isDemo?: boolean },
+): Campaign {
+  if (nameTaken(db, input.name))
+    throw new DomainError('conflict', `a campaign named "${input.name}" already exists`, 'name');
   const now = nowIso();
   const info = db
     .prepare('INSERT INTO campaigns (name, description, is_demo, created_at, updated_at) VALUES (?, ?, ?, ?, ?)')

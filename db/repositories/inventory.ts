@@ -78,7 +78,11 @@ export function removeInventory(db: SqliteDatabase, id: number): void {
 }
 
 /** Changes a row's amount by `delta` (in its unit; it may go below zero); null when the row is gone. */
-export function adjustInventory(db: SqliteDatabase, id: number, delta: number): { before: number; after: number } | null {
+export function adjustInventory(
+  db: SqliteDatabase,
+  id: number,
+  delta: number,
+): { before: number; after: number } | null {
   const row = db.prepare('SELECT amount FROM inventory WHERE id = ?').get(id) as { amount: number } | undefined;
   if (!row) return null;
   const after = row.amount + delta;

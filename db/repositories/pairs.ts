@@ -53,9 +53,16 @@ export function listPairs(db: SqliteDatabase, campaignId: number): CandidatePair
   return rows.map(toPair);
 }
 
-export function findPair(db: SqliteDatabase, campaignId: number, elementA: string, elementB: string): CandidatePair | null {
+export function findPair(
+  db: SqliteDatabase,
+  campaignId: number,
+  elementA: string,
+  elementB: string,
+): CandidatePair | null {
   const row = db
-    .prepare('SELECT * FROM pairs WHERE campaign_id = ? AND ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?))')
+    .prepare(
+      'SELECT * FROM pairs WHERE campaign_id = ? AND ((element_a = ? AND element_b = ?) OR (element_a = ? AND element_b = ?))',
+    )
     .get(campaignId, elementA, elementB, elementB, elementA) as PairRow | undefined;
   return row ? toPair(row) : null;
 }
@@ -66,25 +73,51 @@ export function addPair(
 ): CandidatePair {
   return db.transaction(() => {
     const campaign = getCampaign(db, input.campaignId);
-    if (campaign.archived) throw new DomainError('conflict', `"${campaign.name}" is archived; restore it before adding pairs`, 'campaignId');
+    if (campaign.archived)
+      throw new DomainError('conflict', `"${campaign.name}" is archived; restore it before adding pairs`, 'campaignId');
     const existing = findPair(db, input.campaignId, input.elementA, input.elementB);
     if (existing) {
-      throw new DomainError('conflict', `${existing.elementA}-${existing.elementB} is already in "${campaign.name}"`, 'pair');
+      throw new DomainError(
+        'conflict',
+        `${existing.elementA}-${existing.elementB} is already in "${campaign.name}"`,
+        'pair',
+      );
     }
     const now = nowIso();
     const info = db
-      .prepare('INSERT INTO pairs (campaign_id, element_a, element_b, target, status, notes, created_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?)')
-      .run(input.campaignId, input.elementA, input.elementB, input.target, input.status ?? 'candidate', input.notes, now, now);
+      .prepare(
+        'INSERT INTO pairs (campaign_id, element_a, element_b, target, status, notes, created_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?)',
+      )
+      .run(
+        input.campaignId,
+        input.elementA,
+        input.elementB,
+        input.target,
+        input.status ?? 'candidate',
+        input.notes,
+        now,
+        now,
+      );
     touchCampaign(db, input.campaignId);
     return getPair(db, Number(info.lastInsertRowid));
   })();
 }
 
-export function updatePair(db: SqliteDatabase, id: number, changes: { status?: PairStatus; target?: string; notes?: string }): CandidatePair {
+export function updatePair(
+  db: SqliteDatabase,
+  id: number,
+  changes: { status?: PairStatus; target?: string; notes?: string },
+): CandidatePair {
   return db.transaction(() => {
     const pair = getPair(db, id);
     const next = { ...pair, ...Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined)) };
-    db.prepare('UPDATE pairs SET status = ?, target = ?, notes = ?, updated_at = ? WHERE id = ?').run(next.status, next.target, next.notes, nowIso(), id);
+    db.prepare('UPDATE pairs SET status = ?, target = ?, notes = ?, updated_at = ? WHERE id = ?').run(
+      next.status,
+      next.target,
+      next.notes,
+      nowIso(),
+      id,
+    );
     touchCampaign(db, pair.campaignId);
     return getPair(db, id);
   })();

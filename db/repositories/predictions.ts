@@ -47,9 +47,15 @@ export function insertPrediction(
     const { elementA, elementB } = input.inputs;
     if (input.pairId !== null) {
       const pair = getPair(db, input.pairId);
-      const same = (pair.elementA === elementA && pair.elementB === elementB) || (pair.elementA === elementB && pair.elementB === elementA);
+      const same =
+        (pair.elementA === elementA && pair.elementB === elementB) ||
+        (pair.elementA === elementB && pair.elementB === elementA);
       if (!same) {
-        throw new DomainError('invalid_input', `pair ${input.pairId} is ${pair.elementA}-${pair.elementB}, not ${elementA}-${elementB}`, 'pairId');
+        throw new DomainError(
+          'invalid_input',
+          `pair ${input.pairId} is ${pair.elementA}-${pair.elementB}, not ${elementA}-${elementB}`,
+          'pairId',
+        );
       }
     }
     const { thresholds, facet, strainRule } = input.inputs.conditions;
@@ -73,7 +79,9 @@ export function insertPrediction(
 
 export function listPredictionsForPair(db: SqliteDatabase, pairId: number): SavedPrediction[] {
   getPair(db, pairId);
-  const rows = db.prepare('SELECT * FROM predictions WHERE pair_id = ? ORDER BY created_at DESC, id DESC').all(pairId) as PredictionRow[];
+  const rows = db
+    .prepare('SELECT * FROM predictions WHERE pair_id = ? ORDER BY created_at DESC, id DESC')
+    .all(pairId) as PredictionRow[];
   return rows.map(toSaved);
 }
 

@@ -9,7 +9,8 @@ export function readSetting(db: SqliteDatabase, key: string): unknown {
   // A store opened with an older set of migrations (tests of migrations) has no settings table yet.
   const table = db.prepare("SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'settings'").get();
   if (table === undefined) return undefined;
-  const row = db.prepare('SELECT value_json FROM settings WHERE key = ?').get(key) as { value_json: string } | undefined;
+  const row = db.prepare('SELECT value_json FROM settings WHERE key = ?').get(key) as
+    { value_json: string } | undefined;
   return row === undefined ? undefined : (JSON.parse(row.value_json) as unknown);
 }
 

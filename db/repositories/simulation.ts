@@ -78,15 +78,35 @@ export function insertRun(db: SqliteDatabase, run: NewRun): SimulationRunSummary
   return db.transaction(() => {
     if (run.pairId !== null) {
       const pair = getPair(db, run.pairId);
-      const same = (pair.elementA === run.spec.elementA && pair.elementB === run.spec.elementB) || (pair.elementA === run.spec.elementB && pair.elementB === run.spec.elementA);
-      if (!same) throw new DomainError('invalid_input', `pair ${run.pairId} is ${pair.elementA}-${pair.elementB}, not ${run.spec.elementA}-${run.spec.elementB}`, 'pairId');
+      const same =
+        (pair.elementA === run.spec.elementA && pair.elementB === run.spec.elementB) ||
+        (pair.elementA === run.spec.elementB && pair.elementB === run.spec.elementA);
+      if (!same)
+        throw new DomainError(
+          'invalid_input',
+          `pair ${run.pairId} is ${pair.elementA}-${pair.elementB}, not ${run.spec.elementA}-${run.spec.elementB}`,
+          'pairId',
+        );
     }
     const info = db
       .prepare(
         `INSERT INTO simulation_runs (pair_id, element_a, element_b, label, inputs_json, seed, engine_version, status, planned_atoms, total_sweeps, owner, heartbeat_at, created_at)
          VALUES (?, ?, ?, ?, ?, ?, ?, 'queued', ?, ?, ?, ?, ?)`,
       )
-      .run(run.pairId, run.spec.elementA, run.spec.elementB, run.label, JSON.stringify(run.spec), run.spec.seed, run.engineVersion, run.plannedAtoms, run.totalSweeps, run.owner, nowIso(), nowIso());
+      .run(
+        run.pairId,
+        run.spec.elementA,
+        run.spec.elementB,
+        run.label,
+        JSON.stringify(run.spec),
+        run.spec.seed,
+        run.engineVersion,
+        run.plannedAtoms,
+        run.totalSweeps,
+        run.owner,
+        nowIso(),
+        nowIso(),
+      );
     return getRunSummary(db, Number(info.lastInsertRowid));
   })();
 }
@@ -98,7 +118,8 @@ function getRow(db: SqliteDatabase, id: number): RunRow {
 }
 
 export function getRunSummary(db: SqliteDatabase, id: number): SimulationRunSummary {
-  const row = db.prepare(`SELECT ${SUMMARY_COLUMNS} FROM simulation_runs WHERE id = ?`).get(id) as (RunRow & { architecture: string | null; surface_xb: number | null }) | undefined;
+  const row = db.prepare(`SELECT ${SUMMARY_COLUMNS} FROM simulation_runs WHERE id = ?`).get(id) as
+    (RunRow & { architecture: string | null; surface_xb: number | null }) | undefined;
   if (!row) throw new DomainError('not_found', `no simulation run with id ${id}`, 'id');
   return toSummary(row);
 }
@@ -115,7 +136,9 @@ export function getRun(db: SqliteDatabase, id: number): SimulationRun {
 }
 
 export function listRuns(db: SqliteDatabase, limit: number): SimulationRunSummary[] {
-  const rows = db.prepare(`SELECT ${SUMMARY_COLUMNS} FROM simulation_runs ORDER BY created_at DESC, id DESC LIMIT ?`).all(limit) as (RunRow & {
+  const rows = db
+    .prepare(`SELECT ${SUMMARY_COLUMNS} FROM simulation_runs ORDER BY created_at DESC, id DESC LIMIT ?`)
+    .all(limit) as (RunRow & {
     architecture: string | null;
     surface_xb: number | null;
   })[];
@@ -123,30 +146,43 @@ export function listRuns(db: SqliteDatabase, limit: number): SimulationRunSummar
 }
 
 export function markRunning(db: SqliteDatabase, id: number): void {
-  db.prepare("UPDATE simulation_runs SET status = 'running', started_at = ? WHERE id = ? AND status = 'queued'").run(nowIso(), id);
-}
-
-export function saveProgress(db: SqliteDatabase, id: number, progress: SimulationProgress): void {
-  db.prepare("UPDATE simulation_runs SET progress_json = ? WHERE id = ? AND status IN ('queued', 'running')").run(JSON.stringify(progress), id);
-}
-
-export function saveResult(db: SqliteDatabase, id: number, result: SimulationResult): void {
-  const { finalOccupation, ...rest } = result;
-  db.prepare("UPDATE simulation_runs SET status = 'done', result_json = ?, final_occupation = ?, error = NULL, finished_at = ? WHERE id = ?").run(
-    JSON.stringify(rest),
-    finalOccupation,
+  db.prepare("UPDATE simulation_runs SET status = 'running', started_at = ? WHERE id = ? AND status = 'queued'").run(
     nowIso(),
     id,
   );
 }
 
+export function saveProgress(db: SqliteDatabase, id: number, progress: SimulationProgress): void {
+  db.prepare("UPDATE simulation_runs SET progress_json = ? WHERE id = ? AND status IN ('queued', 'running')").run(
+    JSON.stringify(progress),
+    id,
+  );
+}
+
+export function saveResult(db: SqliteDatabase, id: number, result: SimulationResult): void {
+  const { finalOccupation, ...rest } = result;
+  db.prepare(
+    "UPDATE simulation_runs SET status = 'done', result_json = ?, final_occupation = ?, error = NULL, finished_at = ? WHERE id = ?",
+  ).run(JSON.stringify(rest), finalOccupation, nowIso(), id);
+}
+
 export function markEnded(db: SqliteDatabase, id: number, status: 'failed' | 'cancelled', error: string): void {
-  db.prepare('UPDATE simulation_runs SET status = ?, error = ?, finished_at = ? WHERE id = ? AND status IN (?, ?)').run(status, error, nowIso(), id, 'queued', 'running');
+  db.prepare('UPDATE simulation_runs SET status = ?, error = ?, finished_at = ? WHERE id = ? AND status IN (?, ?)').run(
+    status,
+    error,
+    nowIso(),
+    id,
+    'queued',
+    'running',
+  );
 }
 
 /** The owning process is alive: refresh the heartbeat of its queued and running runs. */
 export function touchHeartbeat(db: SqliteDatabase, owner: string): void {
-  db.prepare("UPDATE simulation_runs SET heartbeat_at = ? WHERE owner = ? AND status IN ('queued', 'running')").run(nowIso(), owner);
+  db.prepare("UPDATE simulation_runs SET heartbeat_at = ? WHERE owner = ? AND status IN ('queued', 'running')").run(
+    nowIso(),
+    owner,
+  );
 }
 
 /**
@@ -155,8 +191,14 @@ export function touchHeartbeat(db: SqliteDatabase, owner: string): void {
  */
 export function expireSilentRuns(db: SqliteDatabase, staleBeforeIso: string): number {
   const info = db
-    .prepare("UPDATE simulation_runs SET status = 'failed', error = ?, finished_at = ? WHERE status IN ('queued', 'running') AND heartbeat_at < ?")
-    .run('interrupted: the Pairwright process running it closed before the run finished; start it again', nowIso(), staleBeforeIso);
+    .prepare(
+      "UPDATE simulation_runs SET status = 'failed', error = ?, finished_at = ? WHERE status IN ('queued', 'running') AND heartbeat_at < ?",
+    )
+    .run(
+      'interrupted: the Pairwright process running it closed before the run finished; start it again',
+      nowIso(),
+      staleBeforeIso,
+    );
   return info.changes;
 }
 
@@ -195,13 +237,17 @@ export function latestFinishedRun(
 
 /** Owners (process tags) of runs still queued or running. */
 export function unfinishedRunOwners(db: SqliteDatabase): string[] {
-  const rows = db.prepare("SELECT DISTINCT owner FROM simulation_runs WHERE status IN ('queued', 'running')").all() as { owner: string }[];
+  const rows = db.prepare("SELECT DISTINCT owner FROM simulation_runs WHERE status IN ('queued', 'running')").all() as {
+    owner: string;
+  }[];
   return rows.map((row) => row.owner);
 }
 
 /** Ends the queued and running runs of one owner as failed with the reason (its process is gone). */
 export function markOwnerRunsInterrupted(db: SqliteDatabase, owner: string, reason: string): number {
   return db
-    .prepare("UPDATE simulation_runs SET status = 'failed', error = ?, finished_at = ? WHERE owner = ? AND status IN ('queued', 'running')")
+    .prepare(
+      "UPDATE simulation_runs SET status = 'failed', error = ?, finished_at = ? WHERE owner = ? AND status IN ('queued', 'running')",
+    )
     .run(reason, nowIso(), owner).changes;
 }

@@ -16,7 +16,14 @@ export interface CliContext {
   /** Store maintenance that needs the store closed (restore, full check); the store is not opened for these. */
   maintenance: {
     dataDir: string;
-    restore(file: string): Promise<{ restoredFrom: string; previousStoreKeptAt: string | null; fromSchemaVersion: number; schemaVersion: number }>;
+    restore(
+      file: string,
+    ): Promise<{
+      restoredFrom: string;
+      previousStoreKeptAt: string | null;
+      fromSchemaVersion: number;
+      schemaVersion: number;
+    }>;
     check(): { path: string; schemaVersion: number };
   };
 }

@@ -16,7 +16,7 @@ import { commands } from './commands/index';
 
 const GLOBAL_OPTIONS: Record<string, OptionSpec> = {
   json: { type: 'boolean', description: 'print JSON for scripts' },
-  data: { type: 'string', description: 'folder of the store (default: the desktop app\'s data folder)' },
+  data: { type: 'string', description: "folder of the store (default: the desktop app's data folder)" },
   help: { type: 'boolean', short: 'h', description: 'show help' },
   debug: { type: 'boolean', description: 'print the stack trace of an unexpected failure' },
 };
@@ -37,7 +37,9 @@ export function helpText(selected?: CliCommand): string {
   for (const command of commands) {
     const usage = `  ${usageLine(command)}`;
     // Long usages get their summary on the next line so the columns stay readable.
-    lines.push(usage.length < 50 ? usage.padEnd(52) + command.summary : `${usage}\n${' '.repeat(52)}${command.summary}`);
+    lines.push(
+      usage.length < 50 ? usage.padEnd(52) + command.summary : `${usage}\n${' '.repeat(52)}${command.summary}`,
+    );
   }
   lines.push('', 'every command takes --json (machine-readable output), --data DIR (choose the store) and --help');
   lines.push('pairwright help terms explains the terms and symbols (E, ω, ΔHmix, Warren–Cowley α, ΔBIC, routes)');
@@ -84,21 +86,33 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
   if (!found) {
     const wantsHelp = argv.length === 0 || argv.includes('--help') || argv.includes('-h') || argv[0] === 'help';
     if (wantsHelp) return { exitCode: 0, stdout: helpText(), stderr: '' };
-    return { exitCode: 2, stdout: '', stderr: `pairwright: unknown command "${argv.filter((a) => !a.startsWith('-')).join(' ')}"; run pairwright --help` };
+    return {
+      exitCode: 2,
+      stdout: '',
+      stderr: `pairwright: unknown command "${argv.filter((a) => !a.startsWith('-')).join(' ')}"; run pairwright --help`,
+    };
   }
   const { command, rest } = found;
   let workspace: ServiceContext | null = null;
   try {
     let parsed;
     try {
-      parsed = parseArgs({ args: rest, options: { ...command.options, ...GLOBAL_OPTIONS }, allowPositionals: true, strict: true });
+      parsed = parseArgs({
+        args: rest,
+        options: { ...command.options, ...GLOBAL_OPTIONS },
+        allowPositionals: true,
+        strict: true,
+      });
     } catch (error) {
-      throw new CliError(error instanceof Error ? error.message.split('\n')[0] ?? error.message : String(error));
+      throw new CliError(error instanceof Error ? (error.message.split('\n')[0] ?? error.message) : String(error));
     }
     if (parsed.values.help === true) return { exitCode: 0, stdout: helpText(command), stderr: '' };
     const dataDir = typeof parsed.values.data === 'string' ? resolve(parsed.values.data) : defaultDataDir(env);
     const context: CliContext = {
-      call: async <Name extends OperationName>(name: Name, input: OperationInput<Name>): Promise<OperationOutput<Name>> => {
+      call: async <Name extends OperationName>(
+        name: Name,
+        input: OperationInput<Name>,
+      ): Promise<OperationOutput<Name>> => {
         workspace ??= openWorkspace({ dataDir });
         const result = await dispatchKnown(workspace, name, input);
         if (!result.ok) throw new CliError(result.error.message);
@@ -122,10 +136,12 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
     const stdout = parsed.values.json === true ? JSON.stringify(output.json, null, 2) : output.text;
     return { exitCode: 0, stdout, stderr: '' };
   } catch (error) {
-    if (error instanceof CliError || isStoreRefusal(error)) return { exitCode: 2, stdout: '', stderr: `pairwright: ${error.message}` };
+    if (error instanceof CliError || isStoreRefusal(error))
+      return { exitCode: 2, stdout: '', stderr: `pairwright: ${error.message}` };
     const debug = argv.includes('--debug');
     const message = error instanceof Error ? error.message : String(error);
-    const detail = debug && error instanceof Error ? (error.stack ?? message) : `${message} (run again with --debug for details)`;
+    const detail =
+      debug && error instanceof Error ? (error.stack ?? message) : `${message} (run again with --debug for details)`;
     return { exitCode: 1, stdout: '', stderr: `pairwright: unexpected failure: ${detail}` };
   } finally {
     const opened = workspace as ServiceContext | null;

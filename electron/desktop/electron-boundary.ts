@@ -108,7 +108,10 @@ export interface ElectronBoundary<W extends BrowserWindowLike = BrowserWindowLik
     openPath(path: string): Promise<string>;
   };
   dialog: {
-    showSaveDialog(window: W, options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] }): Promise<{ canceled: boolean; filePath?: string }>;
+    showSaveDialog(
+      window: W,
+      options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] },
+    ): Promise<{ canceled: boolean; filePath?: string }>;
     showMessageBox(options: { type: 'info'; title: string; message: string; detail: string }): Promise<unknown>;
   };
 }

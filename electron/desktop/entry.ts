@@ -22,4 +22,7 @@ const context = openWorkspace({
   migrationsDir: join(here, 'migrations'),
   ...(existsSync(nativeBinding) ? { nativeBinding } : {}),
 });
-await wireDesktopApp(electron, context, { rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'), preload: join(here, 'preload.cjs') });
+await wireDesktopApp(electron, context, {
+  rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'),
+  preload: join(here, 'preload.cjs'),
+});

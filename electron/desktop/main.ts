@@ -38,14 +38,21 @@ export const VETTED_LINK_HOSTS = ['unece.org', 'echa.europa.eu', 'pubchem.ncbi.n
 export function isVettedExternalLink(url: string): boolean {
   try {
     const parsed = new URL(url);
-    return parsed.protocol === 'https:' && VETTED_LINK_HOSTS.some((host) => parsed.hostname === host || parsed.hostname.endsWith(`.${host}`));
+    return (
+      parsed.protocol === 'https:' &&
+      VETTED_LINK_HOSTS.some((host) => parsed.hostname === host || parsed.hostname.endsWith(`.${host}`))
+    );
   } catch {
     return false;
   }
 }
 
 /** The sender must be our window's main frame showing our own index.html. */
-export function isTrustedSender(event: IpcMainInvokeEventLike, window: BrowserWindowLike, rendererIndex: string): boolean {
+export function isTrustedSender(
+  event: IpcMainInvokeEventLike,
+  window: BrowserWindowLike,
+  rendererIndex: string,
+): boolean {
   if (!event.senderFrame) return false;
   if (event.sender.id !== window.webContents.id) return false;
   const expected = pathToFileURL(rendererIndex);
@@ -72,15 +79,42 @@ export function applicationMenu(electron: ElectronBoundary, actions: MenuActions
   ];
   return [
     { label: 'File', submenu: file },
-    { label: 'Edit', submenu: [{ role: 'undo' }, { role: 'redo' }, { type: 'separator' }, { role: 'cut' }, { role: 'copy' }, { role: 'paste' }, { role: 'selectAll' }] },
-    { label: 'View', submenu: [{ role: 'reload' }, { role: 'toggleDevTools' }, { type: 'separator' }, { role: 'resetZoom' }, { role: 'zoomIn' }, { role: 'zoomOut' }, { type: 'separator' }, { role: 'togglefullscreen' }] },
+    {
+      label: 'Edit',
+      submenu: [
+        { role: 'undo' },
+        { role: 'redo' },
+        { type: 'separator' },
+        { role: 'cut' },
+        { role: 'copy' },
+        { role: 'paste' },
+        { role: 'selectAll' },
+      ],
+    },
+    {
+      label: 'View',
+      submenu: [
+        { role: 'reload' },
+        { role: 'toggleDevTools' },
+        { type: 'separator' },
+        { role: 'resetZoom' },
+        { role: 'zoomIn' },
+        { role: 'zoomOut' },
+        { type: 'separator' },
+        { role: 'togglefullscreen' },
+      ],
+    },
     { label: 'Window', submenu: [{ role: 'minimize' }, { role: 'close' }] },
     { label: 'Help', submenu: [{ label: `About Pairwright ${electron.app.getVersion()}`, click: actions.about }] },
   ];
 }
 
 /** File → Back up the store…: the user picks a new file; the service writes it with SQLite's online backup API. */
-export async function backUpFromMenu<W extends BrowserWindowLike>(electron: ElectronBoundary<W>, window: W, context: ServiceContext): Promise<void> {
+export async function backUpFromMenu<W extends BrowserWindowLike>(
+  electron: ElectronBoundary<W>,
+  window: W,
+  context: ServiceContext,
+): Promise<void> {
   const stamp = new Date().toISOString().slice(0, 10);
   const choice = await electron.dialog.showSaveDialog(window, {
     title: 'Back up the store',
@@ -99,7 +133,11 @@ export async function backUpFromMenu<W extends BrowserWindowLike>(electron: Elec
   });
 }
 
-export async function wireDesktopApp<W extends BrowserWindowLike>(electron: ElectronBoundary<W>, context: ServiceContext, paths: DesktopPaths): Promise<DesktopApp> {
+export async function wireDesktopApp<W extends BrowserWindowLike>(
+  electron: ElectronBoundary<W>,
+  context: ServiceContext,
+  paths: DesktopPaths,
+): Promise<DesktopApp> {
   const { app, BrowserWindow, ipcMain, Menu, shell, dialog } = electron;
   await app.whenReady();
   const window = new BrowserWindow({
@@ -137,14 +175,18 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(electron: Elec
   });
 
   ipcMain.handle(CALL_CHANNEL, async (event, name, input) => {
-    if (!isTrustedSender(event, window, paths.rendererIndex)) return fail('forbidden', 'call from an untrusted frame refused');
-    if (typeof name !== 'string' || !isOperationName(name)) return fail('unknown_operation', `unknown operation "${String(name)}"`);
+    if (!isTrustedSender(event, window, paths.rendererIndex))
+      return fail('forbidden', 'call from an untrusted frame refused');
+    if (typeof name !== 'string' || !isOperationName(name))
+      return fail('unknown_operation', `unknown operation "${String(name)}"`);
     return dispatch(context, name, input);
   });
 
   ipcMain.handle(PRINT_CHANNEL, async (event, suggestedName) => {
-    if (!isTrustedSender(event, window, paths.rendererIndex)) return fail('forbidden', 'call from an untrusted frame refused');
-    const defaultName = typeof suggestedName === 'string' && /^[\w .-]{1,80}$/.test(suggestedName) ? suggestedName : 'pairwright.pdf';
+    if (!isTrustedSender(event, window, paths.rendererIndex))
+      return fail('forbidden', 'call from an untrusted frame refused');
+    const defaultName =
+      typeof suggestedName === 'string' && /^[\w .-]{1,80}$/.test(suggestedName) ? suggestedName : 'pairwright.pdf';
     const choice = await dialog.showSaveDialog(window, {
       title: 'Save as PDF',
       defaultPath: join(app.getPath('userData'), defaultName),
@@ -160,10 +202,14 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(electron: Elec
     Menu.buildFromTemplate(
       applicationMenu(electron, {
         openDataFolder: () => {
-          shell.openPath(context.store.dataDir).catch((error: unknown) => console.error('[pairwright] could not open data folder:', error));
+          shell
+            .openPath(context.store.dataDir)
+            .catch((error: unknown) => console.error('[pairwright] could not open data folder:', error));
         },
         backUp: () => {
-          backUpFromMenu(electron, window, context).catch((error: unknown) => console.error('[pairwright] backup failed:', error));
+          backUpFromMenu(electron, window, context).catch((error: unknown) =>
+            console.error('[pairwright] backup failed:', error),
+          );
         },
         about: () => {
           dialog

@@ -17,4 +17,7 @@ if (Array.isArray(names)) {
   }
 }
 contextBridge.exposeInMainWorld('pairwright', Object.freeze(api));
-contextBridge.exposeInMainWorld('pairwrightDesktop', Object.freeze({ printToPdf: (name: string) => ipcRenderer.invoke(PRINT_CHANNEL, name) }));
+contextBridge.exposeInMainWorld(
+  'pairwrightDesktop',
+  Object.freeze({ printToPdf: (name: string) => ipcRenderer.invoke(PRINT_CHANNEL, name) }),
+);

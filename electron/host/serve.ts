@@ -11,7 +11,8 @@ import { closeWorkspace, openWorkspace } from '../services/workspace';
 function parsePort(text: string | undefined): number {
   if (text === undefined) return 5178;
   const port = Number(text);
-  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error(`--port must be a whole number from 0 to 65535, got "${text}"`);
+  if (!Number.isInteger(port) || port < 0 || port > 65535)
+    throw new Error(`--port must be a whole number from 0 to 65535, got "${text}"`);
   return port;
 }
 
@@ -20,13 +21,20 @@ function openInBrowser(url: string): void {
   const command = windows ? 'cmd' : process.platform === 'darwin' ? 'open' : 'xdg-open';
   const args = windows ? ['/c', 'start', '""', url] : [url];
   const child = spawn(command, args, { stdio: 'ignore', detached: true });
-  child.on('error', (error) => console.error(`could not open a browser (${error.message}); open the address above yourself`));
+  child.on('error', (error) =>
+    console.error(`could not open a browser (${error.message}); open the address above yourself`),
+  );
   child.unref();
 }
 
 async function main(): Promise<void> {
   const { values } = parseArgs({
-    options: { port: { type: 'string' }, data: { type: 'string' }, open: { type: 'boolean' }, help: { type: 'boolean' } },
+    options: {
+      port: { type: 'string' },
+      data: { type: 'string' },
+      open: { type: 'boolean' },
+      help: { type: 'boolean' },
+    },
     strict: true,
   });
   if (values.help) {

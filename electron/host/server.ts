@@ -75,11 +75,24 @@ const STATUS_BY_CODE: Record<string, number> = {
   internal: 500,
 };
 
-const SECURITY_HEADERS = { 'x-content-type-options': 'nosniff', 'referrer-policy': 'no-referrer', 'cache-control': 'no-store' };
+const SECURITY_HEADERS = {
+  'x-content-type-options': 'nosniff',
+  'referrer-policy': 'no-referrer',
+  'cache-control': 'no-store',
+};
 
-function sendJson(response: ServerResponse, status: number, body: unknown, extraHeaders: Record<string, string> = {}): void {
+function sendJson(
+  response: ServerResponse,
+  status: number,
+  body: unknown,
+  extraHeaders: Record<string, string> = {},
+): void {
   const text = JSON.stringify(body);
-  response.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...SECURITY_HEADERS, ...extraHeaders });
+  response.writeHead(status, {
+    'content-type': 'application/json; charset=utf-8',
+    ...SECURITY_HEADERS,
+    ...extraHeaders,
+  });
   response.end(text);
 }
 
@@ -169,7 +182,9 @@ function decodePath(pathname: string): string | null {
 export function startHost(options: HostOptions): Promise<RunningHost> {
   const indexPath = join(options.rendererDir, 'index.html');
   if (!existsSync(indexPath)) {
-    return Promise.reject(new Error(`the renderer is not built (${indexPath} missing); run "npm run build:renderer" first`));
+    return Promise.reject(
+      new Error(`the renderer is not built (${indexPath} missing); run "npm run build:renderer" first`),
+    );
   }
   const loginKeys = new Set<string>();
   const sessions = new Set<string>();
@@ -189,7 +204,8 @@ export function startHost(options: HostOptions): Promise<RunningHost> {
     const relative = normalize(pathname).replace(/^([/\\])+/, '');
     const candidate = join(options.rendererDir, relative);
     const inside = candidate === options.rendererDir || candidate.startsWith(options.rendererDir + sep);
-    const file = inside && relative !== '' && existsSync(candidate) && statSync(candidate).isFile() ? candidate : indexPath;
+    const file =
+      inside && relative !== '' && existsSync(candidate) && statSync(candidate).isFile() ? candidate : indexPath;
     const headers: Record<string, string> = {
       'content-type': CONTENT_TYPES[extname(file)] ?? 'application/octet-stream',
       'content-security-policy': CONTENT_SECURITY_POLICY,
@@ -265,7 +281,12 @@ export function startHost(options: HostOptions): Promise<RunningHost> {
       return;
     }
     if (!hasSession || request.headers[CALL_HEADER] !== '1') {
-      refuse(response, 401, 'forbidden', 'not logged in; open the address printed in the terminal where the host was started');
+      refuse(
+        response,
+        401,
+        'forbidden',
+        'not logged in; open the address printed in the terminal where the host was started',
+      );
       return;
     }
     const operation = pathname.slice('/api/'.length);
@@ -278,7 +299,10 @@ export function startHost(options: HostOptions): Promise<RunningHost> {
         sendJson(
           response,
           413,
-          { ok: false, error: { code: 'invalid_input', message: `request body larger than ${MAX_BODY_BYTES / 1024 / 1024} MB` } },
+          {
+            ok: false,
+            error: { code: 'invalid_input', message: `request body larger than ${MAX_BODY_BYTES / 1024 / 1024} MB` },
+          },
           { connection: 'close' },
         );
         return;

@@ -6,7 +6,12 @@
  * - recording a measurement (outcome-record.ts) moves the batch to characterized and its campaign pair to
  *   characterized (a dropped pair stays dropped). The user can still set statuses by hand.
  */
-import { addBatchHistory, inventoryUseInForce, markRestored, type StoredMovement } from '../../db/repositories/batch-history';
+import {
+  addBatchHistory,
+  inventoryUseInForce,
+  markRestored,
+  type StoredMovement,
+} from '../../db/repositories/batch-history';
 import { getBatch, updateBatchStatus, type StoredBatch } from '../../db/repositories/batches';
 import { listCatalog } from '../../db/repositories/catalog';
 import { adjustInventory, listInventory } from '../../db/repositories/inventory';
@@ -50,7 +55,12 @@ function takeFromInventory(db: SqliteDatabase, batch: StoredBatch): InventoryEff
   addBatchHistory(db, batch.id, {
     event: 'stock-taken',
     text: `Inventory: ${parts.join('. ')}.`,
-    movements: use.movements.map(({ inventoryId, reagentKey, delta, unit }) => ({ inventoryId, reagentKey, delta, unit })),
+    movements: use.movements.map(({ inventoryId, reagentKey, delta, unit }) => ({
+      inventoryId,
+      reagentKey,
+      delta,
+      unit,
+    })),
   });
   return { kind: 'used', ...use };
 }
@@ -126,7 +136,8 @@ export function setBatchStatus(
       inventoryEffect = giveBackToInventory(db, current);
     }
     if (current.status !== move.status) {
-      const untouched = !move.inventory && (move.status === 'made' || move.status === 'planned') ? ' (inventory left as it was)' : '';
+      const untouched =
+        !move.inventory && (move.status === 'made' || move.status === 'planned') ? ' (inventory left as it was)' : '';
       addBatchHistory(db, current.id, {
         event: 'status',
         fromStatus: current.status,
@@ -149,11 +160,16 @@ export interface OutcomeStatusChanges {
  * (from planned too — its reagents are then not taken from the inventory, and its history says so) and
  * its campaign pair (the linked pair, else the campaign's pair of the same metals) becomes characterized.
  */
-export function characterizedByOutcome(db: SqliteDatabase, batchId: number, parts: readonly string[]): OutcomeStatusChanges {
+export function characterizedByOutcome(
+  db: SqliteDatabase,
+  batchId: number,
+  parts: readonly string[],
+): OutcomeStatusChanges {
   const batch = getBatch(db, batchId, 'batchId');
   let batchChange: OutcomeStatusChanges['batch'] = null;
   if (batch.status !== 'characterized') {
-    const skipped = batch.status === 'planned' ? ' It was never marked made: no reagents were taken from the inventory.' : '';
+    const skipped =
+      batch.status === 'planned' ? ' It was never marked made: no reagents were taken from the inventory.' : '';
     addBatchHistory(db, batch.id, {
       event: 'status',
       fromStatus: batch.status,

@@ -20,7 +20,12 @@ import { nowIso, type SqliteDatabase } from '../../db/store';
 import type { batchOperations, CatalogChange, SavedBatch } from '../../shared-model/api/batches';
 import { DomainError, invalid } from '../../shared-model/api/result';
 import { asMadeForBatch } from '../../shared-model/prediction/as-made';
-import { designBatch, type BatchDesign, type SurfaceAnswer, type SurfaceQuestion } from '../../shared-model/recipes/design';
+import {
+  designBatch,
+  type BatchDesign,
+  type SurfaceAnswer,
+  type SurfaceQuestion,
+} from '../../shared-model/recipes/design';
 import type { BatchDesignInput, StockRecord } from '../../shared-model/recipes/design-input';
 import { seedBatchMetal, seedsFromBatch } from '../../shared-model/recipes/lineage';
 import { prepareReagent } from '../../shared-model/recipes/reagent';
@@ -42,8 +47,13 @@ export function resolveLineage(db: SqliteDatabase, input: BatchDesignInput): Bat
     );
   }
   const metal = seedBatchMetal({ id: seedBatch.id, name: seedBatch.name, design: seedBatch.design });
-  if (metal !== seeds.metal) throw invalid('seeds.metal', `batch #${seedBatch.id} made ${metal} seeds, not ${seeds.metal}`);
-  const resolved = seedsFromBatch({ id: seedBatch.id, name: seedBatch.name, design: seedBatch.design, measured: seedBatch.measured }, metal, seeds.volumeMl);
+  if (metal !== seeds.metal)
+    throw invalid('seeds.metal', `batch #${seedBatch.id} made ${metal} seeds, not ${seeds.metal}`);
+  const resolved = seedsFromBatch(
+    { id: seedBatch.id, name: seedBatch.name, design: seedBatch.design, measured: seedBatch.measured },
+    metal,
+    seeds.volumeMl,
+  );
   return { ...input, seeds: resolved.seeds };
 }
 
@@ -67,15 +77,23 @@ export function thermodynamicSurface(particle: SurfaceQuestion): SurfaceAnswer {
       ...(particle.seedElement !== null ? { seedElement: particle.seedElement } : {}),
     });
     const { label, basis, afterAnnealing, text, oxidation } = expected;
-    return { element: expected.equilibrium.surfaceElement, note: null, asMade: { label, basis, afterAnnealing, text, oxidation } };
+    return {
+      element: expected.equilibrium.surfaceElement,
+      note: null,
+      asMade: { label, basis, afterAnnealing, text, oxidation },
+    };
   } catch (error) {
-    if (error instanceof DomainError) return { element: undefined, note: `thermodynamic prediction unavailable: ${error.message}` };
+    if (error instanceof DomainError)
+      return { element: undefined, note: `thermodynamic prediction unavailable: ${error.message}` };
     throw error;
   }
 }
 
 /** Resolves the lineage and designs the batch once, the thermodynamic prediction asked on the way. */
-export function computeDesign(db: SqliteDatabase, rawInput: BatchDesignInput): { input: BatchDesignInput; design: BatchDesign } {
+export function computeDesign(
+  db: SqliteDatabase,
+  rawInput: BatchDesignInput,
+): { input: BatchDesignInput; design: BatchDesign } {
   const input = resolveLineage(db, rawInput);
   const design = designBatch(input, { catalog: listCatalog(db), now: nowIso(), thermodynamicSurface });
   return { input, design };
@@ -137,14 +155,16 @@ function maxIso(...values: string[]): string {
 function checkLots(design: BatchDesign, lots: readonly { reagentKey: string }[]): void {
   const used = new Set(design.reagents.map((r) => r.key));
   lots.forEach((lot, index) => {
-    if (!used.has(lot.reagentKey)) throw invalid(`lots.${index}.reagentKey`, `"${lot.reagentKey}" is not a reagent of this batch`);
+    if (!used.has(lot.reagentKey))
+      throw invalid(`lots.${index}.reagentKey`, `"${lot.reagentKey}" is not a reagent of this batch`);
   });
 }
 
 function checkStocks(db: SqliteDatabase, stocks: readonly StockRecord[]): void {
   const keys = new Set(listCatalog(db).map((r) => r.key));
   stocks.forEach((stock, index) => {
-    if (!keys.has(stock.reagentKey)) throw invalid(`stocks.${index}.reagentKey`, `no reagent "${stock.reagentKey}" in the catalog`);
+    if (!keys.has(stock.reagentKey))
+      throw invalid(`stocks.${index}.reagentKey`, `no reagent "${stock.reagentKey}" in the catalog`);
   });
 }
 
@@ -155,7 +175,11 @@ function reagentListFor(db: SqliteDatabase, batchIds: readonly number[]): Reagen
       batchId: b.id,
       batchName: b.name,
       reagents: b.design.reagents,
-      context: { temperatureC: b.design.temperatureC, metals: b.design.metals.map((m) => m.element), aqueous: b.design.aqueous },
+      context: {
+        temperatureC: b.design.temperatureC,
+        metals: b.design.metals.map((m) => m.element),
+        aqueous: b.design.aqueous,
+      },
     })),
     listInventory(db),
     listCatalog(db),
@@ -170,8 +194,14 @@ export const batchHandlers: HandlerMap<keyof typeof batchOperations> = {
     if (input.campaignId !== null) getCampaign(db, input.campaignId);
     if (input.pairId !== null) {
       const pair = getPair(db, input.pairId);
-      const samePair = [pair.elementA, pair.elementB].sort().join('-') === [input.design.elementA, input.design.elementB].sort().join('-');
-      if (!samePair) throw invalid('pairId', `pair ${pair.id} is ${pair.elementA}-${pair.elementB}, not ${input.design.elementA}-${input.design.elementB}`);
+      const samePair =
+        [pair.elementA, pair.elementB].sort().join('-') ===
+        [input.design.elementA, input.design.elementB].sort().join('-');
+      if (!samePair)
+        throw invalid(
+          'pairId',
+          `pair ${pair.id} is ${pair.elementA}-${pair.elementB}, not ${input.design.elementA}-${input.design.elementB}`,
+        );
     }
     const { input: resolved, design } = computeDesign(db, input.design);
     checkLots(design, input.lots);
@@ -199,7 +229,12 @@ export const batchHandlers: HandlerMap<keyof typeof batchOperations> = {
 
   'batches.list': (input, { store }) => {
     const { includeArchived, ...filter } = input;
-    const archived = includeArchived || filter.campaignId !== undefined ? [] : listCampaigns(store.db, true).filter((c) => c.archived).map((c) => c.id);
+    const archived =
+      includeArchived || filter.campaignId !== undefined
+        ? []
+        : listCampaigns(store.db, true)
+            .filter((c) => c.archived)
+            .map((c) => c.id);
     return listBatchSummaries(store.db, { ...filter, excludeCampaignIds: archived });
   },
 

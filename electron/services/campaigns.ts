@@ -1,9 +1,4 @@
-import {
-  createCampaign,
-  listCampaigns,
-  renameCampaign,
-  setCampaignArchived,
-} from '../../db/repositories/campaigns';
+import { createCampaign, listCampaigns, renameCampaign, setCampaignArchived } from '../../db/repositories/campaigns';
 import type { campaignOperations } from '../../shared-model/api/campaigns';
 import type { HandlerMap } from './context';
 import { loadDemoCampaign } from './demo-campaign';

@@ -26,7 +26,7 @@ export function demoDiameterCsv(spec: DemoSizeSpec): string {
   const random = createRandom(spec.seed);
   const mu = Math.log(spec.medianNm);
   const lines = ['diameter (nm)'];
-  for (let i = 0; i < spec.count; i++) lines.push((Math.exp(mu + spec.sigmaLog * random.nextNormal())).toFixed(2));
+  for (let i = 0; i < spec.count; i++) lines.push(Math.exp(mu + spec.sigmaLog * random.nextNormal()).toFixed(2));
   return `${lines.join('\n')}\n`;
 }
 
@@ -79,7 +79,18 @@ export function demoLineScanCsv(spec: DemoLineScanSpec): string {
   const grid = new BlurredChordGrid(positions, spec.stepNm / 5, spec.radiusNm + 1, spec.probeSigmaNm);
   const chordA = new Float64Array(positions.length);
   const chordB = new Float64Array(positions.length);
-  grid.evaluate({ kind: spec.kind, centerNm: spec.centerNm, radiusNm: spec.radiusNm, coreRadiusNm: spec.coreRadiusNm, janusALow: true }, spec.probeSigmaNm, chordA, chordB);
+  grid.evaluate(
+    {
+      kind: spec.kind,
+      centerNm: spec.centerNm,
+      radiusNm: spec.radiusNm,
+      coreRadiusNm: spec.coreRadiusNm,
+      janusALow: true,
+    },
+    spec.probeSigmaNm,
+    chordA,
+    chordB,
+  );
   const random = createRandom(spec.seed);
   const lines = [`position (nm),${spec.elementA},${spec.elementB}`];
   for (let i = 0; i < positions.length; i++) {

@@ -67,7 +67,12 @@ function largestField(input: unknown): string | null {
   let best: string | null = null;
   let bestSize = -1;
   for (const [key, value] of Object.entries(input)) {
-    const size = typeof value === 'string' || Array.isArray(value) ? value.length : typeof value === 'object' && value !== null ? Object.keys(value).length : 0;
+    const size =
+      typeof value === 'string' || Array.isArray(value)
+        ? value.length
+        : typeof value === 'object' && value !== null
+          ? Object.keys(value).length
+          : 0;
     if (size > bestSize) [best, bestSize] = [key, size];
   }
   return best;
@@ -85,7 +90,11 @@ function errorToResult(
     // input's largest field instead, so the user knows what to shrink.
     if (/typed array length|Array buffer allocation|Invalid array length|call stack size/i.test(error.message)) {
       const field = largestField(input);
-      return fail('invalid_input', `${field ?? 'the input'} is too large or too deeply nested to compute (${error.message})`, field ?? undefined);
+      return fail(
+        'invalid_input',
+        `${field ?? 'the input'} is too large or too deeply nested to compute (${error.message})`,
+        field ?? undefined,
+      );
     }
     // Model code signals bad arguments this way; the message names the argument.
     return fail('invalid_input', error.message);

@@ -166,7 +166,11 @@ export function recordOutcome(db: SqliteDatabase, input: OutcomeRecordInput): Re
     const measured = recorded.filter((part) => MEASUREMENT_PARTS.has(part));
     const statusChanges =
       measured.length > 0
-        ? characterizedByOutcome(db, batch.id, measured.map((part) => OUTCOME_PART_NAMES[part]))
+        ? characterizedByOutcome(
+            db,
+            batch.id,
+            measured.map((part) => OUTCOME_PART_NAMES[part]),
+          )
         : { batch: null, pair: null };
     return { recorded, outcome: batchOutcome(db, batch.id), statusChanges };
   })();

@@ -5,7 +5,13 @@ import type { HandlerMap } from './context';
 
 export const pairHandlers: HandlerMap<keyof typeof pairOperations> = {
   'pairs.add': (input, { store }) =>
-    addPair(store.db, { campaignId: input.campaignId, elementA: input.pair.elementA, elementB: input.pair.elementB, target: input.target, notes: input.notes }),
+    addPair(store.db, {
+      campaignId: input.campaignId,
+      elementA: input.pair.elementA,
+      elementB: input.pair.elementB,
+      target: input.target,
+      notes: input.notes,
+    }),
   'pairs.list': (input, { store }) => listPairs(store.db, input.campaignId),
   'pairs.update': (input, { store }) => {
     if (input.target !== undefined) {

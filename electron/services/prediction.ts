@@ -26,15 +26,28 @@ export const predictionHandlers: HandlerMap<keyof typeof predictionOperations> =
       rows: kept.map((row) => ({ rank: row.rank, score: row.score, prediction: plain(row.prediction) })),
       meeting: meeting.length,
       ranked: ranked.length,
-      missing: shownMissing.map((row) => ({ rank: row.rank, score: row.score, prediction: plain(row.prediction), miss: row.miss })),
+      missing: shownMissing.map((row) => ({
+        rank: row.rank,
+        score: row.score,
+        prediction: plain(row.prediction),
+        miss: row.miss,
+      })),
     };
   },
-  'prediction.isotherm': (input) => computeIsotherm(input.pair.elementA, input.pair.elementB, input.conditions, input.sweep, input.points),
+  'prediction.isotherm': (input) =>
+    computeIsotherm(input.pair.elementA, input.pair.elementB, input.conditions, input.sweep, input.points),
   'prediction.save': (input, { store }) => {
     const { elementA, elementB } = input.pair;
     const result = plain(predictPair(elementA, elementB, input.conditions));
-    return insertPrediction(store.db, { pairId: input.pairId ?? null, inputs: { elementA, elementB, conditions: input.conditions }, result });
+    return insertPrediction(store.db, {
+      pairId: input.pairId ?? null,
+      inputs: { elementA, elementB, conditions: input.conditions },
+      result,
+    });
   },
   'prediction.listForPair': (input, { store }) => listPredictionsForPair(store.db, input.pairId),
-  'elements.table': () => ({ elements: ELEMENT_RECORDS.map((record) => ({ ...record })), sources: [...ELEMENT_COLUMN_SOURCES] }),
+  'elements.table': () => ({
+    elements: ELEMENT_RECORDS.map((record) => ({ ...record })),
+    sources: [...ELEMENT_COLUMN_SOURCES],
+  }),
 };

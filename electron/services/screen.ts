@@ -23,7 +23,12 @@ function predictionFor(run: SimulationRunSummary): string | null {
   const spec = run.spec;
   if (spec.diameterNm === undefined) return null;
   try {
-    return predictPair(spec.elementA, spec.elementB, { xB: spec.xB, diameterNm: spec.diameterNm, shape: spec.shape, temperatureK: spec.temperatureK }).architecture;
+    return predictPair(spec.elementA, spec.elementB, {
+      xB: spec.xB,
+      diameterNm: spec.diameterNm,
+      shape: spec.shape,
+      temperatureK: spec.temperatureK,
+    }).architecture;
   } catch (error) {
     if (error instanceof DomainError) return `no prediction: ${error.message}`;
     throw error;
@@ -35,7 +40,8 @@ export const screenHandlers: HandlerMap<keyof typeof screenOperations> = {
     const campaign = getCampaign(store.db, input.campaignId);
     const pairs = listPairs(store.db, campaign.id);
     const elements: string[] = [];
-    for (const pair of pairs) for (const symbol of [pair.elementA, pair.elementB]) if (!elements.includes(symbol)) elements.push(symbol);
+    for (const pair of pairs)
+      for (const symbol of [pair.elementA, pair.elementB]) if (!elements.includes(symbol)) elements.push(symbol);
     const plan = planScreen({
       elements,
       xB: input.xB,
@@ -50,12 +56,29 @@ export const screenHandlers: HandlerMap<keyof typeof screenOperations> = {
     // Every spec was checked by planScreen before the first run is stored; the inserts share one transaction.
     const runs = store.db.transaction(() =>
       plan.runs.map((run) => {
-        const pair = pairs.find((p) => (p.elementA === run.elementA && p.elementB === run.elementB) || (p.elementA === run.elementB && p.elementB === run.elementA));
+        const pair = pairs.find(
+          (p) =>
+            (p.elementA === run.elementA && p.elementB === run.elementB) ||
+            (p.elementA === run.elementB && p.elementB === run.elementA),
+        );
         const stored = queue.enqueue(run.spec, label, pair?.id ?? null);
-        return { runId: stored.id, elementA: run.elementA, elementB: run.elementB, xB: run.xB, diameterNm: run.diameterNm };
+        return {
+          runId: stored.id,
+          elementA: run.elementA,
+          elementB: run.elementB,
+          xB: run.xB,
+          diameterNm: run.diameterNm,
+        };
       }),
     )();
-    return { label, campaignId: campaign.id, elements: plan.elements, runs, skipped: plan.skipped, concurrency: queue.concurrency };
+    return {
+      label,
+      campaignId: campaign.id,
+      elements: plan.elements,
+      runs,
+      skipped: plan.skipped,
+      concurrency: queue.concurrency,
+    };
   },
 
   'screen.status': ({ runIds }, { store }) => {
@@ -71,15 +94,33 @@ export const screenHandlers: HandlerMap<keyof typeof screenOperations> = {
     for (const run of summaries) {
       const ended = run.status !== 'queued' && run.status !== 'running';
       if (ended) finished++;
-      progress += ended ? 1 : run.progress ? Math.min(1, run.progress.sweep / Math.max(1, run.progress.totalSweeps)) : 0;
+      progress += ended
+        ? 1
+        : run.progress
+          ? Math.min(1, run.progress.sweep / Math.max(1, run.progress.totalSweeps))
+          : 0;
       if (run.startedAt) first = Math.min(first ?? Infinity, Date.parse(run.startedAt));
       if (run.finishedAt) last = Math.max(last ?? -Infinity, Date.parse(run.finishedAt));
-      const entry = { runId: run.id, elementA: run.spec.elementA, elementB: run.spec.elementB, xB: run.spec.xB, diameterNm: run.spec.diameterNm ?? 0 };
-      runs.push({ ...entry, status: run.status, architecture: run.architecture, surfaceXB: run.surfaceXB, error: run.error });
+      const entry = {
+        runId: run.id,
+        elementA: run.spec.elementA,
+        elementB: run.spec.elementB,
+        xB: run.spec.xB,
+        diameterNm: run.spec.diameterNm ?? 0,
+      };
+      runs.push({
+        ...entry,
+        status: run.status,
+        architecture: run.architecture,
+        surfaceXB: run.surfaceXB,
+        error: run.error,
+      });
       sources.push({ ...entry, status: run.status, architecture: run.architecture, prediction: predictionFor(run) });
     }
     const compositions = [...new Set(runs.map((r) => r.xB))].sort((a, b) => a - b);
-    const allCompositions = [...new Set([...compositions, ...compositions.map((x) => Math.round((1 - x) * 1e9) / 1e9)])].sort((a, b) => a - b);
+    const allCompositions = [
+      ...new Set([...compositions, ...compositions.map((x) => Math.round((1 - x) * 1e9) / 1e9)]),
+    ].sort((a, b) => a - b);
     const elements: string[] = [];
     for (const r of runs) for (const s of [r.elementA, r.elementB]) if (!elements.includes(s)) elements.push(s);
     return {

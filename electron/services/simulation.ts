@@ -11,7 +11,13 @@ import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo
 import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
 import { FIRE_DESCRIPTION, relaxStructure } from '../../shared-model/montecarlo/minimise';
-import { DEFAULT_STOPPING, ENGINE_VERSION, rebuildGeometry, SIMULATION_LIMITS, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
+import {
+  DEFAULT_STOPPING,
+  ENGINE_VERSION,
+  rebuildGeometry,
+  SIMULATION_LIMITS,
+  type SimulationSpec,
+} from '../../shared-model/montecarlo/simulate';
 import { queueFor } from '../workers/montecarlo-queue';
 import type { HandlerMap } from './context';
 
@@ -64,15 +70,21 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
 
   'simulation.exportXyz': ({ id }, { store }) => {
     const run = getRun(store.db, id);
-    if (run.status !== 'done' || !run.result) throw new DomainError('conflict', `run ${id} is ${run.status}; only a finished run has a final structure`, 'id');
+    if (run.status !== 'done' || !run.result)
+      throw new DomainError('conflict', `run ${id} is ${run.status}; only a finished run has a final structure`, 'id');
     const result = run.result;
     const geometry = rebuildGeometry(run.spec);
     if (result.finalOccupation.length !== geometry.atoms) {
-      throw new DomainError('internal', `run ${id} stored ${result.finalOccupation.length} occupations for ${geometry.atoms} sites; the geometry builder changed since (engine ${run.engineVersion})`);
+      throw new DomainError(
+        'internal',
+        `run ${id} stored ${result.finalOccupation.length} occupations for ${geometry.atoms} sites; the geometry builder changed since (engine ${run.engineVersion})`,
+      );
     }
     const symbols = Array.from(result.finalOccupation, (c) => (c === 'B' ? result.elementB : result.elementA));
     // Relaxed runs store where the atoms ended; rigid runs sit on the rebuilt sites.
-    const positions = result.finalPositionsAngstrom ? Float64Array.from(result.finalPositionsAngstrom) : geometry.positions;
+    const positions = result.finalPositionsAngstrom
+      ? Float64Array.from(result.finalPositionsAngstrom)
+      : geometry.positions;
     const content = writeExtendedXyz(
       { symbols, positions },
       {
@@ -98,7 +110,13 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
     const relaxed = relaxStructure(readExtendedXyz(xyz), { forceToleranceEvPerAngstrom, maxIterations });
     const content = writeExtendedXyz(
       { symbols: relaxed.symbols, positions: relaxed.positions },
-      { energy: relaxed.energyEv, initialEnergy: relaxed.initialEnergyEv, maxForce: relaxed.maxForceEvPerAngstrom, iterations: relaxed.iterations, method: 'FIRE' },
+      {
+        energy: relaxed.energyEv,
+        initialEnergy: relaxed.initialEnergyEv,
+        maxForce: relaxed.maxForceEvPerAngstrom,
+        iterations: relaxed.iterations,
+        method: 'FIRE',
+      },
     );
     return {
       atoms: relaxed.atoms,
@@ -115,5 +133,6 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
     };
   },
 
-  'simulation.energy': ({ xyz, cutoffAngstrom }) => totalEnergy(readExtendedXyz(xyz), cutoffAngstrom === undefined ? {} : { cutoffAngstrom }),
+  'simulation.energy': ({ xyz, cutoffAngstrom }) =>
+    totalEnergy(readExtendedXyz(xyz), cutoffAngstrom === undefined ? {} : { cutoffAngstrom }),
 };

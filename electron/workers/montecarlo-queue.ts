@@ -26,7 +26,12 @@ import {
 } from '../../db/repositories/simulation';
 import type { SimulationRunSummary } from '../../shared-model/api/simulation';
 import { DomainError } from '../../shared-model/api/result';
-import { engineVersionFor, planSimulation, type SimulationProgress, type SimulationSpec } from '../../shared-model/montecarlo/simulate';
+import {
+  engineVersionFor,
+  planSimulation,
+  type SimulationProgress,
+  type SimulationSpec,
+} from '../../shared-model/montecarlo/simulate';
 import type { WorkerInput, WorkerMessage } from './montecarlo-messages';
 import { workerEntry } from './worker-entry';
 
@@ -104,7 +109,15 @@ export class MonteCarloQueue {
       );
     }
     const plan = planSimulation(spec);
-    const summary = insertRun(this.store.db, { spec, label, pairId, engineVersion: engineVersionFor(spec), plannedAtoms: plan.atoms, totalSweeps: plan.totalSweeps, owner: this.owner });
+    const summary = insertRun(this.store.db, {
+      spec,
+      label,
+      pairId,
+      engineVersion: engineVersionFor(spec),
+      plannedAtoms: plan.atoms,
+      totalSweeps: plan.totalSweeps,
+      owner: this.owner,
+    });
     this.waiting.push({ id: summary.id, spec });
     this.histories.set(summary.id, []);
     this.ensureHeartbeat();
@@ -127,7 +140,11 @@ export class MonteCarloQueue {
     }
     const run = this.active.get(id);
     if (!run) {
-      throw new DomainError('conflict', `run ${id} is run by another Pairwright process (the app or a command); cancel it there`, 'id');
+      throw new DomainError(
+        'conflict',
+        `run ${id} is run by another Pairwright process (the app or a command); cancel it there`,
+        'id',
+      );
     }
     Atomics.store(run.cancel, 0, 1);
     run.cancelTimer ??= setTimeout(() => {
@@ -167,10 +184,14 @@ export class MonteCarloQueue {
    */
   async close(): Promise<void> {
     for (const entry of this.waiting.splice(0)) {
-      if (this.dbOpen) markEnded(this.store.db, entry.id, 'cancelled', `${APP_CLOSED}: Pairwright closed before the run started`);
+      if (this.dbOpen)
+        markEnded(this.store.db, entry.id, 'cancelled', `${APP_CLOSED}: Pairwright closed before the run started`);
     }
     const runs = [...this.active.values()];
-    for (const run of runs) this.finish(run, () => markEnded(this.store.db, run.id, 'cancelled', `${APP_CLOSED}: Pairwright closed during the run`));
+    for (const run of runs)
+      this.finish(run, () =>
+        markEnded(this.store.db, run.id, 'cancelled', `${APP_CLOSED}: Pairwright closed during the run`),
+      );
     await Promise.all(runs.map((run) => run.worker.terminate()));
     if (this.heartbeat) clearInterval(this.heartbeat);
     this.heartbeat = null;
@@ -195,8 +216,18 @@ export class MonteCarloQueue {
     const cancelBuffer = new SharedArrayBuffer(4);
     const entry = workerEntry('montecarlo-worker');
     const input: WorkerInput = { spec, cancelBuffer };
-    const worker = 'url' in entry ? new Worker(entry.url, { workerData: input }) : new Worker(entry.code, { eval: true, workerData: input });
-    const run: ActiveRun = { id, worker, cancel: new Int32Array(cancelBuffer), lastWrite: 0, cancelTimer: null, finished: false };
+    const worker =
+      'url' in entry
+        ? new Worker(entry.url, { workerData: input })
+        : new Worker(entry.code, { eval: true, workerData: input });
+    const run: ActiveRun = {
+      id,
+      worker,
+      cancel: new Int32Array(cancelBuffer),
+      lastWrite: 0,
+      cancelTimer: null,
+      finished: false,
+    };
     this.active.set(id, run);
     markRunning(this.store.db, id);
     worker.on('message', (message: WorkerMessage) => this.onMessage(run, message));
@@ -205,7 +236,10 @@ export class MonteCarloQueue {
       this.finish(run, () => markEnded(this.store.db, id, 'failed', `the worker failed: ${error.message}`));
     });
     worker.on('exit', (code) => {
-      if (!run.finished) this.finish(run, () => markEnded(this.store.db, id, 'failed', `the worker stopped (exit code ${code}) without a result`));
+      if (!run.finished)
+        this.finish(run, () =>
+          markEnded(this.store.db, id, 'failed', `the worker stopped (exit code ${code}) without a result`),
+        );
     });
   }
 
@@ -218,7 +252,10 @@ export class MonteCarloQueue {
         if (history.length > MAX_HISTORY) history.splice(0, history.length - MAX_HISTORY);
       }
       const now = Date.now();
-      if (this.dbOpen && (now - run.lastWrite >= PROGRESS_WRITE_MS || message.progress.sweep === message.progress.totalSweeps)) {
+      if (
+        this.dbOpen &&
+        (now - run.lastWrite >= PROGRESS_WRITE_MS || message.progress.sweep === message.progress.totalSweeps)
+      ) {
         saveProgress(this.store.db, run.id, message.progress);
         run.lastWrite = now;
       }
@@ -228,7 +265,8 @@ export class MonteCarloQueue {
       this.finish(run, () => saveResult(this.store.db, run.id, message.result));
       return;
     }
-    if (message.code === 'cancelled') this.finish(run, () => markEnded(this.store.db, run.id, 'cancelled', message.message));
+    if (message.code === 'cancelled')
+      this.finish(run, () => markEnded(this.store.db, run.id, 'cancelled', message.message));
     else this.finish(run, () => markEnded(this.store.db, run.id, 'failed', message.message));
   }
 

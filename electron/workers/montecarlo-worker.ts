@@ -24,6 +24,13 @@ try {
   });
   post({ type: 'result', result });
 } catch (error) {
-  if (error instanceof DomainError) post({ type: 'error', code: error.code, message: error.message, field: error.field ?? null });
-  else post({ type: 'error', code: 'internal', message: error instanceof Error ? (error.stack ?? error.message) : String(error), field: null });
+  if (error instanceof DomainError)
+    post({ type: 'error', code: error.code, message: error.message, field: error.field ?? null });
+  else
+    post({
+      type: 'error',
+      code: 'internal',
+      message: error instanceof Error ? (error.stack ?? error.message) : String(error),
+      field: null,
+    });
 }

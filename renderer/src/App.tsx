@@ -81,12 +81,17 @@ function Shell() {
             ))}
           </div>
         ))}
-        <button type="button" className="nav-item nav-item--help" onClick={() => setGlossaryOpen(true)} data-testid="open-glossary">
+        <button
+          type="button"
+          className="nav-item nav-item--help"
+          onClick={() => setGlossaryOpen(true)}
+          data-testid="open-glossary"
+        >
           Terms and symbols
         </button>
         <p className="sidebar__footnote">
-          {transport() === 'desktop' ? 'Desktop app' : 'Browser host on this computer'}. Recipes and hazard notes assist you; they never replace the supplier's SDS
-          or your institution's rules.
+          {transport() === 'desktop' ? 'Desktop app' : 'Browser host on this computer'}. Recipes and hazard notes assist
+          you; they never replace the supplier's SDS or your institution's rules.
         </p>
       </nav>
       <main className="content">{ActiveView ? <ActiveView /> : null}</main>

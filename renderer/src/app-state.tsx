@@ -67,8 +67,26 @@ export function AppStateProvider(props: { children: ReactNode }) {
   );
   const clearPendingSimulation = useCallback(() => setPendingSimulation(null), []);
   const value = useMemo(
-    () => ({ campaignId, selectCampaign, revision, bumpRevision, navigate, pendingSimulation, requestSimulation, clearPendingSimulation }),
-    [campaignId, selectCampaign, revision, bumpRevision, navigate, pendingSimulation, requestSimulation, clearPendingSimulation],
+    () => ({
+      campaignId,
+      selectCampaign,
+      revision,
+      bumpRevision,
+      navigate,
+      pendingSimulation,
+      requestSimulation,
+      clearPendingSimulation,
+    }),
+    [
+      campaignId,
+      selectCampaign,
+      revision,
+      bumpRevision,
+      navigate,
+      pendingSimulation,
+      requestSimulation,
+      clearPendingSimulation,
+    ],
   );
   return <AppStateContext.Provider value={value}>{props.children}</AppStateContext.Provider>;
 }

@@ -6,7 +6,9 @@ const browser = await launchBrowser();
 const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
 await page.goto(url);
 await page.waitForTimeout(1000);
-const ids = await page.locator('[data-view]').evaluateAll((buttons) => buttons.map((button) => button.getAttribute('data-view') ?? ''));
+const ids = await page
+  .locator('[data-view]')
+  .evaluateAll((buttons) => buttons.map((button) => button.getAttribute('data-view') ?? ''));
 for (const id of ids) {
   await page.locator(`[data-view="${id}"]`).click();
   await page.waitForTimeout(1500);

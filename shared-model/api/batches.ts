@@ -131,7 +131,12 @@ const batchIdsSchema = z
   .array(idSchema, { error: 'must be a list of batch ids' })
   .min(1, 'select at least one batch')
   .max(200, 'at most 200 batches at once');
-const positiveMeasure = (what: string) => z.number({ error: `${what} must be a number` }).positive(`${what} must be greater than 0`).nullable().optional();
+const positiveMeasure = (what: string) =>
+  z
+    .number({ error: `${what} must be a number` })
+    .positive(`${what} must be greater than 0`)
+    .nullable()
+    .optional();
 
 export const batchOperations = {
   'batches.design': operation<BatchDesign>()({
@@ -177,7 +182,12 @@ export const batchOperations = {
       id: idSchema,
       status: statusSchema,
       inventory: z.boolean({ error: 'must be true or false' }).default(true),
-      measured: z.object({ diameterNm: positiveMeasure('measured diameter (nm)'), particlesPerMl: positiveMeasure('measured concentration (particles/mL)') }).optional(),
+      measured: z
+        .object({
+          diameterNm: positiveMeasure('measured diameter (nm)'),
+          particlesPerMl: positiveMeasure('measured concentration (particles/mL)'),
+        })
+        .optional(),
     }),
   }),
   'batches.record': operation<SavedBatch>()({
@@ -193,7 +203,10 @@ export const batchOperations = {
   'batches.remove': operation<{ removed: number }>()({
     kind: 'command',
     summary: 'Remove a saved batch (needs confirm: true; refused while growth batches use it as seeds)',
-    input: z.object({ id: idSchema, confirm: z.literal(true, { error: 'removing a batch needs confirmation (confirm: true)' }) }),
+    input: z.object({
+      id: idSchema,
+      confirm: z.literal(true, { error: 'removing a batch needs confirmation (confirm: true)' }),
+    }),
   }),
   'reagents.catalog': operation<CatalogReagent[]>()({
     kind: 'query',

@@ -70,8 +70,7 @@ export interface LearnJob {
 
 /** A ready review without the fitted parameters (those stay in the store), or the too-few answer. */
 export type ReviewView =
-  | Extract<ModelReview, { status: 'too-few' }>
-  | Omit<Extract<ModelReview, { status: 'ready' }>, 'fitted'>;
+  Extract<ModelReview, { status: 'too-few' }> | Omit<Extract<ModelReview, { status: 'ready' }>, 'fitted'>;
 
 export interface StoredReview {
   modelId: number;

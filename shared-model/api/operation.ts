@@ -14,5 +14,9 @@ export interface OperationSpec<Input extends z.ZodType, Output> {
 }
 
 export function operation<Output>() {
-  return <Input extends z.ZodType>(spec: { input: Input; kind: 'query' | 'command'; summary: string }): OperationSpec<Input, Output> => spec;
+  return <Input extends z.ZodType>(spec: {
+    input: Input;
+    kind: 'query' | 'command';
+    summary: string;
+  }): OperationSpec<Input, Output> => spec;
 }

@@ -14,7 +14,6 @@ import type { SizeAnalysis } from '../characterization/size-analysis';
 import { operation } from './operation';
 import { elementSymbolSchema, idSchema, pairTextSchema } from './schemas';
 
-
 /**
  * A STEM probe's σ, nm: 0.01–50 (aberration-corrected probes are ~0.05 nm wide, broad scans a few nm; common
  * practice). 1e-6 or 1e6 nm once made a line-scan fit run for minutes.

@@ -19,7 +19,10 @@ export interface CandidatePair {
   updatedAt: string;
 }
 
-const targetText = z.string({ error: 'must be an architecture such as alloy, Ni@Pt or Janus' }).trim().min(1, 'must not be empty');
+const targetText = z
+  .string({ error: 'must be an architecture such as alloy, Ni@Pt or Janus' })
+  .trim()
+  .min(1, 'must not be empty');
 const statusSchema = z.enum(PAIR_STATUSES, { error: `must be one of: ${PAIR_STATUSES.join(', ')}` });
 const notesSchema = z.string({ error: 'must be text' }).max(4000, 'must be at most 4000 characters');
 
@@ -33,7 +36,12 @@ export const pairOperations = {
     kind: 'command',
     summary: 'Add a candidate pair to a campaign',
     input: z
-      .object({ campaignId: idSchema, pair: pairTextSchema, target: targetText.default('alloy'), notes: notesSchema.default('') })
+      .object({
+        campaignId: idSchema,
+        pair: pairTextSchema,
+        target: targetText.default('alloy'),
+        notes: notesSchema.default(''),
+      })
       .superRefine((value, ctx) => {
         const pair = [value.pair.elementA, value.pair.elementB] as const;
         if (!targetFitsPair(value.target, pair)) {
@@ -53,7 +61,12 @@ export const pairOperations = {
   'pairs.update': operation<CandidatePair>()({
     kind: 'command',
     summary: 'Change the status, target or notes of a pair',
-    input: z.object({ id: idSchema, status: statusSchema.optional(), target: targetText.optional(), notes: notesSchema.optional() }),
+    input: z.object({
+      id: idSchema,
+      status: statusSchema.optional(),
+      target: targetText.optional(),
+      notes: notesSchema.optional(),
+    }),
   }),
   'pairs.remove': operation<{ removed: number }>()({
     kind: 'command',

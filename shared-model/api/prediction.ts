@@ -18,9 +18,12 @@ import { DomainError } from './result';
 import { operation } from './operation';
 import { elementSymbolSchema, idSchema, pairTextSchema, particleShapeSchema } from './schemas';
 
-const finite = (what: string) => z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, { error: 'must be a finite number' });
+const finite = (what: string) =>
+  z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, { error: 'must be a finite number' });
 
-export const xBSchema = finite('atomic fraction of B').refine((x) => x > 0 && x < 1, { error: 'must lie strictly between 0 and 1 (atomic fraction of B)' });
+export const xBSchema = finite('atomic fraction of B').refine((x) => x > 0 && x < 1, {
+  error: 'must lie strictly between 0 and 1 (atomic fraction of B)',
+});
 export const diameterNmSchema = finite('nm')
   .refine((d) => d > 0, { error: 'must be a positive diameter in nm' })
   .refine((d) => d <= 1000, { error: 'must be at most 1000 nm' });
@@ -73,17 +76,19 @@ export const conditionsSchema = z.object({
 });
 export type ConditionsInput = z.input<typeof conditionsSchema>;
 
-export const rankTargetSchema = z.string({ error: 'must be a target such as alloy, core@shell, core@shell:Pt or Janus' }).transform((text, ctx): RankTarget => {
-  try {
-    return parseRankTarget(text);
-  } catch (error) {
-    if (error instanceof DomainError) {
-      ctx.addIssue({ code: 'custom', message: error.message });
-      return z.NEVER;
+export const rankTargetSchema = z
+  .string({ error: 'must be a target such as alloy, core@shell, core@shell:Pt or Janus' })
+  .transform((text, ctx): RankTarget => {
+    try {
+      return parseRankTarget(text);
+    } catch (error) {
+      if (error instanceof DomainError) {
+        ctx.addIssue({ code: 'custom', message: error.message });
+        return z.NEVER;
+      }
+      throw error;
     }
-    throw error;
-  }
-});
+  });
 
 export const elementListSchema = z.union(
   [
@@ -147,7 +152,12 @@ export const predictionOperations = {
       elements: elementListSchema,
       target: rankTargetSchema,
       conditions: conditionsSchema,
-      limit: z.number({ error: 'must be a number' }).int('must be a whole number').min(1, 'must be at least 1').max(1000, 'must be at most 1000').optional(),
+      limit: z
+        .number({ error: 'must be a number' })
+        .int('must be a whole number')
+        .min(1, 'must be at least 1')
+        .max(1000, 'must be at most 1000')
+        .optional(),
       all: z.boolean({ error: 'must be true or false' }).optional(),
     }),
   }),
@@ -158,7 +168,12 @@ export const predictionOperations = {
       pair: pairTextSchema,
       conditions: conditionsSchema,
       sweep: z.enum(ISOTHERM_SWEEPS, { error: `must be one of: ${ISOTHERM_SWEEPS.join(', ')}` }),
-      points: z.number({ error: 'must be a number' }).int('must be a whole number').min(3, 'must be at least 3').max(400, 'must be at most 400').default(41),
+      points: z
+        .number({ error: 'must be a number' })
+        .int('must be a whole number')
+        .min(3, 'must be at least 3')
+        .max(400, 'must be at most 400')
+        .default(41),
     }),
   }),
   'prediction.save': operation<SavedPrediction>()({

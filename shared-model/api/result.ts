@@ -42,4 +42,5 @@ export class DomainError extends Error {
   }
 }
 
-export const invalid = (field: string, message: string): DomainError => new DomainError('invalid_input', message, field);
+export const invalid = (field: string, message: string): DomainError =>
+  new DomainError('invalid_input', message, field);

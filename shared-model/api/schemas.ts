@@ -3,7 +3,10 @@ import { z } from 'zod';
 import { isMetalSymbol, METAL_SYMBOLS } from '../elements/symbols';
 import { normaliseShapeName, PARTICLE_SHAPES } from '../geometry/shapes';
 
-export const idSchema = z.number({ error: 'must be a number' }).int('must be a whole number').positive('must be a positive id');
+export const idSchema = z
+  .number({ error: 'must be a number' })
+  .int('must be a whole number')
+  .positive('must be a positive id');
 
 /** True when text holds a NUL or another control character that no name or note should carry (tab and newline pass). */
 export function hasControlCharacters(text: string): boolean {
@@ -21,7 +24,9 @@ export const nameSchema = z
 export const elementSymbolSchema = z
   .string({ error: 'must be an element symbol' })
   .trim()
-  .refine(isMetalSymbol, { error: (issue) => `unknown element "${String(issue.input)}"; known metals: ${METAL_SYMBOLS.join(' ')}` });
+  .refine(isMetalSymbol, {
+    error: (issue) => `unknown element "${String(issue.input)}"; known metals: ${METAL_SYMBOLS.join(' ')}`,
+  });
 
 const shapeError = `must be one of: ${PARTICLE_SHAPES.join(', ')}`;
 

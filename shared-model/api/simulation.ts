@@ -11,7 +11,14 @@ import { DomainError } from './result';
 import { operation } from './operation';
 import { idSchema, particleShapeSchema } from './schemas';
 import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../montecarlo/gupta-parameters';
-import { planSimulation, RELAXATION_MODES, SIMULATION_LIMITS, type SimulationProgress, type SimulationResult, type SimulationSpec } from '../montecarlo/simulate';
+import {
+  planSimulation,
+  RELAXATION_MODES,
+  SIMULATION_LIMITS,
+  type SimulationProgress,
+  type SimulationResult,
+  type SimulationSpec,
+} from '../montecarlo/simulate';
 import type { StructureEnergy } from '../montecarlo/gupta-energy';
 
 /** `simulation.relax`: the minimised structure of a given cluster (FIRE on the off-lattice Gupta energy). */
@@ -35,7 +42,8 @@ const guptaElementSchema = z
   .trim()
   .transform((s) => s.charAt(0).toUpperCase() + s.slice(1).toLowerCase())
   .refine(isGuptaElement, {
-    error: (issue) => `${String(issue.input)} has no tight-binding parameters; the simulation supports ${GUPTA_ELEMENTS.join(', ')}`,
+    error: (issue) =>
+      `${String(issue.input)} has no tight-binding parameters; the simulation supports ${GUPTA_ELEMENTS.join(', ')}`,
   });
 
 const positiveNumber = (what: string) => z.number({ error: `must be a number (${what})` });
@@ -45,7 +53,11 @@ const specShape = {
   elementB: guptaElementSchema,
   xB: positiveNumber('atomic fraction of B').gt(0, 'must be above 0').lt(1, 'must be below 1'),
   shape: particleShapeSchema,
-  shells: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+  shells: z
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .optional(),
   diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
   temperatureK: positiveNumber('K')
     .gt(0, 'must be above 0 K')
@@ -58,19 +70,33 @@ const specShape = {
     .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
   anneal: z
     .object({
-      startTemperatureK: positiveNumber('K').gt(0, 'must be above 0 K').min(1, 'must be at least 1 K').max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
-      sweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
+      startTemperatureK: positiveNumber('K')
+        .gt(0, 'must be above 0 K')
+        .min(1, 'must be at least 1 K')
+        .max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
+      sweeps: z
+        .number({ error: 'must be a whole number' })
+        .int('must be a whole number')
+        .min(1, 'must be at least 1')
+        .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
     })
     .nullish(),
   seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
-  progressEverySweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').optional(),
+  progressEverySweeps: z
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .optional(),
   /** Rigid lattice or relaxed (swap + displacement); omitted: by the size-mismatch rule. */
   relaxation: z.enum(RELAXATION_MODES, { error: `must be one of: ${RELAXATION_MODES.join(', ')}` }).optional(),
   /** Stop at the answer (sweeps is then the cap); omitted: the default rule; null: run every sweep. */
   stopping: z
     .object({
       surfaceStandardError: positiveNumber('fraction').gt(0, 'must be above 0').lt(0.5, 'must be below 0.5'),
-      minSweeps: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(10, 'must be at least 10'),
+      minSweeps: z
+        .number({ error: 'must be a whole number' })
+        .int('must be a whole number')
+        .min(10, 'must be at least 10'),
     })
     .nullish(),
 };
@@ -88,7 +114,9 @@ function checkPlan(value: SimulationSpec, ctx: z.RefinementCtx): void {
   }
 }
 
-export const simulationSpecSchema = z.object(specShape).superRefine((value, ctx) => checkPlan(value as SimulationSpec, ctx));
+export const simulationSpecSchema = z
+  .object(specShape)
+  .superRefine((value, ctx) => checkPlan(value as SimulationSpec, ctx));
 
 /** Start input: the run's inputs plus an optional campaign pair it belongs to and a label. */
 export const simulationStartSchema = z
@@ -176,7 +204,14 @@ export const simulationOperations = {
   'simulation.list': operation<SimulationRunSummary[]>()({
     kind: 'query',
     summary: 'Stored runs, newest first',
-    input: z.object({ limit: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(500, 'must be at most 500').default(100) }),
+    input: z.object({
+      limit: z
+        .number({ error: 'must be a whole number' })
+        .int('must be a whole number')
+        .min(1, 'must be at least 1')
+        .max(500, 'must be at most 500')
+        .default(100),
+    }),
   }),
   'simulation.exportXyz': operation<XyzExport>()({
     kind: 'query',
@@ -187,7 +222,10 @@ export const simulationOperations = {
     kind: 'query',
     summary: 'Gupta energy of a given structure (extended XYZ text, Å)',
     input: z.object({
-      xyz: z.string({ error: 'must be the text of an XYZ file' }).min(1, 'must not be empty').max(20_000_000, 'must be at most 20 MB'),
+      xyz: z
+        .string({ error: 'must be the text of an XYZ file' })
+        .min(1, 'must not be empty')
+        .max(20_000_000, 'must be at most 20 MB'),
       // 1–15 Å: Gupta's exponential terms are negligible beyond the fifth fcc shell (~7 Å for Au; common
       // practice); a 100 Å cut-off on 16,000 atoms took 14 s and 3 GB.
       cutoffAngstrom: positiveNumber('Å').min(1, 'must be at least 1 Å').max(15, 'must be at most 15 Å').optional(),
@@ -197,9 +235,20 @@ export const simulationOperations = {
     kind: 'query',
     summary: 'Minimise the Gupta energy of a given cluster (extended XYZ, Å) off the lattice; stores nothing',
     input: z.object({
-      xyz: z.string({ error: 'must be the text of an XYZ file' }).min(1, 'must not be empty').max(20_000_000, 'must be at most 20 MB'),
-      forceToleranceEvPerAngstrom: positiveNumber('eV/Å').gt(0, 'must be above 0 eV/Å').max(1, 'must be at most 1 eV/Å').default(1e-3),
-      maxIterations: z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(200_000, 'must be at most 200000').default(20_000),
+      xyz: z
+        .string({ error: 'must be the text of an XYZ file' })
+        .min(1, 'must not be empty')
+        .max(20_000_000, 'must be at most 20 MB'),
+      forceToleranceEvPerAngstrom: positiveNumber('eV/Å')
+        .gt(0, 'must be above 0 eV/Å')
+        .max(1, 'must be at most 1 eV/Å')
+        .default(1e-3),
+      maxIterations: z
+        .number({ error: 'must be a whole number' })
+        .int('must be a whole number')
+        .min(1, 'must be at least 1')
+        .max(200_000, 'must be at most 200000')
+        .default(20_000),
     }),
   }),
 };

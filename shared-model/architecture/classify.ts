@@ -125,7 +125,8 @@ export function classifyArchitecture(
   if (sep !== undefined && janusOffset !== undefined) {
     const domainShare = thresholds.janusDomainShare ?? DEFAULT_THRESHOLDS.janusDomainShare ?? 0.9;
     const surfaceShare = thresholds.janusSurfaceShare ?? DEFAULT_THRESHOLDS.janusSurfaceShare ?? 0.1;
-    if (!Number.isFinite(sep.centreOfMassOffset) || sep.centreOfMassOffset < 0) throw new RangeError(`centreOfMassOffset must be ≥ 0, got ${sep.centreOfMassOffset}`);
+    if (!Number.isFinite(sep.centreOfMassOffset) || sep.centreOfMassOffset < 0)
+      throw new RangeError(`centreOfMassOffset must be ≥ 0, got ${sep.centreOfMassOffset}`);
     distances.push(Math.abs(sep.centreOfMassOffset - janusOffset) / janusOffset);
     separatedJanus =
       sep.centreOfMassOffset >= janusOffset &&
@@ -155,5 +156,13 @@ export function classifyArchitecture(
     kind = 'alloy';
     label = 'alloy';
   }
-  return { label, kind, enrichedElement, enrichment, margin, thresholds: { ...thresholds }, classifierVersion: CLASSIFIER_VERSION };
+  return {
+    label,
+    kind,
+    enrichedElement,
+    enrichment,
+    margin,
+    thresholds: { ...thresholds },
+    classifierVersion: CLASSIFIER_VERSION,
+  };
 }

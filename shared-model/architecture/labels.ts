@@ -3,17 +3,17 @@
  * notation: "Ni@Pt" is a Ni core under a Pt shell.
  */
 export type ArchitectureKind =
-  | 'alloy'
-  | 'surface-enriched alloy'
-  | 'core@shell'
-  | 'Janus'
-  | 'intermetallic'
-  | 'unknown'
-  | 'hollow'
-  | 'other';
+  'alloy' | 'surface-enriched alloy' | 'core@shell' | 'Janus' | 'intermetallic' | 'unknown' | 'hollow' | 'other';
 
 /** Kinds a prediction or simulation can give; outcomes may also be 'hollow' or 'other'. */
-export const PREDICTED_KINDS = ['alloy', 'surface-enriched alloy', 'core@shell', 'Janus', 'intermetallic', 'unknown'] as const;
+export const PREDICTED_KINDS = [
+  'alloy',
+  'surface-enriched alloy',
+  'core@shell',
+  'Janus',
+  'intermetallic',
+  'unknown',
+] as const;
 export const OUTCOME_ONLY_KINDS = ['hollow', 'other'] as const;
 
 /** A label as shown and stored: "alloy", "surface-enriched alloy", "Ni@Pt", "Janus", "intermetallic", "unknown", "hollow", "other". */
@@ -29,7 +29,15 @@ export interface ParsedArchitecture {
   shell?: string;
 }
 
-const PLAIN_KINDS: readonly ArchitectureKind[] = ['alloy', 'surface-enriched alloy', 'Janus', 'intermetallic', 'unknown', 'hollow', 'other'];
+const PLAIN_KINDS: readonly ArchitectureKind[] = [
+  'alloy',
+  'surface-enriched alloy',
+  'Janus',
+  'intermetallic',
+  'unknown',
+  'hollow',
+  'other',
+];
 
 /**
  * Reads a label typed by a user or stored earlier. Returns null when it is none of the known forms.

@@ -6,11 +6,11 @@
 import type { SynthesisRoute } from '../recipes/design-input';
 import type { DesignedReagent } from '../recipes/design/types';
 
-export const PROCEDURE_SOURCE = 'common practice — adapt to your group\'s validated procedure';
+export const PROCEDURE_SOURCE = "common practice — adapt to your group's validated procedure";
 
 export const PROCEDURE_REMINDER =
-  'These steps assist your planning; they never replace the supplier\'s safety data sheet (SDS), your ' +
-  'institution\'s safety rules or local regulations. Read every reagent\'s SDS before you start, and have a ' +
+  "These steps assist your planning; they never replace the supplier's safety data sheet (SDS), your " +
+  "institution's safety rules or local regulations. Read every reagent's SDS before you start, and have a " +
   'qualified person review any new procedure.';
 
 export interface ProcedureStep {

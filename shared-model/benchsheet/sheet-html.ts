@@ -97,6 +97,8 @@ ${incompatibilities}
 
 /** The whole printable document. */
 export function benchSheetHtml(sheet: BenchSheet): string {
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Bench sheet — ${escapeHtml(sheet.batchName)}</title>` +
-    `<style>${BENCH_SHEET_CSS}</style></head><body>${benchSheetSection(sheet)}</body></html>`;
+  return (
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Bench sheet — ${escapeHtml(sheet.batchName)}</title>` +
+    `<style>${BENCH_SHEET_CSS}</style></head><body>${benchSheetSection(sheet)}</body></html>`
+  );
 }

@@ -56,8 +56,10 @@ function particleLine(batch: SavedBatch): string {
   const d = batch.design;
   if (d.architecture === 'core@shell' && d.coreDiameterNm !== null) {
     const ml = d.shellMonolayers !== null ? ` (${d.shellMonolayers.toFixed(1)} ML)` : '';
-    return `${d.coreElement}@${d.shellElement}: ${d.coreDiameterNm.toFixed(1)} nm core, ` +
-      `${(d.shellThicknessNm ?? 0).toFixed(2)} nm shell${ml}; ${d.diameterNm.toFixed(1)} nm overall`;
+    return (
+      `${d.coreElement}@${d.shellElement}: ${d.coreDiameterNm.toFixed(1)} nm core, ` +
+      `${(d.shellThicknessNm ?? 0).toFixed(2)} nm shell${ml}; ${d.diameterNm.toFixed(1)} nm overall`
+    );
   }
   if (d.architecture === 'single-metal') return `${d.elementA} seeds, ${d.diameterNm.toFixed(1)} nm`;
   return `${d.diameterNm.toFixed(1)} nm, ${d.xBPct.toFixed(1)} at.% ${d.elementB}`;

@@ -149,7 +149,8 @@ export class BlurredChordGrid {
         if (halfSpaceLow && u > 0) u = 0;
         F[j] = chordAntiderivative(u, radius);
       }
-      for (let j = lo; j <= hi; j++) target[j] = (target[j] as number) + (sign * ((F[j + 1] as number) - (F[j] as number))) / h;
+      for (let j = lo; j <= hi; j++)
+        target[j] = (target[j] as number) + (sign * ((F[j + 1] as number) - (F[j] as number))) / h;
     };
     switch (g.kind) {
       case 'alloy':

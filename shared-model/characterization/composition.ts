@@ -59,7 +59,8 @@ export interface CompositionComparison {
 export const GRID_METALS = ['Cu', 'Ni', 'Au', 'Mo', 'Ti', 'Al'] as const;
 
 function checkFraction(field: string, value: number): void {
-  if (!(Number.isFinite(value) && value >= 0 && value <= 1)) throw invalid(field, `${field} must be an atomic fraction between 0 and 1, got ${value}`);
+  if (!(Number.isFinite(value) && value >= 0 && value <= 1))
+    throw invalid(field, `${field} must be an atomic fraction between 0 and 1, got ${value}`);
 }
 
 /** Fractions typed as at.% (48 → 0.48) carry binary rounding; a deviation equal to the uncertainty is not beyond it. */
@@ -72,14 +73,21 @@ export function compareComposition(input: CompositionInput): CompositionComparis
   if (input.nominalXB !== null) checkFraction('nominalXB', input.nominalXB);
   const rows: CompositionRow[] = input.measurements.map((m, i) => {
     checkFraction(`measurements.${i}.xB`, m.xB);
-    if (m.uncertaintyXB !== null && !(Number.isFinite(m.uncertaintyXB) && m.uncertaintyXB >= 0 && m.uncertaintyXB <= 1)) {
-      throw invalid(`measurements.${i}.uncertaintyXB`, `uncertainty must be a fraction between 0 and 1 (0.02 = 2 at.%), got ${m.uncertaintyXB}`);
+    if (
+      m.uncertaintyXB !== null &&
+      !(Number.isFinite(m.uncertaintyXB) && m.uncertaintyXB >= 0 && m.uncertaintyXB <= 1)
+    ) {
+      throw invalid(
+        `measurements.${i}.uncertaintyXB`,
+        `uncertainty must be a fraction between 0 and 1 (0.02 = 2 at.%), got ${m.uncertaintyXB}`,
+      );
     }
     const deviation = input.nominalXB === null ? null : m.xB - input.nominalXB;
     let flagged: boolean | null = null;
     let comment: string;
     if (deviation === null) comment = 'no nominal composition to compare with';
-    else if (m.uncertaintyXB === null) comment = `differs from nominal by ${pct(deviation)}; no uncertainty stated, so it cannot be judged`;
+    else if (m.uncertaintyXB === null)
+      comment = `differs from nominal by ${pct(deviation)}; no uncertainty stated, so it cannot be judged`;
     else {
       flagged = Math.abs(deviation) > m.uncertaintyXB + ROUNDING_SLACK;
       comment = flagged
@@ -92,7 +100,9 @@ export function compareComposition(input: CompositionInput): CompositionComparis
   const warnings: CompositionWarning[] = [];
   const grid = input.gridMetal ?? null;
   if (grid !== null && (grid === elementA || grid === elementB)) {
-    const alternatives = GRID_METALS.filter((g) => g !== elementA && g !== elementB).slice(0, 3).join(', ');
+    const alternatives = GRID_METALS.filter((g) => g !== elementA && g !== elementB)
+      .slice(0, 3)
+      .join(', ');
     warnings.push({
       code: 'grid-metal',
       message: `the TEM grid is ${grid}, one of the pair's metals: the grid adds ${grid} X-rays (stray scattering and fluorescence) to every spectrum, so EDX overstates ${grid}; use a ${alternatives} grid`,

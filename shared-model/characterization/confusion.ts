@@ -4,7 +4,13 @@
  * reported twice: exact label match, and match of kind (a core@shell predicted with the elements the other
  * way round agrees in kind but not in label).
  */
-import { formatArchitecture, parseArchitecture, PREDICTED_KINDS, OUTCOME_ONLY_KINDS, type ArchitectureLabel } from '../architecture/labels';
+import {
+  formatArchitecture,
+  parseArchitecture,
+  PREDICTED_KINDS,
+  OUTCOME_ONLY_KINDS,
+  type ArchitectureLabel,
+} from '../architecture/labels';
 
 export interface PredictionOutcomePair {
   predicted: ArchitectureLabel;
@@ -23,7 +29,14 @@ export interface ConfusionMatrix {
   exactAgreementRate: number | null;
   kindAgreementRate: number | null;
   /** Per observed label: how many were predicted right (recall) — null when the label never occurs. */
-  perLabel: { label: ArchitectureLabel; observed: number; predicted: number; correct: number; recall: number | null; precision: number | null }[];
+  perLabel: {
+    label: ArchitectureLabel;
+    observed: number;
+    predicted: number;
+    correct: number;
+    recall: number | null;
+    precision: number | null;
+  }[];
 }
 
 const KIND_ORDER = [...PREDICTED_KINDS, ...OUTCOME_ONLY_KINDS] as readonly string[];
@@ -41,7 +54,10 @@ function labelOrder(a: { label: string; kind: string }, b: { label: string; kind
   return a.label.localeCompare(b.label);
 }
 
-export function confusionMatrix(pairs: readonly PredictionOutcomePair[], extraLabels: readonly ArchitectureLabel[] = []): ConfusionMatrix {
+export function confusionMatrix(
+  pairs: readonly PredictionOutcomePair[],
+  extraLabels: readonly ArchitectureLabel[] = [],
+): ConfusionMatrix {
   const normalised = pairs.map((p) => ({ predicted: normalise(p.predicted), observed: normalise(p.observed) }));
   const seen = new Map<string, { label: string; kind: string }>();
   for (const p of normalised) {
@@ -69,7 +85,14 @@ export function confusionMatrix(pairs: readonly PredictionOutcomePair[], extraLa
     const observed = (counts[i] as number[]).reduce((s, v) => s + v, 0);
     const predicted = counts.reduce((s, row) => s + (row[i] as number), 0);
     const correct = (counts[i] as number[])[i] as number;
-    return { label, observed, predicted, correct, recall: observed > 0 ? correct / observed : null, precision: predicted > 0 ? correct / predicted : null };
+    return {
+      label,
+      observed,
+      predicted,
+      correct,
+      recall: observed > 0 ? correct / observed : null,
+      precision: predicted > 0 ? correct / predicted : null,
+    };
   });
   return {
     labels,

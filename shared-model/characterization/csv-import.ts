@@ -3,7 +3,16 @@
  * tolerant table (see csv-table.ts) and stop at the first bad row with a message naming its line and value.
  */
 import { invalid } from '../api/result';
-import { columnName, describeColumns, headerLengthFactor, readCsvTable, readNumberCell, resolveColumn, type CsvTable, type DecimalSeparator } from './csv-table';
+import {
+  columnName,
+  describeColumns,
+  headerLengthFactor,
+  readCsvTable,
+  readNumberCell,
+  resolveColumn,
+  type CsvTable,
+  type DecimalSeparator,
+} from './csv-table';
 
 export interface DiameterImport {
   diametersNm: number[];
@@ -29,16 +38,23 @@ function pickDiameterColumn(table: CsvTable): number {
     const index = table.header.findIndex((h) => DIAMETER_HEADER.test(h.trim()));
     if (index >= 0) return index;
   }
-  throw invalid('column', `the file has ${table.columnCount} columns (${describeColumns(table)}); choose the column holding the diameters`);
+  throw invalid(
+    'column',
+    `the file has ${table.columnCount} columns (${describeColumns(table)}); choose the column holding the diameters`,
+  );
 }
 
 export function parseDiameterCsv(text: string, options: DiameterImportOptions = {}): DiameterImport {
   const table = readCsvTable(text, { decimalSeparator: options.decimalSeparator ?? 'auto' });
-  const column = options.column !== undefined ? resolveColumn(table, options.column, 'column') : pickDiameterColumn(table);
+  const column =
+    options.column !== undefined ? resolveColumn(table, options.column, 'column') : pickDiameterColumn(table);
   const headerText = table.header?.[column];
   const unit = headerLengthFactor(headerText);
   if (unit === 'pixels') {
-    throw invalid('column', `column ${columnName(table, column)} is in pixels; set the scale in the image-analysis tool and export diameters in nm`);
+    throw invalid(
+      'column',
+      `column ${columnName(table, column)} is in pixels; set the scale in the image-analysis tool and export diameters in nm`,
+    );
   }
   const notes = [...table.notes];
   if (unit.factorToNm !== 1) notes.push(`column ${columnName(table, column)} is in ${unit.unit}; converted to nm`);
@@ -96,17 +112,26 @@ function headerHasSymbol(header: string, symbol: string): boolean {
 export function parseLineScanCsv(text: string, options: LineScanImportOptions): LineScanImport {
   const table = readCsvTable(text, { decimalSeparator: options.decimalSeparator ?? 'auto' });
   if (table.columnCount < 3) {
-    throw invalid('csvText', `a line scan needs three columns (position, ${options.elementA}, ${options.elementB}); the file has ${table.columnCount}`);
+    throw invalid(
+      'csvText',
+      `a line scan needs three columns (position, ${options.elementA}, ${options.elementB}); the file has ${table.columnCount}`,
+    );
   }
   const notes = [...table.notes];
   const header = table.header;
   let positionIndex: number;
-  if (options.positionColumn !== undefined) positionIndex = resolveColumn(table, options.positionColumn, 'positionColumn');
+  if (options.positionColumn !== undefined)
+    positionIndex = resolveColumn(table, options.positionColumn, 'positionColumn');
   else {
     const found = header ? header.findIndex((h) => /(pos|dist|^x\b|length|\bnm\b|µm|μm)/i.test(h)) : -1;
     positionIndex = found >= 0 ? found : 0;
   }
-  const pickElement = (choice: string | number | undefined, symbol: string, field: string, fallback: number): number => {
+  const pickElement = (
+    choice: string | number | undefined,
+    symbol: string,
+    field: string,
+    fallback: number,
+  ): number => {
     if (choice !== undefined) return resolveColumn(table, choice, field);
     if (header) {
       const found = header.findIndex((h, i) => i !== positionIndex && headerHasSymbol(h, symbol));
@@ -117,9 +142,19 @@ export function parseLineScanCsv(text: string, options: LineScanImportOptions): 
   };
   const others = [0, 1, 2, 3, 4, 5].filter((i) => i !== positionIndex && i < table.columnCount);
   const aIndex = pickElement(options.aColumn, options.elementA, 'aColumn', others[0] as number);
-  const bIndex = pickElement(options.bColumn, options.elementB, 'bColumn', (others.find((i) => i !== aIndex) ?? others[1]) as number);
-  if (aIndex === bIndex) throw invalid('bColumn', `${options.elementA} and ${options.elementB} cannot be read from the same column (${columnName(table, aIndex)})`);
-  if (aIndex === positionIndex || bIndex === positionIndex) throw invalid('positionColumn', 'the position column cannot also hold an element signal');
+  const bIndex = pickElement(
+    options.bColumn,
+    options.elementB,
+    'bColumn',
+    (others.find((i) => i !== aIndex) ?? others[1]) as number,
+  );
+  if (aIndex === bIndex)
+    throw invalid(
+      'bColumn',
+      `${options.elementA} and ${options.elementB} cannot be read from the same column (${columnName(table, aIndex)})`,
+    );
+  if (aIndex === positionIndex || bIndex === positionIndex)
+    throw invalid('positionColumn', 'the position column cannot also hold an element signal');
 
   let unit: LineScanUnit;
   if (options.unit && options.unit !== 'auto') unit = options.unit;
@@ -128,7 +163,8 @@ export function parseLineScanCsv(text: string, options: LineScanImportOptions): 
     unit = /(%|at\.?\s*pct|atomic)/i.test(names) ? 'atPercent' : 'counts';
   }
   const lengthUnit = headerLengthFactor(header?.[positionIndex]);
-  if (lengthUnit === 'pixels') throw invalid('positionColumn', `column ${columnName(table, positionIndex)} is in pixels; export positions in nm`);
+  if (lengthUnit === 'pixels')
+    throw invalid('positionColumn', `column ${columnName(table, positionIndex)} is in pixels; export positions in nm`);
   if (lengthUnit.factorToNm !== 1) notes.push(`positions are in ${lengthUnit.unit}; converted to nm`);
 
   const points: { x: number; a: number; b: number; line: number }[] = [];
@@ -141,7 +177,10 @@ export function parseLineScanCsv(text: string, options: LineScanImportOptions): 
     });
   }
   if (points.length < MIN_LINE_SCAN_POINTS) {
-    throw invalid('csvText', `a line scan needs at least ${MIN_LINE_SCAN_POINTS} points to compare the four models, found ${points.length}`);
+    throw invalid(
+      'csvText',
+      `a line scan needs at least ${MIN_LINE_SCAN_POINTS} points to compare the four models, found ${points.length}`,
+    );
   }
   const increasing = points.every((p, i) => i === 0 || p.x > (points[i - 1] as typeof p).x);
   if (!increasing) {
@@ -149,7 +188,8 @@ export function parseLineScanCsv(text: string, options: LineScanImportOptions): 
     for (let i = 1; i < points.length; i++) {
       const p = points[i] as (typeof points)[number];
       const q = points[i - 1] as (typeof points)[number];
-      if (p.x === q.x) throw invalid('csvText', `lines ${q.line} and ${p.line} both give position ${p.x} nm; positions must differ`);
+      if (p.x === q.x)
+        throw invalid('csvText', `lines ${q.line} and ${p.line} both give position ${p.x} nm; positions must differ`);
     }
     notes.push('positions were not in increasing order; sorted');
   }

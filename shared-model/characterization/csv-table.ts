@@ -58,7 +58,10 @@ function isIndexSequence(values: readonly string[]): boolean {
   return values.every((v, i) => Number(v) === first + i);
 }
 
-export function readCsvTable(text: string, options: { decimalSeparator?: DecimalSeparator; field?: string } = {}): CsvTable {
+export function readCsvTable(
+  text: string,
+  options: { decimalSeparator?: DecimalSeparator; field?: string } = {},
+): CsvTable {
   const field = options.field ?? 'csvText';
   if (typeof text !== 'string') throw invalid(field, 'the file content must be text');
   const cleaned = text.replace(/^\uFEFF/, '').replace(/\r\n?/g, '\n');
@@ -68,7 +71,8 @@ export function readCsvTable(text: string, options: { decimalSeparator?: Decimal
   const notes: string[] = [];
   let delimiter = detectDelimiter(nonBlank);
   const decimalOption = options.decimalSeparator ?? 'auto';
-  let decimalComma = decimalOption === ',' || (decimalOption === 'auto' && (delimiter === 'tab' || delimiter === 'semicolon'));
+  let decimalComma =
+    decimalOption === ',' || (decimalOption === 'auto' && (delimiter === 'tab' || delimiter === 'semicolon'));
 
   const parsed = Papa.parse(cleaned, { delimiter: DELIMITER_CHAR[delimiter], newline: '\n', skipEmptyLines: false });
   const quoteError = parsed.errors.find((e) => e.code === 'MissingQuotes' || e.code === 'InvalidQuotes');
@@ -85,16 +89,24 @@ export function readCsvTable(text: string, options: { decimalSeparator?: Decimal
   // A comma-delimited file that is really one column of decimal-comma numbers?
   if (delimiter === 'comma' && decimalOption !== '.') {
     const isDigits = (s: string) => /^[+-]?\d+$/.test(s);
-    const firstIsHeader = rows.length > 0 && (rows[0] as CsvRow).fields.some((f) => f !== '' && parseNumberField(f, false) === null);
+    const firstIsHeader =
+      rows.length > 0 && (rows[0] as CsvRow).fields.some((f) => f !== '' && parseNumberField(f, false) === null);
     const dataRows = firstIsHeader ? rows.slice(1) : rows;
     const headerFields = firstIsHeader ? (rows[0] as CsvRow).fields.length : 1;
-    const twoDigitParts = dataRows.length > 0 && dataRows.every((r) => r.fields.length === 2 && isDigits(r.fields[0] as string) && /^\d+$/.test(r.fields[1] as string));
+    const twoDigitParts =
+      dataRows.length > 0 &&
+      dataRows.every(
+        (r) => r.fields.length === 2 && isDigits(r.fields[0] as string) && /^\d+$/.test(r.fields[1] as string),
+      );
     const looksLikeIndex = isIndexSequence(dataRows.map((r) => r.fields[0] as string));
     if (decimalOption === ',' || (twoDigitParts && headerFields === 1 && !looksLikeIndex)) {
       rows = rows.map((r) => ({ line: r.line, fields: [r.fields.join(',')] }));
       delimiter = 'none';
       decimalComma = true;
-      if (decimalOption === 'auto') notes.push('read "12,5"-style values as decimal commas (one column); choose "." as decimal separator if they were two columns');
+      if (decimalOption === 'auto')
+        notes.push(
+          'read "12,5"-style values as decimal commas (one column); choose "." as decimal separator if they were two columns',
+        );
     }
   }
 
@@ -105,7 +117,8 @@ export function readCsvTable(text: string, options: { decimalSeparator?: Decimal
   const header = hasHeader ? first.fields : null;
   const dataRows = hasHeader ? rows.slice(1) : rows;
   const columnCount = Math.max(header?.length ?? 0, ...dataRows.map((r) => r.fields.length));
-  if (decimalComma && (delimiter === 'tab' || delimiter === 'semicolon')) notes.push('decimal commas accepted (tab/semicolon-delimited file)');
+  if (decimalComma && (delimiter === 'tab' || delimiter === 'semicolon'))
+    notes.push('decimal commas accepted (tab/semicolon-delimited file)');
   return { header, rows: dataRows, delimiter, decimalComma, columnCount, notes };
 }
 
@@ -113,13 +126,17 @@ export function readCsvTable(text: string, options: { decimalSeparator?: Decimal
 export function resolveColumn(table: CsvTable, choice: string | number, field: string): number {
   if (typeof choice === 'number') {
     if (!Number.isInteger(choice) || choice < 1 || choice > table.columnCount) {
-      throw invalid(field, `column ${choice} does not exist; the file has ${table.columnCount} column${table.columnCount === 1 ? '' : 's'}`);
+      throw invalid(
+        field,
+        `column ${choice} does not exist; the file has ${table.columnCount} column${table.columnCount === 1 ? '' : 's'}`,
+      );
     }
     return choice - 1;
   }
   const wanted = choice.trim().toLowerCase();
   if (/^\d+$/.test(wanted)) return resolveColumn(table, Number(wanted), field);
-  if (!table.header) throw invalid(field, `the file has no header row, so choose the column by number (1–${table.columnCount})`);
+  if (!table.header)
+    throw invalid(field, `the file has no header row, so choose the column by number (1–${table.columnCount})`);
   const index = table.header.findIndex((h) => h.trim().toLowerCase() === wanted);
   if (index < 0) throw invalid(field, `no column named "${choice}"; the columns are ${describeColumns(table)}`);
   return index;
@@ -155,6 +172,7 @@ export function readNumberCell(table: CsvTable, row: CsvRow, column: number, fie
     throw invalid(field, `line ${row.line}: no value in column ${columnName(table, column)}`);
   }
   const value = parseNumberField(raw, table.decimalComma);
-  if (value === null) throw invalid(field, `line ${row.line}: "${raw}" in column ${columnName(table, column)} is not a number`);
+  if (value === null)
+    throw invalid(field, `line ${row.line}: "${raw}" in column ${columnName(table, column)} is not a number`);
   return value;
 }

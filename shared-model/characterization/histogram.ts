@@ -49,8 +49,10 @@ export function sizeHistogram(
   const range = Math.max(max - min, 1e-9 * max);
   let width = options.binWidthNm;
   if (width !== undefined) {
-    if (!(Number.isFinite(width) && width > 0)) throw invalid('binWidthNm', `bin width must be a positive number of nm, got ${width}`);
-    if (range / width > 500) throw invalid('binWidthNm', `bin width ${width} nm gives more than 500 bins for this range; choose a wider bin`);
+    if (!(Number.isFinite(width) && width > 0))
+      throw invalid('binWidthNm', `bin width must be a positive number of nm, got ${width}`);
+    if (range / width > 500)
+      throw invalid('binWidthNm', `bin width ${width} nm gives more than 500 bins for this range; choose a wider bin`);
   } else {
     const iqr = quantileSorted(sorted, 0.75) - quantileSorted(sorted, 0.25);
     const fd = iqr > 0 ? (2 * iqr) / Math.cbrt(n) : range / Math.max(5, Math.ceil(Math.log2(n) + 1));

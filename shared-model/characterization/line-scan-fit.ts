@@ -121,17 +121,34 @@ export function bicEvidence(deltaBic: number): BicEvidence {
 function checkScan(scan: LineScanData, options: LineScanFitOptions): void {
   const { positionsNm: x, signalA, signalB } = scan;
   const n = x.length;
-  if (n !== signalA.length || n !== signalB.length) throw invalid('signalA', `positions (${n}) and signals (${signalA.length}, ${signalB.length}) must have the same length`);
-  if (n < MIN_LINE_SCAN_POINTS) throw invalid('positionsNm', `a line scan needs at least ${MIN_LINE_SCAN_POINTS} points to compare the four models, got ${n}`);
+  if (n !== signalA.length || n !== signalB.length)
+    throw invalid(
+      'signalA',
+      `positions (${n}) and signals (${signalA.length}, ${signalB.length}) must have the same length`,
+    );
+  if (n < MIN_LINE_SCAN_POINTS)
+    throw invalid(
+      'positionsNm',
+      `a line scan needs at least ${MIN_LINE_SCAN_POINTS} points to compare the four models, got ${n}`,
+    );
   for (let i = 0; i < n; i++) {
     if (!Number.isFinite(x[i])) throw invalid('positionsNm', `position #${i + 1} is not a number`);
-    if (i > 0 && !((x[i] as number) > (x[i - 1] as number))) throw invalid('positionsNm', `positions must increase; #${i + 1} (${x[i]} nm) does not`);
+    if (i > 0 && !((x[i] as number) > (x[i - 1] as number)))
+      throw invalid('positionsNm', `positions must increase; #${i + 1} (${x[i]} nm) does not`);
     if (!Number.isFinite(signalA[i])) throw invalid('signalA', `${options.elementA} signal #${i + 1} is not a number`);
     if (!Number.isFinite(signalB[i])) throw invalid('signalB', `${options.elementB} signal #${i + 1} is not a number`);
   }
   const allZero = (s: readonly number[]) => s.every((v) => v === 0);
-  if (allZero(signalA)) throw invalid('signalA', `the ${options.elementA} channel is zero at every point; check the column or the X-ray line chosen`);
-  if (allZero(signalB)) throw invalid('signalB', `the ${options.elementB} channel is zero at every point; check the column or the X-ray line chosen`);
+  if (allZero(signalA))
+    throw invalid(
+      'signalA',
+      `the ${options.elementA} channel is zero at every point; check the column or the X-ray line chosen`,
+    );
+  if (allZero(signalB))
+    throw invalid(
+      'signalB',
+      `the ${options.elementB} channel is zero at every point; check the column or the X-ray line chosen`,
+    );
   if (scan.unit === 'atPercent') {
     let normalised = 0;
     for (let i = 0; i < n; i++) if (Math.abs((signalA[i] as number) + (signalB[i] as number) - 100) < 5) normalised++;
@@ -147,7 +164,8 @@ function checkScan(scan: LineScanData, options: LineScanFitOptions): void {
 /** Noise SD of a channel from second differences: var(y[i+1] − 2y[i] + y[i−1]) = 6σ² for white noise. */
 function secondDifferenceNoise(y: Float64Array, peak: number): number {
   const d: number[] = [];
-  for (let i = 1; i < y.length - 1; i++) d.push(Math.abs((y[i + 1] as number) - 2 * (y[i] as number) + (y[i - 1] as number)));
+  for (let i = 1; i < y.length - 1; i++)
+    d.push(Math.abs((y[i + 1] as number) - 2 * (y[i] as number) + (y[i - 1] as number)));
   d.sort((p, q) => p - q);
   const mad = median(d);
   if (mad > 0) return (1.4826 * mad) / Math.sqrt(6);
@@ -171,10 +189,11 @@ function smooth3(y: Float64Array): Float64Array {
 function halfMaximumExtent(x: Float64Array, profile: Float64Array): { left: number; right: number } {
   let peak = 0;
   let peakIndex = 0;
-  for (let i = 0; i < profile.length; i++) if ((profile[i] as number) > peak) {
-    peak = profile[i] as number;
-    peakIndex = i;
-  }
+  for (let i = 0; i < profile.length; i++)
+    if ((profile[i] as number) > peak) {
+      peak = profile[i] as number;
+      peakIndex = i;
+    }
   const half = peak / 2;
   let l = peakIndex;
   while (l > 0 && (profile[l - 1] as number) >= half) l--;
@@ -267,12 +286,22 @@ interface ModelSetup {
 }
 
 /** Geometry and σ from a nonlinear parameter vector in scaled units [x0/L, R/L, (f), (σ/L)]. */
-function decode(setup: ModelSetup, p: ArrayLike<number>, scaleNm: number): { geometry: ProfileGeometry; sigmaNm: number; f: number } {
+function decode(
+  setup: ModelSetup,
+  p: ArrayLike<number>,
+  scaleNm: number,
+): { geometry: ProfileGeometry; sigmaNm: number; f: number } {
   const radiusNm = (p[1] as number) * scaleNm;
   const f = setup.hasCore ? (p[2] as number) : 1;
   const sigmaNm = setup.fitSigma ? (p[setup.hasCore ? 3 : 2] as number) * scaleNm : setup.fixedSigmaNm;
   return {
-    geometry: { kind: setup.kind, centerNm: (p[0] as number) * scaleNm, radiusNm, coreRadiusNm: f * radiusNm, janusALow: setup.janusALow },
+    geometry: {
+      kind: setup.kind,
+      centerNm: (p[0] as number) * scaleNm,
+      radiusNm,
+      coreRadiusNm: f * radiusNm,
+      janusALow: setup.janusALow,
+    },
     sigmaNm,
     f,
   };
@@ -329,7 +358,10 @@ function runLevenbergMarquardt(problem: Problem, setup: ModelSetup, start: numbe
   const ys = new Float64Array(2 * n);
   for (let i = 0; i < 2 * n; i++) {
     xs[i] = i;
-    ys[i] = i < n ? (problem.yA[i] as number) / (problem.sA[i] as number) : (problem.yB[i - n] as number) / (problem.sB[i - n] as number);
+    ys[i] =
+      i < n
+        ? (problem.yA[i] as number) / (problem.sA[i] as number)
+        : (problem.yB[i - n] as number) / (problem.sB[i - n] as number);
   }
   // The library compares errors as Σ r²·w² but steps with weights 1/w², which disagree unless w = 1:
   // the data and model are therefore passed already divided by their noise SD, with unit weights.
@@ -379,7 +411,9 @@ function covariance(problem: Problem, fit: RawFit): { cov: Matrix | null; names:
   const n = problem.n;
   const L = problem.scaleNm;
   const nonlinear = params.length;
-  const linearNames = ['kA', 'bA', 'kB', 'bB'].filter((name) => !(name === 'kA' && linear.kA === 0) && !(name === 'kB' && linear.kB === 0));
+  const linearNames = ['kA', 'bA', 'kB', 'bB'].filter(
+    (name) => !(name === 'kA' && linear.kA === 0) && !(name === 'kB' && linear.kB === 0),
+  );
   const p = nonlinear + linearNames.length;
   const J = new Matrix(2 * n, p);
   const plus = new Float64Array(2 * n);
@@ -422,7 +456,8 @@ function covariance(problem: Problem, fit: RawFit): { cov: Matrix | null; names:
   const s2 = linear.wrss / dof;
   try {
     const cov = inverse(J.transpose().mmul(J)).mul(s2);
-    for (let j = 0; j < p; j++) if (!(cov.get(j, j) >= 0) || !Number.isFinite(cov.get(j, j))) return { cov: null, names, parameterCount: p };
+    for (let j = 0; j < p; j++)
+      if (!(cov.get(j, j) >= 0) || !Number.isFinite(cov.get(j, j))) return { cov: null, names, parameterCount: p };
     return { cov, names, parameterCount: p };
   } catch (error) {
     if (error instanceof Error) return { cov: null, names, parameterCount: p };
@@ -456,8 +491,16 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
   const noiseA = secondDifferenceNoise(yA, peakA);
   const noiseB = secondDifferenceNoise(yB, peakB);
   const label = { A: options.elementA, B: options.elementB };
-  if (!(peakA > NO_SIGNAL_RATIO * noiseA)) throw invalid('signalA', `the ${label.A} channel shows no particle signal above its noise (peak ${peakA.toPrecision(3)} over background, noise ${noiseA.toPrecision(3)})`);
-  if (!(peakB > NO_SIGNAL_RATIO * noiseB)) throw invalid('signalB', `the ${label.B} channel shows no particle signal above its noise (peak ${peakB.toPrecision(3)} over background, noise ${noiseB.toPrecision(3)})`);
+  if (!(peakA > NO_SIGNAL_RATIO * noiseA))
+    throw invalid(
+      'signalA',
+      `the ${label.A} channel shows no particle signal above its noise (peak ${peakA.toPrecision(3)} over background, noise ${noiseA.toPrecision(3)})`,
+    );
+  if (!(peakB > NO_SIGNAL_RATIO * noiseB))
+    throw invalid(
+      'signalB',
+      `the ${label.B} channel shows no particle signal above its noise (peak ${peakB.toPrecision(3)} over background, noise ${noiseB.toPrecision(3)})`,
+    );
   const total = new Float64Array(n);
   for (let i = 0; i < n; i++) total[i] = (netA[i] as number) / peakA + (netB[i] as number) / peakB;
   const totalPeak = Math.max(...total);
@@ -468,7 +511,8 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     [n - 1, 'end'],
   ] as const) {
     const outer = side === 'start' ? [0, 1, 2] : [n - 3, n - 2, n - 1];
-    const level = outer.reduce((s, i) => s + (yA[i] as number - bgA) / peakA + (yB[i] as number - bgB) / peakB, 0) / 3;
+    const level =
+      outer.reduce((s, i) => s + ((yA[i] as number) - bgA) / peakA + ((yB[i] as number) - bgB) / peakB, 0) / 3;
     if (level > 0.5 * totalPeak) {
       throw invalid(
         'positionsNm',
@@ -492,7 +536,8 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     sA.fill(noiseA);
     sB.fill(noiseB);
   }
-  if (scan.unit === 'atPercent') notes.push('at.% values are fitted as signals proportional to the amount of each metal along the beam');
+  if (scan.unit === 'atPercent')
+    notes.push('at.% values are fitted as signals proportional to the amount of each metal along the beam');
 
   // Starting values.
   const extent = halfMaximumExtent(x, total);
@@ -505,8 +550,14 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
   const fB = Math.min(0.9, Math.max(0.2, (extentB.right - extentB.left) / widthNm));
 
   const fixedSigma = options.probeSigmaNm ?? null;
-  if (fixedSigma !== null && !(Number.isFinite(fixedSigma) && fixedSigma >= 0)) throw invalid('probeSigmaNm', `probe σ must be a non-negative number of nm, got ${fixedSigma}`);
-  const cellNm = stepNm / Math.max(2, Math.ceil(stepNm / Math.min(r0 / 25, fixedSigma !== null && fixedSigma > 0 ? fixedSigma / 2 : Infinity)));
+  if (fixedSigma !== null && !(Number.isFinite(fixedSigma) && fixedSigma >= 0))
+    throw invalid('probeSigmaNm', `probe σ must be a non-negative number of nm, got ${fixedSigma}`);
+  const cellNm =
+    stepNm /
+    Math.max(
+      2,
+      Math.ceil(stepNm / Math.min(r0 / 25, fixedSigma !== null && fixedSigma > 0 ? fixedSigma / 2 : Infinity)),
+    );
   const sigmaMaxNm = Math.max(r0, 2 * stepNm);
   const problem: Problem = {
     n,
@@ -534,7 +585,13 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     const starts: { setup: ModelSetup; p: number[] }[] = [];
     const janusSides = kind === 'Janus' ? [true, false] : [true];
     for (const janusALow of janusSides) {
-      const setup: ModelSetup = { kind, janusALow, hasCore: kind === 'A@B' || kind === 'B@A', fitSigma: fixedSigma === null, fixedSigmaNm: fixedSigma ?? 0 };
+      const setup: ModelSetup = {
+        kind,
+        janusALow,
+        hasCore: kind === 'A@B' || kind === 'B@A',
+        fitSigma: fixedSigma === null,
+        fixedSigmaNm: fixedSigma ?? 0,
+      };
       const base = [x0 / r0, 1];
       const tail = setup.fitSigma ? [sigma0 / r0] : [];
       if (setup.hasCore) {
@@ -591,7 +648,10 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
       const shellLattice = setup.kind === 'A@B' ? options.latticeBNm : options.latticeANm;
       if (shellLattice !== undefined && shellLattice !== null) {
         const ml = monolayerThicknessNm(shellLattice);
-        shellMonolayers = { value: shellThicknessNm.value / ml, sd: shellThicknessNm.sd === null ? null : shellThicknessNm.sd / ml };
+        shellMonolayers = {
+          value: shellThicknessNm.value / ml,
+          sd: shellThicknessNm.sd === null ? null : shellThicknessNm.sd / ml,
+        };
       }
     }
     const { min, max } = bounds(setup, problem);
@@ -649,15 +709,22 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     );
   }
 
-  let suggestion = { label: chosen.label, reason: `${chosen.label} has the lowest BIC (${evidence} evidence, ΔBIC ${deltaBicToNext.toFixed(1)} to ${runnerUp.label})` };
+  let suggestion = {
+    label: chosen.label,
+    reason: `${chosen.label} has the lowest BIC (${evidence} evidence, ΔBIC ${deltaBicToNext.toFixed(1)} to ${runnerUp.label})`,
+  };
   if (chosen.shellMonolayers && chosen.shellMonolayers.value < 1) {
     suggestion = {
       label: 'surface-enriched alloy',
       reason: `${chosen.label} fits best but its shell is ${chosen.shellMonolayers.value.toFixed(2)} monolayers thick, less than one complete layer (Pairwright's rule: call that a surface-enriched alloy)`,
     };
   }
-  if (chosen.atBounds.length > 0) notes.push(`${chosen.label}: ${chosen.atBounds.join(', ')} ended on a bound; its uncertainty is not meaningful`);
-  if (evidence === 'weak') notes.push(`the data hardly distinguish ${chosen.label} from ${runnerUp.label} (ΔBIC < 2); treat the choice as open`);
+  if (chosen.atBounds.length > 0)
+    notes.push(`${chosen.label}: ${chosen.atBounds.join(', ')} ended on a bound; its uncertainty is not meaningful`);
+  if (evidence === 'weak')
+    notes.push(
+      `the data hardly distinguish ${chosen.label} from ${runnerUp.label} (ΔBIC < 2); treat the choice as open`,
+    );
 
   return {
     analysisVersion: ANALYSIS_VERSION,
@@ -671,7 +738,11 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     evidence,
     deltaBicToNext,
     suggestion,
-    noise: { a: isCounts ? Math.sqrt(Math.max(peakA + bgA, 1)) : noiseA, b: isCounts ? Math.sqrt(Math.max(peakB + bgB, 1)) : noiseB, model: isCounts ? 'poisson' : 'constant' },
+    noise: {
+      a: isCounts ? Math.sqrt(Math.max(peakA + bgA, 1)) : noiseA,
+      b: isCounts ? Math.sqrt(Math.max(peakB + bgB, 1)) : noiseB,
+      model: isCounts ? 'poisson' : 'constant',
+    },
     notes,
   };
 }

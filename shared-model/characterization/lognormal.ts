@@ -33,7 +33,8 @@ export interface LogNormalFit {
 }
 
 function checkConfidence(level: number): void {
-  if (!(level > 0 && level < 1)) throw invalid('confidenceLevel', `confidence level must lie between 0 and 1 (e.g. 0.95), got ${level}`);
+  if (!(level > 0 && level < 1))
+    throw invalid('confidenceLevel', `confidence level must lie between 0 and 1 (e.g. 0.95), got ${level}`);
 }
 
 export function fitLogNormal(diametersNm: readonly number[], confidenceLevel = 0.95): LogNormalFit {
@@ -61,7 +62,10 @@ export function fitLogNormal(diametersNm: readonly number[], confidenceLevel = 0
     sigmaSample,
     confidenceLevel,
     muInterval: [mu - halfWidth, mu + halfWidth],
-    sigmaInterval: [Math.sqrt((n - 1) * sigmaSample ** 2 / chiHigh), Math.sqrt((n - 1) * sigmaSample ** 2 / chiLow)],
+    sigmaInterval: [
+      Math.sqrt(((n - 1) * sigmaSample ** 2) / chiHigh),
+      Math.sqrt(((n - 1) * sigmaSample ** 2) / chiLow),
+    ],
     medianNm: Math.exp(mu),
     meanNm: Math.exp(mu + (sigma * sigma) / 2),
     modeNm: Math.exp(mu - sigma * sigma),

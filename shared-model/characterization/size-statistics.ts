@@ -63,7 +63,8 @@ export function particlesForHalfWidth(sdNm: number, halfWidthNm: number, confide
   let hi = 4;
   while (halfWidthAt(hi) > halfWidthNm) {
     hi *= 2;
-    if (hi > 1e9) throw invalid('precision', 'the wanted precision needs more than 10⁹ particles; choose a looser precision');
+    if (hi > 1e9)
+      throw invalid('precision', 'the wanted precision needs more than 10⁹ particles; choose a looser precision');
   }
   let lo = Math.max(2, hi / 2);
   while (hi - lo > 1) {
@@ -80,7 +81,8 @@ export function sizeStatistics(
 ): SizeStatistics {
   checkDiameters(diametersNm);
   const confidenceLevel = options.confidenceLevel ?? 0.95;
-  if (!(confidenceLevel > 0 && confidenceLevel < 1)) throw invalid('confidenceLevel', `confidence level must lie between 0 and 1, got ${confidenceLevel}`);
+  if (!(confidenceLevel > 0 && confidenceLevel < 1))
+    throw invalid('confidenceLevel', `confidence level must lie between 0 and 1, got ${confidenceLevel}`);
   const n = diametersNm.length;
   const sorted = [...diametersNm].sort((a, b) => a - b);
   let sum = 0;
@@ -96,7 +98,8 @@ export function sizeStatistics(
   let target: SizeStatistics['target'] = null;
   const targetNm = options.targetDiameterNm;
   if (targetNm !== undefined && targetNm !== null) {
-    if (!(Number.isFinite(targetNm) && targetNm > 0)) throw invalid('targetDiameterNm', `target size must be a positive number of nm, got ${targetNm}`);
+    if (!(Number.isFinite(targetNm) && targetNm > 0))
+      throw invalid('targetDiameterNm', `target size must be a positive number of nm, got ${targetNm}`);
     target = {
       diameterNm: targetNm,
       deviationNm: meanNm - targetNm,
@@ -109,14 +112,17 @@ export function sizeStatistics(
   const goal = options.precision;
   if (goal && (goal.relativePercent !== undefined || goal.absoluteNm !== undefined)) {
     const level = goal.confidenceLevel ?? 0.95;
-    if (!(level > 0 && level < 1)) throw invalid('precision.confidenceLevel', `confidence level must lie between 0 and 1, got ${level}`);
+    if (!(level > 0 && level < 1))
+      throw invalid('precision.confidenceLevel', `confidence level must lie between 0 and 1, got ${level}`);
     let halfWidthNm: number;
     if (goal.absoluteNm !== undefined) {
-      if (!(Number.isFinite(goal.absoluteNm) && goal.absoluteNm > 0)) throw invalid('precision.absoluteNm', `precision must be a positive number of nm, got ${goal.absoluteNm}`);
+      if (!(Number.isFinite(goal.absoluteNm) && goal.absoluteNm > 0))
+        throw invalid('precision.absoluteNm', `precision must be a positive number of nm, got ${goal.absoluteNm}`);
       halfWidthNm = goal.absoluteNm;
     } else {
       const rel = goal.relativePercent as number;
-      if (!(Number.isFinite(rel) && rel > 0)) throw invalid('precision.relativePercent', `precision must be a positive percentage, got ${rel}`);
+      if (!(Number.isFinite(rel) && rel > 0))
+        throw invalid('precision.relativePercent', `precision must be a positive percentage, got ${rel}`);
       halfWidthNm = (rel / 100) * meanNm;
     }
     const needed = particlesForHalfWidth(sdNm, halfWidthNm, level);

@@ -104,7 +104,11 @@ const MAX_SUGGESTED_KEV = 25;
 export function suggestedLine(element: string, other: string): XrayLine | null {
   const otherLines = xrayLines(other);
   const clear = (line: XrayLine) =>
-    otherLines.every((o) => Math.abs(o.energyKev - line.energyKev) * 1000 >= OVERLAP_FWHM_FACTOR * detectorFwhmEv((o.energyKev + line.energyKev) / 2));
+    otherLines.every(
+      (o) =>
+        Math.abs(o.energyKev - line.energyKev) * 1000 >=
+        OVERLAP_FWHM_FACTOR * detectorFwhmEv((o.energyKev + line.energyKev) / 2),
+    );
   const lines = xrayLines(element);
   const order: XrayLineName[] = ['Kα', 'Lα', 'Mα', 'Kβ', 'Lβ1'];
   for (const name of order) {

@@ -37,7 +37,8 @@ export interface PairsWithin {
 
 /** All pairs i < j closer than `cutoffAngstrom` (strictly), found with a cell list. */
 export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): PairsWithin {
-  if (!Number.isFinite(cutoffAngstrom) || cutoffAngstrom <= 0) throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoffAngstrom}`);
+  if (!Number.isFinite(cutoffAngstrom) || cutoffAngstrom <= 0)
+    throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoffAngstrom}`);
   if (positions.length % 3 !== 0) throw invalid('positions', 'positions must hold x, y, z for every atom');
   const atoms = positions.length / 3;
   let minX = Infinity;
@@ -50,7 +51,8 @@ export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): Pa
     const x = positions[3 * i]!;
     const y = positions[3 * i + 1]!;
     const z = positions[3 * i + 2]!;
-    if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) throw invalid('positions', `atom ${i + 1} has a non-finite coordinate`);
+    if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z))
+      throw invalid('positions', `atom ${i + 1} has a non-finite coordinate`);
     if (x < minX) minX = x;
     if (y < minY) minY = y;
     if (z < minZ) minZ = z;
@@ -156,7 +158,10 @@ export function buildNeighbourList(positions: Float64Array, cutoffAngstrom: numb
     if (d - last > 1e-10 * d) classes.push(d);
   }
   if (classes.length > 65535) {
-    throw invalid('atoms', `this structure has ${classes.length} distinct neighbour distances; at most 65535 are supported`);
+    throw invalid(
+      'atoms',
+      `this structure has ${classes.length} distinct neighbour distances; at most 65535 are supported`,
+    );
   }
   const classDistances = Float64Array.from(classes);
   const classOfDistance = (d: number): number => {

@@ -45,16 +45,25 @@ export function equivalentDiameterNm(atoms: number, nnAngstrom: number): number 
 
 function requireNearestNeighbour(nnAngstrom: number): void {
   if (!Number.isFinite(nnAngstrom) || nnAngstrom <= 0) {
-    throw invalid('nearestNeighbourAngstrom', `nearest-neighbour distance must be a positive number of Å, got ${nnAngstrom}`);
+    throw invalid(
+      'nearestNeighbourAngstrom',
+      `nearest-neighbour distance must be a positive number of Å, got ${nnAngstrom}`,
+    );
   }
 }
 
 function requireShells(shells: number): void {
-  if (!Number.isInteger(shells) || shells < 0) throw invalid('shells', `shells must be a whole number ≥ 0, got ${shells}`);
+  if (!Number.isInteger(shells) || shells < 0)
+    throw invalid('shells', `shells must be a whole number ≥ 0, got ${shells}`);
 }
 
 /** Collects fcc sites (integer coordinates in units of a/2 with the given parity of x+y+z) passing `keep`. */
-function fccSites(extent: number, parity: 0 | 1, keep: (x: number, y: number, z: number) => boolean, scale: number): Float64Array {
+function fccSites(
+  extent: number,
+  parity: 0 | 1,
+  keep: (x: number, y: number, z: number) => boolean,
+  scale: number,
+): Float64Array {
   const out: number[] = [];
   for (let x = -extent; x <= extent; x++) {
     for (let y = -extent; y <= extent; y++) {
@@ -69,7 +78,14 @@ function fccSites(extent: number, parity: 0 | 1, keep: (x: number, y: number, z:
 
 function finish(shape: ParticleShape, shells: number, positions: Float64Array, nn: number): ClusterGeometry {
   const atoms = positions.length / 3;
-  return { shape, shells, atoms, positions, nearestNeighbourAngstrom: nn, equivalentDiameterNm: equivalentDiameterNm(atoms, nn) };
+  return {
+    shape,
+    shells,
+    atoms,
+    positions,
+    nearestNeighbourAngstrom: nn,
+    equivalentDiameterNm: equivalentDiameterNm(atoms, nn),
+  };
 }
 
 export function buildCuboctahedron(shells: number, nnAngstrom: number): ClusterGeometry {
@@ -77,7 +93,13 @@ export function buildCuboctahedron(shells: number, nnAngstrom: number): ClusterG
   requireNearestNeighbour(nnAngstrom);
   const n = shells;
   const halfLattice = nnAngstrom / Math.SQRT2; // a/2
-  const positions = fccSites(2 * n, 0, (x, y, z) => Math.abs(x) <= n && Math.abs(y) <= n && Math.abs(z) <= n && Math.abs(x) + Math.abs(y) + Math.abs(z) <= 2 * n, halfLattice);
+  const positions = fccSites(
+    2 * n,
+    0,
+    (x, y, z) =>
+      Math.abs(x) <= n && Math.abs(y) <= n && Math.abs(z) <= n && Math.abs(x) + Math.abs(y) + Math.abs(z) <= 2 * n,
+    halfLattice,
+  );
   return finish('cuboctahedron', shells, positions, nnAngstrom);
 }
 
@@ -90,7 +112,11 @@ export function buildTruncatedOctahedron(shells: number, nnAngstrom: number): Cl
   const positions = fccSites(
     3 * n,
     parity,
-    (x, y, z) => Math.abs(x) + Math.abs(y) + Math.abs(z) <= 3 * n && Math.abs(x) <= 2 * n && Math.abs(y) <= 2 * n && Math.abs(z) <= 2 * n,
+    (x, y, z) =>
+      Math.abs(x) + Math.abs(y) + Math.abs(z) <= 3 * n &&
+      Math.abs(x) <= 2 * n &&
+      Math.abs(y) <= 2 * n &&
+      Math.abs(z) <= 2 * n,
     halfLattice,
   );
   return finish('truncated-octahedron', shells, positions, nnAngstrom);
@@ -99,12 +125,18 @@ export function buildTruncatedOctahedron(shells: number, nnAngstrom: number): Cl
 /** fcc sites within `radiusAngstrom` of a central atom (inclusive, with a relative tolerance of 1e-9). */
 export function buildSphereOfRadius(radiusAngstrom: number, nnAngstrom: number, shells: number): ClusterGeometry {
   requireNearestNeighbour(nnAngstrom);
-  if (!Number.isFinite(radiusAngstrom) || radiusAngstrom < 0) throw invalid('diameterNm', `sphere radius must be ≥ 0, got ${radiusAngstrom} Å`);
+  if (!Number.isFinite(radiusAngstrom) || radiusAngstrom < 0)
+    throw invalid('diameterNm', `sphere radius must be ≥ 0, got ${radiusAngstrom} Å`);
   const halfLattice = nnAngstrom / Math.SQRT2;
   const limit = radiusAngstrom * (1 + 1e-9);
   const limitSq = limit * limit;
   const extent = Math.ceil(limit / halfLattice) + 1;
-  const positions = fccSites(extent, 0, (x, y, z) => (x * x + y * y + z * z) * halfLattice * halfLattice <= limitSq, halfLattice);
+  const positions = fccSites(
+    extent,
+    0,
+    (x, y, z) => (x * x + y * y + z * z) * halfLattice * halfLattice <= limitSq,
+    halfLattice,
+  );
   return finish('sphere', shells, positions, nnAngstrom);
 }
 
@@ -129,7 +161,8 @@ function icosahedronVertices(): number[][] {
 function icosahedronFaces(vertices: number[][]): [number, number, number][] {
   const distance = (a: number[], b: number[]) => Math.hypot(a[0]! - b[0]!, a[1]! - b[1]!, a[2]! - b[2]!);
   let edge = Infinity;
-  for (let i = 0; i < vertices.length; i++) for (let j = i + 1; j < vertices.length; j++) edge = Math.min(edge, distance(vertices[i]!, vertices[j]!));
+  for (let i = 0; i < vertices.length; i++)
+    for (let j = i + 1; j < vertices.length; j++) edge = Math.min(edge, distance(vertices[i]!, vertices[j]!));
   const isEdge = (i: number, j: number) => Math.abs(distance(vertices[i]!, vertices[j]!) - edge) < 1e-9;
   const faces: [number, number, number][] = [];
   for (let i = 0; i < vertices.length; i++) {
@@ -200,8 +233,13 @@ export function sphereAtomEstimate(diameterNm: number, nnAngstrom: number): numb
 }
 
 /** The shell count of `shape` whose volume-equivalent diameter is nearest to `diameterNm`. */
-export function shellsForDiameter(shape: Exclude<ParticleShape, 'sphere'>, diameterNm: number, nnAngstrom: number): number {
-  if (!Number.isFinite(diameterNm) || diameterNm <= 0) throw invalid('diameterNm', `diameter must be a positive number of nm, got ${diameterNm}`);
+export function shellsForDiameter(
+  shape: Exclude<ParticleShape, 'sphere'>,
+  diameterNm: number,
+  nnAngstrom: number,
+): number {
+  if (!Number.isFinite(diameterNm) || diameterNm <= 0)
+    throw invalid('diameterNm', `diameter must be a positive number of nm, got ${diameterNm}`);
   requireNearestNeighbour(nnAngstrom);
   let best = 1;
   let bestGap = Infinity;
@@ -221,9 +259,11 @@ export type ClusterSize = { shells: number } | { diameterNm: number };
 
 /** Builds `shape` at the given size with nearest-neighbour distance `nnAngstrom`. */
 export function buildCluster(shape: ParticleShape, size: ClusterSize, nnAngstrom: number): ClusterGeometry {
-  if (!isParticleShape(shape)) throw invalid('shape', `unknown shape "${String(shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
+  if (!isParticleShape(shape))
+    throw invalid('shape', `unknown shape "${String(shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
   if ('diameterNm' in size) {
-    if (!Number.isFinite(size.diameterNm) || size.diameterNm <= 0) throw invalid('diameterNm', `diameter must be a positive number of nm, got ${size.diameterNm}`);
+    if (!Number.isFinite(size.diameterNm) || size.diameterNm <= 0)
+      throw invalid('diameterNm', `diameter must be a positive number of nm, got ${size.diameterNm}`);
     if (shape === 'sphere') {
       const radiusAngstrom = (size.diameterNm * 10) / 2;
       return buildSphereOfRadius(radiusAngstrom, nnAngstrom, Math.round(radiusAngstrom / nnAngstrom));

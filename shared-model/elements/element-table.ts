@@ -119,15 +119,22 @@ export const ELEMENT_COLUMN_SOURCES: readonly ColumnSource[] = [
   {
     column: 'cell / latticeConstantAngstrom',
     unit: 'Å',
-    source: 'Kittel, Introduction to Solid State Physics, 8th ed., ch. 1 table of crystal structures (room temperature); fcc values given to 4 figures as in the CRC Handbook lattice-constant table',
+    source:
+      'Kittel, Introduction to Solid State Physics, 8th ed., ch. 1 table of crystal structures (room temperature); fcc values given to 4 figures as in the CRC Handbook lattice-constant table',
     fromMemory: true,
     note: 'Sn is white (β) tin, the form met at synthesis temperatures; Mn is α-Mn (58 atoms per cubic cell); Bi rhombohedral (2 atoms per cell).',
   },
-  { column: 'cohesiveEnergyEv', unit: 'eV/atom', source: 'Kittel, ISSP 8th ed., Table 3.1 (cohesive energies, 0 K, 1 atm)', fromMemory: true },
+  {
+    column: 'cohesiveEnergyEv',
+    unit: 'eV/atom',
+    source: 'Kittel, ISSP 8th ed., Table 3.1 (cohesive energies, 0 K, 1 atm)',
+    fromMemory: true,
+  },
   {
     column: 'metallicRadiusAngstrom',
     unit: 'Å',
-    source: 'Teatum, Gschneidner & Waber (1968) 12-coordinate metallic radii as tabulated in Greenwood & Earnshaw, Chemistry of the Elements, 2nd ed.',
+    source:
+      'Teatum, Gschneidner & Waber (1968) 12-coordinate metallic radii as tabulated in Greenwood & Earnshaw, Chemistry of the Elements, 2nd ed.',
     fromMemory: true,
   },
   {
@@ -144,7 +151,12 @@ export const ELEMENT_COLUMN_SOURCES: readonly ColumnSource[] = [
     fromMemory: true,
     note: 'a second, independent source for the surface energy (a facet value, not a mean); blank where not recalled',
   },
-  { column: 'electronegativityPauling', unit: '', source: 'Pauling scale (Allred 1961 revision) as in the CRC Handbook', fromMemory: true },
+  {
+    column: 'electronegativityPauling',
+    unit: '',
+    source: 'Pauling scale (Allred 1961 revision) as in the CRC Handbook',
+    fromMemory: true,
+  },
   {
     column: 'bulkModulusGpa',
     unit: 'GPa',
@@ -158,11 +170,17 @@ export const ELEMENT_COLUMN_SOURCES: readonly ColumnSource[] = [
     source: 'polycrystalline (isotropic) shear modulus, CRC Handbook "Elastic constants" / Kaye & Laby tables',
     fromMemory: true,
   },
-  { column: 'atomicMass', unit: 'g/mol', source: 'IUPAC standard atomic weights (2021 abridged/conventional values)', fromMemory: true },
+  {
+    column: 'atomicMass',
+    unit: 'g/mol',
+    source: 'IUPAC standard atomic weights (2021 abridged/conventional values)',
+    fromMemory: true,
+  },
   {
     column: 'miedema (phiStarV, nws13, v23Cm2, hybridizationRtoP, transition)',
     unit: 'V, d.u.^1/3, cm²',
-    source: 'de Boer, Boom, Mattens, Miedema & Niessen, Cohesion in Metals (North-Holland, 1988), Table 2.1 and Fig. 2.28',
+    source:
+      'de Boer, Boom, Mattens, Miedema & Niessen, Cohesion in Metals (North-Holland, 1988), Table 2.1 and Fig. 2.28',
     fromMemory: true,
     note: 'checked by the Takeuchi & Inoue (2005) equiatomic mixing enthalpies in the tests',
   },
@@ -254,7 +272,14 @@ function buildRecord(row: Row): ElementRecord {
     bulkModulusGpa: bulkGpa,
     shearModulusGpa: shearGpa,
     atomicMass: mass,
-    miedema: Object.freeze({ phiStarV: m[0], nws13: m[1], v23Cm2: m[2], transition: m[3] === 1, hybridizationRtoP: m[4], valence: m[5] }),
+    miedema: Object.freeze({
+      phiStarV: m[0],
+      nws13: m[1],
+      v23Cm2: m[2],
+      transition: m[3] === 1,
+      hybridizationRtoP: m[4],
+      valence: m[5],
+    }),
     oxidationStates: Object.freeze([...oxidation]),
   });
 }
@@ -289,7 +314,8 @@ export function cellAtomicVolumeAngstrom3(cell: CrystalCell): number {
     }
   }
   const volume = cellVolume / cell.atomsPerCell;
-  if (!Number.isFinite(volume) || volume <= 0) throw new Error(`crystal cell ${JSON.stringify(cell)} lacks an edge or angle`);
+  if (!Number.isFinite(volume) || volume <= 0)
+    throw new Error(`crystal cell ${JSON.stringify(cell)} lacks an edge or angle`);
   return volume;
 }
 
@@ -314,7 +340,10 @@ export function recordProperty(record: ElementRecord, property: NumericElementPr
       value = cellAtomicVolumeAngstrom3(record.cell);
       break;
     case 'fccEquivalentLatticeAngstrom':
-      value = record.cell.structure === 'fcc' ? record.latticeConstantAngstrom : Math.cbrt(4 * cellAtomicVolumeAngstrom3(record.cell));
+      value =
+        record.cell.structure === 'fcc'
+          ? record.latticeConstantAngstrom
+          : Math.cbrt(4 * cellAtomicVolumeAngstrom3(record.cell));
       break;
     case 'miedemaPhiStarV':
       value = record.miedema?.phiStarV;
@@ -327,7 +356,10 @@ export function recordProperty(record: ElementRecord, property: NumericElementPr
       break;
     default:
       if (!(NUMERIC_ELEMENT_PROPERTIES as readonly string[]).includes(property)) {
-        throw invalid('property', `unknown element property "${String(property)}"; known: ${NUMERIC_ELEMENT_PROPERTIES.join(', ')}`);
+        throw invalid(
+          'property',
+          `unknown element property "${String(property)}"; known: ${NUMERIC_ELEMENT_PROPERTIES.join(', ')}`,
+        );
       }
       value = record[property];
   }

@@ -52,12 +52,14 @@ export function atomsInSphericalShell(coreDiameterNm: number, shellNm: number, s
 }
 
 export function monolayersToNm(monolayers: number, latticeNm: number): number {
-  if (!Number.isFinite(monolayers) || monolayers < 0) throw invalid('monolayers', `monolayers must be ≥ 0, got ${monolayers}`);
+  if (!Number.isFinite(monolayers) || monolayers < 0)
+    throw invalid('monolayers', `monolayers must be ≥ 0, got ${monolayers}`);
   return monolayers * monolayerThicknessNm(latticeNm);
 }
 
 export function nmToMonolayers(thicknessNm: number, latticeNm: number): number {
-  if (!Number.isFinite(thicknessNm) || thicknessNm < 0) throw invalid('thicknessNm', `thickness must be ≥ 0, got ${thicknessNm}`);
+  if (!Number.isFinite(thicknessNm) || thicknessNm < 0)
+    throw invalid('thicknessNm', `thickness must be ≥ 0, got ${thicknessNm}`);
   return thicknessNm / monolayerThicknessNm(latticeNm);
 }
 

@@ -7,7 +7,8 @@
 import { invalid } from '../api/result';
 
 function requireShells(shells: number): void {
-  if (!Number.isInteger(shells) || shells < 0) throw invalid('shells', `shells must be a whole number ≥ 0, got ${shells}`);
+  if (!Number.isInteger(shells) || shells < 0)
+    throw invalid('shells', `shells must be a whole number ≥ 0, got ${shells}`);
 }
 
 /** Total atoms of a cuboctahedron or Mackay icosahedron with `shells` shells around the centre atom. */
@@ -29,13 +30,15 @@ export function magicClusterSurfaceAtoms(shells: number): number {
  * (from memory; checked against explicit construction in the cluster-builder tests).
  */
 export function truncatedOctahedronAtoms(edgeAtoms: number): number {
-  if (!Number.isInteger(edgeAtoms) || edgeAtoms < 2) throw invalid('edgeAtoms', `edge length must be a whole number of atoms ≥ 2, got ${edgeAtoms}`);
+  if (!Number.isInteger(edgeAtoms) || edgeAtoms < 2)
+    throw invalid('edgeAtoms', `edge length must be a whole number of atoms ≥ 2, got ${edgeAtoms}`);
   const L = edgeAtoms;
   return 16 * L ** 3 - 33 * L ** 2 + 24 * L - 6;
 }
 
 export function truncatedOctahedronSurfaceAtoms(edgeAtoms: number): number {
-  if (!Number.isInteger(edgeAtoms) || edgeAtoms < 2) throw invalid('edgeAtoms', `edge length must be a whole number of atoms ≥ 2, got ${edgeAtoms}`);
+  if (!Number.isInteger(edgeAtoms) || edgeAtoms < 2)
+    throw invalid('edgeAtoms', `edge length must be a whole number of atoms ≥ 2, got ${edgeAtoms}`);
   const L = edgeAtoms;
   return 30 * L ** 2 - 60 * L + 32;
 }

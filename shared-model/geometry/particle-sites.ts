@@ -31,7 +31,13 @@ export interface ParticleSiteCounts {
  * Real k ≥ `start` with f(k) = target for a cubic f increasing on [start, ∞), by Newton steps from the
  * leading-term guess, kept inside a bracket (bisection if a step leaves it).
  */
-function invertCubic(f: (k: number) => number, df: (k: number) => number, target: number, start: number, guess: number): number {
+function invertCubic(
+  f: (k: number) => number,
+  df: (k: number) => number,
+  target: number,
+  start: number,
+  guess: number,
+): number {
   let lo = start;
   let hi = Math.max(start + 1, 2 * guess);
   while (f(hi) < target) {
@@ -97,7 +103,13 @@ function interpolatedSurface(atoms: number, family: ClusterFamily): { surface: n
     const t = (atoms - 1) / (firstAtoms - 1);
     return { surface: 1 + t * (family.surface(family.first) - 1), index: family.first * Math.max(0, t) };
   }
-  const index = invertCubic(family.real, family.slope, atoms, family.first, Math.max(family.first, family.guess(atoms)));
+  const index = invertCubic(
+    family.real,
+    family.slope,
+    atoms,
+    family.first,
+    Math.max(family.first, family.guess(atoms)),
+  );
   let k = Math.max(family.first, Math.floor(index));
   // guard the floor against rounding at an exact magic size
   if (family.atoms(k) > atoms && k > family.first) k -= 1;
@@ -119,7 +131,10 @@ export function particleSiteCounts(diameterNm: number, latticeNm: number, shape:
   // atoms of a sphere at bulk fcc density, (π/6)d³·4/a³ (as atomsInSphere in fcc.ts)
   const atoms = ((Math.PI / 6) * diameterNm * diameterNm * diameterNm * 4) / (latticeNm * latticeNm * latticeNm);
   if (atoms < 2) {
-    throw invalid('diameterNm', `a ${diameterNm} nm particle holds fewer than 2 atoms (${atoms.toFixed(2)}); a pair needs a larger diameter`);
+    throw invalid(
+      'diameterNm',
+      `a ${diameterNm} nm particle holds fewer than 2 atoms (${atoms.toFixed(2)}); a pair needs a larger diameter`,
+    );
   }
   switch (shape) {
     case 'cuboctahedron':

@@ -16,10 +16,16 @@ export const H2_PER_BOROHYDRIDE = 4;
 export const BOROHYDRIDE_HYDROLYSIS = 'NaBH4 + 2 H2O → NaBO2 + 4 H2';
 
 /** Volume (mL) of an ideal gas of `gasMmol` millimoles at `temperatureK` and `pressurePa`. */
-export function idealGasVolumeMl(gasMmol: number, temperatureK = ROOM_TEMPERATURE_K, pressurePa = STANDARD_ATMOSPHERE_PA): number {
+export function idealGasVolumeMl(
+  gasMmol: number,
+  temperatureK = ROOM_TEMPERATURE_K,
+  pressurePa = STANDARD_ATMOSPHERE_PA,
+): number {
   if (!Number.isFinite(gasMmol) || gasMmol < 0) throw invalid('gasMmol', `gas amount must be ≥ 0 mmol, got ${gasMmol}`);
-  if (!Number.isFinite(temperatureK) || temperatureK <= 0) throw invalid('temperatureK', `temperature must be > 0 K, got ${temperatureK}`);
-  if (!Number.isFinite(pressurePa) || pressurePa <= 0) throw invalid('pressurePa', `pressure must be > 0 Pa, got ${pressurePa}`);
+  if (!Number.isFinite(temperatureK) || temperatureK <= 0)
+    throw invalid('temperatureK', `temperature must be > 0 K, got ${temperatureK}`);
+  if (!Number.isFinite(pressurePa) || pressurePa <= 0)
+    throw invalid('pressurePa', `pressure must be > 0 Pa, got ${pressurePa}`);
   const volumeM3 = ((gasMmol / 1000) * MOLAR_GAS_CONSTANT_J_PER_MOL_K * temperatureK) / pressurePa;
   return volumeM3 * 1e6;
 }
@@ -33,8 +39,13 @@ export interface HydrogenEstimate {
 }
 
 /** Upper-bound hydrogen from complete hydrolysis of `borohydrideMmol` of NaBH4 (or any BH4⁻ salt). */
-export function hydrogenFromBorohydride(borohydrideMmol: number, temperatureK = ROOM_TEMPERATURE_K, pressurePa = STANDARD_ATMOSPHERE_PA): HydrogenEstimate {
-  if (!Number.isFinite(borohydrideMmol) || borohydrideMmol < 0) throw invalid('borohydrideMmol', `borohydride amount must be ≥ 0 mmol, got ${borohydrideMmol}`);
+export function hydrogenFromBorohydride(
+  borohydrideMmol: number,
+  temperatureK = ROOM_TEMPERATURE_K,
+  pressurePa = STANDARD_ATMOSPHERE_PA,
+): HydrogenEstimate {
+  if (!Number.isFinite(borohydrideMmol) || borohydrideMmol < 0)
+    throw invalid('borohydrideMmol', `borohydride amount must be ≥ 0 mmol, got ${borohydrideMmol}`);
   const hydrogenMmol = H2_PER_BOROHYDRIDE * borohydrideMmol;
   return {
     borohydrideMmol,

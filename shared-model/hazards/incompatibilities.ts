@@ -92,7 +92,10 @@ function formatMl(ml: number): string {
 }
 
 /** All warnings that apply to the reagents present together, plus route-level cautions. */
-export function incompatibilityWarnings(reagents: readonly TaggedReagent[], context: IncompatibilityContext = {}): IncompatibilityWarning[] {
+export function incompatibilityWarnings(
+  reagents: readonly TaggedReagent[],
+  context: IncompatibilityContext = {},
+): IncompatibilityWarning[] {
   const warnings: IncompatibilityWarning[] = [];
   const temperatureC = context.temperatureC ?? 25;
   const metals = new Set(context.metals ?? []);
@@ -237,13 +240,15 @@ export function standingBenchCautions(): IncompatibilityWarning[] {
       id: 'dry-nanopowder',
       severity: 'caution',
       reagentKeys: [],
-      message: 'Dry metal nanopowders are an inhalation hazard (and some, e.g. Ni, Co, Pd, Pt, can be pyrophoric or catalyse ignition of solvent vapour): keep products wet or dispersed, dry and weigh them only in a ventilated enclosure, and wear respiratory protection your institution approves.',
+      message:
+        'Dry metal nanopowders are an inhalation hazard (and some, e.g. Ni, Co, Pd, Pt, can be pyrophoric or catalyse ignition of solvent vapour): keep products wet or dispersed, dry and weigh them only in a ventilated enclosure, and wear respiratory protection your institution approves.',
     },
     {
       id: 'aqua-regia-glassware',
       severity: 'caution',
       reagentKeys: [],
-      message: 'Glassware for noble-metal syntheses is commonly cleaned with aqua regia (3 HCl : 1 HNO3 by volume): make it fresh, in a fume hood, never stopper or store it, rinse thoroughly, and collect the spent acid (it carries dissolved precious metal) for neutralisation and recovery.',
+      message:
+        'Glassware for noble-metal syntheses is commonly cleaned with aqua regia (3 HCl : 1 HNO3 by volume): make it fresh, in a fume hood, never stopper or store it, rinse thoroughly, and collect the spent acid (it carries dissolved precious metal) for neutralisation and recovery.',
     },
   ];
 }

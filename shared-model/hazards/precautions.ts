@@ -30,7 +30,8 @@ export const PRECAUTIONARY_STATEMENTS = Object.freeze({
   'P301+P310': 'IF SWALLOWED: Immediately call a POISON CENTER/doctor/….',
   'P301+P330+P331': 'IF SWALLOWED: Rinse mouth. Do NOT induce vomiting.',
   'P302+P352': 'IF ON SKIN: Wash with plenty of water/….',
-  'P303+P361+P353': 'IF ON SKIN (or hair): Take off immediately all contaminated clothing. Rinse skin with water [or shower].',
+  'P303+P361+P353':
+    'IF ON SKIN (or hair): Take off immediately all contaminated clothing. Rinse skin with water [or shower].',
   'P304+P340': 'IF INHALED: Remove person to fresh air and keep comfortable for breathing.',
   'P305+P351+P338':
     'IF IN EYES: Rinse cautiously with water for several minutes. Remove contact lenses, if present and easy to do. ' +

@@ -14,7 +14,13 @@ import {
   type PictogramCode,
   type SignalWord,
 } from './ghs';
-import { incompatibilityWarnings, standingBenchCautions, type HazardTag, type IncompatibilityContext, type IncompatibilityWarning } from './incompatibilities';
+import {
+  incompatibilityWarnings,
+  standingBenchCautions,
+  type HazardTag,
+  type IncompatibilityContext,
+  type IncompatibilityWarning,
+} from './incompatibilities';
 import { motherLiquorStream, WASTE_STREAMS, type WasteStream, type WasteStreamId } from './waste';
 
 export interface ReagentHazardProfile {
@@ -106,7 +112,8 @@ export function batchWarnings(batches: readonly BatchHazardProfiles[]): BatchWar
     for (const warning of incompatibilityWarnings(batch.profiles, batch.context ?? {})) {
       const key = `${warning.id}\u0000${warning.message}`;
       const entry = merged.get(key) ?? { warning, batches: [] };
-      if (!entry.batches.some((b) => b.id === batch.batchId)) entry.batches.push({ id: batch.batchId, name: batch.batchName });
+      if (!entry.batches.some((b) => b.id === batch.batchId))
+        entry.batches.push({ id: batch.batchId, name: batch.batchName });
       merged.set(key, entry);
     }
   }
@@ -120,7 +127,10 @@ export function batchWarnings(batches: readonly BatchHazardProfiles[]): BatchWar
   });
 }
 
-export function summarizeHazards(profiles: readonly ReagentHazardProfile[], context: SummaryContext = {}): HazardSummary {
+export function summarizeHazards(
+  profiles: readonly ReagentHazardProfile[],
+  context: SummaryContext = {},
+): HazardSummary {
   const byCode = new Map<string, Set<string>>();
   for (const profile of profiles) {
     for (const code of profile.hCodes) {
@@ -130,11 +140,16 @@ export function summarizeHazards(profiles: readonly ReagentHazardProfile[], cont
     }
   }
   const codes = sortHCodes(byCode.keys());
-  const hazards = codes.map((code) => ({ code, text: hazardStatement(code).text, reagents: [...(byCode.get(code) ?? [])] }));
+  const hazards = codes.map((code) => ({
+    code,
+    text: hazardStatement(code).text,
+    reagents: [...(byCode.get(code) ?? [])],
+  }));
   const warnings = context.warnings ? [...context.warnings] : incompatibilityWarnings(profiles, context);
   if (context.benchCautions) warnings.push(...standingBenchCautions());
   const streamIds = new Set<WasteStreamId>(profiles.map((p) => p.wasteStream));
-  if (context.metals && context.metals.length > 0) streamIds.add(motherLiquorStream(context.metals, context.aqueous ?? false));
+  if (context.metals && context.metals.length > 0)
+    streamIds.add(motherLiquorStream(context.metals, context.aqueous ?? false));
   const order = Object.keys(WASTE_STREAMS) as WasteStreamId[];
   return {
     hazards,

@@ -22,17 +22,20 @@ export const WASTE_STREAMS: Readonly<Record<WasteStreamId, WasteStream>> = Objec
   'precious-metal-recovery': {
     id: 'precious-metal-recovery',
     label: 'Precious-metal residues (for recovery)',
-    instruction: 'Collect supernatants, washings and failed batches containing Au, Pt, Pd, Rh, Ir, Ru or Ag separately for precious-metal recovery; label with metals and solvent.',
+    instruction:
+      'Collect supernatants, washings and failed batches containing Au, Pt, Pd, Rh, Ir, Ru or Ag separately for precious-metal recovery; label with metals and solvent.',
   },
   'heavy-metal-aqueous': {
     id: 'heavy-metal-aqueous',
     label: 'Heavy-metal aqueous waste',
-    instruction: 'Aqueous solutions with Ni, Co, Cu or other heavy-metal ions: heavy-metal aqueous container, never the drain.',
+    instruction:
+      'Aqueous solutions with Ni, Co, Cu or other heavy-metal ions: heavy-metal aqueous container, never the drain.',
   },
   'heavy-metal-solvent': {
     id: 'heavy-metal-solvent',
     label: 'Metal-bearing organic solvent waste',
-    instruction: 'Organic-phase mother liquors (oleylamine, octadecene, glycols) carrying metal: non-halogenated solvent waste labelled with the metals.',
+    instruction:
+      'Organic-phase mother liquors (oleylamine, octadecene, glycols) carrying metal: non-halogenated solvent waste labelled with the metals.',
   },
   'organic-solvent': {
     id: 'organic-solvent',
@@ -42,22 +45,26 @@ export const WASTE_STREAMS: Readonly<Record<WasteStreamId, WasteStream>> = Objec
   'aqueous-general': {
     id: 'aqueous-general',
     label: 'Aqueous waste (check local rules)',
-    instruction: 'Dilute, metal-free aqueous solutions of low hazard (ascorbate, citrate, PVP): follow local rules; many institutions still require collection.',
+    instruction:
+      'Dilute, metal-free aqueous solutions of low hazard (ascorbate, citrate, PVP): follow local rules; many institutions still require collection.',
   },
   'reactive-quench': {
     id: 'reactive-quench',
     label: 'Reactive reducer: quench first',
-    instruction: 'Unused borohydride, borane–amine or hydrazine solutions: quench by the institutional procedure (slow addition to dilute acid or oxidant in a fume hood, venting the gas) before they join aqueous waste; never close a container with active hydride.',
+    instruction:
+      'Unused borohydride, borane–amine or hydrazine solutions: quench by the institutional procedure (slow addition to dilute acid or oxidant in a fume hood, venting the gas) before they join aqueous waste; never close a container with active hydride.',
   },
   acid: {
     id: 'acid',
     label: 'Acid waste',
-    instruction: 'Spent acids (HCl, HNO3, aqua regia): separate acid container with a vented cap, never with organics; aqua regia that dissolved precious metal goes to recovery.',
+    instruction:
+      'Spent acids (HCl, HNO3, aqua regia): separate acid container with a vented cap, never with organics; aqua regia that dissolved precious metal goes to recovery.',
   },
   carbonyl: {
     id: 'carbonyl',
     label: 'Metal carbonyl residues',
-    instruction: 'Metal carbonyl residues: deactivate under the institution\'s procedure in a fume hood before disposal; never in general solvent waste.',
+    instruction:
+      "Metal carbonyl residues: deactivate under the institution's procedure in a fume hood before disposal; never in general solvent waste.",
   },
 });
 

@@ -4,7 +4,12 @@
  * order of nearest neighbours, and the architecture label from THE classifier
  * (`shared-model/architecture/classify.ts`).
  */
-import { classifyArchitecture, DEFAULT_THRESHOLDS, type Classification, type ClassificationThresholds } from '../architecture/classify';
+import {
+  classifyArchitecture,
+  DEFAULT_THRESHOLDS,
+  type Classification,
+  type ClassificationThresholds,
+} from '../architecture/classify';
 import { coordinationNumbers, FIRST_SHELL_FACTOR, type NeighbourList } from '../clusters/neighbours';
 
 /** Bulk fcc (and icosahedral interior) coordination: a site with fewer first-shell neighbours is a surface site. */
@@ -92,7 +97,13 @@ export interface ParticleSites {
 }
 
 export function describeSites(list: NeighbourList, positions: Float64Array, nnAngstrom: number): ParticleSites {
-  return { list, positions, nearestNeighbourAngstrom: nnAngstrom, surface: surfaceSites(list, nnAngstrom), layers: layersFromSurface(list, nnAngstrom) };
+  return {
+    list,
+    positions,
+    nearestNeighbourAngstrom: nnAngstrom,
+    surface: surfaceSites(list, nnAngstrom),
+    layers: layersFromSurface(list, nnAngstrom),
+  };
 }
 
 export function neighbourOrder(list: NeighbourList, nnAngstrom: number, species: Uint8Array): NeighbourOrder {
@@ -113,10 +124,21 @@ export function neighbourOrder(list: NeighbourList, nnAngstrom: number, species:
   const countA = n - countB;
   const randomUnlike = n > 1 ? (bonds * 2 * countA * countB) / (n * (n - 1)) : 0;
   const ratio = randomUnlike > 0 ? unlike / randomUnlike : 1;
-  return { bonds, unlikeBonds: unlike, randomUnlikeBonds: randomUnlike, unlikeNeighbourRatio: ratio, warrenCowley: 1 - ratio };
+  return {
+    bonds,
+    unlikeBonds: unlike,
+    randomUnlikeBonds: randomUnlike,
+    unlikeNeighbourRatio: ratio,
+    warrenCowley: 1 - ratio,
+  };
 }
 
-export function analyseParticle(sites: ParticleSites, species: Uint8Array, elementA: string, elementB: string): ParticleAnalysis {
+export function analyseParticle(
+  sites: ParticleSites,
+  species: Uint8Array,
+  elementA: string,
+  elementB: string,
+): ParticleAnalysis {
   const { list, positions, surface, layers } = sites;
   const n = list.atoms;
   let countB = 0;
@@ -151,7 +173,12 @@ export function analyseParticle(sites: ParticleSites, species: Uint8Array, eleme
   const radialProfile: RadialLayer[] = [];
   for (let l = maxLayer; l >= 0; l--) {
     if (layerAtoms[l] === 0) continue;
-    radialProfile.push({ layerFromSurface: l, atoms: layerAtoms[l]!, xB: layerB[l]! / layerAtoms[l]!, meanRadiusAngstrom: layerRadius[l]! / layerAtoms[l]! });
+    radialProfile.push({
+      layerFromSurface: l,
+      atoms: layerAtoms[l]!,
+      xB: layerB[l]! / layerAtoms[l]!,
+      meanRadiusAngstrom: layerRadius[l]! / layerAtoms[l]!,
+    });
   }
   const surfaceXB = surfaceCount > 0 ? surfaceB / surfaceCount : 0;
   return {

@@ -47,7 +47,16 @@ export function detectEquilibration(trace: ArrayLike<number>, blocks = 20): Equi
   const usable = Math.max(4, Math.min(blocks, Math.floor(samples / 2)));
   if (samples < 8) {
     const mean = meanOf(trace, 0, samples);
-    return { equilibrated: false, equilibratedFromSample: 0, blockSize: samples, blockMeans: [mean], mean, standardError: 0, lateDrift: 0, driftTolerance: 0 };
+    return {
+      equilibrated: false,
+      equilibratedFromSample: 0,
+      blockSize: samples,
+      blockMeans: [mean],
+      mean,
+      standardError: 0,
+      lateDrift: 0,
+      driftTolerance: 0,
+    };
   }
   const blockSize = Math.floor(samples / usable);
   const offset = samples - blockSize * usable; // leftover samples at the start are dropped from the blocks

@@ -21,9 +21,13 @@ function formatValue(value: string | number | boolean): string {
 }
 
 /** Writes one frame. `info` keys must be plain words; values are quoted when they contain spaces. */
-export function writeExtendedXyz(structure: AtomicStructure, info: Record<string, string | number | boolean> = {}): string {
+export function writeExtendedXyz(
+  structure: AtomicStructure,
+  info: Record<string, string | number | boolean> = {},
+): string {
   const atoms = structure.symbols.length;
-  if (structure.positions.length !== 3 * atoms) throw new RangeError(`expected ${3 * atoms} coordinates, got ${structure.positions.length}`);
+  if (structure.positions.length !== 3 * atoms)
+    throw new RangeError(`expected ${3 * atoms} coordinates, got ${structure.positions.length}`);
   const pairs = ['Properties=species:S:1:pos:R:3', 'pbc="F F F"'];
   for (const [key, value] of Object.entries(info)) {
     if (!/^[A-Za-z_][A-Za-z0-9_]*$/.test(key)) throw new RangeError(`extended XYZ key "${key}" must be a plain word`);
@@ -33,7 +37,9 @@ export function writeExtendedXyz(structure: AtomicStructure, info: Record<string
   const lines = [String(atoms), pairs.join(' ')];
   const p = structure.positions;
   for (let i = 0; i < atoms; i++) {
-    lines.push(`${structure.symbols[i]} ${p[3 * i]!.toFixed(8)} ${p[3 * i + 1]!.toFixed(8)} ${p[3 * i + 2]!.toFixed(8)}`);
+    lines.push(
+      `${structure.symbols[i]} ${p[3 * i]!.toFixed(8)} ${p[3 * i + 1]!.toFixed(8)} ${p[3 * i + 2]!.toFixed(8)}`,
+    );
   }
   return lines.join('\n') + '\n';
 }
@@ -81,7 +87,8 @@ function parseProperties(spec: string): PropertyColumn[] {
   const out: PropertyColumn[] = [];
   for (let k = 0; k < parts.length; k += 3) {
     const width = Number(parts[k + 2]);
-    if (!Number.isInteger(width) || width < 1) throw invalid('xyz', `Properties column "${parts[k]}" has a bad count "${parts[k + 2]}"`);
+    if (!Number.isInteger(width) || width < 1)
+      throw invalid('xyz', `Properties column "${parts[k]}" has a bad count "${parts[k + 2]}"`);
     out.push({ name: parts[k]!, type: parts[k + 1]!.toUpperCase(), width });
   }
   return out;
@@ -104,7 +111,10 @@ function checkDistinctPositions(positions: Float64Array, firstLineIndex: number)
     const earlier = seen.get(key);
     if (earlier !== undefined) {
       const at = [0, 1, 2].map((d) => positions[3 * i + d]).join(' ');
-      throw invalid('xyz', `lines ${firstLineIndex + earlier + 1} and ${firstLineIndex + i + 1}: two atoms at the same position (${at} Å)`);
+      throw invalid(
+        'xyz',
+        `lines ${firstLineIndex + earlier + 1} and ${firstLineIndex + i + 1}: two atoms at the same position (${at} Å)`,
+      );
     }
     seen.set(key, i);
   }
@@ -117,20 +127,32 @@ export function readExtendedXyz(text: string): XyzFrame {
   if (start >= lines.length) throw invalid('xyz', 'the file is empty');
   const countText = lines[start]!.trim();
   const atoms = Number(countText);
-  if (!Number.isInteger(atoms) || atoms < 1) throw invalid('xyz', `line ${start + 1} must be the number of atoms, got "${countText}"`);
+  if (!Number.isInteger(atoms) || atoms < 1)
+    throw invalid('xyz', `line ${start + 1} must be the number of atoms, got "${countText}"`);
   // Checked before any array is sized by it: a huge count would otherwise be a RangeError from the allocation.
   const atomLines = lines.length - start - 2;
   if (atoms > atomLines) {
-    throw invalid('xyz', `line ${start + 1}: expected ${atoms} atom lines, the file has at most ${Math.max(0, atomLines)}`);
+    throw invalid(
+      'xyz',
+      `line ${start + 1}: expected ${atoms} atom lines, the file has at most ${Math.max(0, atomLines)}`,
+    );
   }
   const info = parseCommentLine(lines[start + 1] ?? '');
   if (info.Lattice !== undefined) {
     const pbc = (info.pbc ?? 'T T T').trim().split(/\s+/);
     if (pbc.some((flag) => /^(t|true|1)$/i.test(flag))) {
-      throw invalid('xyz', 'the structure has a periodic cell (Lattice with pbc true); give a free cluster without a periodic cell');
+      throw invalid(
+        'xyz',
+        'the structure has a periodic cell (Lattice with pbc true); give a free cluster without a periodic cell',
+      );
     }
   }
-  const columns = info.Properties ? parseProperties(info.Properties) : [{ name: 'species', type: 'S', width: 1 }, { name: 'pos', type: 'R', width: 3 }];
+  const columns = info.Properties
+    ? parseProperties(info.Properties)
+    : [
+        { name: 'species', type: 'S', width: 1 },
+        { name: 'pos', type: 'R', width: 3 },
+      ];
   let speciesColumn = -1;
   let posColumn = -1;
   let col = 0;
@@ -148,13 +170,15 @@ export function readExtendedXyz(text: string): XyzFrame {
     const line = lines[lineNo];
     if (line === undefined || line.trim() === '') throw invalid('xyz', `expected ${atoms} atom lines, found ${i}`);
     const fields = line.trim().split(/\s+/);
-    if (fields.length < col) throw invalid('xyz', `line ${lineNo + 1} has ${fields.length} columns, Properties needs ${col}`);
+    if (fields.length < col)
+      throw invalid('xyz', `line ${lineNo + 1} has ${fields.length} columns, Properties needs ${col}`);
     const raw = fields[speciesColumn]!;
     const symbol = raw.charAt(0).toUpperCase() + raw.slice(1).toLowerCase();
     symbols.push(symbol);
     for (let d = 0; d < 3; d++) {
       const value = Number(fields[posColumn + d]);
-      if (!Number.isFinite(value)) throw invalid('xyz', `line ${lineNo + 1}: coordinate "${fields[posColumn + d]}" is not a number`);
+      if (!Number.isFinite(value))
+        throw invalid('xyz', `line ${lineNo + 1}: coordinate "${fields[posColumn + d]}" is not a number`);
       positions[3 * i + d] = value;
     }
   }

@@ -9,7 +9,14 @@
  */
 import { invalid } from '../api/result';
 import { FIRST_SHELL_FACTOR, FIVE_SHELL_CUTOFF_FACTOR, pairsWithin } from '../clusters/neighbours';
-import { guptaElement, guptaPair, pairDensityEv2, pairRepulsionEv, type GuptaPairParameters, type PairRule } from './gupta-parameters';
+import {
+  guptaElement,
+  guptaPair,
+  pairDensityEv2,
+  pairRepulsionEv,
+  type GuptaPairParameters,
+  type PairRule,
+} from './gupta-parameters';
 
 /** Pair parameters for every ordered pair of `elements` (a symmetric matrix, row-major). */
 export function pairMatrix(elements: readonly string[]): GuptaPairParameters[] {
@@ -26,7 +33,8 @@ export function pairMatrix(elements: readonly string[]): GuptaPairParameters[] {
 export function bulkEnergyPerAtomEv(symbol: string, latticeAngstrom?: number): number {
   const element = guptaElement(symbol);
   const a = latticeAngstrom ?? element.latticeAngstrom;
-  if (!Number.isFinite(a) || a <= 0) throw invalid('latticeAngstrom', `lattice constant must be a positive number of Å, got ${a}`);
+  if (!Number.isFinite(a) || a <= 0)
+    throw invalid('latticeAngstrom', `lattice constant must be a positive number of Å, got ${a}`);
   const pair = guptaPair(symbol, symbol);
   const nn = a / Math.SQRT2;
   const cutoff = FIVE_SHELL_CUTOFF_FACTOR * nn;
@@ -56,7 +64,8 @@ export function bulkEnergyPerAtomEv(symbol: string, latticeAngstrom?: number): n
  */
 export function structureNearestNeighbourAngstrom(positions: Float64Array): number {
   const atoms = positions.length / 3;
-  if (atoms < 2) throw invalid('structure', 'a structure needs at least two atoms to define a nearest-neighbour distance');
+  if (atoms < 2)
+    throw invalid('structure', 'a structure needs at least two atoms to define a nearest-neighbour distance');
   const search = 4.5;
   const pairs = pairsWithin(positions, search);
   const nearest = new Float64Array(atoms).fill(Infinity);
@@ -69,7 +78,10 @@ export function structureNearestNeighbourAngstrom(positions: Float64Array): numb
   }
   const found = Array.from(nearest).filter((d) => Number.isFinite(d));
   if (found.length === 0) {
-    throw invalid('structure', `no two atoms are closer than ${search} Å; coordinates must be in Å and describe a condensed cluster`);
+    throw invalid(
+      'structure',
+      `no two atoms are closer than ${search} Å; coordinates must be in Å and describe a condensed cluster`,
+    );
   }
   found.sort((x, y) => x - y);
   const mid = found.length >> 1;
@@ -130,17 +142,25 @@ function speciesIndices(symbols: readonly string[]): { elements: string[]; index
 export function totalEnergy(structure: AtomicStructure, options: { cutoffAngstrom?: number } = {}): StructureEnergy {
   const atoms = structure.symbols.length;
   if (atoms === 0) throw invalid('structure', 'the structure holds no atoms');
-  if (structure.positions.length !== 3 * atoms) throw invalid('structure', `expected ${3 * atoms} coordinates for ${atoms} atoms, got ${structure.positions.length}`);
+  if (structure.positions.length !== 3 * atoms)
+    throw invalid(
+      'structure',
+      `expected ${3 * atoms} coordinates for ${atoms} atoms, got ${structure.positions.length}`,
+    );
   const { elements, index } = speciesIndices(structure.symbols);
   const nn = atoms >= 2 ? structureNearestNeighbourAngstrom(structure.positions) : 1;
   const cutoff = options.cutoffAngstrom ?? FIVE_SHELL_CUTOFF_FACTOR * nn;
-  if (!Number.isFinite(cutoff) || cutoff <= 0) throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoff}`);
+  if (!Number.isFinite(cutoff) || cutoff <= 0)
+    throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoff}`);
   const matrix = pairMatrix(elements);
   const m = elements.length;
   const density = new Float64Array(atoms);
   let repulsion = 0;
   let closest = Infinity;
-  const pairs = atoms >= 2 ? pairsWithin(structure.positions, cutoff) : { first: new Int32Array(0), second: new Int32Array(0), distanceAngstrom: new Float64Array(0), count: 0 };
+  const pairs =
+    atoms >= 2
+      ? pairsWithin(structure.positions, cutoff)
+      : { first: new Int32Array(0), second: new Int32Array(0), distanceAngstrom: new Float64Array(0), count: 0 };
   for (let k = 0; k < pairs.count; k++) {
     const i = pairs.first[k]!;
     const j = pairs.second[k]!;
@@ -153,7 +173,10 @@ export function totalEnergy(structure: AtomicStructure, options: { cutoffAngstro
     density[j]! += rho;
   }
   if (closest < 0.5 * nn) {
-    throw invalid('structure', `two atoms are only ${closest.toFixed(3)} Å apart (nearest-neighbour distance ${nn.toFixed(3)} Å); overlapping atoms have no meaningful energy`);
+    throw invalid(
+      'structure',
+      `two atoms are only ${closest.toFixed(3)} Å apart (nearest-neighbour distance ${nn.toFixed(3)} Å); overlapping atoms have no meaningful energy`,
+    );
   }
   let band = 0;
   for (let i = 0; i < atoms; i++) band += Math.sqrt(density[i]!);

@@ -42,7 +42,8 @@ export interface GuptaElementParameters {
   recallNote?: string;
 }
 
-const SOURCE = 'Cleri & Rosato, Phys. Rev. B 48, 22 (1993), Table I (digits from memory, checked by the bulk self-test)';
+const SOURCE =
+  'Cleri & Rosato, Phys. Rev. B 48, 22 (1993), Table I (digits from memory, checked by the bulk self-test)';
 
 function entry(
   symbol: string,

@@ -56,13 +56,20 @@ function maxForceOf(forces: Float64Array, atoms: number): number {
 /**
  * Minimises the energy of atoms of `types` at `positions` (changed in place) with `model`.
  */
-export function minimiseInPlace(model: OffLatticeGupta, positions: Float64Array, types: Uint8Array, options: MinimiseOptions = {}): MinimiseResult {
+export function minimiseInPlace(
+  model: OffLatticeGupta,
+  positions: Float64Array,
+  types: Uint8Array,
+  options: MinimiseOptions = {},
+): MinimiseResult {
   const atoms = types.length;
   const tolerance = options.forceToleranceEvPerAngstrom ?? 1e-3;
   const maxIterations = options.maxIterations ?? 20_000;
   const maxStep = options.maxStepAngstrom ?? 0.1;
-  if (!(tolerance > 0)) throw invalid('forceToleranceEvPerAngstrom', `the force tolerance must be > 0 eV/Å, got ${tolerance}`);
-  if (!Number.isInteger(maxIterations) || maxIterations < 0) throw invalid('maxIterations', `maxIterations must be a whole number ≥ 0, got ${maxIterations}`);
+  if (!(tolerance > 0))
+    throw invalid('forceToleranceEvPerAngstrom', `the force tolerance must be > 0 eV/Å, got ${tolerance}`);
+  if (!Number.isInteger(maxIterations) || maxIterations < 0)
+    throw invalid('maxIterations', `maxIterations must be a whole number ≥ 0, got ${maxIterations}`);
   const list = new VerletList(atoms, model.maxCutoffAngstrom, DEFAULT_SKIN_ANGSTROM);
   list.build(positions);
   assertNoOverlap(model, positions, types, list);
@@ -71,7 +78,8 @@ export function minimiseInPlace(model: OffLatticeGupta, positions: Float64Array,
   let energy = energyAndForces(model, positions, types, list, forces);
   const initialEnergyEv = energy;
   let maxForce = maxForceOf(forces, atoms);
-  if (!Number.isFinite(energy) || !Number.isFinite(maxForce)) throw explodedError(model, positions, types, forces, list, 'the start');
+  if (!Number.isFinite(energy) || !Number.isFinite(maxForce))
+    throw explodedError(model, positions, types, forces, list, 'the start');
   let dt: number = FIRE.dtStart;
   let alpha: number = FIRE.alphaStart;
   let sincePowerNegative = 0;
@@ -143,9 +151,14 @@ export interface RelaxedStructure extends MinimiseResult {
 export function relaxStructure(structure: AtomicStructure, options: MinimiseOptions = {}): RelaxedStructure {
   const atoms = structure.symbols.length;
   if (atoms === 0) throw invalid('structure', 'the structure holds no atoms');
-  if (structure.positions.length !== 3 * atoms) throw invalid('structure', `expected ${3 * atoms} coordinates for ${atoms} atoms, got ${structure.positions.length}`);
+  if (structure.positions.length !== 3 * atoms)
+    throw invalid(
+      'structure',
+      `expected ${3 * atoms} coordinates for ${atoms} atoms, got ${structure.positions.length}`,
+    );
   for (let k = 0; k < 3 * atoms; k++) {
-    if (!Number.isFinite(structure.positions[k]!)) throw invalid('structure', `atom ${Math.floor(k / 3) + 1} has a non-finite coordinate`);
+    if (!Number.isFinite(structure.positions[k]!))
+      throw invalid('structure', `atom ${Math.floor(k / 3) + 1} has a non-finite coordinate`);
   }
   const elements = [...new Set(structure.symbols)];
   const model = new OffLatticeGupta(elements);

@@ -137,7 +137,11 @@ export class OffLatticeGupta {
     const out = new Uint8Array(symbols.length);
     symbols.forEach((symbol, i) => {
       const k = this.elements.indexOf(symbol);
-      if (k < 0) throw invalid(`atoms[${i + 1}].species`, `atom ${i + 1} is ${symbol}, which this model does not hold (${this.elements.join(', ')})`);
+      if (k < 0)
+        throw invalid(
+          `atoms[${i + 1}].species`,
+          `atom ${i + 1} is ${symbol}, which this model does not hold (${this.elements.join(', ')})`,
+        );
       out[i] = k;
     });
     return out;
@@ -204,7 +208,11 @@ export class VerletList {
   refreshDisplacement(positions: Float64Array): number {
     let max = 0;
     for (let i = 0; i < this.atoms; i++) {
-      const d = Math.hypot(positions[3 * i]! - this.reference[3 * i]!, positions[3 * i + 1]! - this.reference[3 * i + 1]!, positions[3 * i + 2]! - this.reference[3 * i + 2]!);
+      const d = Math.hypot(
+        positions[3 * i]! - this.reference[3 * i]!,
+        positions[3 * i + 1]! - this.reference[3 * i + 1]!,
+        positions[3 * i + 2]! - this.reference[3 * i + 2]!,
+      );
       if (d > max) max = d;
     }
     this.maxDisplacementAngstrom = max;
@@ -221,13 +229,20 @@ export class VerletList {
 export const DEFAULT_SKIN_ANGSTROM = 1.0;
 
 /** The closest pair among the listed neighbours, or null when no atom has a neighbour. */
-export function closestPair(positions: Float64Array, list: VerletList): { i: number; j: number; distanceAngstrom: number } | null {
+export function closestPair(
+  positions: Float64Array,
+  list: VerletList,
+): { i: number; j: number; distanceAngstrom: number } | null {
   let best: { i: number; j: number; distanceAngstrom: number } | null = null;
   for (let i = 0; i < list.atoms; i++) {
     for (let e = list.offsets[i]!; e < list.offsets[i + 1]!; e++) {
       const j = list.neighbours[e]!;
       if (j <= i) continue;
-      const d = Math.hypot(positions[3 * i]! - positions[3 * j]!, positions[3 * i + 1]! - positions[3 * j + 1]!, positions[3 * i + 2]! - positions[3 * j + 2]!);
+      const d = Math.hypot(
+        positions[3 * i]! - positions[3 * j]!,
+        positions[3 * i + 1]! - positions[3 * j + 1]!,
+        positions[3 * i + 2]! - positions[3 * j + 2]!,
+      );
       if (best === null || d < best.distanceAngstrom) best = { i, j, distanceAngstrom: d };
     }
   }
@@ -235,7 +250,13 @@ export function closestPair(positions: Float64Array, list: VerletList): { i: num
 }
 
 /** Refuses overlapping atoms (closer than OVERLAP_FRACTION × the smallest r0), naming them (1-based) and their elements. */
-export function assertNoOverlap(model: OffLatticeGupta, positions: Float64Array, types: Uint8Array, list: VerletList, field = 'structure'): void {
+export function assertNoOverlap(
+  model: OffLatticeGupta,
+  positions: Float64Array,
+  types: Uint8Array,
+  list: VerletList,
+  field = 'structure',
+): void {
   const closest = closestPair(positions, list);
   const limit = OVERLAP_FRACTION * model.minR0Angstrom;
   if (closest && closest.distanceAngstrom < limit) {
@@ -355,7 +376,11 @@ export function energyAndForces(
 }
 
 /** Energy (eV) of symbols at positions, from scratch (builds its own list). */
-export function offLatticeEnergyEv(symbols: readonly string[], positions: Float64Array, model?: OffLatticeGupta): number {
+export function offLatticeEnergyEv(
+  symbols: readonly string[],
+  positions: Float64Array,
+  model?: OffLatticeGupta,
+): number {
   const elements = model?.elements ?? [...new Set(symbols)];
   const m = model ?? new OffLatticeGupta(elements);
   const types = m.typesOf(symbols);
@@ -365,13 +390,31 @@ export function offLatticeEnergyEv(symbols: readonly string[], positions: Float6
 }
 
 /** A DomainError for a configuration whose energy or forces stopped being finite, naming the atoms at fault. */
-export function explodedError(model: OffLatticeGupta, positions: Float64Array, types: Uint8Array, forces: Float64Array, list: VerletList, step: string): DomainError {
+export function explodedError(
+  model: OffLatticeGupta,
+  positions: Float64Array,
+  types: Uint8Array,
+  forces: Float64Array,
+  list: VerletList,
+  step: string,
+): DomainError {
   const bad: number[] = [];
   for (let i = 0; i < list.atoms && bad.length < 5; i++) {
-    if (!Number.isFinite(forces[3 * i]!) || !Number.isFinite(forces[3 * i + 1]!) || !Number.isFinite(forces[3 * i + 2]!) || !Number.isFinite(positions[3 * i]!)) bad.push(i);
+    if (
+      !Number.isFinite(forces[3 * i]!) ||
+      !Number.isFinite(forces[3 * i + 1]!) ||
+      !Number.isFinite(forces[3 * i + 2]!) ||
+      !Number.isFinite(positions[3 * i]!)
+    )
+      bad.push(i);
   }
   const closest = closestPair(positions, list);
   const named = bad.map((i) => `${i + 1} (${model.elements[types[i]!]})`).join(', ');
-  const near = closest ? `; closest pair: atoms ${closest.i + 1} and ${closest.j + 1} at ${closest.distanceAngstrom.toFixed(3)} Å` : '';
-  return invalid('structure', `the minimisation exploded at ${step} (energy or forces no longer finite${named ? ` on atoms ${named}` : ''}${near}); check the structure for overlapping or far-flung atoms`);
+  const near = closest
+    ? `; closest pair: atoms ${closest.i + 1} and ${closest.j + 1} at ${closest.distanceAngstrom.toFixed(3)} Å`
+    : '';
+  return invalid(
+    'structure',
+    `the minimisation exploded at ${step} (energy or forces no longer finite${named ? ` on atoms ${named}` : ''}${near}); check the structure for overlapping or far-flung atoms`,
+  );
 }

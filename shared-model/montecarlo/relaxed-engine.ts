@@ -39,7 +39,12 @@ export class RelaxedEngine {
   readonly surfaceSites: number;
   readonly countA: number;
   readonly countB: number;
-  readonly stats: RelaxedMoveStatistics = { swapAttempts: 0, swapAccepted: 0, displacementAttempts: 0, displacementAccepted: 0 };
+  readonly stats: RelaxedMoveStatistics = {
+    swapAttempts: 0,
+    swapAccepted: 0,
+    displacementAttempts: 0,
+    displacementAccepted: 0,
+  };
   stepAngstrom: number;
 
   private readonly list: VerletList;
@@ -71,7 +76,8 @@ export class RelaxedEngine {
   ) {
     if (model.types !== 2) throw new RangeError('the relaxed engine needs a model of exactly two elements');
     const n = species.length;
-    if (positions.length !== 3 * n || surface.length !== n) throw new RangeError('positions, species and surface must describe the same atoms');
+    if (positions.length !== 3 * n || surface.length !== n)
+      throw new RangeError('positions, species and surface must describe the same atoms');
     this.atoms = n;
     this.model = model;
     this.positions = Float64Array.from(positions);
@@ -115,7 +121,8 @@ export class RelaxedEngine {
   private rebuild(): void {
     this.list.build(this.positions);
     let maxDegree = 0;
-    for (let i = 0; i < this.atoms; i++) maxDegree = Math.max(maxDegree, this.list.offsets[i + 1]! - this.list.offsets[i]!);
+    for (let i = 0; i < this.atoms; i++)
+      maxDegree = Math.max(maxDegree, this.list.offsets[i + 1]! - this.list.offsets[i]!);
     if (this.touched.length < 2 * maxDegree + 2) {
       this.touched = new Int32Array(2 * maxDegree + 2);
       this.touchedSqrt = new Float64Array(2 * maxDegree + 2);
@@ -328,7 +335,8 @@ export class RelaxedEngine {
    * every atom is offered a move and a swap per sweep on average.
    */
   runSweep(temperatureK: number): void {
-    if (!(temperatureK > 0) || !Number.isFinite(temperatureK)) throw new RangeError(`temperature must be > 0 K, got ${temperatureK}`);
+    if (!(temperatureK > 0) || !Number.isFinite(temperatureK))
+      throw new RangeError(`temperature must be > 0 K, got ${temperatureK}`);
     const beta = 1 / (BOLTZMANN_EV_PER_K * temperatureK);
     for (let n = 0; n < this.atoms; n++) {
       this.attemptDisplacement(beta);
@@ -338,7 +346,9 @@ export class RelaxedEngine {
 
   /** Moves the step toward the acceptance band, given the displacement acceptance of the last stretch. */
   tuneStep(acceptance: number): void {
-    if (acceptance > DISPLACEMENT_ACCEPTANCE_TARGET.high) this.stepAngstrom = Math.min(MAX_STEP_ANGSTROM, this.stepAngstrom * 1.15);
-    else if (acceptance < DISPLACEMENT_ACCEPTANCE_TARGET.low) this.stepAngstrom = Math.max(0.002, this.stepAngstrom / 1.15);
+    if (acceptance > DISPLACEMENT_ACCEPTANCE_TARGET.high)
+      this.stepAngstrom = Math.min(MAX_STEP_ANGSTROM, this.stepAngstrom * 1.15);
+    else if (acceptance < DISPLACEMENT_ACCEPTANCE_TARGET.low)
+      this.stepAngstrom = Math.max(0.002, this.stepAngstrom / 1.15);
   }
 }

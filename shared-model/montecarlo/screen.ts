@@ -51,7 +51,8 @@ export function planScreen(request: ScreenRequest): ScreenPlan {
   const elements = [...new Set(request.elements)];
   if (request.xB.length === 0) throw invalid('xB', 'give at least one composition');
   if (request.diameterNm.length === 0) throw invalid('diameterNm', 'give at least one diameter');
-  for (const x of request.xB) if (!(x > 0 && x < 1)) throw invalid('xB', `each composition must lie strictly between 0 and 1, got ${x}`);
+  for (const x of request.xB)
+    if (!(x > 0 && x < 1)) throw invalid('xB', `each composition must lie strictly between 0 and 1, got ${x}`);
   const simulated = elements.filter(isGuptaElement);
   const skipped: SkippedPair[] = [];
   const runs: PlannedScreenRun[] = [];
@@ -87,7 +88,10 @@ export function planScreen(request: ScreenRequest): ScreenPlan {
     }
   }
   if (simulated.length < 2) {
-    throw invalid('campaignId', `the campaign's elements (${elements.join(', ') || 'none'}) hold fewer than two metals with tight-binding parameters; nothing to screen`);
+    throw invalid(
+      'campaignId',
+      `the campaign's elements (${elements.join(', ') || 'none'}) hold fewer than two metals with tight-binding parameters; nothing to screen`,
+    );
   }
   return { elements, simulatedElements: simulated, runs, skipped };
 }
@@ -120,11 +124,23 @@ export function screenCells(runs: readonly ScreenCellSource[], compositions: rea
   const cells: ScreenCell[] = [];
   const listed = (x: number) => compositions.some((c) => Math.abs(c - x) < 1e-9);
   for (const run of runs) {
-    const base = { diameterNm: run.diameterNm, runId: run.runId, status: run.status, architecture: run.architecture, prediction: run.prediction };
+    const base = {
+      diameterNm: run.diameterNm,
+      runId: run.runId,
+      status: run.status,
+      architecture: run.architecture,
+      prediction: run.prediction,
+    };
     cells.push({ ...base, row: run.elementA, column: run.elementB, x: run.xB });
     const mirrored = Math.round((1 - run.xB) * 1e9) / 1e9;
     if (listed(mirrored) && Math.abs(mirrored - run.xB) > 1e-9) {
-      const alreadyRun = runs.some((r) => r.elementA === run.elementB && r.elementB === run.elementA && Math.abs(r.xB - mirrored) < 1e-9 && r.diameterNm === run.diameterNm);
+      const alreadyRun = runs.some(
+        (r) =>
+          r.elementA === run.elementB &&
+          r.elementB === run.elementA &&
+          Math.abs(r.xB - mirrored) < 1e-9 &&
+          r.diameterNm === run.diameterNm,
+      );
       if (!alreadyRun) cells.push({ ...base, row: run.elementB, column: run.elementA, x: mirrored });
     }
   }

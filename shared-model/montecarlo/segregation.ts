@@ -27,7 +27,8 @@ export function diluteSegregationEnergy111(host: string, solute: string, shells 
   const h = guptaElement(host, 'host');
   const s = guptaElement(solute, 'solute');
   if (h.symbol === s.symbol) throw invalid('solute', `the solute must differ from the host, got ${s.symbol} twice`);
-  if (!Number.isInteger(shells) || shells < 3 || shells > 10) throw invalid('shells', `shells must be a whole number from 3 to 10, got ${shells}`);
+  if (!Number.isInteger(shells) || shells < 3 || shells > 10)
+    throw invalid('shells', `shells must be a whole number from 3 to 10, got ${shells}`);
   const nn = h.r0Angstrom;
   const geometry = buildCluster('cuboctahedron', { shells }, nn);
   const p = geometry.positions;
@@ -54,7 +55,8 @@ export function diluteSegregationEnergy111(host: string, solute: string, shells 
     const types = new Uint8Array(n);
     types[site] = 1;
     const positions = Float64Array.from(p);
-    return minimiseInPlace(model, positions, types, { forceToleranceEvPerAngstrom: 1e-4, maxIterations: 50_000 }).energyEv;
+    return minimiseInPlace(model, positions, types, { forceToleranceEvPerAngstrom: 1e-4, maxIterations: 50_000 })
+      .energyEv;
   };
   return {
     host: h.symbol,

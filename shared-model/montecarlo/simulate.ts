@@ -16,7 +16,12 @@
  * the standard error of the surface composition is below its target.
  */
 import { DomainError, invalid } from '../api/result';
-import { classifyArchitecture, DEFAULT_THRESHOLDS, type Classification, type ClassificationThresholds } from '../architecture/classify';
+import {
+  classifyArchitecture,
+  DEFAULT_THRESHOLDS,
+  type Classification,
+  type ClassificationThresholds,
+} from '../architecture/classify';
 import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../clusters/neighbours';
 import { buildCluster, predictedAtomCount, type ClusterGeometry, type ClusterSize } from '../clusters/shapes';
 import { isParticleShape, PARTICLE_SHAPES, type ParticleShape } from '../geometry/shapes';
@@ -67,8 +72,14 @@ export function defaultRelaxation(elementA: string, elementB: string): { mode: R
   const percent = (100 * mismatch).toFixed(1);
   const limit = (100 * RELAXATION_MISMATCH_THRESHOLD).toFixed(0);
   return mismatch > RELAXATION_MISMATCH_THRESHOLD
-    ? { mode: 'relaxed', reason: `nearest-neighbour distances differ by ${percent} % (more than ${limit} %): relaxed by default` }
-    : { mode: 'rigid', reason: `nearest-neighbour distances differ by ${percent} % (at most ${limit} %): rigid lattice by default` };
+    ? {
+        mode: 'relaxed',
+        reason: `nearest-neighbour distances differ by ${percent} % (more than ${limit} %): relaxed by default`,
+      }
+    : {
+        mode: 'rigid',
+        reason: `nearest-neighbour distances differ by ${percent} % (at most ${limit} %): rigid lattice by default`,
+      };
 }
 
 export interface StoppingRule {
@@ -195,7 +206,14 @@ export interface SimulationResult {
   elementA: string;
   elementB: string;
   pairRule: PairRule;
-  geometry: { shape: ParticleShape; shells: number; atoms: number; nearestNeighbourAngstrom: number; cutoffAngstrom: number; equivalentDiameterNm: number };
+  geometry: {
+    shape: ParticleShape;
+    shells: number;
+    atoms: number;
+    nearestNeighbourAngstrom: number;
+    cutoffAngstrom: number;
+    equivalentDiameterNm: number;
+  };
   atoms: number;
   countA: number;
   countB: number;
@@ -246,7 +264,8 @@ export interface SimulationResult {
 }
 
 function requireFiniteNumber(field: string, value: unknown): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw invalid(field, `${field} must be a number, got ${String(value)}`);
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw invalid(field, `${field} must be a number, got ${String(value)}`);
   return value;
 }
 
@@ -257,70 +276,121 @@ export function planSimulation(spec: SimulationSpec): SimulationPlan {
   if (a.symbol === b.symbol) throw invalid('elementB', `a pair needs two different metals, got ${a.symbol} twice`);
   const xB = requireFiniteNumber('xB', spec.xB);
   if (xB <= 0 || xB >= 1) throw invalid('xB', `xB must lie strictly between 0 and 1, got ${xB}`);
-  if (!isParticleShape(spec.shape)) throw invalid('shape', `unknown shape "${String(spec.shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
+  if (!isParticleShape(spec.shape))
+    throw invalid('shape', `unknown shape "${String(spec.shape)}"; use one of ${PARTICLE_SHAPES.join(', ')}`);
   const hasShells = spec.shells !== undefined && spec.shells !== null;
   const hasDiameter = spec.diameterNm !== undefined && spec.diameterNm !== null;
-  if (hasShells === hasDiameter) throw invalid('shells', 'give the size either as shells or as diameterNm (exactly one)');
+  if (hasShells === hasDiameter)
+    throw invalid('shells', 'give the size either as shells or as diameterNm (exactly one)');
   let size: ClusterSize;
   if (hasShells) {
     const shells = requireFiniteNumber('shells', spec.shells);
-    if (!Number.isInteger(shells) || shells < 1) throw invalid('shells', `shells must be a whole number ≥ 1, got ${shells}`);
-    if (shells > 60) throw invalid('shells', `shells must be at most 60 (the atom cap is ${SIMULATION_LIMITS.maxAtoms}), got ${shells}`);
+    if (!Number.isInteger(shells) || shells < 1)
+      throw invalid('shells', `shells must be a whole number ≥ 1, got ${shells}`);
+    if (shells > 60)
+      throw invalid(
+        'shells',
+        `shells must be at most 60 (the atom cap is ${SIMULATION_LIMITS.maxAtoms}), got ${shells}`,
+      );
     size = { shells };
   } else {
     const diameterNm = requireFiniteNumber('diameterNm', spec.diameterNm);
     if (diameterNm <= 0) throw invalid('diameterNm', `diameterNm must be > 0, got ${diameterNm}`);
-    if (diameterNm > 30) throw invalid('diameterNm', `diameterNm must be at most 30 nm (the atom cap is ${SIMULATION_LIMITS.maxAtoms}), got ${diameterNm}`);
+    if (diameterNm > 30)
+      throw invalid(
+        'diameterNm',
+        `diameterNm must be at most 30 nm (the atom cap is ${SIMULATION_LIMITS.maxAtoms}), got ${diameterNm}`,
+      );
     size = { diameterNm };
   }
   const nn = (1 - xB) * a.r0Angstrom + xB * b.r0Angstrom;
   const atoms = predictedAtomCount(spec.shape, size, nn);
   if (atoms > SIMULATION_LIMITS.maxAtoms) {
-    throw invalid(hasShells ? 'shells' : 'diameterNm', `this size gives about ${atoms} atoms; the limit is ${SIMULATION_LIMITS.maxAtoms} atoms (memory)`);
+    throw invalid(
+      hasShells ? 'shells' : 'diameterNm',
+      `this size gives about ${atoms} atoms; the limit is ${SIMULATION_LIMITS.maxAtoms} atoms (memory)`,
+    );
   }
   if (atoms < 2) throw invalid(hasShells ? 'shells' : 'diameterNm', 'the particle must hold at least two atoms');
   const countB = Math.round(xB * atoms);
   if (countB < 1 || countB > atoms - 1) {
-    throw invalid('xB', `xB = ${xB} leaves ${countB} of ${atoms} atoms as ${b.symbol}; at least one atom of each metal is needed`);
+    throw invalid(
+      'xB',
+      `xB = ${xB} leaves ${countB} of ${atoms} atoms as ${b.symbol}; at least one atom of each metal is needed`,
+    );
   }
   const temperatureK = requireFiniteNumber('temperatureK', spec.temperatureK);
   if (temperatureK <= 0) throw invalid('temperatureK', `temperatureK must be > 0 K, got ${temperatureK}`);
-  if (temperatureK > SIMULATION_LIMITS.maxTemperatureK) throw invalid('temperatureK', `temperatureK must be at most ${SIMULATION_LIMITS.maxTemperatureK} K, got ${temperatureK}`);
+  if (temperatureK > SIMULATION_LIMITS.maxTemperatureK)
+    throw invalid(
+      'temperatureK',
+      `temperatureK must be at most ${SIMULATION_LIMITS.maxTemperatureK} K, got ${temperatureK}`,
+    );
   const sweeps = requireFiniteNumber('sweeps', spec.sweeps);
-  if (!Number.isInteger(sweeps) || sweeps < 1) throw invalid('sweeps', `sweeps must be a whole number ≥ 1, got ${sweeps}`);
-  if (sweeps > SIMULATION_LIMITS.maxSweeps) throw invalid('sweeps', `sweeps must be at most ${SIMULATION_LIMITS.maxSweeps}, got ${sweeps}`);
+  if (!Number.isInteger(sweeps) || sweeps < 1)
+    throw invalid('sweeps', `sweeps must be a whole number ≥ 1, got ${sweeps}`);
+  if (sweeps > SIMULATION_LIMITS.maxSweeps)
+    throw invalid('sweeps', `sweeps must be at most ${SIMULATION_LIMITS.maxSweeps}, got ${sweeps}`);
   let annealSweeps = 0;
   if (spec.anneal) {
     const start = requireFiniteNumber('anneal.startTemperatureK', spec.anneal.startTemperatureK);
-    if (start <= temperatureK) throw invalid('anneal.startTemperatureK', `the annealing start (${start} K) must be above the run temperature (${temperatureK} K)`);
-    if (start > SIMULATION_LIMITS.maxTemperatureK) throw invalid('anneal.startTemperatureK', `anneal.startTemperatureK must be at most ${SIMULATION_LIMITS.maxTemperatureK} K, got ${start}`);
+    if (start <= temperatureK)
+      throw invalid(
+        'anneal.startTemperatureK',
+        `the annealing start (${start} K) must be above the run temperature (${temperatureK} K)`,
+      );
+    if (start > SIMULATION_LIMITS.maxTemperatureK)
+      throw invalid(
+        'anneal.startTemperatureK',
+        `anneal.startTemperatureK must be at most ${SIMULATION_LIMITS.maxTemperatureK} K, got ${start}`,
+      );
     annealSweeps = requireFiniteNumber('anneal.sweeps', spec.anneal.sweeps);
-    if (!Number.isInteger(annealSweeps) || annealSweeps < 1) throw invalid('anneal.sweeps', `anneal.sweeps must be a whole number ≥ 1, got ${annealSweeps}`);
-    if (annealSweeps > SIMULATION_LIMITS.maxSweeps) throw invalid('anneal.sweeps', `anneal.sweeps must be at most ${SIMULATION_LIMITS.maxSweeps}, got ${annealSweeps}`);
+    if (!Number.isInteger(annealSweeps) || annealSweeps < 1)
+      throw invalid('anneal.sweeps', `anneal.sweeps must be a whole number ≥ 1, got ${annealSweeps}`);
+    if (annealSweeps > SIMULATION_LIMITS.maxSweeps)
+      throw invalid(
+        'anneal.sweeps',
+        `anneal.sweeps must be at most ${SIMULATION_LIMITS.maxSweeps}, got ${annealSweeps}`,
+      );
   }
   if (spec.relaxation !== undefined && !(RELAXATION_MODES as readonly string[]).includes(spec.relaxation)) {
-    throw invalid('relaxation', `relaxation must be one of ${RELAXATION_MODES.join(', ')}, got "${String(spec.relaxation)}"`);
+    throw invalid(
+      'relaxation',
+      `relaxation must be one of ${RELAXATION_MODES.join(', ')}, got "${String(spec.relaxation)}"`,
+    );
   }
   if (spec.stopping) {
     const target = requireFiniteNumber('stopping.surfaceStandardError', spec.stopping.surfaceStandardError);
-    if (target <= 0 || target >= 0.5) throw invalid('stopping.surfaceStandardError', `the target standard error must lie between 0 and 0.5, got ${target}`);
+    if (target <= 0 || target >= 0.5)
+      throw invalid(
+        'stopping.surfaceStandardError',
+        `the target standard error must lie between 0 and 0.5, got ${target}`,
+      );
     const floor = requireFiniteNumber('stopping.minSweeps', spec.stopping.minSweeps);
-    if (!Number.isInteger(floor) || floor < 10) throw invalid('stopping.minSweeps', `stopping.minSweeps must be a whole number ≥ 10, got ${floor}`);
+    if (!Number.isInteger(floor) || floor < 10)
+      throw invalid('stopping.minSweeps', `stopping.minSweeps must be a whole number ≥ 10, got ${floor}`);
   }
   const seed = requireFiniteNumber('seed', spec.seed);
   if (!Number.isInteger(seed)) throw invalid('seed', `seed must be a whole number, got ${seed}`);
   if (spec.progressEverySweeps !== undefined) {
     const every = requireFiniteNumber('progressEverySweeps', spec.progressEverySweeps);
-    if (!Number.isInteger(every) || every < 1) throw invalid('progressEverySweeps', `progressEverySweeps must be a whole number ≥ 1, got ${every}`);
+    if (!Number.isInteger(every) || every < 1)
+      throw invalid('progressEverySweeps', `progressEverySweeps must be a whole number ≥ 1, got ${every}`);
   }
   const totalSweeps = sweeps + annealSweeps;
   const attempts = totalSweeps * atoms;
   const relaxed = (spec.relaxation ?? defaultRelaxation(a.symbol, b.symbol).mode) === 'relaxed';
   if (relaxed && attempts > SIMULATION_LIMITS.maxRelaxedAttempts) {
-    throw invalid('sweeps', `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} relaxed site-sweeps; the limit is ${SIMULATION_LIMITS.maxRelaxedAttempts.toExponential(0)} (about half an hour)`);
+    throw invalid(
+      'sweeps',
+      `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} relaxed site-sweeps; the limit is ${SIMULATION_LIMITS.maxRelaxedAttempts.toExponential(0)} (about half an hour)`,
+    );
   }
   if (attempts > SIMULATION_LIMITS.maxAttempts) {
-    throw invalid('sweeps', `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} attempts; the limit is ${SIMULATION_LIMITS.maxAttempts.toExponential(0)} (about half an hour)`);
+    throw invalid(
+      'sweeps',
+      `${totalSweeps} sweeps × ${atoms} atoms = ${attempts.toExponential(2)} attempts; the limit is ${SIMULATION_LIMITS.maxAttempts.toExponential(0)} (about half an hour)`,
+    );
   }
   return { atoms, countB, totalSweeps, attempts, nearestNeighbourAngstrom: nn, size };
 }
@@ -398,7 +468,11 @@ function relaxedPureEnergyPerAtomEv(symbol: string, positions: Float64Array): nu
   return minimiseInPlace(model, copy, new Uint8Array(atoms), { forceToleranceEvPerAngstrom: 1e-3 }).energyEv / atoms;
 }
 
-export function runSimulation(spec: SimulationSpec, random: SeededRandom, callbacks: SimulationCallbacks = {}): SimulationResult {
+export function runSimulation(
+  spec: SimulationSpec,
+  random: SeededRandom,
+  callbacks: SimulationCallbacks = {},
+): SimulationResult {
   const plan = planSimulation(spec);
   const now = callbacks.now ?? Date.now;
   const elementA = guptaElement(spec.elementA, 'elementA');
@@ -448,7 +522,9 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   const capSweeps = plan.totalSweeps;
   const stopping = spec.stopping ?? null;
   // Default report period: about 200 reports per run, but at least one per 2 × 10⁵ attempts (~0.2 s) for live traces.
-  const every = spec.progressEverySweeps ?? Math.max(1, Math.min(Math.round(capSweeps / 200), Math.round((relaxed ? 20_000 : 200_000) / n)));
+  const every =
+    spec.progressEverySweeps ??
+    Math.max(1, Math.min(Math.round(capSweeps / 200), Math.round((relaxed ? 20_000 : 200_000) / n)));
   const orderEvery = stopping ? 1 : Math.max(1, Math.floor(spec.sweeps / 200));
   const tuningEnd = annealSweeps + (relaxed ? RELAXED_TUNING_SWEEPS : 0);
 
@@ -463,13 +539,15 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   let stoppedAtAnswer = false;
   let reportedTotal = capSweeps;
   for (let sweep = 0; sweep < capSweeps; sweep++) {
-    if (callbacks.shouldCancel?.()) throw new DomainError('cancelled', `the run was cancelled after ${sweep} of ${capSweeps} sweeps`);
+    if (callbacks.shouldCancel?.())
+      throw new DomainError('cancelled', `the run was cancelled after ${sweep} of ${capSweeps} sweeps`);
     const temperatureK = scheduledTemperatureK(spec, sweep);
     const movesBefore = relaxedEngine ? { ...relaxedEngine.stats } : null;
     engine.runSweep(temperatureK);
     if (relaxedEngine && movesBefore && sweep < tuningEnd) {
       const tried = relaxedEngine.stats.displacementAttempts - movesBefore.displacementAttempts;
-      if (tried > 0) relaxedEngine.tuneStep((relaxedEngine.stats.displacementAccepted - movesBefore.displacementAccepted) / tried);
+      if (tried > 0)
+        relaxedEngine.tuneStep((relaxedEngine.stats.displacementAccepted - movesBefore.displacementAccepted) / tried);
     }
     energyTrace[sweep] = engine.energyEv;
     surfaceTrace[sweep] = engine.surfaceXB;
@@ -481,7 +559,12 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
     }
     const production = sweep + 1 - annealSweeps;
     let stopNow = false;
-    if (stopping && production >= stopping.minSweeps && production % STOPPING_CHUNK_SWEEPS === 0 && sweep + 1 >= tuningEnd) {
+    if (
+      stopping &&
+      production >= stopping.minSweeps &&
+      production % STOPPING_CHUNK_SWEEPS === 0 &&
+      sweep + 1 >= tuningEnd
+    ) {
       const energyReport = detectEquilibration(energyTrace.subarray(annealSweeps, sweep + 1));
       if (energyReport.equilibrated) {
         const from = Math.max(annealSweeps + energyReport.equilibratedFromSample, tuningEnd);
@@ -521,7 +604,10 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
 
   const production = energyTrace.subarray(annealSweeps, totalSweeps);
   const equilibration = detectEquilibration(production);
-  const fromSweep = Math.min(totalSweeps - 1, Math.max(annealSweeps + equilibration.equilibratedFromSample, Math.min(tuningEnd, totalSweeps - 1)));
+  const fromSweep = Math.min(
+    totalSweeps - 1,
+    Math.max(annealSweeps + equilibration.equilibratedFromSample, Math.min(tuningEnd, totalSweeps - 1)),
+  );
   let surfaceSum = 0;
   for (let s = fromSweep; s < totalSweeps; s++) surfaceSum += surfaceTrace[s]!;
   const samples = totalSweeps - fromSweep;
@@ -563,13 +649,31 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
   let mixingEnergyPerAtomEv: number;
   if (relaxedEngine && model) {
     const quenched = Float64Array.from(relaxedEngine.positions);
-    quenchedEnergyEv = minimiseInPlace(model, quenched, relaxedEngine.species, { forceToleranceEvPerAngstrom: 1e-3 }).energyEv;
-    pureA = relaxedPureEnergyPerAtomEv(elementA.symbol, Float64Array.from(geometry.positions, (v) => (v * elementA.r0Angstrom) / nn));
-    pureB = relaxedPureEnergyPerAtomEv(elementB.symbol, Float64Array.from(geometry.positions, (v) => (v * elementB.r0Angstrom) / nn));
+    quenchedEnergyEv = minimiseInPlace(model, quenched, relaxedEngine.species, {
+      forceToleranceEvPerAngstrom: 1e-3,
+    }).energyEv;
+    pureA = relaxedPureEnergyPerAtomEv(
+      elementA.symbol,
+      Float64Array.from(geometry.positions, (v) => (v * elementA.r0Angstrom) / nn),
+    );
+    pureB = relaxedPureEnergyPerAtomEv(
+      elementB.symbol,
+      Float64Array.from(geometry.positions, (v) => (v * elementB.r0Angstrom) / nn),
+    );
     mixingEnergyPerAtomEv = quenchedEnergyEv / n - (1 - x) * pureA - x * pureB;
   } else {
-    pureA = configurationEnergyEv(list, binaryTables(elementA.symbol, elementA.symbol, list, elementA.r0Angstrom / nn), new Uint8Array(n)) / n;
-    pureB = configurationEnergyEv(list, binaryTables(elementB.symbol, elementB.symbol, list, elementB.r0Angstrom / nn), new Uint8Array(n)) / n;
+    pureA =
+      configurationEnergyEv(
+        list,
+        binaryTables(elementA.symbol, elementA.symbol, list, elementA.r0Angstrom / nn),
+        new Uint8Array(n),
+      ) / n;
+    pureB =
+      configurationEnergyEv(
+        list,
+        binaryTables(elementB.symbol, elementB.symbol, list, elementB.r0Angstrom / nn),
+        new Uint8Array(n),
+      ) / n;
     mixingEnergyPerAtomEv = finalEnergy / n - (1 - x) * pureA - x * pureB;
   }
 
@@ -592,7 +696,8 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
     design: relaxed ? RELAXED_DESIGN : RIGID_DESIGN,
     sizeMismatch: sizeMismatch(elementA.symbol, elementB.symbol),
     displacementStepAngstrom: relaxedEngine ? relaxedEngine.stepAngstrom : null,
-    displacementAcceptance: moves && moves.displacementAttempts > 0 ? moves.displacementAccepted / moves.displacementAttempts : null,
+    displacementAcceptance:
+      moves && moves.displacementAttempts > 0 ? moves.displacementAccepted / moves.displacementAttempts : null,
     swapAcceptance: moves
       ? moves.swapAttempts > 0
         ? moves.swapAccepted / moves.swapAttempts
@@ -648,7 +753,9 @@ export function runSimulation(spec: SimulationSpec, random: SeededRandom, callba
     relaxation,
     stopping: { rule: stopping, sweepsTaken: totalSweeps - annealSweeps, stoppedAtAnswer, capSweeps: spec.sweeps },
     separation,
-    finalPositionsAngstrom: relaxedEngine ? Array.from(relaxedEngine.positions, (v) => Math.round(v * 1e4) / 1e4) : null,
+    finalPositionsAngstrom: relaxedEngine
+      ? Array.from(relaxedEngine.positions, (v) => Math.round(v * 1e4) / 1e4)
+      : null,
     kineticNote: SWAP_REALISM_NOTE,
   };
 }

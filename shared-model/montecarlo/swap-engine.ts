@@ -47,7 +47,12 @@ export function binaryTables(elementA: string, elementB: string, list: Neighbour
  * Energy (eV) of an occupation (0 = A, 1 = B) on the sites of `list` with `tables`, from scratch. When
  * `densities` is given, each site's band density ρ_i and √ρ_i are written into it on the way.
  */
-function energyFromScratch(list: NeighbourList, tables: BinaryTables, species: Uint8Array, densities?: { density: Float64Array; sqrtDensity: Float64Array }): number {
+function energyFromScratch(
+  list: NeighbourList,
+  tables: BinaryTables,
+  species: Uint8Array,
+  densities?: { density: Float64Array; sqrtDensity: Float64Array },
+): number {
   const { offsets, neighbours, distanceClass } = list;
   const { phi, rho } = tables;
   let pair = 0;
@@ -119,7 +124,23 @@ interface KernelState {
 export const MAX_DISTANCE_CLASSES = 127;
 
 function createKernel(state: KernelState): Kernel {
-  const { offsets, packed, positions, farSq, species, surface, density, sqrtDensity, dRho, dPhi, listA, listB, slot, rng, totals } = state;
+  const {
+    offsets,
+    packed,
+    positions,
+    farSq,
+    species,
+    surface,
+    density,
+    sqrtDensity,
+    dRho,
+    dPhi,
+    listA,
+    listB,
+    slot,
+    rng,
+    totals,
+  } = state;
   const atoms = species.length;
   let maxDegree = 0;
   for (let i = 0; i < atoms; i++) maxDegree = Math.max(maxDegree, offsets[i + 1]! - offsets[i]!);
@@ -350,8 +371,16 @@ export class SwapEngine {
   private readonly totals = new Float64Array(3);
   private readonly kernel: Kernel;
 
-  constructor(list: NeighbourList, positions: Float64Array, tables: BinaryTables, species: Uint8Array, surface: Uint8Array, random: SeededRandom) {
-    if (species.length !== list.atoms || surface.length !== list.atoms) throw new RangeError('species and surface arrays must have one entry per site');
+  constructor(
+    list: NeighbourList,
+    positions: Float64Array,
+    tables: BinaryTables,
+    species: Uint8Array,
+    surface: Uint8Array,
+    random: SeededRandom,
+  ) {
+    if (species.length !== list.atoms || surface.length !== list.atoms)
+      throw new RangeError('species and surface arrays must have one entry per site');
     if (positions.length !== 3 * list.atoms) throw new RangeError('positions must hold x, y, z for every site');
     const n = list.atoms;
     this.atoms = n;
@@ -400,7 +429,10 @@ export class SwapEngine {
     const rng = new Int32Array(4);
     for (let k = 0; k < 4; k++) rng[k] = Math.floor(random.next() * 4294967296) | 0;
     this.totals[2] = surfaceB;
-    if (classes > MAX_DISTANCE_CLASSES) throw new RangeError(`the engine handles at most ${MAX_DISTANCE_CLASSES} distinct neighbour distances, this structure has ${classes}`);
+    if (classes > MAX_DISTANCE_CLASSES)
+      throw new RangeError(
+        `the engine handles at most ${MAX_DISTANCE_CLASSES} distinct neighbour distances, this structure has ${classes}`,
+      );
     if (n >= 1 << 23) throw new RangeError(`the engine handles fewer than ${1 << 23} sites`);
     const packed = new Int32Array(list.neighbours.length);
     for (let e = 0; e < packed.length; e++) packed[e] = (list.neighbours[e]! << 8) | (list.distanceClass[e]! << 1);
@@ -426,7 +458,10 @@ export class SwapEngine {
 
   /** Recomputes every density and the total energy from the occupation (removes round-off drift). */
   recomputeEnergy(): number {
-    this.totals[0] = energyFromScratch(this.list, this.tables, this.species, { density: this.density, sqrtDensity: this.sqrtDensity });
+    this.totals[0] = energyFromScratch(this.list, this.tables, this.species, {
+      density: this.density,
+      sqrtDensity: this.sqrtDensity,
+    });
     return this.totals[0];
   }
 
@@ -452,16 +487,20 @@ export class SwapEngine {
 
   /** Energy change (eV) of exchanging A site `i` with B site `j`, without applying it. */
   trialSwapDeltaEv(i: number, j: number): number {
-    if (this.species[i] !== 0 || this.species[j] !== 1) throw new RangeError('a trial swap needs an A site first and a B site second');
+    if (this.species[i] !== 0 || this.species[j] !== 1)
+      throw new RangeError('a trial swap needs an A site first and a B site second');
     return this.kernel.delta(i, j);
   }
 
   /** Runs `attempts` Metropolis swap attempts at `temperatureK`; returns the number accepted. */
   runAttempts(attempts: number, temperatureK: number): number {
-    if (!(temperatureK > 0) || !Number.isFinite(temperatureK)) throw new RangeError(`temperature must be > 0 K, got ${temperatureK}`);
-    if (!Number.isInteger(attempts) || attempts < 0) throw new RangeError(`attempts must be a whole number ≥ 0, got ${attempts}`);
+    if (!(temperatureK > 0) || !Number.isFinite(temperatureK))
+      throw new RangeError(`temperature must be > 0 K, got ${temperatureK}`);
+    if (!Number.isInteger(attempts) || attempts < 0)
+      throw new RangeError(`attempts must be a whole number ≥ 0, got ${attempts}`);
     let accepted = 0;
-    if (this.countA > 0 && this.countB > 0) accepted = this.kernel.run(attempts, 1 / (BOLTZMANN_EV_PER_K * temperatureK));
+    if (this.countA > 0 && this.countB > 0)
+      accepted = this.kernel.run(attempts, 1 / (BOLTZMANN_EV_PER_K * temperatureK));
     this.stats.attempts += attempts;
     this.stats.accepted += accepted;
     return accepted;

@@ -64,7 +64,14 @@ export function asMadeForBatch(batch: BatchConditions): AsMadeExpectation {
   const temperatureK = batch.temperatureK ?? DEFAULT_TEMPERATURE_C[batch.route] + 273.15;
   const timeH = batch.timeH ?? DEFAULT_SYNTHESIS_TIME_H[batch.route];
   const environment = batch.environment ?? DEFAULT_ROUTE_ENVIRONMENT[batch.route];
-  const equilibrium = predictPair(batch.elementA, batch.elementB, { xB: batch.xB, diameterNm: batch.diameterNm, shape: 'sphere', temperatureK, timeH, environment });
+  const equilibrium = predictPair(batch.elementA, batch.elementB, {
+    xB: batch.xB,
+    diameterNm: batch.diameterNm,
+    shape: 'sphere',
+    temperatureK,
+    timeH,
+    environment,
+  });
   let kinetic: KineticExpectation | null;
   if (batch.route === 'seed-mediated' && batch.seedElement !== undefined) {
     const shell = batch.seedElement === batch.elementA ? batch.elementB : batch.elementA;

@@ -16,6 +16,7 @@
 export const SEGREGATION_CALIBRATION = Object.freeze({
   /** Factor on the Wynblatt–Ku segregation enthalpy (surface, chemical and elastic terms alike). */
   scale: 0.715,
-  reference: 'dilute (111) slab segregation energies, Foiles–Baskes–Daw EAM (Phys. Rev. B 33, 7983 (1986)) in LAMMPS, 30 pairs of Ag Au Cu Ni Pd Pt',
+  reference:
+    'dilute (111) slab segregation energies, Foiles–Baskes–Daw EAM (Phys. Rev. B 33, 7983 (1986)) in LAMMPS, 30 pairs of Ag Au Cu Ni Pd Pt',
   fitted: 'least squares through the origin: MAE 0.120 → 0.084 eV, correlation 0.930',
 });

@@ -74,7 +74,8 @@ export function resolveConditions(conditions: PredictionConditions): ResolvedCon
   if (pressureBar !== undefined && !(Number.isFinite(pressureBar) && pressureBar > 0)) {
     throw invalid('pressureBar', `pressureBar must be a positive number, got ${String(pressureBar)}`);
   }
-  if (timeH !== undefined && !(Number.isFinite(timeH) && timeH > 0)) throw invalid('timeH', `timeH must be a positive number, got ${String(timeH)}`);
+  if (timeH !== undefined && !(Number.isFinite(timeH) && timeH > 0))
+    throw invalid('timeH', `timeH must be a positive number, got ${String(timeH)}`);
   return {
     xB,
     diameterNm,

@@ -49,12 +49,19 @@ export function relativeDifference(a: number, b: number): number {
   return (b - a) / ((a + b) / 2);
 }
 
-export function pairDescriptors(elementA: string, elementB: string, xB = 0.5, state: MiedemaState = 'solid'): PairDescriptors {
+export function pairDescriptors(
+  elementA: string,
+  elementB: string,
+  xB = 0.5,
+  state: MiedemaState = 'solid',
+): PairDescriptors {
   const a = getElement(elementA, 'elementA');
   const b = getElement(elementB, 'elementB');
-  if (a.symbol === b.symbol) throw invalid('elementB', `a pair needs two different elements, got ${a.symbol}-${b.symbol}`);
+  if (a.symbol === b.symbol)
+    throw invalid('elementB', `a pair needs two different elements, got ${a.symbol}-${b.symbol}`);
   const out = {} as PairDescriptors;
-  for (const [key, property] of RELATIVE) out[key] = relativeDifference(recordProperty(a, property), recordProperty(b, property));
+  for (const [key, property] of RELATIVE)
+    out[key] = relativeDifference(recordProperty(a, property), recordProperty(b, property));
   const mixing = miedemaMixingEnthalpy(a.symbol, b.symbol, xB, state);
   out.mixingEnthalpyKjPerMol = mixing.totalKjPerMol;
   out.mixingChemicalKjPerMol = mixing.chemicalKjPerMol;

@@ -41,7 +41,11 @@ export function selfDiffusionParameters(symbol: string): ArrheniusParameters {
   const row = SELF_DIFFUSION[symbol];
   if (row !== undefined) return { d0M2PerS: row[0] * 1e-4, activationKjPerMol: row[1], source: MEHRER };
   const cohesiveEv = recordProperty(getElement(symbol), 'cohesiveEnergyEv');
-  return { d0M2PerS: 0.5e-4, activationKjPerMol: 0.6 * cohesiveEv * KJ_PER_MOL_PER_EV, source: DIFFUSION_RULE_OF_THUMB };
+  return {
+    d0M2PerS: 0.5e-4,
+    activationKjPerMol: 0.6 * cohesiveEv * KJ_PER_MOL_PER_EV,
+    source: DIFFUSION_RULE_OF_THUMB,
+  };
 }
 
 /** D = D₀ exp(−Q/RT), m²/s. */
@@ -76,7 +80,14 @@ export function kineticRegime(ratio: number): KineticRegime {
   return ratio < 0.1 ? 'equilibrium not reachable' : ratio < 1 ? 'partly equilibrated' : 'equilibrium reachable';
 }
 
-export function interdiffusionEstimate(elementA: string, elementB: string, xB: number, diameterNm: number, temperatureK: number, timeH: number): KineticsEstimate {
+export function interdiffusionEstimate(
+  elementA: string,
+  elementB: string,
+  xB: number,
+  diameterNm: number,
+  temperatureK: number,
+  timeH: number,
+): KineticsEstimate {
   const pa = selfDiffusionParameters(elementA);
   const pb = selfDiffusionParameters(elementB);
   const da = arrheniusDiffusivity(pa, temperatureK);

@@ -52,10 +52,34 @@ interface AdsorbateSpec {
 }
 
 const ADSORBATES: Readonly<Record<Exclude<Environment, 'vacuum'>, AdsorbateSpec>> = {
-  H2: { adsorbate: 'H', atomsPerMolecule: 2, gasEntropyJPerMolK: 130.68, saturationCoverage: 1, source: 'Nørskov et al., J. Electrochem. Soc. 152, J23 (2005), from memory' },
-  CO: { adsorbate: 'CO', atomsPerMolecule: 1, gasEntropyJPerMolK: 197.66, saturationCoverage: 0.5, source: 'Abild-Pedersen & Andersson, Surf. Sci. 601, 1747 (2007), from memory' },
-  O2: { adsorbate: 'O', atomsPerMolecule: 2, gasEntropyJPerMolK: 205.15, saturationCoverage: 0.25, source: 'Nørskov et al., J. Phys. Chem. B 108, 17886 (2004), from memory' },
-  ligand: { adsorbate: 'SR', atomsPerMolecule: 0, gasEntropyJPerMolK: 0, saturationCoverage: 1 / 3, source: 'Love et al., Chem. Rev. 105, 1103 (2005), rough values from memory' },
+  H2: {
+    adsorbate: 'H',
+    atomsPerMolecule: 2,
+    gasEntropyJPerMolK: 130.68,
+    saturationCoverage: 1,
+    source: 'Nørskov et al., J. Electrochem. Soc. 152, J23 (2005), from memory',
+  },
+  CO: {
+    adsorbate: 'CO',
+    atomsPerMolecule: 1,
+    gasEntropyJPerMolK: 197.66,
+    saturationCoverage: 0.5,
+    source: 'Abild-Pedersen & Andersson, Surf. Sci. 601, 1747 (2007), from memory',
+  },
+  O2: {
+    adsorbate: 'O',
+    atomsPerMolecule: 2,
+    gasEntropyJPerMolK: 205.15,
+    saturationCoverage: 0.25,
+    source: 'Nørskov et al., J. Phys. Chem. B 108, 17886 (2004), from memory',
+  },
+  ligand: {
+    adsorbate: 'SR',
+    atomsPerMolecule: 0,
+    gasEntropyJPerMolK: 0,
+    saturationCoverage: 1 / 3,
+    source: 'Love et al., Chem. Rev. 105, 1103 (2005), rough values from memory',
+  },
 };
 
 // prettier-ignore
@@ -99,7 +123,12 @@ export const VACUUM_TERM: AdsorbateTerm = Object.freeze({
 });
 
 /** Langmuir coverage (per surface atom) of an adsorbate of energy `energyEv` on one element. */
-export function langmuirCoverage(environment: Exclude<Environment, 'vacuum'>, energyEv: number, temperatureK: number, pressureBar: number): number {
+export function langmuirCoverage(
+  environment: Exclude<Environment, 'vacuum'>,
+  energyEv: number,
+  temperatureK: number,
+  pressureBar: number,
+): number {
   const spec = ADSORBATES[environment];
   if (spec.atomsPerMolecule === 0) return spec.saturationCoverage;
   const kT = BOLTZMANN_EV_PER_K * temperatureK;
@@ -113,7 +142,13 @@ export function langmuirCoverage(environment: Exclude<Environment, 'vacuum'>, en
 }
 
 /** The adsorbate contribution to the segregation enthalpy of B in an A–B particle. */
-export function adsorbateTerm(elementA: string, elementB: string, environment: Environment, temperatureK: number, pressureBar: number): AdsorbateTerm {
+export function adsorbateTerm(
+  elementA: string,
+  elementB: string,
+  environment: Environment,
+  temperatureK: number,
+  pressureBar: number,
+): AdsorbateTerm {
   if (environment === 'vacuum') return VACUUM_TERM;
   const spec = ADSORBATES[environment];
   const table = ADSORPTION_ENERGIES_EV[spec.adsorbate];
@@ -121,8 +156,16 @@ export function adsorbateTerm(elementA: string, elementB: string, environment: E
   const energyBEv = table[elementB] ?? null;
   const base = { environment, adsorbate: spec.adsorbate, energyAEv, energyBEv, source: spec.source };
   if (energyAEv === null || energyBEv === null) {
-    const lacking = [energyAEv === null ? elementA : null, energyBEv === null ? elementB : null].filter((s) => s !== null).join(' and ');
-    return { ...base, coverage: 0, termBEv: 0, drawnOut: null, missing: `no ${spec.adsorbate} adsorption energy tabulated for ${lacking}: adsorbate term left out` };
+    const lacking = [energyAEv === null ? elementA : null, energyBEv === null ? elementB : null]
+      .filter((s) => s !== null)
+      .join(' and ');
+    return {
+      ...base,
+      coverage: 0,
+      termBEv: 0,
+      drawnOut: null,
+      missing: `no ${spec.adsorbate} adsorption energy tabulated for ${lacking}: adsorbate term left out`,
+    };
   }
   const stronger = Math.min(energyAEv, energyBEv);
   const coverage = langmuirCoverage(environment, stronger, temperatureK, pressureBar);

@@ -4,7 +4,13 @@
  * prediction (same chain as `predictPair`), reduced to the numbers a chart needs.
  */
 import { invalid } from '../api/result';
-import { resolveConditions, pairContext, predictWithContext, type PredictionConditions, type ResolvedConditions } from './predict';
+import {
+  resolveConditions,
+  pairContext,
+  predictWithContext,
+  type PredictionConditions,
+  type ResolvedConditions,
+} from './predict';
 
 export const ISOTHERM_SWEEPS = ['xB', 'diameter', 'temperature'] as const;
 export type IsothermSweep = (typeof ISOTHERM_SWEEPS)[number];
@@ -55,9 +61,17 @@ function sweepValues(sweep: IsothermSweep, points: number, around: ResolvedCondi
   return values;
 }
 
-export function computeIsotherm(elementA: string, elementB: string, conditions: PredictionConditions, sweep: IsothermSweep, points = 41): Isotherm {
-  if (!(ISOTHERM_SWEEPS as readonly string[]).includes(sweep)) throw invalid('sweep', `sweep must be one of ${ISOTHERM_SWEEPS.join(', ')}, got "${String(sweep)}"`);
-  if (!Number.isInteger(points) || points < 3 || points > 400) throw invalid('points', `points must be a whole number from 3 to 400, got ${String(points)}`);
+export function computeIsotherm(
+  elementA: string,
+  elementB: string,
+  conditions: PredictionConditions,
+  sweep: IsothermSweep,
+  points = 41,
+): Isotherm {
+  if (!(ISOTHERM_SWEEPS as readonly string[]).includes(sweep))
+    throw invalid('sweep', `sweep must be one of ${ISOTHERM_SWEEPS.join(', ')}, got "${String(sweep)}"`);
+  if (!Number.isInteger(points) || points < 3 || points > 400)
+    throw invalid('points', `points must be a whole number from 3 to 400, got ${String(points)}`);
   const base = resolveConditions(conditions);
   const ctx = pairContext(elementA, elementB);
   const out: IsothermPoint[] = [];

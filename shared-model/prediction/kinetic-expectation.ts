@@ -10,7 +10,13 @@
  * H₂PtCl₆, Na₂PdCl₄, AgNO₃, the metal(II) salts of Cu, Ni, Co, Fe, Na₃RhCl₆, H₂IrCl₆, RuCl₃.
  */
 import { coreShellLabel } from '../architecture/labels';
-import { galvanicReplacement, reductionCouple, reductionOrder, seedDissolutionCouple, type ReductionCouple } from '../recipes/potentials';
+import {
+  galvanicReplacement,
+  reductionCouple,
+  reductionOrder,
+  seedDissolutionCouple,
+  type ReductionCouple,
+} from '../recipes/potentials';
 
 const USUAL_PRECURSOR_COUPLE: Readonly<Record<string, string>> = {
   Au: 'AuCl4/Au',
@@ -43,14 +49,24 @@ export function usualPrecursorCouple(metal: string): ReductionCouple | null {
 }
 
 /** Co-reduction from the given couples (or the usual precursors); null when a couple is not tabulated. */
-export function coReductionExpectation(elementA: string, elementB: string, coupleA?: ReductionCouple, coupleB?: ReductionCouple): KineticExpectation | null {
+export function coReductionExpectation(
+  elementA: string,
+  elementB: string,
+  coupleA?: ReductionCouple,
+  coupleB?: ReductionCouple,
+): KineticExpectation | null {
   const ca = coupleA ?? usualPrecursorCouple(elementA);
   const cb = coupleB ?? usualPrecursorCouple(elementB);
   if (ca === null || cb === null) return null;
   const order = reductionOrder(ca, cb);
   const couples = [`${ca.id} ${ca.eStandardV.toFixed(3)} V`, `${cb.id} ${cb.eStandardV.toFixed(3)} V`];
   if (order.gapV < CO_REDUCTION_TOGETHER_V) {
-    return { route: 'co-reduction', label: 'alloy', text: `${ca.id} and ${cb.id} lie ${order.gapV.toFixed(2)} V apart: both reduce together, mixed as made`, couples };
+    return {
+      route: 'co-reduction',
+      label: 'alloy',
+      text: `${ca.id} and ${cb.id} lie ${order.gapV.toFixed(2)} V apart: both reduce together, mixed as made`,
+      couples,
+    };
   }
   return {
     route: 'co-reduction',
@@ -61,14 +77,29 @@ export function coReductionExpectation(elementA: string, elementB: string, coupl
 }
 
 /** Seeded growth of `shell` on `seed` seeds: core@shell, or hollow/alloyed when galvanic replacement runs. */
-export function seededGrowthExpectation(seed: string, shell: string, shellCouple?: ReductionCouple, chloridePresent = true): KineticExpectation | null {
+export function seededGrowthExpectation(
+  seed: string,
+  shell: string,
+  shellCouple?: ReductionCouple,
+  chloridePresent = true,
+): KineticExpectation | null {
   const sc = shellCouple ?? usualPrecursorCouple(shell);
   const seedCouple = seedDissolutionCouple(seed, chloridePresent);
   if (sc === null || seedCouple === undefined) return null;
   const galvanic = galvanicReplacement(sc, seedCouple);
   const couples = [`${sc.id} ${sc.eStandardV.toFixed(3)} V`, `${seedCouple.id} ${seedCouple.eStandardV.toFixed(3)} V`];
   if (galvanic.replaces) {
-    return { route: 'seed-mediated', label: 'hollow', text: `galvanic replacement (${galvanic.reaction}, +${galvanic.drivingForceV.toFixed(2)} V): hollow or alloyed shells as made`, couples };
+    return {
+      route: 'seed-mediated',
+      label: 'hollow',
+      text: `galvanic replacement (${galvanic.reaction}, +${galvanic.drivingForceV.toFixed(2)} V): hollow or alloyed shells as made`,
+      couples,
+    };
   }
-  return { route: 'seed-mediated', label: coreShellLabel(seed, shell), text: `${shell} grows on the ${seed} seeds (no galvanic replacement)`, couples };
+  return {
+    route: 'seed-mediated',
+    label: coreShellLabel(seed, shell),
+    text: `${shell} grows on the ${seed} seeds (no galvanic replacement)`,
+    couples,
+  };
 }

@@ -67,7 +67,8 @@ function chargeTransferCoefficient(record: ElementRecord): number {
 }
 
 function requireNumber(record: ElementRecord, value: number | null, name: string): number {
-  if (value === null || !Number.isFinite(value)) throw invalid('element', `the element table has no ${name} for ${record.symbol}`);
+  if (value === null || !Number.isFinite(value))
+    throw invalid('element', `the element table has no ${name} for ${record.symbol}`);
   return value;
 }
 
@@ -79,7 +80,8 @@ export function miedemaPairConstants(elementA: string, elementB: string): Miedem
   const ma = a.miedema;
   const mb = b.miedema;
   const transitions = (ma.transition ? 1 : 0) + (mb.transition ? 1 : 0);
-  const p = transitions === 2 ? MIEDEMA_P_BOTH_TRANSITION : transitions === 1 ? MIEDEMA_P_MIXED : MIEDEMA_P_NON_TRANSITION;
+  const p =
+    transitions === 2 ? MIEDEMA_P_BOTH_TRANSITION : transitions === 1 ? MIEDEMA_P_MIXED : MIEDEMA_P_NON_TRANSITION;
   const rToP = transitions === 1 ? ma.hybridizationRtoP * mb.hybridizationRtoP : 0;
   const dPhi = ma.phiStarV - mb.phiStarV;
   const dN = ma.nws13 - mb.nws13;
@@ -106,7 +108,11 @@ export function miedemaPairConstants(elementA: string, elementB: string): Miedem
  * Mixing enthalpy at composition xB (closed interval [0, 1]; 0 at the ends). Also returns, through
  * `perBondFactor`, ΔH_chem/(x_A x_B) which stays finite at the ends (used for the regular-solution ω).
  */
-export function miedemaFromConstants(k: MiedemaPairConstants, xB: number, state: MiedemaState): MiedemaMixing & { chemicalOverXaXb: number } {
+export function miedemaFromConstants(
+  k: MiedemaPairConstants,
+  xB: number,
+  state: MiedemaState,
+): MiedemaMixing & { chemicalOverXaXb: number } {
   const xA = 1 - xB;
   // surface fractions with the uncorrected volumes, then one charge-transfer correction of the volumes
   const s0 = xA * k.v23A + xB * k.v23B;
@@ -138,9 +144,20 @@ export function miedemaFromConstants(k: MiedemaPairConstants, xB: number, state:
 }
 
 /** Miedema mixing enthalpy of A(1−xB)B(xB), kJ/mol of atoms; solid solution by default (chemical + elastic). */
-export function miedemaMixingEnthalpy(elementA: string, elementB: string, xB: number, state: MiedemaState = 'solid'): MiedemaMixing {
-  if (typeof xB !== 'number' || !Number.isFinite(xB) || xB < 0 || xB > 1) throw invalid('xB', `xB must lie between 0 and 1, got ${String(xB)}`);
-  if (elementA === elementB) throw invalid('elementB', `a pair needs two different elements, got ${elementA}-${elementB}`);
-  const { chemicalOverXaXb: _unused, ...mixing } = miedemaFromConstants(miedemaPairConstants(elementA, elementB), xB, state);
+export function miedemaMixingEnthalpy(
+  elementA: string,
+  elementB: string,
+  xB: number,
+  state: MiedemaState = 'solid',
+): MiedemaMixing {
+  if (typeof xB !== 'number' || !Number.isFinite(xB) || xB < 0 || xB > 1)
+    throw invalid('xB', `xB must lie between 0 and 1, got ${String(xB)}`);
+  if (elementA === elementB)
+    throw invalid('elementB', `a pair needs two different elements, got ${elementA}-${elementB}`);
+  const { chemicalOverXaXb: _unused, ...mixing } = miedemaFromConstants(
+    miedemaPairConstants(elementA, elementB),
+    xB,
+    state,
+  );
   return mixing;
 }

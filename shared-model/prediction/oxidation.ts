@@ -51,7 +51,8 @@ export const OXIDE_TABLE: Readonly<Record<string, OxideEntry>> = {
   Bi: { oxide: 'Bi₂O₃', formationKjPerMol: -573.9, oxygenAtoms: 3 },
 };
 
-export const OXIDE_SOURCE = 'CRC Handbook, Standard Thermodynamic Properties of Chemical Substances (NIST-JANAF oxides), from memory';
+export const OXIDE_SOURCE =
+  'CRC Handbook, Standard Thermodynamic Properties of Chemical Substances (NIST-JANAF oxides), from memory';
 /** Below this ΔfH° per O atom (kJ/mol) the surface oxidises in air or water (common practice). */
 export const OXIDISES_IN_AIR_KJ_PER_MOL_O = -150;
 /** Below this (and above the previous) a surface oxide forms only in O₂ at raised temperature. */
@@ -70,7 +71,12 @@ export function elementOxidation(symbol: string): ElementOxidation | null {
   const entry = OXIDE_TABLE[symbol];
   if (entry === undefined) return null;
   const perO = entry.formationKjPerMol / entry.oxygenAtoms;
-  const verdict: OxidationVerdict = perO < OXIDISES_IN_AIR_KJ_PER_MOL_O ? 'oxidises in air' : perO < OXIDISES_HOT_KJ_PER_MOL_O ? 'oxidises only hot in O₂' : 'stays metallic';
+  const verdict: OxidationVerdict =
+    perO < OXIDISES_IN_AIR_KJ_PER_MOL_O
+      ? 'oxidises in air'
+      : perO < OXIDISES_HOT_KJ_PER_MOL_O
+        ? 'oxidises only hot in O₂'
+        : 'stays metallic';
   return { element: symbol, oxide: entry.oxide, formationKjPerMolO: perO, verdict };
 }
 
@@ -84,14 +90,19 @@ export interface PairOxidation {
 
 /** Oxidation outlook of a pair in air/water, with the element predicted at the surface named first. */
 export function pairOxidation(elementA: string, elementB: string, surfaceElement: string | null): PairOxidation {
-  const elements = [elementOxidation(elementA), elementOxidation(elementB)].filter((e): e is ElementOxidation => e !== null);
+  const elements = [elementOxidation(elementA), elementOxidation(elementB)].filter(
+    (e): e is ElementOxidation => e !== null,
+  );
   const oxidisingInAir = elements.filter((e) => e.verdict === 'oxidises in air').map((e) => e.element);
   let summary = '';
   const shell = elements.find((e) => e.element === surfaceElement);
   if (shell !== undefined && shell.verdict === 'oxidises in air') {
     summary = `in air or water the ${shell.element} shell will be an oxide (${shell.oxide}, ΔfH° ${shell.formationKjPerMolO.toFixed(0)} kJ per mol O): expect a metal core with an oxide shell`;
   } else if (oxidisingInAir.length > 0) {
-    const list = elements.filter((e) => e.verdict === 'oxidises in air').map((e) => `${e.element} → ${e.oxide}`).join(', ');
+    const list = elements
+      .filter((e) => e.verdict === 'oxidises in air')
+      .map((e) => `${e.element} → ${e.oxide}`)
+      .join(', ');
     summary = `in air or water exposed ${oxidisingInAir.join(' and ')} will oxidise (${list})`;
   }
   return { elements, oxidisingInAir, summary };

@@ -181,23 +181,33 @@ const HYBRIDIZING = new Set(['Al', 'Zn', 'Cd', 'In', 'Sn', 'Pb', 'Bi']);
 export function pairContext(elementA: string, elementB: string): PairContext {
   const a = getElement(elementA, 'elementA');
   const b = getElement(elementB, 'elementB');
-  if (a.symbol === b.symbol) throw invalid('elementB', `a pair needs two different elements, got ${a.symbol}-${b.symbol}`);
+  if (a.symbol === b.symbol)
+    throw invalid('elementB', `a pair needs two different elements, got ${a.symbol}-${b.symbol}`);
   const miedema = miedemaPairConstants(a.symbol, b.symbol);
   const pairFlags: Array<{ flag: string; penalty: number }> = [];
   for (const record of [a, b]) {
     if (record.cell.structure !== 'fcc') {
-      pairFlags.push({ flag: `${record.symbol} is ${record.cell.structure} in bulk: fcc-equivalent lattice and fcc coordination assumed`, penalty: 0.1 });
+      pairFlags.push({
+        flag: `${record.symbol} is ${record.cell.structure} in bulk: fcc-equivalent lattice and fcc coordination assumed`,
+        penalty: 0.1,
+      });
     }
   }
   if (miedema.hybridizationRtoP > 0) {
     const p = HYBRIDIZING.has(a.symbol) ? a.symbol : b.symbol;
-    pairFlags.push({ flag: `Miedema hybridization term applies (${p} with a transition metal): mixing enthalpy less certain`, penalty: 0.1 });
+    pairFlags.push({
+      flag: `Miedema hybridization term applies (${p} with a transition metal): mixing enthalpy less certain`,
+      penalty: 0.1,
+    });
   }
   const rA = recordProperty(a, 'metallicRadiusAngstrom');
   const rB = recordProperty(b, 'metallicRadiusAngstrom');
   const mismatch = Math.abs(rA - rB) / Math.min(rA, rB);
   if (mismatch > 0.1) {
-    pairFlags.push({ flag: `size mismatch ${(100 * mismatch).toFixed(0)} % > 10 %: continuum strain and Vegard's law are rough`, penalty: 0.1 });
+    pairFlags.push({
+      flag: `size mismatch ${(100 * mismatch).toFixed(0)} % > 10 %: continuum strain and Vegard's law are rough`,
+      penalty: 0.1,
+    });
   }
   const strainBinAEv = friedelStrainEnergyEv(a.symbol, b.symbol);
   const strainAinBEv = friedelStrainEnergyEv(b.symbol, a.symbol);
@@ -212,8 +222,10 @@ export function pairContext(elementA: string, elementB: string): PairContext {
     strainBinAEv,
     strainAinBEv,
     bLargerThanA: rB > rA,
-    omegaDiluteBinAEv: miedemaFromConstants(miedema, 0, 'solid').chemicalOverXaXb / (FCC_COORDINATION * KJ_PER_MOL_PER_EV),
-    omegaDiluteAinBEv: miedemaFromConstants(miedema, 1, 'solid').chemicalOverXaXb / (FCC_COORDINATION * KJ_PER_MOL_PER_EV),
+    omegaDiluteBinAEv:
+      miedemaFromConstants(miedema, 0, 'solid').chemicalOverXaXb / (FCC_COORDINATION * KJ_PER_MOL_PER_EV),
+    omegaDiluteAinBEv:
+      miedemaFromConstants(miedema, 1, 'solid').chemicalOverXaXb / (FCC_COORDINATION * KJ_PER_MOL_PER_EV),
     pairFlags,
     pairQuality: pairFlags.reduce((q, f) => q * (1 - f.penalty), 1),
     pairName: `${a.symbol}-${b.symbol}`,
@@ -224,7 +236,12 @@ export function pairContext(elementA: string, elementB: string): PairContext {
     diluteCache: new Map(),
     lastComposition: null,
     wetting: null,
-    surfaceSources: surfaceEnergySources(a, b, recordProperty(a, 'surfaceEnergyJPerM2'), recordProperty(b, 'surfaceEnergyJPerM2')),
+    surfaceSources: surfaceEnergySources(
+      a,
+      b,
+      recordProperty(a, 'surfaceEnergyJPerM2'),
+      recordProperty(b, 'surfaceEnergyJPerM2'),
+    ),
   };
 }
 
@@ -268,7 +285,12 @@ export function regularSolutionBinodal(tau: number): number {
   return x;
 }
 
-function mixingTendency(omegaChemEv: number, omegaTotalEv: number, xB: number, kTEv: number): { ratio: number; gap: boolean } {
+function mixingTendency(
+  omegaChemEv: number,
+  omegaTotalEv: number,
+  xB: number,
+  kTEv: number,
+): { ratio: number; gap: boolean } {
   const x = xB;
   const xx = x * (1 - x);
   const omega = omegaChemEv < 0 ? omegaChemEv : omegaTotalEv;
@@ -290,14 +312,33 @@ function mixingTendency(omegaChemEv: number, omegaTotalEv: number, xB: number, k
 }
 
 function toTerms(t: SegregationTerms): PredictionTerms {
-  return { surfaceEnergy: t.surfaceEnergyEv, chemical: t.chemicalEv, elastic: t.elasticEv, adsorbate: t.adsorbateEv, total: t.totalEv };
+  return {
+    surfaceEnergy: t.surfaceEnergyEv,
+    chemical: t.chemicalEv,
+    elastic: t.elasticEv,
+    adsorbate: t.adsorbateEv,
+    total: t.totalEv,
+  };
 }
 
 const signed = (value: number) => `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(2)} eV`;
 
-function buildReason(surfaceElement: string | null, other: string, enrichment: number, terms: PredictionTerms, mixingKj: number, gap: boolean, ratio: number): string {
+function buildReason(
+  surfaceElement: string | null,
+  other: string,
+  enrichment: number,
+  terms: PredictionTerms,
+  mixingKj: number,
+  gap: boolean,
+  ratio: number,
+): string {
   const mixing = `ΔHmix ${mixingKj >= 0 ? '+' : '−'}${Math.abs(mixingKj).toFixed(1)} kJ/mol${gap ? ' (miscibility gap)' : mixingKj < 0 ? ' (mixing favoured)' : ' (demixing tendency)'}`;
-  const order = ratio > 1.05 ? `, unlike neighbours ×${ratio.toFixed(2)}` : ratio < 0.95 ? `, like neighbours cluster (unlike ×${ratio.toFixed(2)})` : '';
+  const order =
+    ratio > 1.05
+      ? `, unlike neighbours ×${ratio.toFixed(2)}`
+      : ratio < 0.95
+        ? `, like neighbours cluster (unlike ×${ratio.toFixed(2)})`
+        : '';
   if (surfaceElement === null) return `no surface enrichment; ${mixing}${order}`;
   const words: Record<'surfaceEnergy' | 'chemical' | 'elastic' | 'adsorbate', [string, string]> = {
     surfaceEnergy: [`lower surface energy of ${surfaceElement}`, `higher surface energy of ${surfaceElement}`],
@@ -337,7 +378,10 @@ export interface PredictionCore {
 }
 
 /** The size-independent part of a prediction: depends on composition, temperature, facet and strain rule. */
-interface CompositionPart extends Pick<PredictionCore, 'kT' | 'mixing' | 'omegaChemEv' | 'latticeNm' | 'strain' | 'k' | 'adsorbate'> {
+interface CompositionPart extends Pick<
+  PredictionCore,
+  'kT' | 'mixing' | 'omegaChemEv' | 'latticeNm' | 'strain' | 'k' | 'adsorbate'
+> {
   xB: number;
   temperatureK: number;
   facet: SurfaceFacet;
@@ -409,7 +453,14 @@ export function predictCore(ctx: PairContext, c: ResolvedConditions): Prediction
   const part = compositionPart(ctx, c);
   const k = part.k;
   const sites = particleSiteCounts(c.diameterNm, part.latticeNm, c.shape);
-  const solved = solveSurfaceEquilibrium({ xB: c.xB, surfaceShare: sites.surfaceSites / sites.atoms, kTEv: part.kT, c0: k.c0, cS: k.cS, cC: k.cC });
+  const solved = solveSurfaceEquilibrium({
+    xB: c.xB,
+    surfaceShare: sites.surfaceSites / sites.atoms,
+    kTEv: part.kT,
+    c0: k.c0,
+    cS: k.cS,
+    cC: k.cC,
+  });
   return {
     kT: part.kT,
     mixing: part.mixing,
@@ -464,7 +515,9 @@ export function predictionFromCore(ctx: PairContext, c: ResolvedConditions, core
     quality *= 0.85;
   }
   if (k.cS / kT < -4) {
-    flags.push('strong demixing tendency within the surface layer: the isotherm may have several solutions (2D phase separation)');
+    flags.push(
+      'strong demixing tendency within the surface layer: the isotherm may have several solutions (2D phase separation)',
+    );
     quality *= 0.8;
   }
   if (c.shape === 'icosahedron') flags.push('icosahedron: Mackay site counts; its internal strain is not modelled');
@@ -540,7 +593,15 @@ export function predictionFromCore(ctx: PairContext, c: ResolvedConditions, core
     // property, so JSON and structured clone carry it
     get reason(): string {
       if (reason === undefined) {
-        reason = buildReason(surfaceElement, other, classification.enrichment, terms, mixing.totalKjPerMol, tendency.gap, tendency.ratio);
+        reason = buildReason(
+          surfaceElement,
+          other,
+          classification.enrichment,
+          terms,
+          mixing.totalKjPerMol,
+          tendency.gap,
+          tendency.ratio,
+        );
         if (wetting !== null) reason = `${wettingSentence(wetting)}; ${reason}`;
       }
       return reason;
@@ -550,14 +611,23 @@ export function predictionFromCore(ctx: PairContext, c: ResolvedConditions, core
 
 function diluteTerms(ctx: PairContext, c: ResolvedConditions, strain: { bInA: number; aInB: number }) {
   const facet = c.facet;
-  const adsorbateEv = c.environment === 'vacuum' ? 0 : adsorbateTerm(ctx.a.symbol, ctx.b.symbol, c.environment, c.temperatureK, c.pressureBar).termBEv;
+  const adsorbateEv =
+    c.environment === 'vacuum'
+      ? 0
+      : adsorbateTerm(ctx.a.symbol, ctx.b.symbol, c.environment, c.temperatureK, c.pressureBar).termBEv;
   const key = `${facet}|${c.strainRule}|${adsorbateEv}`;
   let cached = ctx.diluteCache.get(key);
   if (cached === undefined) {
     // dilute limits: B in A at x_s = x_c = 0 with A's lattice; A in B at x_s = x_c = 1 with B's lattice;
     // ω of the dilute solutions: Miedema chemical enthalpy per x_A·x_B at x_B → 0 and x_B → 1
-    const kA = segregationCoefficients({ ...kArgs(ctx, ctx.omegaDiluteBinAEv, facet, strain, adsorbateEv), latticeNm: ctx.latticeANm });
-    const kB = segregationCoefficients({ ...kArgs(ctx, ctx.omegaDiluteAinBEv, facet, strain, adsorbateEv), latticeNm: ctx.latticeBNm });
+    const kA = segregationCoefficients({
+      ...kArgs(ctx, ctx.omegaDiluteBinAEv, facet, strain, adsorbateEv),
+      latticeNm: ctx.latticeANm,
+    });
+    const kB = segregationCoefficients({
+      ...kArgs(ctx, ctx.omegaDiluteAinBEv, facet, strain, adsorbateEv),
+      latticeNm: ctx.latticeBNm,
+    });
     cached = Object.freeze({
       bInA: Object.freeze(toTerms(segregationTermsB(kA, 0, 0))),
       aInB: Object.freeze(toTerms(negateTerms(segregationTermsB(kB, 1, 1)))),
@@ -567,7 +637,13 @@ function diluteTerms(ctx: PairContext, c: ResolvedConditions, strain: { bInA: nu
   return cached;
 }
 
-function kArgs(ctx: PairContext, omegaEv: number, facet: SurfaceFacet, strain: { bInA: number; aInB: number }, adsorbateEv: number) {
+function kArgs(
+  ctx: PairContext,
+  omegaEv: number,
+  facet: SurfaceFacet,
+  strain: { bInA: number; aInB: number },
+  adsorbateEv: number,
+) {
   return {
     gammaAJPerM2: ctx.gammaA,
     gammaBJPerM2: ctx.gammaB,
@@ -584,7 +660,10 @@ function kArgs(ctx: PairContext, omegaEv: number, facet: SurfaceFacet, strain: {
  * Uncertain when a dilute-limit segregation enthalpy is smaller than the energy the surface-energy
  * scatter between sources amounts to (surface-energy-scatter.ts).
  */
-function pairCertainty(ctx: PairContext, dilute: { bInA: PredictionTerms; aInB: PredictionTerms }): PredictionCertainty {
+function pairCertainty(
+  ctx: PairContext,
+  dilute: { bInA: PredictionTerms; aInB: PredictionTerms },
+): PredictionCertainty {
   const sources = ctx.surfaceSources;
   const deltaGamma = ctx.gammaB - ctx.gammaA;
   // surface term per J/m² of γ_B − γ_A, calibrated: the term's own ratio (σ at the host's lattice)
@@ -601,11 +680,17 @@ function pairCertainty(ctx: PairContext, dilute: { bInA: PredictionTerms; aInB: 
 function wettingSentence(w: WettingEstimate): string {
   const s = `S = γ(${w.core}) − γ(${w.shell}) − γ_AB = ${w.gammaCoreJPerM2.toFixed(2)} − ${w.gammaShellJPerM2.toFixed(2)} − ${w.interfaceJPerM2.toFixed(2)} = ${w.spreadingJPerM2.toFixed(2)} J/m²`;
   const flip = w.flipDiameterNm === null ? '' : ` (core@shell below ${w.flipDiameterNm.toFixed(1)} nm, Janus above)`;
-  return w.verdict === 'Janus' ? `partial wetting, Janus: ${s}${flip}` : `${w.shell} wets ${w.core} (${w.core}@${w.shell}): ${s}${flip}`;
+  return w.verdict === 'Janus'
+    ? `partial wetting, Janus: ${s}${flip}`
+    : `${w.shell} wets ${w.core} (${w.core}@${w.shell}): ${s}${flip}`;
 }
 
 /** "As made" and "after annealing" labels from the diffusion length and the reduction order. */
-export function asMadeVerdict(equilibrium: string, kinetics: KineticsEstimate, kinetic: KineticExpectation | null): AsMadeVerdict {
+export function asMadeVerdict(
+  equilibrium: string,
+  kinetics: KineticsEstimate,
+  kinetic: KineticExpectation | null,
+): AsMadeVerdict {
   const at = `${kinetics.temperatureK.toFixed(0)} K for ${kinetics.timeH} h`;
   const length = `L = √(D̃t) = ${formatNm(kinetics.lengthNm)} vs radius ${kinetics.radiusNm.toFixed(1)} nm`;
   const afterAnnealing = equilibrium;

@@ -15,13 +15,20 @@ import { invalid } from '../api/result';
 import { getElement } from '../elements/element-table';
 import { METAL_SYMBOLS, isMetalSymbol } from '../elements/symbols';
 import { surfaceEnrichment } from '../architecture/classify';
-import { resolveConditions, pairContext, predictCore, predictionFromCore, type PairContext, type Prediction, type PredictionConditions, type ResolvedConditions, type PredictionCore } from './predict';
+import {
+  resolveConditions,
+  pairContext,
+  predictCore,
+  predictionFromCore,
+  type PairContext,
+  type Prediction,
+  type PredictionConditions,
+  type ResolvedConditions,
+  type PredictionCore,
+} from './predict';
 
 export type RankTarget =
-  | { kind: 'alloy' }
-  | { kind: 'core@shell'; shellElement?: string }
-  | { kind: 'Janus' }
-  | { kind: 'intermetallic' };
+  { kind: 'alloy' } | { kind: 'core@shell'; shellElement?: string } | { kind: 'Janus' } | { kind: 'intermetallic' };
 
 export interface RankedPair {
   rank: number;
@@ -68,16 +75,25 @@ export function parseRankTarget(text: string): RankTarget {
     if (!isMetalSymbol(symbol)) throw invalid('target', `unknown shell element "${raw}"`);
     return { kind: 'core@shell', shellElement: symbol };
   }
-  throw invalid('target', `target must be alloy, core@shell, core@shell:X (X in the shell), Janus or intermetallic; got "${t}"`);
+  throw invalid(
+    'target',
+    `target must be alloy, core@shell, core@shell:X (X in the shell), Janus or intermetallic; got "${t}"`,
+  );
 }
 
 export function describeRankTarget(target: RankTarget): string {
-  if (target.kind === 'core@shell') return target.shellElement ? `core@shell with ${target.shellElement} in the shell` : 'core@shell (any)';
+  if (target.kind === 'core@shell')
+    return target.shellElement ? `core@shell with ${target.shellElement} in the shell` : 'core@shell (any)';
   return target.kind;
 }
 
 /** Score of a prediction's numbers for a target, in [0, 1]. */
-export function scoreFromNumbers(target: RankTarget, enrichedElement: string | null, enrichment: number, unlikeNeighbourRatio: number): number {
+export function scoreFromNumbers(
+  target: RankTarget,
+  enrichedElement: string | null,
+  enrichment: number,
+  unlikeNeighbourRatio: number,
+): number {
   const e = Math.min(1, Math.max(0, enrichment));
   const rho = unlikeNeighbourRatio;
   switch (target.kind) {
@@ -98,7 +114,11 @@ export function scoreFromNumbers(target: RankTarget, enrichedElement: string | n
  * a random or surface-enriched alloy).
  */
 export function qualifiesFor(target: RankTarget, p: Prediction): boolean {
-  if (target.kind === 'core@shell') return p.architectureKind === 'core@shell' && (target.shellElement === undefined || p.surfaceElement === target.shellElement);
+  if (target.kind === 'core@shell')
+    return (
+      p.architectureKind === 'core@shell' &&
+      (target.shellElement === undefined || p.surfaceElement === target.shellElement)
+    );
   // a surface-enriched alloy is still one mixed phase; its score counts the enrichment against it
   if (target.kind === 'alloy') return p.architectureKind === 'alloy' || p.architectureKind === 'surface-enriched alloy';
   return p.architectureKind === target.kind;
@@ -125,7 +145,8 @@ export function checkElementList(elements: readonly string[] | 'all'): string[] 
 export function pairContexts(elements: readonly string[]): PairContext[] {
   const contexts: PairContext[] = [];
   for (let i = 0; i < elements.length; i++) {
-    for (let j = i + 1; j < elements.length; j++) contexts.push(pairContext(elements[i] as string, elements[j] as string));
+    for (let j = i + 1; j < elements.length; j++)
+      contexts.push(pairContext(elements[i] as string, elements[j] as string));
   }
   return contexts;
 }
@@ -135,7 +156,11 @@ export function pairContexts(elements: readonly string[]): PairContext[] {
  * here; its full prediction record is assembled when a row's `prediction` is first read. Ties of score
  * are broken by the pair name (stable, repeatable order).
  */
-export function rankContexts(contexts: readonly PairContext[], target: RankTarget, conditions: PredictionConditions): RankedPair[] {
+export function rankContexts(
+  contexts: readonly PairContext[],
+  target: RankTarget,
+  conditions: PredictionConditions,
+): RankedPair[] {
   if (target.kind === 'core@shell' && target.shellElement !== undefined) getElement(target.shellElement, 'target');
   const checked = resolveConditions(conditions);
   const rows: RankedRow[] = new Array(contexts.length);
@@ -146,7 +171,13 @@ export function rankContexts(contexts: readonly PairContext[], target: RankTarge
     // a partially wetting (Janus) particle exposes both elements: no shell to score
     const enrichment = core.spreadingJPerM2 !== null && core.spreadingJPerM2 < 0 ? 0 : isothermEnrichment;
     const enrichedElement = enriched === 'A' ? ctx.a.symbol : enriched === 'B' ? ctx.b.symbol : null;
-    rows[i] = new RankedRow(scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio), ctx.pairName, ctx, checked, core);
+    rows[i] = new RankedRow(
+      scoreFromNumbers(target, enrichedElement, enrichment, core.unlikeNeighbourRatio),
+      ctx.pairName,
+      ctx,
+      checked,
+      core,
+    );
   }
   rows.sort((p, q) => q.score - p.score || (p.pair < q.pair ? -1 : p.pair > q.pair ? 1 : 0));
   for (let i = 0; i < rows.length; i++) (rows[i] as RankedRow).rank = i + 1;
@@ -154,7 +185,11 @@ export function rankContexts(contexts: readonly PairContext[], target: RankTarge
 }
 
 /** Scores every pair of `elements` (or all 30 metals) for `target` under `conditions`, best first. */
-export function rankPairs(elements: readonly string[] | 'all', target: RankTarget | string, conditions: PredictionConditions): RankedPair[] {
+export function rankPairs(
+  elements: readonly string[] | 'all',
+  target: RankTarget | string,
+  conditions: PredictionConditions,
+): RankedPair[] {
   const list = checkElementList(elements);
   const parsed = typeof target === 'string' ? parseRankTarget(target) : target;
   if (parsed.kind === 'core@shell' && parsed.shellElement !== undefined && !list.includes(parsed.shellElement)) {
@@ -171,7 +206,8 @@ export function missReason(target: RankTarget, p: Prediction): string {
       return `${p.surfaceElement} goes to the surface, not ${target.shellElement}`;
     }
     if (p.architectureKind === 'core@shell') return predicted;
-    if (p.surfaceElement !== null) return `${predicted}: ${p.surfaceElement} enriched at the surface (E = ${p.enrichment.toFixed(2)}), no full shell`;
+    if (p.surfaceElement !== null)
+      return `${predicted}: ${p.surfaceElement} enriched at the surface (E = ${p.enrichment.toFixed(2)}), no full shell`;
     return `${predicted}: no shell forms`;
   }
   if (target.kind === 'alloy') return `${predicted}: the elements do not stay mixed`;
@@ -204,7 +240,12 @@ export function splitByTarget(rows: readonly RankedPair[], target: RankTarget): 
   }
   meeting.forEach((row, i) => Object.assign(row, { rank: i + 1 }));
   // closest first: the higher score, then (for equal scores, often 0) the less certain miss
-  missed.sort((x, y) => y.row.score - x.row.score || x.row.prediction.confidence - y.row.prediction.confidence || (x.row.pair < y.row.pair ? -1 : 1));
+  missed.sort(
+    (x, y) =>
+      y.row.score - x.row.score ||
+      x.row.prediction.confidence - y.row.prediction.confidence ||
+      (x.row.pair < y.row.pair ? -1 : 1),
+  );
   const missing = missed.map(({ row, miss }, i) => {
     Object.assign(row, { rank: meeting.length + i + 1 });
     return Object.assign(row, { miss }) as MissedPair;

@@ -67,7 +67,8 @@ export function friedelStrainEnergyEv(host: string, solute: string): number {
   const rs = s.metallicRadiusAngstrom;
   const kSolute = s.bulkModulusGpa;
   const gHost = h.shearModulusGpa;
-  if (rh === null || rs === null) throw invalid('element', `the element table has no metallic radius for ${rh === null ? h.symbol : s.symbol}`);
+  if (rh === null || rs === null)
+    throw invalid('element', `the element table has no metallic radius for ${rh === null ? h.symbol : s.symbol}`);
   if (kSolute === null) throw invalid('element', `the element table has no bulk modulus for ${s.symbol}`);
   if (gHost === null) throw invalid('element', `the element table has no shear modulus for ${h.symbol}`);
   const rA = rh * 1e-10;
@@ -151,5 +152,11 @@ export function segregationTermsB(k: SegregationCoefficients, xs: number, xc: nu
 
 /** Same terms seen from A (ΔH_A = −ΔH_B). */
 export function negateTerms(t: SegregationTerms): SegregationTerms {
-  return { totalEv: -t.totalEv, surfaceEnergyEv: -t.surfaceEnergyEv, chemicalEv: -t.chemicalEv, elasticEv: -t.elasticEv, adsorbateEv: -t.adsorbateEv };
+  return {
+    totalEv: -t.totalEv,
+    surfaceEnergyEv: -t.surfaceEnergyEv,
+    chemicalEv: -t.chemicalEv,
+    elasticEv: -t.elasticEv,
+    adsorbateEv: -t.adsorbateEv,
+  };
 }

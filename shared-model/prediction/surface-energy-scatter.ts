@@ -24,10 +24,17 @@ function sourceComparison(): { factor: number; medianRelativeScatter: number } {
   }
   const factor = sxy / syy;
   const relative = both
-    .map((r) => Math.abs(factor * (r.surfaceEnergyDftJPerM2 as number) - (r.surfaceEnergyJPerM2 as number)) / (r.surfaceEnergyJPerM2 as number))
+    .map(
+      (r) =>
+        Math.abs(factor * (r.surfaceEnergyDftJPerM2 as number) - (r.surfaceEnergyJPerM2 as number)) /
+        (r.surfaceEnergyJPerM2 as number),
+    )
     .sort((p, q) => p - q);
   const mid = relative.length >> 1;
-  const medianRelativeScatter = relative.length % 2 === 1 ? (relative[mid] as number) : 0.5 * ((relative[mid - 1] as number) + (relative[mid] as number));
+  const medianRelativeScatter =
+    relative.length % 2 === 1
+      ? (relative[mid] as number)
+      : 0.5 * ((relative[mid - 1] as number) + (relative[mid] as number));
   return { factor, medianRelativeScatter };
 }
 
@@ -42,7 +49,12 @@ export interface SurfaceEnergySources {
   note: string;
 }
 
-export function surfaceEnergySources(a: ElementRecord, b: ElementRecord, gammaA: number, gammaB: number): SurfaceEnergySources {
+export function surfaceEnergySources(
+  a: ElementRecord,
+  b: ElementRecord,
+  gammaA: number,
+  gammaB: number,
+): SurfaceEnergySources {
   const primary = { source: PRIMARY_SURFACE_ENERGY_SOURCE, gammaA, gammaB };
   const { factor, medianRelativeScatter } = SURFACE_ENERGY_SOURCE_COMPARISON;
   const a2 = a.surfaceEnergyDftJPerM2;
@@ -50,7 +62,9 @@ export function surfaceEnergySources(a: ElementRecord, b: ElementRecord, gammaA:
   const d1 = gammaA - gammaB;
   const fmt = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(2)}`;
   if (a2 === null || b2 === null) {
-    const lacking = [a2 === null ? a.symbol : null, b2 === null ? b.symbol : null].filter((s) => s !== null).join(' and ');
+    const lacking = [a2 === null ? a.symbol : null, b2 === null ? b.symbol : null]
+      .filter((s) => s !== null)
+      .join(' and ');
     const scatterJPerM2 = Math.SQRT2 * medianRelativeScatter * 0.5 * (gammaA + gammaB);
     return {
       primary,

@@ -86,7 +86,8 @@ export function solveSurfaceEquilibrium(input: EquilibriumInput): EquilibriumRes
     xc = upper ? coreAtHi + rw * yBar : coreAtLo - rw * y;
     const xcBar = upper ? oneMinusCoreAtHi - rw * yBar : oneMinusCoreAtLo + rw * y;
     const h = Math.log(xs) - Math.log(xsBar) - Math.log(xc) + Math.log(xcBar) + (c0 + cS * xs + cC * xc) * inv;
-    if (Number.isNaN(h)) throw new Error(`surface equilibrium: log-odds undefined at x_s=${xs}, x_c=${xc} (xB=${xB}, Ns/N=${f})`);
+    if (Number.isNaN(h))
+      throw new Error(`surface equilibrium: log-odds undefined at x_s=${xs}, x_c=${xc} (xB=${xB}, Ns/N=${f})`);
     if (h === 0) break;
     if (h < 0) tLo = t;
     else tHi = t;

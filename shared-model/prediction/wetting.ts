@@ -65,7 +65,8 @@ export interface WettingEstimate extends WettingPair {
   estimate: string;
 }
 
-export const WETTING_ESTIMATE = 'broken-bond γ_AB = 3ω/σ from the Miedema ω (chemical + misfit, the misfit part capped by the coherent strain of the shell)';
+export const WETTING_ESTIMATE =
+  'broken-bond γ_AB = 3ω/σ from the Miedema ω (chemical + misfit, the misfit part capped by the coherent strain of the shell)';
 
 function biaxialModulusGpa(record: ElementRecord): number {
   const k = recordProperty(record, 'bulkModulusGpa');
@@ -105,7 +106,8 @@ export function shellThicknessNm(diameterNm: number, shellFraction: number): num
 /** S alone (J/m²), without building the record: the ranking's hot path. */
 export function spreadingAt(pair: WettingPair, elementB: string, xB: number, diameterNm: number): number {
   const shellFraction = pair.shell === elementB ? xB : 1 - xB;
-  const coherent = pair.biaxialModulusGpa * 1e9 * pair.misfit * pair.misfit * shellThicknessNm(diameterNm, shellFraction) * 1e-9;
+  const coherent =
+    pair.biaxialModulusGpa * 1e9 * pair.misfit * pair.misfit * shellThicknessNm(diameterNm, shellFraction) * 1e-9;
   return pair.deltaGammaJPerM2 - pair.interfaceChemicalJPerM2 - Math.min(coherent, pair.interfaceMisfitCapJPerM2);
 }
 
@@ -120,7 +122,7 @@ export function wettingAt(pair: WettingPair, elementB: string, xB: number, diame
   const room = pair.deltaGammaJPerM2 - pair.interfaceChemicalJPerM2;
   const geometric = 1 - Math.cbrt(1 - shellFraction);
   const flips = room > 0 && room < pair.interfaceMisfitCapJPerM2 && strainPerThickness > 0 && geometric > 0;
-  const flipDiameterNm = flips ? (2 * room) / (strainPerThickness * geometric) * 1e9 : null;
+  const flipDiameterNm = flips ? ((2 * room) / (strainPerThickness * geometric)) * 1e9 : null;
   return {
     ...pair,
     interfaceMisfitJPerM2,

@@ -27,7 +27,10 @@ export const DEFAULT_TEMPERATURE_C: Record<SynthesisRoute, number> = {
 };
 
 const positive = (what: string, unit: string) =>
-  z.number({ error: `${what} must be a number (${unit})` }).refine(Number.isFinite, { error: `${what} must be a finite number` }).refine((v) => v > 0, { error: `${what} must be greater than 0 ${unit}` });
+  z
+    .number({ error: `${what} must be a number (${unit})` })
+    .refine(Number.isFinite, { error: `${what} must be a finite number` })
+    .refine((v) => v > 0, { error: `${what} must be greater than 0 ${unit}` });
 
 const metalSymbol = z
   .string({ error: 'must be an element symbol' })
@@ -46,7 +49,8 @@ export const sizeSchema = z.discriminatedUnion(
       xB: z
         .number({ error: 'composition must be a number (atomic fraction of B, 0–1)' })
         .refine((v) => Number.isFinite(v) && v > 0 && v < 1, {
-          error: 'composition x_B must lie strictly between 0 and 1 (0 and 100 at.%): a bimetallic batch needs both metals',
+          error:
+            'composition x_B must lie strictly between 0 and 1 (0 and 100 at.%): a bimetallic batch needs both metals',
         }),
     }),
     z
@@ -59,7 +63,12 @@ export const sizeSchema = z.discriminatedUnion(
       })
       .superRefine((value, ctx) => {
         const given = (value.shellThicknessNm !== undefined ? 1 : 0) + (value.shellMonolayers !== undefined ? 1 : 0);
-        if (given !== 1) ctx.addIssue({ code: 'custom', path: ['shellThicknessNm'], message: 'give the shell as either thickness (nm) or monolayers, exactly one of them' });
+        if (given !== 1)
+          ctx.addIssue({
+            code: 'custom',
+            path: ['shellThicknessNm'],
+            message: 'give the shell as either thickness (nm) or monolayers, exactly one of them',
+          });
       }),
     z.object({
       /** One metal only: seeds for a later growth batch of the same pair. */
@@ -82,7 +91,10 @@ export const amountSchema = z.discriminatedUnion(
   'kind',
   [
     z.object({ kind: z.literal('total-metal'), totalMetalMmol: positive('total metal', 'mmol') }),
-    z.object({ kind: z.literal('particle-concentration'), particlesPerMl: positive('particle concentration', 'particles/mL') }),
+    z.object({
+      kind: z.literal('particle-concentration'),
+      particlesPerMl: positive('particle concentration', 'particles/mL'),
+    }),
   ],
   { error: 'amount.kind must be "total-metal" or "particle-concentration"' },
 );
@@ -103,9 +115,18 @@ export const seedsSchema = z
   })
   .superRefine((value, ctx) => {
     if (value.seedBatchId !== undefined) return;
-    if (value.diameterNm === undefined) ctx.addIssue({ code: 'custom', path: ['diameterNm'], message: 'give the seed diameter (nm), or the seed batch it comes from' });
+    if (value.diameterNm === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['diameterNm'],
+        message: 'give the seed diameter (nm), or the seed batch it comes from',
+      });
     if (value.particlesPerMl === undefined && value.metalMm === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['particlesPerMl'], message: 'give the seed concentration, as particles/mL or as metal mM, or the seed batch' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['particlesPerMl'],
+        message: 'give the seed concentration, as particles/mL or as metal mM, or the seed batch',
+      });
     }
   });
 export type SeedsInput = z.infer<typeof seedsSchema>;
@@ -135,7 +156,12 @@ export const cappingChoiceSchema = z
   })
   .superRefine((value, ctx) => {
     const given = (value.molPerMolMetal !== undefined ? 1 : 0) + (value.concentrationMm !== undefined ? 1 : 0);
-    if (given !== 1) ctx.addIssue({ code: 'custom', path: ['molPerMolMetal'], message: 'give the capping amount as mol per mol metal or as final mM, exactly one of them' });
+    if (given !== 1)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['molPerMolMetal'],
+        message: 'give the capping amount as mol per mol metal or as final mM, exactly one of them',
+      });
   });
 
 export const solventChoiceSchema = z.object({
@@ -170,13 +196,20 @@ export const batchDesignInputSchema = z.object({
   amount: amountSchema.optional(),
   batchVolumeMl: positive('batch volume', 'mL'),
   seeds: seedsSchema.optional(),
-  precursors: z.array(precursorChoiceSchema).min(1, 'choose a precursor for each metal to be reduced').max(2, 'at most two precursors'),
+  precursors: z
+    .array(precursorChoiceSchema)
+    .min(1, 'choose a precursor for each metal to be reduced')
+    .max(2, 'at most two precursors'),
   reducer: reducerChoiceSchema.optional(),
   capping: cappingChoiceSchema.optional(),
   solvent: solventChoiceSchema.optional(),
   additives: z.array(additiveChoiceSchema).default([]),
   /** Highest temperature of the procedure (°C); defaults by route. */
-  temperatureC: z.number({ error: 'must be a number (°C)' }).min(-80, 'must be ≥ −80 °C').max(400, 'must be ≤ 400 °C').optional(),
+  temperatureC: z
+    .number({ error: 'must be a number (°C)' })
+    .min(-80, 'must be ≥ −80 °C')
+    .max(400, 'must be ≤ 400 °C')
+    .optional(),
   /** Lattice constants (nm) by element symbol; the service fills them from the element table. */
   latticeNm: z.record(z.string(), positive('lattice constant', 'nm')).default({}),
   stocks: z.array(stockRecordSchema).default([]),

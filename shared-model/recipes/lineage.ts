@@ -27,7 +27,10 @@ export interface ResolvedSeeds {
 export function seedBatchMetal(record: SeedBatchRecord): string {
   const design = record.design;
   if (design.architecture !== 'single-metal' || !design.coreElement) {
-    throw invalid('seeds.seedBatchId', `batch #${record.id} (${record.name}) made ${design.architecture} particles; seeds for shell growth must come from a single-metal batch`);
+    throw invalid(
+      'seeds.seedBatchId',
+      `batch #${record.id} (${record.name}) made ${design.architecture} particles; seeds for shell growth must come from a single-metal batch`,
+    );
   }
   return design.coreElement;
 }
@@ -38,7 +41,8 @@ export function seedBatchMetal(record: SeedBatchRecord): string {
  */
 export function seedsFromBatch(record: SeedBatchRecord, metal: string, volumeMl: number): ResolvedSeeds {
   if (!isMetalSymbol(metal)) throw invalid('seeds.metal', `"${metal}" is not one of Pairwright's metals`);
-  if (!Number.isFinite(volumeMl) || volumeMl <= 0) throw invalid('seeds.volumeMl', `seed volume must be greater than 0 mL, got ${volumeMl}`);
+  if (!Number.isFinite(volumeMl) || volumeMl <= 0)
+    throw invalid('seeds.volumeMl', `seed volume must be greater than 0 mL, got ${volumeMl}`);
   const measuredDiameter = record.measured?.diameterNm ?? null;
   const measuredConcentration = record.measured?.particlesPerMl ?? null;
   const diameterNm = measuredDiameter ?? record.design.diameterNm;

@@ -34,16 +34,23 @@ export interface ParticleGeometry {
 }
 
 function requirePositive(field: string, value: number, unit: string): void {
-  if (!Number.isFinite(value) || value <= 0) throw invalid(field, `${field} must be greater than 0 ${unit}, got ${value}`);
+  if (!Number.isFinite(value) || value <= 0)
+    throw invalid(field, `${field} must be greater than 0 ${unit}, got ${value}`);
 }
 
 function requireDiameter(field: string, value: number): void {
   requirePositive(field, value, 'nm');
-  if (value > MAX_DIAMETER_NM) throw invalid(field, `${field} ${value} nm is beyond ${MAX_DIAMETER_NM} nm, not a nanoparticle batch`);
+  if (value > MAX_DIAMETER_NM)
+    throw invalid(field, `${field} ${value} nm is beyond ${MAX_DIAMETER_NM} nm, not a nanoparticle batch`);
 }
 
 /** Solid-solution sphere of diameter `diameterNm` with atomic fraction `xB` of B (Vegard lattice constant). */
-export function alloyParticle(diameterNm: number, xB: number, latticeANm: number, latticeBNm: number): ParticleGeometry {
+export function alloyParticle(
+  diameterNm: number,
+  xB: number,
+  latticeANm: number,
+  latticeBNm: number,
+): ParticleGeometry {
   requireDiameter('size.diameterNm', diameterNm);
   if (!Number.isFinite(xB) || xB <= 0 || xB >= 1) {
     const got = `x_B = ${xB.toPrecision(4)} (${(xB * 100).toPrecision(4)} at.%)`;
@@ -94,13 +101,19 @@ export function shellThicknessNm(shell: ShellSpec, shellLatticeNm: number): numb
   const layerNm = monolayerThicknessNm(shellLatticeNm);
   if ('monolayers' in shell) {
     if (!Number.isFinite(shell.monolayers) || shell.monolayers < MIN_SHELL_MONOLAYERS) {
-      throw invalid('size.shellMonolayers', `shell must be at least ${MIN_SHELL_MONOLAYERS} monolayer, got ${shell.monolayers}`);
+      throw invalid(
+        'size.shellMonolayers',
+        `shell must be at least ${MIN_SHELL_MONOLAYERS} monolayer, got ${shell.monolayers}`,
+      );
     }
     return shell.monolayers * layerNm;
   }
   requirePositive('size.shellThicknessNm', shell.thicknessNm, 'nm');
   if (shell.thicknessNm < MIN_SHELL_MONOLAYERS * layerNm) {
-    throw invalid('size.shellThicknessNm', `shell ${shell.thicknessNm} nm is less than ${MIN_SHELL_MONOLAYERS} monolayer (one (111) layer is ${layerNm.toFixed(3)} nm)`);
+    throw invalid(
+      'size.shellThicknessNm',
+      `shell ${shell.thicknessNm} nm is less than ${MIN_SHELL_MONOLAYERS} monolayer (one (111) layer is ${layerNm.toFixed(3)} nm)`,
+    );
   }
   return shell.thicknessNm;
 }
@@ -120,7 +133,10 @@ export function coreShellParticle(
   const thicknessNm = shellThicknessNm(shell, shellLatticeNm);
   const diameterNm = coreDiameterNm + 2 * thicknessNm;
   if (diameterNm > MAX_DIAMETER_NM) {
-    throw invalid('thicknessNm' in shell ? 'size.shellThicknessNm' : 'size.shellMonolayers', `core ${coreDiameterNm} nm plus this shell makes a ${diameterNm.toFixed(0)} nm particle, beyond ${MAX_DIAMETER_NM} nm`);
+    throw invalid(
+      'thicknessNm' in shell ? 'size.shellThicknessNm' : 'size.shellMonolayers',
+      `core ${coreDiameterNm} nm plus this shell makes a ${diameterNm.toFixed(0)} nm particle, beyond ${MAX_DIAMETER_NM} nm`,
+    );
   }
   const coreAtoms = atomsInSphere(coreDiameterNm, coreLatticeNm);
   const shellAtoms = atomsInSphericalShell(coreDiameterNm, thicknessNm, shellLatticeNm);
@@ -149,7 +165,10 @@ export function coreDiameterFromOverall(diameterNm: number, shellNm: number): nu
   requirePositive('size.shellThicknessNm', shellNm, 'nm');
   const core = diameterNm - 2 * shellNm;
   if (core <= 0) {
-    throw invalid('size.shellThicknessNm', `a ${shellNm} nm shell on a ${diameterNm} nm particle leaves no core (the shell must be thinner than the radius, ${(diameterNm / 2).toFixed(2)} nm)`);
+    throw invalid(
+      'size.shellThicknessNm',
+      `a ${shellNm} nm shell on a ${diameterNm} nm particle leaves no core (the shell must be thinner than the radius, ${(diameterNm / 2).toFixed(2)} nm)`,
+    );
   }
   return core;
 }
@@ -158,7 +177,7 @@ export function coreDiameterFromOverall(diameterNm: number, shellNm: number): nu
 export function particlesFromMetal(metalMmol: number, atomsPerParticle: number): number {
   requirePositive('amount.totalMetalMmol', metalMmol, 'mmol');
   requirePositive('atomsPerParticle', atomsPerParticle, 'atoms');
-  return (metalMmol / 1000) * AVOGADRO_PER_MOL / atomsPerParticle;
+  return ((metalMmol / 1000) * AVOGADRO_PER_MOL) / atomsPerParticle;
 }
 
 /** Metal (mmol) needed for `particles` particles of `atomsPerParticle` atoms. */
@@ -177,5 +196,5 @@ export function particleNanomolar(particlesPerMl: number): number {
 export function seedsPerMlFromMetal(metalMm: number, atomsPerSeed: number): number {
   requirePositive('seeds.metalMm', metalMm, 'mM');
   requirePositive('atomsPerSeed', atomsPerSeed, 'atoms');
-  return (metalMm / 1e6) * AVOGADRO_PER_MOL / atomsPerSeed;
+  return ((metalMm / 1e6) * AVOGADRO_PER_MOL) / atomsPerSeed;
 }

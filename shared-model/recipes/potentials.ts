@@ -40,7 +40,17 @@ function couple(
   fromMemory: boolean,
   source = fromMemory ? `${CRC} (from memory)` : CRC_READ,
 ): ReductionCouple {
-  return { id, metal, oxidationState, reducedOxidationState, electrons: oxidationState - reducedOxidationState, halfReaction, eStandardV, source, fromMemory };
+  return {
+    id,
+    metal,
+    oxidationState,
+    reducedOxidationState,
+    electrons: oxidationState - reducedOxidationState,
+    halfReaction,
+    eStandardV,
+    source,
+    fromMemory,
+  };
 }
 
 /** Combines consecutive couples into one (Latimer): E = Σ nᵢEᵢ / Σ nᵢ. */
@@ -94,7 +104,8 @@ export const REDUCTION_COUPLES: Readonly<Record<string, ReductionCouple>> = Obje
 
 export function reductionCouple(id: string): ReductionCouple {
   const found = REDUCTION_COUPLES[id];
-  if (!found) throw invalid('coupleId', `unknown reduction couple "${id}"; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}`);
+  if (!found)
+    throw invalid('coupleId', `unknown reduction couple "${id}"; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}`);
   return found;
 }
 
@@ -137,9 +148,16 @@ export interface ReductionOrder {
 
 /** Which precursor reduces first in a co-reduction (the more noble couple). */
 export function reductionOrder(a: ReductionCouple, b: ReductionCouple): ReductionOrder {
-  if (a.metal === b.metal) throw invalid('precursors', `both precursors deposit ${a.metal}; a bimetallic batch needs two metals`);
+  if (a.metal === b.metal)
+    throw invalid('precursors', `both precursors deposit ${a.metal}; a bimetallic batch needs two metals`);
   const [first, second] = a.eStandardV >= b.eStandardV ? [a, b] : [b, a];
-  return { first: first.metal, second: second.metal, gapV: first.eStandardV - second.eStandardV, firstCouple: first, secondCouple: second };
+  return {
+    first: first.metal,
+    second: second.metal,
+    gapV: first.eStandardV - second.eStandardV,
+    firstCouple: first,
+    secondCouple: second,
+  };
 }
 
 export interface GalvanicVerdict {
@@ -166,7 +184,8 @@ export const GALVANIC_MARGIN_V = 0.05;
  * (Au(III) on Ag: 3 Ag per Au).
  */
 export function galvanicReplacement(shellCouple: ReductionCouple, seedCouple: ReductionCouple): GalvanicVerdict {
-  if (shellCouple.metal === seedCouple.metal) throw invalid('seeds.metal', `seed and shell are both ${seedCouple.metal}`);
+  if (shellCouple.metal === seedCouple.metal)
+    throw invalid('seeds.metal', `seed and shell are both ${seedCouple.metal}`);
   const drivingForceV = shellCouple.eStandardV - seedCouple.eStandardV;
   const seedAtomsPerShellAtom = shellCouple.electrons / seedCouple.electrons;
   const seedOx = seedCouple.oxidationState;

@@ -62,8 +62,12 @@ export interface ReagentList {
 }
 
 /** Converts an inventory amount to mg (volumes need the density, g/mL). Returns null when it cannot. */
-export function inventoryMassMg(item: Pick<InventoryItem, 'amount' | 'unit'>, densityGPerMl: number | null | undefined): number | null {
-  if (!Number.isFinite(item.amount) || item.amount < 0) throw invalid('amount', `inventory amount must be ≥ 0, got ${item.amount}`);
+export function inventoryMassMg(
+  item: Pick<InventoryItem, 'amount' | 'unit'>,
+  densityGPerMl: number | null | undefined,
+): number | null {
+  if (!Number.isFinite(item.amount) || item.amount < 0)
+    throw invalid('amount', `inventory amount must be ≥ 0, got ${item.amount}`);
   switch (item.unit) {
     case 'mg':
       return item.amount;
@@ -82,7 +86,11 @@ export function inventoryMassMg(item: Pick<InventoryItem, 'amount' | 'unit'>, de
  * Totals per reagent across `batches` (the seed dispersions, which are products of other batches, and
  * make-up water, which nobody stocks, are left out), compared with `inventory`.
  */
-export function buildReagentList(batches: readonly BatchReagents[], inventory: readonly InventoryItem[], catalog: readonly Reagent[]): ReagentList {
+export function buildReagentList(
+  batches: readonly BatchReagents[],
+  inventory: readonly InventoryItem[],
+  catalog: readonly Reagent[],
+): ReagentList {
   const byKey = new Map(catalog.map((r) => [r.key, r]));
   const lines = new Map<string, ReagentListLine>();
   for (const batch of batches) {
@@ -111,10 +119,13 @@ export function buildReagentList(batches: readonly BatchReagents[], inventory: r
           signalWord: reagent?.signalWord ?? null,
         } satisfies ReagentListLine);
       if (!line.roles.includes(use.role)) line.roles.push(use.role);
-      line.totalAmountMmol = line.totalAmountMmol === null || use.amountMmol === null ? null : line.totalAmountMmol + use.amountMmol;
+      line.totalAmountMmol =
+        line.totalAmountMmol === null || use.amountMmol === null ? null : line.totalAmountMmol + use.amountMmol;
       line.totalMassMg = (line.totalMassMg ?? 0) + use.massMg;
-      if (line.totalVolumeMl !== null && reagent?.densityGPerMl) line.totalVolumeMl += use.massMg / 1000 / reagent.densityGPerMl;
-      if (use.stockMm !== null && use.volumeMl !== null) line.totalStockVolumeMl = (line.totalStockVolumeMl ?? 0) + use.volumeMl;
+      if (line.totalVolumeMl !== null && reagent?.densityGPerMl)
+        line.totalVolumeMl += use.massMg / 1000 / reagent.densityGPerMl;
+      if (use.stockMm !== null && use.volumeMl !== null)
+        line.totalStockVolumeMl = (line.totalStockVolumeMl ?? 0) + use.volumeMl;
       if (!line.batchIds.includes(batch.batchId)) line.batchIds.push(batch.batchId);
       lines.set(use.key, line);
     }
@@ -173,7 +184,7 @@ function batchProfiles(batch: BatchReagents): [string, number | null][] {
   const amounts = new Map<string, number | null>();
   for (const use of batch.reagents) {
     if (use.role === 'seeds' || use.massMg === null) continue;
-    const sum = amounts.has(use.key) ? amounts.get(use.key) ?? null : 0;
+    const sum = amounts.has(use.key) ? (amounts.get(use.key) ?? null) : 0;
     amounts.set(use.key, sum === null || use.amountMmol === null ? null : sum + use.amountMmol);
   }
   return [...amounts];
@@ -204,7 +215,23 @@ export function reagentListCsv(list: ReagentList): string {
     signal_word: line.signalWord ?? '',
   }));
   return Papa.unparse(rows, {
-    columns: ['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'total_stock_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word'],
+    columns: [
+      'reagent',
+      'formula',
+      'roles',
+      'total_mmol',
+      'total_mass_mg',
+      'total_volume_ml',
+      'total_stock_ml',
+      'batches',
+      'on_hand',
+      'location',
+      'lot',
+      'shortfall_mg',
+      'status',
+      'h_codes',
+      'signal_word',
+    ],
     newline: '\n',
   });
 }

@@ -121,7 +121,8 @@ export const REAGENT_SEED: readonly ReagentInput[] = [
     tags: [],
     wasteStream: 'precious-metal-recovery',
     stockFreshnessHours: 720,
-    notes: 'Often sold as the trihydrate (Na2PdCl4·3H2O, 348.25 g/mol): add it as its own entry if that is what you hold.',
+    notes:
+      'Often sold as the trihydrate (Na2PdCl4·3H2O, 348.25 g/mol): add it as its own entry if that is what you hold.',
     source: SDS,
   },
   {
@@ -300,7 +301,8 @@ export const REAGENT_SEED: readonly ReagentInput[] = [
     signalWord: 'Danger',
     tags: ['acid'],
     wasteStream: 'precious-metal-recovery',
-    notes: 'Water content varies (x ≈ 3): enter the Rh content printed on your bottle (wt %) to compute masses from it.',
+    notes:
+      'Water content varies (x ≈ 3): enter the Rh content printed on your bottle (wt %) to compute masses from it.',
     source: SDS,
   },
   {
@@ -350,7 +352,8 @@ export const REAGENT_SEED: readonly ReagentInput[] = [
     tags: ['borohydride'],
     wasteStream: 'reactive-quench',
     stockFreshnessHours: 0.5,
-    notes: 'EU CLP: H360F (may damage fertility). Stock made fresh in ice-cold water (or dilute NaOH) minutes before use.',
+    notes:
+      'EU CLP: H360F (may damage fertility). Stock made fresh in ice-cold water (or dilute NaOH) minutes before use.',
     source: SDS,
   },
   {
@@ -383,7 +386,8 @@ export const REAGENT_SEED: readonly ReagentInput[] = [
     tags: ['hydrazine'],
     wasteStream: 'reactive-quench',
     stockFreshnessHours: 24,
-    notes: 'Carcinogen; handle in a fume hood with suitable gloves. Decomposes on Pt, Pd, Ni, Ir, Rh, Ru and Co surfaces.',
+    notes:
+      'Carcinogen; handle in a fume hood with suitable gloves. Decomposes on Pt, Pd, Ni, Ir, Rh, Ru and Co surfaces.',
     source: SDS,
   },
   {

@@ -6,7 +6,13 @@
  */
 import { z } from 'zod';
 import { isMetalSymbol } from '../elements/symbols';
-import { CLASSIFICATION_SOURCE_NOTE, isKnownHCode, minimumSignalWord, stricterSignalWord, type SignalWord } from '../hazards/ghs';
+import {
+  CLASSIFICATION_SOURCE_NOTE,
+  isKnownHCode,
+  minimumSignalWord,
+  stricterSignalWord,
+  type SignalWord,
+} from '../hazards/ghs';
 import { HAZARD_TAGS, type HazardTag } from '../hazards/incompatibilities';
 import { WASTE_STREAMS, type WasteStreamId } from '../hazards/waste';
 import { DomainError, invalid } from '../api/result';
@@ -64,7 +70,8 @@ export interface Reagent extends ReagentInput {
   notes: string;
 }
 
-const finitePositive = (what: string) => z.number({ error: `${what} must be a number` }).positive(`${what} must be greater than 0`);
+const finitePositive = (what: string) =>
+  z.number({ error: `${what} must be a number` }).positive(`${what} must be greater than 0`);
 
 const keySchema = z
   .string({ error: 'must be text' })
@@ -72,27 +79,47 @@ const keySchema = z
   .regex(/^[a-z0-9][a-z0-9-]{0,63}$/, 'must be 1–64 lower-case letters, digits or dashes (e.g. "haucl4-3h2o")');
 
 export const reagentMetalSchema = z.object({
-  symbol: z.string({ error: 'must be an element symbol' }).trim().refine(isMetalSymbol, { error: (issue) => `"${String(issue.input)}" is not one of Pairwright's metals` }),
-  oxidationState: z.number({ error: 'must be a number' }).int('must be a whole number').min(0, 'must be ≥ 0').max(8, 'must be ≤ 8'),
+  symbol: z
+    .string({ error: 'must be an element symbol' })
+    .trim()
+    .refine(isMetalSymbol, { error: (issue) => `"${String(issue.input)}" is not one of Pairwright's metals` }),
+  oxidationState: z
+    .number({ error: 'must be a number' })
+    .int('must be a whole number')
+    .min(0, 'must be ≥ 0')
+    .max(8, 'must be ≤ 8'),
   coupleId: z.string().nullable().default(null),
 });
 
 export const reagentInputSchema = z
   .object({
     key: keySchema,
-    name: z.string({ error: 'must be text' }).trim().min(1, 'must not be empty').max(160, 'must be at most 160 characters'),
+    name: z
+      .string({ error: 'must be text' })
+      .trim()
+      .min(1, 'must not be empty')
+      .max(160, 'must be at most 160 characters'),
     formula: z.string({ error: 'must be a chemical formula' }).trim().min(1, 'must not be empty'),
-    roles: z.array(z.enum(REAGENT_ROLES, { error: `must be one of: ${REAGENT_ROLES.join(', ')}` })).min(1, 'needs at least one role'),
+    roles: z
+      .array(z.enum(REAGENT_ROLES, { error: `must be one of: ${REAGENT_ROLES.join(', ')}` }))
+      .min(1, 'needs at least one role'),
     form: z.enum(REAGENT_FORMS, { error: `must be one of: ${REAGENT_FORMS.join(', ')}` }),
     assayWtPct: finitePositive('assay').max(100, 'assay must be at most 100 %').default(100),
     densityGPerMl: finitePositive('density').max(25, 'density must be below 25 g/mL').nullable().optional(),
     metal: reagentMetalSchema.nullable().optional(),
-    metalContentWtPct: finitePositive('metal content').max(100, 'metal content must be at most 100 %').nullable().optional(),
+    metalContentWtPct: finitePositive('metal content')
+      .max(100, 'metal content must be at most 100 %')
+      .nullable()
+      .optional(),
     reducerHalfReactionId: z.string().nullable().optional(),
     hCodes: z.array(z.string().trim().toUpperCase()).default([]),
     signalWord: z.enum(['Danger', 'Warning']).nullable().default(null),
-    tags: z.array(z.enum(HAZARD_TAGS as [HazardTag, ...HazardTag[]], { error: `must be one of: ${HAZARD_TAGS.join(', ')}` })).default([]),
-    wasteStream: z.enum(Object.keys(WASTE_STREAMS) as [WasteStreamId, ...WasteStreamId[]], { error: `must be one of: ${Object.keys(WASTE_STREAMS).join(', ')}` }),
+    tags: z
+      .array(z.enum(HAZARD_TAGS as [HazardTag, ...HazardTag[]], { error: `must be one of: ${HAZARD_TAGS.join(', ')}` }))
+      .default([]),
+    wasteStream: z.enum(Object.keys(WASTE_STREAMS) as [WasteStreamId, ...WasteStreamId[]], {
+      error: `must be one of: ${Object.keys(WASTE_STREAMS).join(', ')}`,
+    }),
     stockFreshnessHours: finitePositive('freshness limit').nullable().optional(),
     amountUnitNote: z.string().max(200).nullable().optional(),
     notes: z.string().max(2000, 'must be at most 2000 characters').default(''),
@@ -103,7 +130,11 @@ export const reagentInputSchema = z
       try {
         const parsed = parseFormula(value.formula, 'formula');
         if (value.metal && typeof value.metal.symbol === 'string' && !(value.metal.symbol in parsed.atoms)) {
-          ctx.addIssue({ code: 'custom', path: ['metal', 'symbol'], message: `formula ${value.formula} contains no ${value.metal.symbol}` });
+          ctx.addIssue({
+            code: 'custom',
+            path: ['metal', 'symbol'],
+            message: `formula ${value.formula} contains no ${value.metal.symbol}`,
+          });
         }
       } catch (error) {
         if (!(error instanceof DomainError)) throw error;
@@ -112,18 +143,34 @@ export const reagentInputSchema = z
     }
     const roles = value.roles ?? [];
     if (roles.includes('metal-precursor') && !value.metal) {
-      ctx.addIssue({ code: 'custom', path: ['metal'], message: 'a metal precursor needs its metal and oxidation state' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['metal'],
+        message: 'a metal precursor needs its metal and oxidation state',
+      });
     }
     if (value.metal) {
       const { coupleId, oxidationState, symbol } = value.metal;
       if (oxidationState > 0 && coupleId === null) {
-        ctx.addIssue({ code: 'custom', path: ['metal', 'coupleId'], message: `a ${symbol}(${oxidationState}) precursor needs its reduction couple; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['metal', 'coupleId'],
+          message: `a ${symbol}(${oxidationState}) precursor needs its reduction couple; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}`,
+        });
       }
       if (coupleId !== null) {
         const couple = REDUCTION_COUPLES[coupleId];
         if (!couple) {
-          ctx.addIssue({ code: 'custom', path: ['metal', 'coupleId'], message: `unknown reduction couple "${coupleId}"; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}` });
-        } else if (couple.metal !== symbol || couple.oxidationState !== oxidationState || couple.reducedOxidationState !== 0) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['metal', 'coupleId'],
+            message: `unknown reduction couple "${coupleId}"; known: ${Object.keys(REDUCTION_COUPLES).join(', ')}`,
+          });
+        } else if (
+          couple.metal !== symbol ||
+          couple.oxidationState !== oxidationState ||
+          couple.reducedOxidationState !== 0
+        ) {
           ctx.addIssue({
             code: 'custom',
             path: ['metal', 'coupleId'],
@@ -134,21 +181,43 @@ export const reagentInputSchema = z
     }
     if (roles.includes('reducer')) {
       const id = value.reducerHalfReactionId;
-      if (!id) ctx.addIssue({ code: 'custom', path: ['reducerHalfReactionId'], message: `a reducer needs its half-reaction; known: ${Object.keys(REDUCER_HALF_REACTIONS).join(', ')}` });
-      else if (!REDUCER_HALF_REACTIONS[id]) ctx.addIssue({ code: 'custom', path: ['reducerHalfReactionId'], message: `unknown half-reaction "${id}"; known: ${Object.keys(REDUCER_HALF_REACTIONS).join(', ')}` });
+      if (!id)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['reducerHalfReactionId'],
+          message: `a reducer needs its half-reaction; known: ${Object.keys(REDUCER_HALF_REACTIONS).join(', ')}`,
+        });
+      else if (!REDUCER_HALF_REACTIONS[id])
+        ctx.addIssue({
+          code: 'custom',
+          path: ['reducerHalfReactionId'],
+          message: `unknown half-reaction "${id}"; known: ${Object.keys(REDUCER_HALF_REACTIONS).join(', ')}`,
+        });
     }
     if ((value.form === 'liquid' || value.form === 'solution') && !value.densityGPerMl) {
-      ctx.addIssue({ code: 'custom', path: ['densityGPerMl'], message: `a ${value.form} needs its density (g/mL) to turn mass into volume` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['densityGPerMl'],
+        message: `a ${value.form} needs its density (g/mL) to turn mass into volume`,
+      });
     }
     const codes = value.hCodes ?? [];
     const unknown = codes.filter((code) => !isKnownHCode(code));
     if (unknown.length > 0) {
-      ctx.addIssue({ code: 'custom', path: ['hCodes'], message: `unknown or unsupported H-code(s) ${unknown.join(', ')} (UN GHS codes; EU sub-codes like H350i go in notes)` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['hCodes'],
+        message: `unknown or unsupported H-code(s) ${unknown.join(', ')} (UN GHS codes; EU sub-codes like H350i go in notes)`,
+      });
     } else {
       const minimum = minimumSignalWord(codes);
       const stated = value.signalWord ?? null;
       if (minimum !== null && stricterSignalWord(stated, minimum) !== stated) {
-        ctx.addIssue({ code: 'custom', path: ['signalWord'], message: `${codes.join(', ')} call for the signal word "${minimum}", got ${stated === null ? 'none' : `"${stated}"`}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['signalWord'],
+          message: `${codes.join(', ')} call for the signal word "${minimum}", got ${stated === null ? 'none' : `"${stated}"`}`,
+        });
       }
       if (codes.length === 0 && stated !== null) {
         ctx.addIssue({ code: 'custom', path: ['signalWord'], message: 'a signal word needs at least one H-code' });

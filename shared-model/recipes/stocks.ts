@@ -31,7 +31,8 @@ export function stockAges(stocks: readonly StockAgeInput[], now: string): StockA
   const nowMs = parseInstant('now', now);
   return stocks.map((stock, index) => {
     const preparedMs = parseInstant(`stocks.${index}.preparedAt`, stock.preparedAt);
-    if (preparedMs > nowMs + 60_000) throw invalid(`stocks.${index}.preparedAt`, `${stock.name} stock is dated ${stock.preparedAt}, in the future`);
+    if (preparedMs > nowMs + 60_000)
+      throw invalid(`stocks.${index}.preparedAt`, `${stock.name} stock is dated ${stock.preparedAt}, in the future`);
     const ageHours = Math.max(0, (nowMs - preparedMs) / 3_600_000);
     return {
       reagentKey: stock.reagentKey,

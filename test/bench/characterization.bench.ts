@@ -24,7 +24,18 @@ function medianMs(fn: () => void, runs: number): number {
 export async function run(): Promise<void> {
   for (const step of [0.4, 0.2, 0.1]) {
     const scan = syntheticScan(
-      { kind: 'A@B', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, step) },
+      {
+        kind: 'A@B',
+        centerNm: 10,
+        radiusNm: 5,
+        coreRadiusNm: 3.5,
+        probeSigmaNm: 0.6,
+        amplitudeA: 10,
+        amplitudeB: 8,
+        backgroundA: 5,
+        backgroundB: 3,
+        positionsNm: positions(0, 20, step),
+      },
       10,
       1,
     );
@@ -33,5 +44,7 @@ export async function run(): Promise<void> {
   }
   const rng = createRandom(1);
   const diameters = Array.from({ length: 10_000 }, () => Math.exp(Math.log(8) + 0.2 * rng.nextNormal()));
-  console.log(`log-normal fit with intervals, 10 000 diameters: ${medianMs(() => fitLogNormal(diameters), 21).toFixed(2)} ms`);
+  console.log(
+    `log-normal fit with intervals, 10 000 diameters: ${medianMs(() => fitLogNormal(diameters), 21).toFixed(2)} ms`,
+  );
 }

@@ -25,11 +25,18 @@ async function loadOnce(): Promise<number> {
 }
 
 export async function run(): Promise<void> {
-  console.log(`load average ${os.loadavg().map((v) => v.toFixed(2)).join(' ')} on ${os.cpus().length} cores`);
+  console.log(
+    `load average ${os
+      .loadavg()
+      .map((v) => v.toFixed(2))
+      .join(' ')} on ${os.cpus().length} cores`,
+  );
   const cold = await loadOnce();
   console.log(`${'demo load, first in the process (cold)'.padEnd(52)} ${cold.toFixed(0)} ms`);
   const warm: number[] = [];
   for (let i = 0; i < 5; i += 1) warm.push(await loadOnce());
   warm.sort((a, b) => a - b);
-  console.log(`${'demo load, warm (median of 5 fresh stores)'.padEnd(52)} ${(warm[2] as number).toFixed(0)} ms (min ${(warm[0] as number).toFixed(0)}, max ${(warm[4] as number).toFixed(0)})`);
+  console.log(
+    `${'demo load, warm (median of 5 fresh stores)'.padEnd(52)} ${(warm[2] as number).toFixed(0)} ms (min ${(warm[0] as number).toFixed(0)}, max ${(warm[4] as number).toFixed(0)})`,
+  );
 }

@@ -44,8 +44,21 @@ function runInWorker(spec: SimulationSpec): Promise<{ result: SimulationResult; 
 }
 
 export async function run(): Promise<void> {
-  console.log(`machine: ${cpus().length} cores, load average ${loadavg().map((l) => l.toFixed(2)).join(' ')} (wall-clock rates drop when other work shares the cores)`);
-  const production = await runInWorker({ elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 7, temperatureK: 600, sweeps: 2000, seed: 7 });
+  console.log(
+    `machine: ${cpus().length} cores, load average ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' ')} (wall-clock rates drop when other work shares the cores)`,
+  );
+  const production = await runInWorker({
+    elementA: 'Ag',
+    elementB: 'Pd',
+    xB: 0.5,
+    shape: 'cuboctahedron',
+    shells: 7,
+    temperatureK: 600,
+    sweeps: 2000,
+    seed: 7,
+  });
   console.log(
     `production path (worker thread, 2000 sweeps from a random start): ${production.result.attemptsPerSecond.toFixed(0)} attempts/s wall in the loop; ${(production.result.attempts / production.cpuSeconds).toFixed(0)} attempts per CPU-second incl. setup and analysis; surface x(Pd) ${production.result.surfaceXB.toFixed(3)}, ${production.result.architecture}`,
   );
@@ -67,9 +80,20 @@ export async function run(): Promise<void> {
     species[i] = species[j]!;
     species[j] = t;
   }
-  const engine = new SwapEngine(list, geometry.positions, binaryTables(elementA, elementB, list), species, surfaceSites(list, nn), rng);
+  const engine = new SwapEngine(
+    list,
+    geometry.positions,
+    binaryTables(elementA, elementB, list),
+    species,
+    surfaceSites(list, nn),
+    rng,
+  );
   const heapAfter = process.memoryUsage().heapUsed;
-  const listBytes = list.offsets.byteLength + list.neighbours.byteLength + list.distanceClass.byteLength + list.classDistancesAngstrom.byteLength;
+  const listBytes =
+    list.offsets.byteLength +
+    list.neighbours.byteLength +
+    list.distanceClass.byteLength +
+    list.classDistancesAngstrom.byteLength;
   // Engine arrays: densities, roots, pending, species, surface, slots, lists, positions (all per site).
   const engineBytes = geometry.atoms * (8 + 8 + 8 + 1 + 1 + 4 + 4 + 24);
 
@@ -88,10 +112,16 @@ export async function run(): Promise<void> {
   const cpuRate = (rounds * perRound) / ((cpu.user + cpu.system) / 1e6);
   speeds.sort((a, b) => a - b);
   const median = speeds[Math.floor(rounds / 2)]!;
-  console.log(`system: ${elementA}-${elementB} cuboctahedron, ${geometry.atoms} atoms, xB ${xB}, ${temperatureK} K, ${(list.neighbours.length / geometry.atoms).toFixed(1)} neighbours/atom`);
-  console.log(`kernel, swap attempts/s (median of ${rounds} × ${perRound / 1e6} M after warm-up): ${median.toFixed(0)} wall [min ${speeds[0]!.toFixed(0)}, max ${speeds[rounds - 1]!.toFixed(0)}], ${cpuRate.toFixed(0)} per CPU-second; target ≥ 1,000,000`);
+  console.log(
+    `system: ${elementA}-${elementB} cuboctahedron, ${geometry.atoms} atoms, xB ${xB}, ${temperatureK} K, ${(list.neighbours.length / geometry.atoms).toFixed(1)} neighbours/atom`,
+  );
+  console.log(
+    `kernel, swap attempts/s (median of ${rounds} × ${perRound / 1e6} M after warm-up): ${median.toFixed(0)} wall [min ${speeds[0]!.toFixed(0)}, max ${speeds[rounds - 1]!.toFixed(0)}], ${cpuRate.toFixed(0)} per CPU-second; target ≥ 1,000,000`,
+  );
   console.log(`acceptance: ${(accepted / (rounds * perRound)).toFixed(3)}`);
-  console.log(`memory: neighbour list ${(listBytes / 1024).toFixed(0)} kB, engine arrays ${(engineBytes / 1024).toFixed(0)} kB, heap growth at setup ${((heapAfter - heapBefore) / 1024).toFixed(0)} kB`);
+  console.log(
+    `memory: neighbour list ${(listBytes / 1024).toFixed(0)} kB, engine arrays ${(engineBytes / 1024).toFixed(0)} kB, heap growth at setup ${((heapAfter - heapBefore) / 1024).toFixed(0)} kB`,
+  );
 
   if (!hasLammps()) {
     console.log('LAMMPS (lmp) not found: no atom/swap comparison');
@@ -100,18 +130,26 @@ export async function run(): Promise<void> {
   const symbols = Array.from(species, (s) => (s ? elementB : elementA));
   const swapsPerStep = 50;
   const steps = 40;
-  const stdout = runLammpsGuptaCluster(symbols, geometry.positions, [elementA, elementB], FIVE_SHELL_CUTOFF_FACTOR * nn, [
-    'timestep 0.001',
-    `fix mc all atom/swap 1 ${swapsPerStep} 4711 ${temperatureK} ke no types 1 2`,
-    'thermo 10',
-    `run ${steps}`,
-  ]);
+  const stdout = runLammpsGuptaCluster(
+    symbols,
+    geometry.positions,
+    [elementA, elementB],
+    FIVE_SHELL_CUTOFF_FACTOR * nn,
+    [
+      'timestep 0.001',
+      `fix mc all atom/swap 1 ${swapsPerStep} 4711 ${temperatureK} ke no types 1 2`,
+      'thermo 10',
+      `run ${steps}`,
+    ],
+  );
   const loop = /Loop time of ([0-9.eE+-]+) on/.exec(stdout);
   if (!loop) {
     console.log(`LAMMPS printed no loop time:\n${stdout.slice(-1500)}`);
     return;
   }
   const lammpsSpeed = (swapsPerStep * steps) / Number(loop[1]);
-  console.log(`LAMMPS fix atom/swap (same system and potential, ${swapsPerStep * steps} attempts): ${lammpsSpeed.toFixed(0)} attempts/s`);
+  console.log(
+    `LAMMPS fix atom/swap (same system and potential, ${swapsPerStep * steps} attempts): ${lammpsSpeed.toFixed(0)} attempts/s`,
+  );
   console.log(`speed ratio Pairwright / LAMMPS atom/swap: ${(median / lammpsSpeed).toFixed(0)}×  (goal ≥ 1000×)`);
 }

@@ -15,7 +15,11 @@ function sweepAll(): number {
   let count = 0;
   for (const xB of COMPOSITIONS) {
     for (const diameterNm of DIAMETERS_NM) {
-      const rows = rankContexts(contexts, { kind: 'alloy' }, { xB, diameterNm, shape: 'cuboctahedron', temperatureK: 600 });
+      const rows = rankContexts(
+        contexts,
+        { kind: 'alloy' },
+        { xB, diameterNm, shape: 'cuboctahedron', temperatureK: 600 },
+      );
       count += rows.length;
     }
   }
@@ -42,11 +46,19 @@ export async function run(): Promise<void> {
     cpuTimes.push((cpu.user + cpu.system) / 1000);
   }
   const med = median(times);
-  console.log(`rank 30 metals × ${COMPOSITIONS.length} compositions × ${DIAMETERS_NM.length} sizes = ${predictions} predictions`);
-  console.log(`  median ${med.toFixed(1)} ms wall over ${times.length} runs (min ${Math.min(...times).toFixed(1)}, max ${Math.max(...times).toFixed(1)}); ${((med * 1000) / predictions).toFixed(2)} µs per prediction; target < 50 ms`);
+  console.log(
+    `rank 30 metals × ${COMPOSITIONS.length} compositions × ${DIAMETERS_NM.length} sizes = ${predictions} predictions`,
+  );
+  console.log(
+    `  median ${med.toFixed(1)} ms wall over ${times.length} runs (min ${Math.min(...times).toFixed(1)}, max ${Math.max(...times).toFixed(1)}); ${((med * 1000) / predictions).toFixed(2)} µs per prediction; target < 50 ms`,
+  );
   // CPU time of this process (user + system, includes the garbage collector's threads): less sensitive
   // than wall time when other processes share the cores
-  console.log(`  median CPU time ${median(cpuTimes).toFixed(1)} ms (min ${Math.min(...cpuTimes).toFixed(1)}); load average ${loadavg().map((x) => x.toFixed(1)).join(' ')} on ${cpus().length} cores`);
+  console.log(
+    `  median CPU time ${median(cpuTimes).toFixed(1)} ms (min ${Math.min(...cpuTimes).toFixed(1)}); load average ${loadavg()
+      .map((x) => x.toFixed(1))
+      .join(' ')} on ${cpus().length} cores`,
+  );
   const t0 = performance.now();
   rankPairs('all', 'alloy', { xB: 0.5, diameterNm: 3, shape: 'cuboctahedron', temperatureK: 600 });
   console.log(`  one rankPairs('all') call incl. pair set-up: ${(performance.now() - t0).toFixed(2)} ms`);

@@ -38,8 +38,18 @@ export async function run(): Promise<void> {
     designBatch(batchDesignInputSchema.parse(input), { catalog, thermodynamicSurfaceElement: 'Pt' });
   });
   const design = designBatch(input, { catalog });
-  const batches = Array.from({ length: 200 }, (_, i) => ({ batchId: i + 1, batchName: `b${i + 1}`, reagents: design.reagents }));
+  const batches = Array.from({ length: 200 }, (_, i) => ({
+    batchId: i + 1,
+    batchName: `b${i + 1}`,
+    reagents: design.reagents,
+  }));
   time('reagent list over 200 batches + CSV', 20, 7, () => {
-    reagentListCsv(buildReagentList(batches, [{ reagentKey: 'nabh4', amount: 5, unit: 'g', location: 'cabinet', lot: 'L1' }], catalog));
+    reagentListCsv(
+      buildReagentList(
+        batches,
+        [{ reagentKey: 'nabh4', amount: 5, unit: 'g', location: 'cabinet', lot: 'L1' }],
+        catalog,
+      ),
+    );
   });
 }

@@ -26,7 +26,14 @@ function engineSpeed(shells: number): { atoms: number; wall: number; cpu: number
   const list = buildNeighbourList(geometry.positions, FIVE_SHELL_CUTOFF_FACTOR * nn);
   const rng = createRandom(7);
   const species = Uint8Array.from({ length: geometry.atoms }, () => (rng.next() < 0.5 ? 1 : 0));
-  const engine = new RelaxedEngine(new OffLatticeGupta(['Au', 'Ni']), geometry.positions, species, surfaceSites(list, nn), rng, 0.1);
+  const engine = new RelaxedEngine(
+    new OffLatticeGupta(['Au', 'Ni']),
+    geometry.positions,
+    species,
+    surfaceSites(list, nn),
+    rng,
+    0.1,
+  );
   const warm = Math.max(3, Math.round(30_000 / geometry.atoms));
   for (let s = 0; s < warm; s++) engine.runSweep(600);
   const sweeps = Math.max(2, Math.round(600_000 / geometry.atoms));
@@ -37,7 +44,12 @@ function engineSpeed(shells: number): { atoms: number; wall: number; cpu: number
   const seconds = (performance.now() - t0) / 1000;
   const cpu = process.cpuUsage(cpuBefore);
   const attempts = engine.stats.swapAttempts + engine.stats.displacementAttempts - before;
-  return { atoms: geometry.atoms, wall: attempts / seconds, cpu: attempts / ((cpu.user + cpu.system) / 1e6), step: engine.stepAngstrom };
+  return {
+    atoms: geometry.atoms,
+    wall: attempts / seconds,
+    cpu: attempts / ((cpu.user + cpu.system) / 1e6),
+    step: engine.stepAngstrom,
+  };
 }
 
 async function screenWallTime(): Promise<void> {
@@ -54,7 +66,12 @@ async function screenWallTime(): Promise<void> {
     // Three pairs bring six metals (Ag Pd Au Pt Cu Ni); the screen takes every pair of them: 15.
     for (const pair of ['Ag-Pd', 'Au-Pt', 'Cu-Ni']) await call('pairs.add', { campaignId: campaign.id, pair });
     const t0 = performance.now();
-    const started = await call<ScreenStarted>('screen.start', { campaignId: campaign.id, xB: [0.25, 0.5, 0.75], diameterNm: [2], temperatureK: 600 });
+    const started = await call<ScreenStarted>('screen.start', {
+      campaignId: campaign.id,
+      xB: [0.25, 0.5, 0.75],
+      diameterNm: [2],
+      temperatureK: 600,
+    });
     let status: ScreenStatus;
     for (;;) {
       status = await call<ScreenStatus>('screen.status', { runIds: started.runs.map((r) => r.runId) });
@@ -75,14 +92,30 @@ async function screenWallTime(): Promise<void> {
 }
 
 export async function run(): Promise<void> {
-  console.log(`machine: ${cpus().length} cores, load average ${loadavg().map((l) => l.toFixed(2)).join(' ')}`);
+  console.log(
+    `machine: ${cpus().length} cores, load average ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' ')}`,
+  );
   for (const shells of [6, 12]) {
     const speed = engineSpeed(shells);
-    console.log(`relaxed Au–Ni, ${speed.atoms} atoms, 600 K: ${speed.wall.toFixed(0)} attempts/s wall, ${speed.cpu.toFixed(0)} per CPU-second (step ${speed.step.toFixed(3)} Å)`);
+    console.log(
+      `relaxed Au–Ni, ${speed.atoms} atoms, 600 K: ${speed.wall.toFixed(0)} attempts/s wall, ${speed.cpu.toFixed(0)} per CPU-second (step ${speed.step.toFixed(3)} Å)`,
+    );
   }
   const t0 = performance.now();
   const answer = runSimulation(
-    { elementA: 'Au', elementB: 'Ni', xB: 0.5, shape: 'cuboctahedron', diameterNm: 3, temperatureK: 600, sweeps: 3000, seed: 1, stopping: DEFAULT_STOPPING },
+    {
+      elementA: 'Au',
+      elementB: 'Ni',
+      xB: 0.5,
+      shape: 'cuboctahedron',
+      diameterNm: 3,
+      temperatureK: 600,
+      sweeps: 3000,
+      seed: 1,
+      stopping: DEFAULT_STOPPING,
+    },
     createRandom(1),
   );
   console.log(

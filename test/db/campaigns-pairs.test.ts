@@ -15,7 +15,11 @@ describe('campaign repository', () => {
   it('creates, lists, renames and archives', () => {
     const first = createCampaign(store.db, { name: 'Fuel-cell cathode screen', description: '' });
     createCampaign(store.db, { name: 'Plasmonic shells', description: 'Au and Ag' });
-    expect(listCampaigns(store.db, false).map((c) => c.name).sort()).toEqual(['Fuel-cell cathode screen', 'Plasmonic shells']);
+    expect(
+      listCampaigns(store.db, false)
+        .map((c) => c.name)
+        .sort(),
+    ).toEqual(['Fuel-cell cathode screen', 'Plasmonic shells']);
     expect(renameCampaign(store.db, first.id, 'ORR cathodes').name).toBe('ORR cathodes');
     setCampaignArchived(store.db, first.id, true);
     expect(listCampaigns(store.db, false).map((c) => c.name)).toEqual(['Plasmonic shells']);
@@ -24,7 +28,9 @@ describe('campaign repository', () => {
 
   it('refuses a duplicate name (case-insensitive) with the field named', () => {
     createCampaign(store.db, { name: 'Screen', description: '' });
-    expect(() => createCampaign(store.db, { name: 'screen', description: '' })).toThrow(expect.objectContaining({ code: 'conflict', field: 'name' }));
+    expect(() => createCampaign(store.db, { name: 'screen', description: '' })).toThrow(
+      expect.objectContaining({ code: 'conflict', field: 'name' }),
+    );
   });
 });
 
@@ -32,14 +38,22 @@ describe('pair repository', () => {
   it('adds pairs, counts them, and treats A-B and B-A as the same pair', () => {
     const campaign = createCampaign(store.db, { name: 'C', description: '' });
     addPair(store.db, { campaignId: campaign.id, elementA: 'Pt', elementB: 'Ni', target: 'Ni@Pt', notes: '' });
-    expect(() => addPair(store.db, { campaignId: campaign.id, elementA: 'Ni', elementB: 'Pt', target: 'alloy', notes: '' })).toThrow(/already in/);
+    expect(() =>
+      addPair(store.db, { campaignId: campaign.id, elementA: 'Ni', elementB: 'Pt', target: 'alloy', notes: '' }),
+    ).toThrow(/already in/);
     expect(listPairs(store.db, campaign.id)).toHaveLength(1);
     expect(listCampaigns(store.db, false)[0]?.pairCount).toBe(1);
   });
 
   it('updates status and target, removes, and refuses unknown ids', () => {
     const campaign = createCampaign(store.db, { name: 'C', description: '' });
-    const pair = addPair(store.db, { campaignId: campaign.id, elementA: 'Au', elementB: 'Pd', target: 'alloy', notes: '' });
+    const pair = addPair(store.db, {
+      campaignId: campaign.id,
+      elementA: 'Au',
+      elementB: 'Pd',
+      target: 'alloy',
+      notes: '',
+    });
     const updated = updatePair(store.db, pair.id, { status: 'planned', target: 'Pd@Au' });
     expect([updated.status, updated.target]).toEqual(['planned', 'Pd@Au']);
     removePair(store.db, pair.id);
@@ -50,7 +64,9 @@ describe('pair repository', () => {
   it('refuses pairs in an archived campaign', () => {
     const campaign = createCampaign(store.db, { name: 'Old', description: '' });
     setCampaignArchived(store.db, campaign.id, true);
-    expect(() => addPair(store.db, { campaignId: campaign.id, elementA: 'Au', elementB: 'Ag', target: 'alloy', notes: '' })).toThrow(/archived/);
+    expect(() =>
+      addPair(store.db, { campaignId: campaign.id, elementA: 'Au', elementB: 'Ag', target: 'alloy', notes: '' }),
+    ).toThrow(/archived/);
   });
 
   it('removing a campaign row cascades to its pairs (foreign keys are on)', () => {

@@ -39,7 +39,9 @@ describe('migration 0009: inventory may go below zero; batch history', () => {
       )
       .run();
     expect(() =>
-      old.db.prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', -1, 'g', 'x')").run(),
+      old.db
+        .prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', -1, 'g', 'x')")
+        .run(),
     ).toThrow(/CHECK/);
     old.close();
 
@@ -47,11 +49,22 @@ describe('migration 0009: inventory may go below zero; batch history', () => {
     try {
       expect(store.db.pragma('user_version', { simple: true })).toBeGreaterThanOrEqual(9);
       expect(listInventory(store.db)).toEqual([
-        expect.objectContaining({ id: 7, reagentKey: 'nabh4', amount: 25, unit: 'g', location: 'flammables', lot: 'B1' }),
+        expect.objectContaining({
+          id: 7,
+          reagentKey: 'nabh4',
+          amount: 25,
+          unit: 'g',
+          location: 'flammables',
+          lot: 'B1',
+        }),
       ]);
-      store.db.prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', -1, 'g', 'x')").run();
+      store.db
+        .prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', -1, 'g', 'x')")
+        .run();
       expect(() =>
-        store.db.prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', 1, 'lb', 'x')").run(),
+        store.db
+          .prepare("INSERT INTO inventory (reagent_key, amount, unit, updated_at) VALUES ('nabh4', 1, 'lb', 'x')")
+          .run(),
       ).toThrow(/CHECK/);
       expect(store.db.prepare('SELECT count(*) AS n FROM batch_history').get()).toEqual({ n: 0 });
     } finally {

@@ -43,7 +43,10 @@ describe('migrations', () => {
     const old = openStore({ dataDir, migrationsDir: dir });
     old.db.prepare("INSERT INTO campaigns (name, created_at, updated_at) VALUES ('Kept', 'x', 'x')").run();
     old.close();
-    writeFileSync(join(dir, '0002_campaign_colour.sql'), "ALTER TABLE campaigns ADD COLUMN colour TEXT NOT NULL DEFAULT 'teal';\n");
+    writeFileSync(
+      join(dir, '0002_campaign_colour.sql'),
+      "ALTER TABLE campaigns ADD COLUMN colour TEXT NOT NULL DEFAULT 'teal';\n",
+    );
     const store = openStore({ dataDir, migrationsDir: dir });
     expect(store.migration.applied).toEqual(['0002_campaign_colour']);
     expect(store.db.prepare('SELECT name, colour FROM campaigns').all()).toEqual([{ name: 'Kept', colour: 'teal' }]);
@@ -62,7 +65,10 @@ describe('migrations', () => {
     const dir = tempDir('pairwright-migrations-');
     cpSync(join(defaultMigrationsDir(), '0001_foundation.sql'), join(dir, '0001_foundation.sql'));
     openStore({ dataDir, migrationsDir: dir }).close();
-    writeFileSync(join(dir, '0002_broken.sql'), 'CREATE TABLE half_done (id INTEGER);\nINSERT INTO no_such_table VALUES (1);\n');
+    writeFileSync(
+      join(dir, '0002_broken.sql'),
+      'CREATE TABLE half_done (id INTEGER);\nINSERT INTO no_such_table VALUES (1);\n',
+    );
     expect(() => openStore({ dataDir, migrationsDir: dir })).toThrow(/0002_broken failed and was rolled back/);
     const db = new Database(join(dataDir, STORE_FILE_NAME));
     expect(db.pragma('user_version', { simple: true })).toBe(1);

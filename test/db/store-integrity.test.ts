@@ -4,7 +4,19 @@
  */
 import Database from 'better-sqlite3';
 import { createHash } from 'node:crypto';
-import { closeSync, cpSync, existsSync, mkdtempSync, openSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  cpSync,
+  existsSync,
+  mkdtempSync,
+  openSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+  writeSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -22,7 +34,9 @@ const digest = () => createHash('sha256').update(readFileSync(storePath())).dige
 function storeWithData(migrationsDir?: string): void {
   dataDir = mkdtempSync(join(tmpdir(), 'pairwright-integrity-'));
   const store = openStore(migrationsDir ? { dataDir, migrationsDir } : { dataDir });
-  const insert = store.db.prepare("INSERT INTO campaigns (name, description, created_at, updated_at) VALUES (?, ?, 'x', 'x')");
+  const insert = store.db.prepare(
+    "INSERT INTO campaigns (name, description, created_at, updated_at) VALUES (?, ?, 'x', 'x')",
+  );
   for (let i = 0; i < 400; i++) insert.run(`Campaign ${i}`, 'd'.repeat(200));
   store.db.pragma('wal_checkpoint(TRUNCATE)');
   store.close();

@@ -42,10 +42,14 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     // 4 nm Pt75Ni25: 2396.8 atoms (hand-worked in test/shared-model/recipes/particle.test.ts)
     await expect.poll(() => page.getByTestId('atoms-per-particle').textContent()).toContain('2,397');
     expect(await page.locator('[data-check="reduction-order"]').count()).toBeGreaterThan(0);
-    expect(await page.locator('tr[data-hcode="H260"]').textContent()).toContain('In contact with water releases flammable gases which may ignite spontaneously');
+    expect(await page.locator('tr[data-hcode="H260"]').textContent()).toContain(
+      'In contact with water releases flammable gases which may ignite spontaneously',
+    );
     expect(await page.getByTestId('signal-word').first().textContent()).toBe('Danger');
     expect(await page.getByTestId('standing-caution').first().textContent()).toContain('never replace');
-    expect(await page.locator('[data-warning="borohydride-hydrolysis"]').textContent()).toMatch(/mL H2 at 25 °C, 1 atm/);
+    expect(await page.locator('[data-warning="borohydride-hydrolysis"]').textContent()).toMatch(
+      /mL H2 at 25 °C, 1 atm/,
+    );
     await page.screenshot({ path: screenshotPath('batch-design-ptni'), fullPage: true });
   });
 
@@ -64,7 +68,9 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await form(page).locator('select[name="precursorB"]').selectOption('');
     await form(page).locator('select[name="reducer"]').selectOption('nabh4');
     await form(page).getByRole('button', { name: 'Compute' }).click();
-    await expect.poll(() => page.locator('[data-error-for="precursors"]').textContent()).toMatch(/choose a Ni precursor/);
+    await expect
+      .poll(() => page.locator('[data-error-for="precursors"]').textContent())
+      .toMatch(/choose a Ni precursor/);
     await page.screenshot({ path: screenshotPath('batch-design-errors'), fullPage: true });
     expect(host.count('batches')).toBe(0);
   });
@@ -82,7 +88,9 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await expect.poll(() => page.getByTestId('opened-batch').textContent()).toContain('PtNi-01');
     await page.getByLabel('Lot of Sodium borohydride').fill('BCBX9');
     const fiveHoursAgo = new Date(Date.now() - 5 * 3600_000);
-    const local = new Date(fiveHoursAgo.getTime() - fiveHoursAgo.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
+    const local = new Date(fiveHoursAgo.getTime() - fiveHoursAgo.getTimezoneOffset() * 60_000)
+      .toISOString()
+      .slice(0, 16);
     await page.getByLabel('Stock of Sodium borohydride prepared').fill(local);
     await page.getByRole('button', { name: 'Save lots and dates' }).click();
     // NaBH4 stock limit 0.5 h (catalog, common practice: made fresh)
@@ -113,7 +121,10 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     await page.screenshot({ path: screenshotPath('batch-design-galvanic'), fullPage: true });
   });
 
-  it('totals the reagents of chosen batches against the inventory, with shortfalls, CSV and print layout', async ({ page, host }) => {
+  it('totals the reagents of chosen batches against the inventory, with shortfalls, CSV and print layout', async ({
+    page,
+    host,
+  }) => {
     await openDesign(page, host);
     await saveTwoPtNiBatches(page);
     await page.locator('[data-view="reagents"]').click();
@@ -137,7 +148,10 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     expect(await page.locator('[aria-label^="Hazard summary across the list"] tr[data-hcode="H334"]').count()).toBe(1);
     await page.screenshot({ path: screenshotPath('reagents-list'), fullPage: true });
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export CSV' }).click(),
+    ]);
     const csv = readFileSync((await download.path()) as string, 'utf8');
     expect(csv.split('\n')[0]).toContain('reagent,formula,roles,total_mmol,total_mass_mg');
     expect(csv).toMatch(/Chloroplatinic acid hexahydrate,H2PtCl6·6H2O/);

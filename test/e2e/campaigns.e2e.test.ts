@@ -108,7 +108,9 @@ describe.skipIf(!available)('campaigns in the browser host', () => {
 
     // Results opens on the newest demo batch: the characterized Pd@Au growth batch with its invented outcomes.
     await page.locator('[data-view="results"]').click();
-    await expect.poll(() => page.getByTestId('batch-heading').textContent()).toMatch(/^Demo Pd@Au.*Pd–Au, target Pd@Au/);
+    await expect
+      .poll(() => page.getByTestId('batch-heading').textContent())
+      .toMatch(/^Demo Pd@Au.*Pd–Au, target Pd@Au/);
     await expect.poll(() => page.locator('[data-stat="n"]').first().textContent()).toBe('180');
     await expect.poll(() => page.getByTestId('chosen-model').textContent()).toMatch(/Pd@Au/);
     await expect.poll(() => page.getByTestId('observed-label').textContent()).toMatch(/Pd@Au \(confirmed suggestion\)/);
@@ -117,7 +119,9 @@ describe.skipIf(!available)('campaigns in the browser host', () => {
     await page.getByRole('button', { name: 'Per campaign' }).click();
     const rows = page.locator('table[aria-label="Prediction vs outcome table"] tbody tr');
     await expect.poll(() => rows.count()).toBe(4);
-    expect((await rows.locator('td:first-child').allTextContents()).every((name) => name.startsWith('Demo '))).toBe(true);
+    expect((await rows.locator('td:first-child').allTextContents()).every((name) => name.startsWith('Demo '))).toBe(
+      true,
+    );
     await expect.poll(() => page.getByTestId('agreement-summary').textContent()).toMatch(/2 batches compared/);
     const cells = await page.locator('[data-testid="confusion-heatmap"] [data-cell] text').allTextContents();
     expect(cells.map(Number).reduce((s, v) => s + v, 0)).toBe(2);
@@ -134,7 +138,9 @@ describe.skipIf(!available)('campaigns in the browser host', () => {
     await picker.first().check();
     const agno3 = page.locator('table[aria-label="Reagent totals"] tr[data-reagent="agno3"]');
     await expect.poll(() => agno3.getAttribute('data-status')).toBe('short');
-    expect(await page.locator('table[aria-label="Reagent totals"] tr[data-status="enough"]').count()).toBeGreaterThan(0);
+    expect(await page.locator('table[aria-label="Reagent totals"] tr[data-status="enough"]').count()).toBeGreaterThan(
+      0,
+    );
     await page.screenshot({ path: screenshotPath('reagents-demo'), fullPage: true });
   });
 

@@ -17,7 +17,10 @@ const input = (page: Page, name: string) => page.locator(`[data-testid="candidat
 describe.skipIf(!available)('flask conditions in the browser host', () => {
   it.override('pageOptions', { viewport: { width: 1600, height: 1100 } });
 
-  it('Candidates under CO at 350 K for 2 h: Pd comes out of Ag–Pd; the detail shows as made and after annealing', async ({ page, host }) => {
+  it('Candidates under CO at 350 K for 2 h: Pd comes out of Ag–Pd; the detail shows as made and after annealing', async ({
+    page,
+    host,
+  }) => {
     await openApp(page, host, { view: 'candidates' });
     // Ag@Pd does not meet the default target (alloy): it is listed once the rest are shown
     await page.getByRole('button', { name: /^Show the rest/ }).click();
@@ -31,11 +34,15 @@ describe.skipIf(!available)('flask conditions in the browser host', () => {
     await rows(page).first().click();
     const detail = page.getByRole('region', { name: 'Pair detail Pd-Ag' });
     await expect.poll(() => detail.getByTestId('verdict-after-annealing').textContent()).toBe('Ag@Pd');
-    expect(await detail.getByTestId('verdict-kinetics').textContent()).toMatch(/equilibrium not reachable: the as-made structure follows the reduction order/);
+    expect(await detail.getByTestId('verdict-kinetics').textContent()).toMatch(
+      /equilibrium not reachable: the as-made structure follows the reduction order/,
+    );
     expect(await detail.getByTestId('term-adsorbate').textContent()).toMatch(/CO on Pd −1\.6 eV, on Ag −0\.1 eV/);
     expect(await detail.getByTestId('term-wetting').textContent()).toMatch(/no miscibility gap/);
     expect(await detail.getByTestId('term-sources').textContent()).toMatch(/Tyson & Miller.*Vitos/);
-    expect(await detail.getByRole('table', { name: 'Segregation terms' }).textContent()).toMatch(/adsorbate \(environment\)/);
+    expect(await detail.getByRole('table', { name: 'Segregation terms' }).textContent()).toMatch(
+      /adsorbate \(environment\)/,
+    );
     await page.screenshot({ path: screenshotPath('candidates-flask-conditions'), fullPage: true });
   });
 
@@ -63,7 +70,9 @@ describe.skipIf(!available)('flask conditions in the browser host', () => {
     await view.locator('[name="timeH"]').fill('abc');
     await expect.poll(() => view.locator('[data-error-for="timeH"]').textContent()).toMatch(/not a number/);
     await view.locator('[name="timeH"]').fill('3');
-    await expect.poll(() => page.locator('[data-testid="descriptor-chart"] .recharts-scatter-symbol').count()).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.locator('[data-testid="descriptor-chart"] .recharts-scatter-symbol').count())
+      .toBeGreaterThan(0);
   });
 
   it('Batch design shows the as-made expectation of its route', async ({ page, host }) => {

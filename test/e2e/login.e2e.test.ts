@@ -32,7 +32,9 @@ describe.skipIf(!available)('logging in to the browser host', () => {
     expect(page.url()).toBe(`${fixture.host.origin}/#/campaigns`);
     expect(await page.evaluate(() => document.cookie)).toBe('');
     const cookies = await page.context().cookies();
-    expect(cookies.map((cookie) => [cookie.name, cookie.httpOnly, cookie.sameSite])).toEqual([[fixture.host.cookieName, true, 'Strict']]);
+    expect(cookies.map((cookie) => [cookie.name, cookie.httpOnly, cookie.sameSite])).toEqual([
+      [fixture.host.cookieName, true, 'Strict'],
+    ]);
     await page.context().close();
   });
 
@@ -57,8 +59,12 @@ describe.skipIf(!available)('logging in to the browser host', () => {
     const page = await newTestPage(browser, {});
     await page.goto(fixture.host.issueLoginUrl('/#/campaigns'));
     await page.getByRole('button', { name: 'Back up now' }).click();
-    await expect.poll(() => page.getByTestId('backup-result').textContent()).toMatch(/Backed up to .*backups.*-manual\.sqlite/);
-    expect(readdirSync(join(fixture.dataDir, 'backups')).filter((name) => name.endsWith('-manual.sqlite')).length).toBe(1);
+    await expect
+      .poll(() => page.getByTestId('backup-result').textContent())
+      .toMatch(/Backed up to .*backups.*-manual\.sqlite/);
+    expect(readdirSync(join(fixture.dataDir, 'backups')).filter((name) => name.endsWith('-manual.sqlite')).length).toBe(
+      1,
+    );
     await page.context().close();
   });
 });

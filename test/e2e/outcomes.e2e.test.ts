@@ -39,9 +39,11 @@ async function openResultsOfPlannedBatch(page: Page, host: BrowserTestHost): Pro
 }
 
 describe.skipIf(!available)('results in the browser host', () => {
-  it('opens the Results view on the campaign\'s batch', async ({ page, host }) => {
+  it("opens the Results view on the campaign's batch", async ({ page, host }) => {
     await openResultsOfPlannedBatch(page, host);
-    await expect.poll(() => page.getByTestId('batch-heading').textContent()).toMatch(/AuPd 10 nm: Au–Pd, target alloy, 10 nm, 50.0 at.% Pd/);
+    await expect
+      .poll(() => page.getByTestId('batch-heading').textContent())
+      .toMatch(/AuPd 10 nm: Au–Pd, target alloy, 10 nm, 50.0 at.% Pd/);
     expect(await page.locator('[data-testid="predicted-label"]').textContent()).toMatch(/analytic/);
   });
 
@@ -50,7 +52,9 @@ describe.skipIf(!available)('results in the browser host', () => {
     const form = page.getByRole('form', { name: 'Import sizes' });
     await form.locator('textarea[name="csvText"]').fill('diameter\n9.6\n10.1\n1O.4\n10.8\n');
     await form.getByRole('button', { name: 'Import sizes' }).click();
-    await expect.poll(() => form.locator('[data-error-for="csvText"]').textContent()).toBe('line 4: "1O.4" in column "diameter" is not a number');
+    await expect
+      .poll(() => form.locator('[data-error-for="csvText"]').textContent())
+      .toBe('line 4: "1O.4" in column "diameter" is not a number');
     expect(host.count('outcome_size_imports')).toBe(0);
   });
 
@@ -58,17 +62,24 @@ describe.skipIf(!available)('results in the browser host', () => {
     await openResultsOfPlannedBatch(page, host);
     const form = page.getByRole('form', { name: 'Import sizes' });
     const diameters = [9.6, 10.1, 10.4, 10.8, 9.2, 11.3, 10.0, 9.9, 10.6, 12.1, 9.4, 10.2, 10.7, 9.8, 11.0];
-    await form.locator('textarea[name="csvText"]').fill(`diameter;area\n${diameters.map((d) => `${String(d).replace('.', ',')};1`).join('\n')}\n`);
+    await form
+      .locator('textarea[name="csvText"]')
+      .fill(`diameter;area\n${diameters.map((d) => `${String(d).replace('.', ',')};1`).join('\n')}\n`);
     await form.getByRole('button', { name: 'Import sizes' }).click();
     await expect.poll(() => page.locator('[data-stat="n"]').textContent()).toBe('15');
     // Charts draw after their container is measured: poll.
-    await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-reference-area').count()).toBeGreaterThan(2);
+    await expect
+      .poll(() => page.locator('[data-testid="size-histogram"] .recharts-reference-area').count())
+      .toBeGreaterThan(2);
     await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-line-curve').count()).toBe(1);
     expect(host.count('outcome_diameters')).toBe(15);
     await page.locator('[aria-label="TEM sizes"]').screenshot({ path: screenshotPath('results-sizes') });
   });
 
-  it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async ({ page, host }) => {
+  it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async ({
+    page,
+    host,
+  }) => {
     await openResultsOfPlannedBatch(page, host);
     const form = page.getByRole('form', { name: 'Record composition' });
     await form.locator('input[name="xB-0"]').fill('48');
@@ -84,12 +95,26 @@ describe.skipIf(!available)('results in the browser host', () => {
     expect(await page.getByTestId('composition-warning-grid-metal').count()).toBe(0);
   });
 
-  it('imports a line scan, shows each model fit and the chosen one, and confirms the suggestion', async ({ page, host }) => {
+  it('imports a line scan, shows each model fit and the chosen one, and confirms the suggestion', async ({
+    page,
+    host,
+  }) => {
     await openResultsOfPlannedBatch(page, host);
     // Four model fits of a 51-point scan: background work on a shared machine.
     page.setDefaultTimeout(TIMEOUTS.longWaitMs);
     const scan = syntheticScan(
-      { kind: 'B@A', centerNm: 10, radiusNm: 5, coreRadiusNm: 3.5, probeSigmaNm: 0.6, amplitudeA: 10, amplitudeB: 8, backgroundA: 5, backgroundB: 3, positionsNm: positions(0, 20, 0.4) },
+      {
+        kind: 'B@A',
+        centerNm: 10,
+        radiusNm: 5,
+        coreRadiusNm: 3.5,
+        probeSigmaNm: 0.6,
+        amplitudeA: 10,
+        amplitudeB: 8,
+        backgroundA: 5,
+        backgroundB: 3,
+        positionsNm: positions(0, 20, 0.4),
+      },
       20,
       11,
     );

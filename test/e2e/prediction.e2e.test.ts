@@ -48,7 +48,12 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
   const SEVEN = ['Pt', 'Pd', 'Au', 'Ag', 'Ni', 'Cu', 'Co'];
   /** The API's answer for the same question (the page runs the same shared-model code in the browser). */
   const expected = (target: string, xB: number) =>
-    api<RankResult>('prediction.rank', { elements: SEVEN, target, conditions: { xB, diameterNm: 3, temperatureK: 600 }, all: true });
+    api<RankResult>('prediction.rank', {
+      elements: SEVEN,
+      target,
+      conditions: { xB, diameterNm: 3, temperatureK: 600 },
+      all: true,
+    });
   const showRest = () => page.getByRole('button', { name: /^Show the rest/ });
 
   it('lists only the pairs that meet the target, best first, each with its score; the rest on request, marked', async () => {
@@ -60,16 +65,25 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     expect(answer.meeting).toBeGreaterThan(0);
     expect(answer.meeting).toBeLessThan(21);
     await expect.poll(() => rows().count()).toBe(answer.meeting);
-    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(answer.rows.map((r) => r.prediction.pair));
-    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[1]?.textContent))).toEqual(answer.rows.map((r) => r.score.toFixed(3)));
-    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-meets')))).toEqual(answer.rows.map(() => 'yes'));
-    expect(await page.getByTestId('ranking-count').textContent()).toMatch(new RegExp(`${answer.meeting} of 21 pairs meet the target`));
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(
+      answer.rows.map((r) => r.prediction.pair),
+    );
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[1]?.textContent))).toEqual(
+      answer.rows.map((r) => r.score.toFixed(3)),
+    );
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-meets')))).toEqual(
+      answer.rows.map(() => 'yes'),
+    );
+    expect(await page.getByTestId('ranking-count').textContent()).toMatch(
+      new RegExp(`${answer.meeting} of 21 pairs meet the target`),
+    );
     await page.screenshot({ path: screenshotPath('candidates'), fullPage: true });
     await showRest().click();
     await expect.poll(() => rows().count()).toBe(21);
     const missed = page.locator('table[aria-label="Ranked candidates"] tbody tr[data-meets="no"]');
     expect(await missed.count()).toBe(21 - answer.meeting);
-    for (const text of await missed.locator('[data-testid="meets"]').allTextContents()) expect(text).toMatch(/^no: predicted .+/);
+    for (const text of await missed.locator('[data-testid="meets"]').allTextContents())
+      expect(text).toMatch(/^no: predicted .+/);
     await page.getByRole('button', { name: /^Hide the pairs that miss/ }).click();
     await expect.poll(() => rows().count()).toBe(answer.meeting);
   });
@@ -79,10 +93,21 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     expect(answer.meeting).toBe(0);
     await input('target').selectOption('core@shell with');
     await input('shell').fill('Pt');
-    await expect.poll(() => page.getByRole('status').filter({ hasText: /No pair of these elements meets/ }).count()).toBe(1);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('status')
+          .filter({ hasText: /No pair of these elements meets/ })
+          .count(),
+      )
+      .toBe(1);
     await expect.poll(() => rows().count()).toBe(3);
-    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(answer.missing.slice(0, 3).map((r) => r.prediction.pair));
-    expect(await rows().locator('[data-testid="meets"]').allTextContents()).toEqual(answer.missing.slice(0, 3).map((r) => `no: ${r.miss}`));
+    expect(await rows().evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-pair')))).toEqual(
+      answer.missing.slice(0, 3).map((r) => r.prediction.pair),
+    );
+    expect(await rows().locator('[data-testid="meets"]').allTextContents()).toEqual(
+      answer.missing.slice(0, 3).map((r) => `no: ${r.miss}`),
+    );
     await page.screenshot({ path: screenshotPath('candidates-none-meets'), fullPage: true });
     await input('target').selectOption('alloy');
   });
@@ -107,7 +132,8 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     const answer = await expected('core@shell:Au', 0.3);
     expect(answer.meeting).toBeGreaterThan(0);
     await expect.poll(() => rows().count()).toBe(answer.meeting);
-    for (const text of await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[4]?.textContent))) expect(text).toBe('Au');
+    for (const text of await rows().evaluateAll((trs) => trs.map((tr) => tr.querySelectorAll('td')[4]?.textContent)))
+      expect(text).toBe('Au');
   });
 
   it('sorts by a column and filters', async () => {
@@ -131,8 +157,12 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await page.keyboard.press('Enter');
     const detail = page.getByRole('region', { name: `Pair detail ${third}` });
     await expect.poll(() => detail.isVisible()).toBe(true);
-    await expect.poll(() => detail.locator('[data-testid="isotherm-xB"] svg .recharts-line').count()).toBeGreaterThan(0);
-    await expect.poll(() => detail.locator('[data-testid="isotherm-diameter"] svg .recharts-line').count()).toBeGreaterThan(0);
+    await expect
+      .poll(() => detail.locator('[data-testid="isotherm-xB"] svg .recharts-line').count())
+      .toBeGreaterThan(0);
+    await expect
+      .poll(() => detail.locator('[data-testid="isotherm-diameter"] svg .recharts-line').count())
+      .toBeGreaterThan(0);
     expect(await detail.getByRole('table', { name: 'Segregation terms' }).textContent()).toMatch(/surface energy/);
     await page.screenshot({ path: screenshotPath('candidates-pair-detail'), fullPage: true });
   });
@@ -157,10 +187,16 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     const detail = page.getByRole('region', { name: 'Pair detail Pt-Ni' });
     await detail.getByRole('button', { name: /Save prediction to Pt-Ni/ }).click();
     await expect.poll(() => detail.getByRole('status').textContent()).toMatch(/saved as prediction \d+ for pair Pt-Ni/);
-    const stored = fixture.store.db.prepare('SELECT pair_id, model_version, inputs_json FROM predictions').all() as Array<{ pair_id: number; model_version: string; inputs_json: string }>;
+    const stored = fixture.store.db
+      .prepare('SELECT pair_id, model_version, inputs_json FROM predictions')
+      .all() as Array<{ pair_id: number; model_version: string; inputs_json: string }>;
     expect(stored).toHaveLength(1);
     expect(stored[0]?.pair_id).toBeGreaterThan(0);
-    expect(JSON.parse(stored[0]?.inputs_json ?? '{}')).toMatchObject({ elementA: 'Pt', elementB: 'Ni', conditions: { xB: 0.3, diameterNm: 3, temperatureK: 600 } }); // the conditions typed earlier are kept
+    expect(JSON.parse(stored[0]?.inputs_json ?? '{}')).toMatchObject({
+      elementA: 'Pt',
+      elementB: 'Ni',
+      conditions: { xB: 0.3, diameterNm: 3, temperatureK: 600 },
+    }); // the conditions typed earlier are kept
     await expect.poll(() => detail.textContent()).toMatch(/1 saved for this campaign pair/);
   });
 
@@ -175,17 +211,21 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await page.locator('[data-testid="descriptor-map-view"] [name="elements"]').fill('Pt, Pd, Au, Ag');
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
     await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('-2');
-    await expect.poll(() => page.locator('[data-testid="descriptor-map-view"] [data-error-for="diameterNm"]').textContent()).toMatch(/positive/);
+    await expect
+      .poll(() => page.locator('[data-testid="descriptor-map-view"] [data-error-for="diameterNm"]').textContent())
+      .toMatch(/positive/);
     await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('3');
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
     await page.screenshot({ path: screenshotPath('descriptor-map'), fullPage: true });
   });
 
-  it('descriptor map: the campaign\'s logged outcomes are drawn as squares coloured by the observed architecture', async () => {
+  it("descriptor map: the campaign's logged outcomes are drawn as squares coloured by the observed architecture", async () => {
     const view = page.locator('[data-testid="descriptor-map-view"]');
     const chart = page.locator('[data-testid="descriptor-chart"]');
     // The campaign made in the test above has a pair but no batch yet.
-    await expect.poll(() => page.getByTestId('outcome-overlay-note').textContent()).toBe('No logged outcomes in this campaign yet.');
+    await expect
+      .poll(() => page.getByTestId('outcome-overlay-note').textContent())
+      .toBe('No logged outcomes in this campaign yet.');
     expect(await chart.locator('[data-testid="outcome-marker"]').count()).toBe(0);
 
     // Two made Au-Pd batches with an observed architecture, recorded through the API (as the Results view does).
@@ -194,9 +234,24 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     if (!campaign) throw new Error('campaign "Cathode screen" missing');
     const pair = await api<CandidatePair>('pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
     const design = auPd;
-    const first = await api<SavedBatch>('batches.save', { name: 'AuPd-1', campaignId: campaign.id, pairId: pair.id, design });
-    const second = await api<SavedBatch>('batches.save', { name: 'AuPd-2', campaignId: campaign.id, pairId: pair.id, design });
-    await api<SavedBatch>('batches.save', { name: 'AuPd-3 not characterised', campaignId: campaign.id, pairId: pair.id, design });
+    const first = await api<SavedBatch>('batches.save', {
+      name: 'AuPd-1',
+      campaignId: campaign.id,
+      pairId: pair.id,
+      design,
+    });
+    const second = await api<SavedBatch>('batches.save', {
+      name: 'AuPd-2',
+      campaignId: campaign.id,
+      pairId: pair.id,
+      design,
+    });
+    await api<SavedBatch>('batches.save', {
+      name: 'AuPd-3 not characterised',
+      campaignId: campaign.id,
+      pairId: pair.id,
+      design,
+    });
     const observed = { label: 'Au@Pd', decision: 'override', reason: 'EDX line scan: Pd at the rim' };
     await api('outcomes.record', { batchId: first.id, observed });
     await api('outcomes.record', { batchId: second.id, observed: { label: 'alloy', decision: 'override' } });
@@ -210,7 +265,9 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     expect(legend).toContain('logged outcome: observed core@shell — 1');
     expect(legend).toContain('logged outcome: observed alloy — 1');
     expect(legend).toMatch(/core@shell \(one element covers the other\)/); // the prediction legend stays
-    expect(await page.getByTestId('outcome-overlay-note').textContent()).toMatch(/2 logged outcomes of this campaign, coloured by the observed architecture/);
+    expect(await page.getByTestId('outcome-overlay-note').textContent()).toMatch(
+      /2 logged outcomes of this campaign, coloured by the observed architecture/,
+    );
 
     // Both squares sit on the Au-Pd point, nested, each in the colour of its own observed kind.
     const markers = chart.locator('[data-testid="outcome-marker"]');
@@ -218,7 +275,10 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     expect(strokes.size).toBe(2);
     const boxes = [await markers.nth(0).boundingBox(), await markers.nth(1).boundingBox()];
     if (!boxes[0] || !boxes[1]) throw new Error('outcome markers have no box');
-    const centre = (b: { x: number; y: number; width: number; height: number }) => [b.x + b.width / 2, b.y + b.height / 2];
+    const centre = (b: { x: number; y: number; width: number; height: number }) => [
+      b.x + b.width / 2,
+      b.y + b.height / 2,
+    ];
     expect(centre(boxes[0])[0]).toBeCloseTo(centre(boxes[1])[0] ?? 0, 0);
     expect(centre(boxes[0])[1]).toBeCloseTo(centre(boxes[1])[1] ?? 0, 0);
 
@@ -229,7 +289,9 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await page.mouse.move(outerBox.x + 1, outerBox.y + outerBox.height / 2);
     const tooltip = page.getByTestId('outcome-tooltip');
     await expect.poll(() => tooltip.textContent()).toMatch(new RegExp(`batch ${outerName}`));
-    expect(await tooltip.textContent()).toMatch(outerName === 'AuPd-1' ? /observed Au@Pd, predicted at planning/ : /observed alloy, predicted at planning/);
+    expect(await tooltip.textContent()).toMatch(
+      outerName === 'AuPd-1' ? /observed Au@Pd, predicted at planning/ : /observed alloy, predicted at planning/,
+    );
     await page.screenshot({ path: screenshotPath('descriptor-map-outcomes'), fullPage: true });
   });
 });

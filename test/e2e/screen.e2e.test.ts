@@ -41,8 +41,12 @@ describe.skipIf(!available)('campaign screen in the browser host', () => {
     await panel.locator('input[name="screenXB"]').fill('50');
     await panel.locator('input[name="screenDiameter"]').fill('1,2');
     await panel.getByRole('button', { name: 'Screen this campaign' }).click();
-    await expect.poll(() => page.getByTestId('screen-skipped').textContent()).toMatch(/skipped Ag-Fe: Fe has no tight-binding/);
-    await expect.poll(() => page.getByTestId('screen-summary').textContent(), { timeout: 90_000 }).toMatch(/1 of 1 finished/);
+    await expect
+      .poll(() => page.getByTestId('screen-skipped').textContent())
+      .toMatch(/skipped Ag-Fe: Fe has no tight-binding/);
+    await expect
+      .poll(() => page.getByTestId('screen-summary').textContent(), { timeout: 90_000 })
+      .toMatch(/1 of 1 finished/);
     const matrix = page.getByTestId('screen-matrix-1.2-50');
     await expect.poll(() => matrix.textContent()).toMatch(/analytic: /);
     await expect.poll(() => page.getByTestId('screen-legend').textContent()).toMatch(/:/);

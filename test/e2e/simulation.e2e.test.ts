@@ -66,7 +66,11 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     await form().locator('input[name="stopAtAnswer"]').uncheck();
     await form().getByRole('button', { name: 'Run' }).click();
     await expect.poll(() => page.getByTestId('sim-progress').isVisible()).toBe(true);
-    await expect.poll(async () => Number(await page.getByTestId('sim-progress').getAttribute('aria-valuenow')), { timeout: 30_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(async () => Number(await page.getByTestId('sim-progress').getAttribute('aria-valuenow')), {
+        timeout: 30_000,
+      })
+      .toBeGreaterThan(0);
     await expect.poll(() => page.getByTestId('sim-traces').isVisible(), { timeout: 30_000 }).toBe(true);
     // The window stays responsive while the worker computes: the form still reacts.
     await setField('seed', '42');
@@ -86,13 +90,18 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     expect(await page.getByTestId('sim-prediction-architecture').textContent()).toBeTruthy();
     // equilibrium vs what a 1 h synthesis at that temperature reaches (interdiffusion length vs radius)
     expect(await page.getByTestId('sim-kinetics').textContent()).toMatch(/L = √\(D̃t\) = .* vs radius/);
-    expect(await page.getByTestId('radial-profile').locator('.recharts-xAxis .recharts-cartesian-axis-tick').count()).toBe(5); // centre, S−3 … surface
+    expect(
+      await page.getByTestId('radial-profile').locator('.recharts-xAxis .recharts-cartesian-axis-tick').count(),
+    ).toBe(5); // centre, S−3 … surface
     expect(await page.getByTestId('particle-cross-section').locator('circle').count()).toBeGreaterThan(10);
     expect(await page.getByTestId('particle-surface').locator('circle').count()).toBeGreaterThan(50);
     expect(await page.getByTestId('particle-legend').textContent()).toMatch(/Ag.*Pd/);
     await page.screenshot({ path: screenshotPath('simulation-result'), fullPage: true });
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export extended XYZ' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export extended XYZ' }).click(),
+    ]);
     expect(download.suggestedFilename()).toMatch(/^pairwright-run-\d+-AgPd\.xyz$/);
     const path = await download.path();
     const frame = readExtendedXyz(readFileSync(path, 'utf8'));
@@ -123,14 +132,21 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     await candidate('filter').fill('Pt-Co');
     await expect.poll(() => rows().count()).toBe(1);
     await rows().first().click();
-    const coButton = page.getByRole('region', { name: 'Pair detail Pt-Co' }).getByRole('button', { name: 'Simulate this pair' });
+    const coButton = page
+      .getByRole('region', { name: 'Pair detail Pt-Co' })
+      .getByRole('button', { name: 'Simulate this pair' });
     expect(await coButton.isDisabled()).toBe(true);
-    expect(await coButton.getAttribute('title')).toMatch(/^Co has no Gupta .*parameters; the simulation supports Ni, Cu/);
+    expect(await coButton.getAttribute('title')).toMatch(
+      /^Co has no Gupta .*parameters; the simulation supports Ni, Cu/,
+    );
 
     await candidate('filter').fill('Pt-Ni');
     await expect.poll(() => rows().count()).toBe(1);
     await rows().first().click();
-    await page.getByRole('region', { name: 'Pair detail Pt-Ni' }).getByRole('button', { name: 'Simulate this pair' }).click();
+    await page
+      .getByRole('region', { name: 'Pair detail Pt-Ni' })
+      .getByRole('button', { name: 'Simulate this pair' })
+      .click();
 
     await expect.poll(() => page.locator('main h1').first().textContent()).toBe('Simulation');
     expect(page.url()).toMatch(/#\/simulation$/);
@@ -149,8 +165,18 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     await setField('sweeps', '100');
     await form().getByRole('button', { name: 'Run' }).click();
     await expect.poll(() => page.getByTestId('sim-status').textContent(), { timeout: 60_000 }).toBe('done');
-    const stored = fixture.store.db.prepare('SELECT inputs_json FROM simulation_runs ORDER BY id DESC LIMIT 1').get() as { inputs_json: string };
-    expect(JSON.parse(stored.inputs_json)).toMatchObject({ elementA: 'Pt', elementB: 'Ni', xB: 0.25, shape: 'icosahedron', diameterNm: 2.5, temperatureK: 700, sweeps: 100 });
+    const stored = fixture.store.db
+      .prepare('SELECT inputs_json FROM simulation_runs ORDER BY id DESC LIMIT 1')
+      .get() as { inputs_json: string };
+    expect(JSON.parse(stored.inputs_json)).toMatchObject({
+      elementA: 'Pt',
+      elementB: 'Ni',
+      xB: 0.25,
+      shape: 'icosahedron',
+      diameterNm: 2.5,
+      temperatureK: 700,
+      sweeps: 100,
+    });
 
     // The hand-off is taken once: opening Simulation again starts from the usual form.
     await page.locator('[data-view="candidates"]').click();

@@ -11,9 +11,28 @@ import { browserAvailable } from '../support/browser';
 import { runPairwright, runPairwrightJson } from '../support/cli';
 import { referenceAvailable } from '../support/reference-tools';
 
-const PT_NI = ['recipe', 'Pt-Ni', '--diameter', '4', '--composition', '25', '--total-metal', '0.1', '--volume', '50',
-  '--precursor', 'Pt=h2ptcl6-6h2o@20', '--precursor', 'Ni=nicl2-6h2o@20', '--reducer', 'nabh4', '--excess', '5',
-  '--reducer-stock', '100'];
+const PT_NI = [
+  'recipe',
+  'Pt-Ni',
+  '--diameter',
+  '4',
+  '--composition',
+  '25',
+  '--total-metal',
+  '0.1',
+  '--volume',
+  '50',
+  '--precursor',
+  'Pt=h2ptcl6-6h2o@20',
+  '--precursor',
+  'Ni=nicl2-6h2o@20',
+  '--reducer',
+  'nabh4',
+  '--excess',
+  '5',
+  '--reducer-stock',
+  '100',
+];
 
 const available = browserAvailable() && referenceAvailable({ command: 'pdftotext' });
 let folder = '';
@@ -33,28 +52,48 @@ describe('pairwright batches sheet', () => {
     expect(unknown.stderr.trim().split('\n')).toHaveLength(1);
   });
 
-  it.skipIf(!available)('writes the bench sheet as a PDF whose text carries the batch, H- and P-statements and the SDS reminder', () => {
-    folder = mkdtempSync(join(tmpdir(), 'pairwright-test-'));
-    runPairwrightJson(['campaigns', 'create', 'Cathode screen', '--data', folder]);
-    const recipe = runPairwrightJson<{ batchId: number }>([...PT_NI, '--save', 'PtNi-sheet', '--campaign', 'Cathode screen',
-      '--data', folder]);
-    const pdf = join(folder, 'sheet.pdf');
-    const html = join(folder, 'sheet.html');
-    const run = runPairwright(['batches', 'sheet', String(recipe.batchId), '--pdf', pdf, '--html', html, '--data', folder]);
-    expect(run.stderr).toBe('');
-    expect(run.status).toBe(0);
-    expect(existsSync(pdf)).toBe(true);
-    expect(readFileSync(pdf).subarray(0, 5).toString()).toBe('%PDF-');
-    const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [pdf], { encoding: 'utf8' }))?.[1]);
-    expect(pages).toBeGreaterThanOrEqual(1);
-    expect(pages).toBeLessThanOrEqual(3);
-    const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
-    expect(text).toContain('PtNi-sheet');
-    expect(text).toContain('Cathode screen');
-    // Sodium borohydride's H260 and its P223 (UN GHS Annex 3 texts).
-    expect(text).toContain('In contact with water releases flammable gases which may ignite spontaneously');
-    expect(text).toContain('Do not allow contact with water.');
-    expect(text).toContain('safety data sheet (SDS)');
-    expect(readFileSync(html, 'utf8')).toMatch(/<svg [^>]*data-pictogram="GHS02"/);
-  });
+  it.skipIf(!available)(
+    'writes the bench sheet as a PDF whose text carries the batch, H- and P-statements and the SDS reminder',
+    () => {
+      folder = mkdtempSync(join(tmpdir(), 'pairwright-test-'));
+      runPairwrightJson(['campaigns', 'create', 'Cathode screen', '--data', folder]);
+      const recipe = runPairwrightJson<{ batchId: number }>([
+        ...PT_NI,
+        '--save',
+        'PtNi-sheet',
+        '--campaign',
+        'Cathode screen',
+        '--data',
+        folder,
+      ]);
+      const pdf = join(folder, 'sheet.pdf');
+      const html = join(folder, 'sheet.html');
+      const run = runPairwright([
+        'batches',
+        'sheet',
+        String(recipe.batchId),
+        '--pdf',
+        pdf,
+        '--html',
+        html,
+        '--data',
+        folder,
+      ]);
+      expect(run.stderr).toBe('');
+      expect(run.status).toBe(0);
+      expect(existsSync(pdf)).toBe(true);
+      expect(readFileSync(pdf).subarray(0, 5).toString()).toBe('%PDF-');
+      const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [pdf], { encoding: 'utf8' }))?.[1]);
+      expect(pages).toBeGreaterThanOrEqual(1);
+      expect(pages).toBeLessThanOrEqual(3);
+      const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+      expect(text).toContain('PtNi-sheet');
+      expect(text).toContain('Cathode screen');
+      // Sodium borohydride's H260 and its P223 (UN GHS Annex 3 texts).
+      expect(text).toContain('In contact with water releases flammable gases which may ignite spontaneously');
+      expect(text).toContain('Do not allow contact with water.');
+      expect(text).toContain('safety data sheet (SDS)');
+      expect(readFileSync(html, 'utf8')).toMatch(/<svg [^>]*data-pictogram="GHS02"/);
+    },
+  );
 });

@@ -17,8 +17,32 @@ describe('pairwright prediction commands', () => {
   });
 
   it('predict Ag-Pd --json gives the promised fields', () => {
-    const p = runPairwrightJson<Prediction>(['predict', 'Ag-Pd', '--xB', '0.5', '--diameter-nm', '3', '--shape', 'cuboctahedron', '--temperature-k', '600', ...data]);
-    for (const key of ['pair', 'surfaceElement', 'surfaceFraction', 'enrichment', 'architecture', 'confidence', 'terms', 'mixingEnthalpyKjPerMol', 'atoms', 'surfaceSites', 'reason']) {
+    const p = runPairwrightJson<Prediction>([
+      'predict',
+      'Ag-Pd',
+      '--xB',
+      '0.5',
+      '--diameter-nm',
+      '3',
+      '--shape',
+      'cuboctahedron',
+      '--temperature-k',
+      '600',
+      ...data,
+    ]);
+    for (const key of [
+      'pair',
+      'surfaceElement',
+      'surfaceFraction',
+      'enrichment',
+      'architecture',
+      'confidence',
+      'terms',
+      'mixingEnthalpyKjPerMol',
+      'atoms',
+      'surfaceSites',
+      'reason',
+    ]) {
       expect(p, key).toHaveProperty(key);
     }
     expect(p.surfaceElement).toBe('Ag');
@@ -26,7 +50,14 @@ describe('pairwright prediction commands', () => {
   });
 
   it('rank --elements … --target alloy --json lists only the pairs predicted to stay alloyed, out of 21', () => {
-    const out = runPairwrightJson<RankResult>(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'alloy', ...data]);
+    const out = runPairwrightJson<RankResult>([
+      'rank',
+      '--elements',
+      'Pt,Pd,Au,Ag,Ni,Cu,Co',
+      '--target',
+      'alloy',
+      ...data,
+    ]);
     expect(out.ranked).toBe(21);
     expect(out.rows).toHaveLength(out.meeting);
     expect(out.rows[0]?.rank).toBe(1);
@@ -54,7 +85,14 @@ describe('pairwright prediction commands', () => {
     expect(run.status).toBe(0);
     expect(run.stdout).toMatch(/0 of 21 pairs meet the target/);
     expect(run.stdout).toMatch(/No pair meets core@shell with Pt in the shell; the closest:/);
-    const out = runPairwrightJson<RankResult>(['rank', '--elements', 'Pt,Pd,Au,Ag,Ni,Cu,Co', '--target', 'core@shell:Pt', ...data]);
+    const out = runPairwrightJson<RankResult>([
+      'rank',
+      '--elements',
+      'Pt,Pd,Au,Ag,Ni,Cu,Co',
+      '--target',
+      'core@shell:Pt',
+      ...data,
+    ]);
     expect(out.rows).toEqual([]);
     expect(out.missing).toHaveLength(3);
   });
@@ -67,7 +105,17 @@ describe('pairwright prediction commands', () => {
   });
 
   it('predict --environment CO --time-h: Pd comes out of Ag–Pd; the as-made verdict and the terms are printed', () => {
-    const p = runPairwrightJson<Prediction>(['predict', 'Ag-Pd', '--environment', 'CO', '--temperature-k', '350', '--time-h', '2', ...data]);
+    const p = runPairwrightJson<Prediction>([
+      'predict',
+      'Ag-Pd',
+      '--environment',
+      'CO',
+      '--temperature-k',
+      '350',
+      '--time-h',
+      '2',
+      ...data,
+    ]);
     expect(p.environment).toBe('CO');
     expect(p.timeH).toBe(2);
     expect(p.surfaceElement).toBe('Pd'); // CO draws Pd out of Ag–Pd (see test/shared-model/prediction/flask-conditions.test.ts)
@@ -77,7 +125,18 @@ describe('pairwright prediction commands', () => {
   });
 
   it('rank --target Janus --environment vacuum lists only qualifying pairs, each with its spreading coefficient', () => {
-    const out = runPairwrightJson<RankResult>(['rank', '--target', 'Janus', '--environment', 'vacuum', '--temperature-k', '600', '--diameter-nm', '4', ...data]);
+    const out = runPairwrightJson<RankResult>([
+      'rank',
+      '--target',
+      'Janus',
+      '--environment',
+      'vacuum',
+      '--temperature-k',
+      '600',
+      '--diameter-nm',
+      '4',
+      ...data,
+    ]);
     expect(out.rows.length).toBeGreaterThan(0);
     for (const row of out.rows) {
       expect(row.prediction.architectureKind).toBe('Janus');

@@ -25,25 +25,29 @@ interface RelaxJson {
 }
 
 describe('pairwright relax', () => {
-  it('minimises a random Au–Ni cluster and writes the relaxed structure, whose energy is the reported one', { timeout: 60_000 }, () => {
-    const rng = createRandom(3);
-    const nn = (guptaElement('Au').r0Angstrom + guptaElement('Ni').r0Angstrom) / 2;
-    const geometry = buildCluster('cuboctahedron', { shells: 3 }, nn);
-    const symbols = Array.from({ length: geometry.atoms }, () => (rng.next() < 0.5 ? 'Ni' : 'Au'));
-    const input = join(dir, 'in.xyz');
-    writeFileSync(input, writeExtendedXyz({ symbols, positions: geometry.positions }));
-    const output = join(dir, 'out.xyz');
-    const out = runPairwrightJson<RelaxJson>(['relax', input, '--xyz', output, ...data]);
-    expect(out.atoms).toBe(147);
-    expect(out.converged).toBe(true);
-    expect(out.maxForceEvPerAngstrom).toBeLessThan(1e-3);
-    expect(out.iterations).toBeGreaterThan(0);
-    expect(out.relaxedEnergyEv).toBeLessThan(out.initialEnergyEv);
-    expect(Math.abs(out.initialEnergyEv - offLatticeEnergyEv(symbols, geometry.positions))).toBeLessThan(1e-9);
-    const frame = readExtendedXyz(readFileSync(output, 'utf8'));
-    expect(frame.symbols).toEqual(symbols);
-    expect(Math.abs(offLatticeEnergyEv(frame.symbols, frame.positions) - out.relaxedEnergyEv)).toBeLessThan(1e-5);
-  });
+  it(
+    'minimises a random Au–Ni cluster and writes the relaxed structure, whose energy is the reported one',
+    { timeout: 60_000 },
+    () => {
+      const rng = createRandom(3);
+      const nn = (guptaElement('Au').r0Angstrom + guptaElement('Ni').r0Angstrom) / 2;
+      const geometry = buildCluster('cuboctahedron', { shells: 3 }, nn);
+      const symbols = Array.from({ length: geometry.atoms }, () => (rng.next() < 0.5 ? 'Ni' : 'Au'));
+      const input = join(dir, 'in.xyz');
+      writeFileSync(input, writeExtendedXyz({ symbols, positions: geometry.positions }));
+      const output = join(dir, 'out.xyz');
+      const out = runPairwrightJson<RelaxJson>(['relax', input, '--xyz', output, ...data]);
+      expect(out.atoms).toBe(147);
+      expect(out.converged).toBe(true);
+      expect(out.maxForceEvPerAngstrom).toBeLessThan(1e-3);
+      expect(out.iterations).toBeGreaterThan(0);
+      expect(out.relaxedEnergyEv).toBeLessThan(out.initialEnergyEv);
+      expect(Math.abs(out.initialEnergyEv - offLatticeEnergyEv(symbols, geometry.positions))).toBeLessThan(1e-9);
+      const frame = readExtendedXyz(readFileSync(output, 'utf8'));
+      expect(frame.symbols).toEqual(symbols);
+      expect(Math.abs(offLatticeEnergyEv(frame.symbols, frame.positions) - out.relaxedEnergyEv)).toBeLessThan(1e-5);
+    },
+  );
 
   it('refuses overlapping atoms, naming them', { timeout: 60_000 }, () => {
     const input = join(dir, 'overlap.xyz');

@@ -26,39 +26,73 @@ interface SimulateJson {
 }
 
 describe('pairwright simulate', () => {
-  it('runs the issue example (smaller), prints the fields as JSON and writes the final structure', { timeout: 120_000 }, () => {
-    const xyz = join(dir, 'out.xyz');
-    const out = runPairwrightJson<SimulateJson>(
-      ['simulate', 'Ag-Pd', '--xB', '0.5', '--shape', 'cuboctahedron', '--shells', '4', '--temperature-k', '600', '--sweeps', '300', '--seed', '7', '--xyz', xyz, ...data],
-    );
-    expect(out.atoms).toBe(magicClusterAtoms(4));
-    expect(out.surfaceSites).toBe(magicClusterSurfaceAtoms(4));
-    expect(out.surfaceFraction.Ag! + out.surfaceFraction.Pd!).toBeCloseTo(1, 12);
-    expect(out.surfaceFraction.Ag).toBeGreaterThan(0.7); // Ag covers Ag–Pd particles (see the model tests for sources)
-    expect(out.radialProfile.map((l) => l.atoms)).toEqual([1, 12, 42, 92, 162]);
-    expect(out.architecture).toMatch(/Ag|alloy/);
-    expect(out.acceptance).toBeGreaterThan(0);
-    expect(out.attemptsPerSecond).toBeGreaterThan(0);
-    expect(Number.isFinite(out.warrenCowley)).toBe(true);
-    expect(out.xyzFile).toBe(xyz);
-    // The written file holds the final structure; its energy, summed pair by pair, is the reported one.
-    const frame = readExtendedXyz(readFileSync(xyz, 'utf8'));
-    expect(frame.symbols).toHaveLength(309);
-    const cutoff = Number(frame.info.cutoffAngstrom);
-    expect(Math.abs(bruteForceEnergyEv(frame, cutoff) - out.energyEv)).toBeLessThan(1e-5);
+  it(
+    'runs the issue example (smaller), prints the fields as JSON and writes the final structure',
+    { timeout: 120_000 },
+    () => {
+      const xyz = join(dir, 'out.xyz');
+      const out = runPairwrightJson<SimulateJson>([
+        'simulate',
+        'Ag-Pd',
+        '--xB',
+        '0.5',
+        '--shape',
+        'cuboctahedron',
+        '--shells',
+        '4',
+        '--temperature-k',
+        '600',
+        '--sweeps',
+        '300',
+        '--seed',
+        '7',
+        '--xyz',
+        xyz,
+        ...data,
+      ]);
+      expect(out.atoms).toBe(magicClusterAtoms(4));
+      expect(out.surfaceSites).toBe(magicClusterSurfaceAtoms(4));
+      expect(out.surfaceFraction.Ag! + out.surfaceFraction.Pd!).toBeCloseTo(1, 12);
+      expect(out.surfaceFraction.Ag).toBeGreaterThan(0.7); // Ag covers Ag–Pd particles (see the model tests for sources)
+      expect(out.radialProfile.map((l) => l.atoms)).toEqual([1, 12, 42, 92, 162]);
+      expect(out.architecture).toMatch(/Ag|alloy/);
+      expect(out.acceptance).toBeGreaterThan(0);
+      expect(out.attemptsPerSecond).toBeGreaterThan(0);
+      expect(Number.isFinite(out.warrenCowley)).toBe(true);
+      expect(out.xyzFile).toBe(xyz);
+      // The written file holds the final structure; its energy, summed pair by pair, is the reported one.
+      const frame = readExtendedXyz(readFileSync(xyz, 'utf8'));
+      expect(frame.symbols).toHaveLength(309);
+      const cutoff = Number(frame.info.cutoffAngstrom);
+      expect(Math.abs(bruteForceEnergyEv(frame, cutoff) - out.energyEv)).toBeLessThan(1e-5);
 
-    const energy = runPairwrightJson<{ energyEv: number; atoms: number }>(['energy', xyz, ...data]);
-    expect(energy.atoms).toBe(309);
-    expect(Math.abs(energy.energyEv - out.energyEv)).toBeLessThan(1e-5);
+      const energy = runPairwrightJson<{ energyEv: number; atoms: number }>(['energy', xyz, ...data]);
+      expect(energy.atoms).toBe(309);
+      expect(Math.abs(energy.energyEv - out.energyEv)).toBeLessThan(1e-5);
 
-    const list = runPairwrightJson<{ id: number; status: string }[]>(['simulations', ...data]);
-    expect(list[0]).toMatchObject({ id: out.runId, status: 'done' });
-    const text = runPairwright(['simulations', ...data]);
-    expect(text.stdout).toMatch(/Ag-Pd/);
-  });
+      const list = runPairwrightJson<{ id: number; status: string }[]>(['simulations', ...data]);
+      expect(list[0]).toMatchObject({ id: out.runId, status: 'done' });
+      const text = runPairwright(['simulations', ...data]);
+      expect(text.stdout).toMatch(/Ag-Pd/);
+    },
+  );
 
   it('prints a human summary with the radial profile', { timeout: 60_000 }, () => {
-    const run = runPairwright(['simulate', 'Au-Pt', '--xB', '0.3', '--shape', 'icosahedron', '--shells', '3', '--temperature-k', '800', '--sweeps', '100', ...data]);
+    const run = runPairwright([
+      'simulate',
+      'Au-Pt',
+      '--xB',
+      '0.3',
+      '--shape',
+      'icosahedron',
+      '--shells',
+      '3',
+      '--temperature-k',
+      '800',
+      '--sweeps',
+      '100',
+      ...data,
+    ]);
     expect(run.status).toBe(0);
     expect(run.stdout).toMatch(/architecture: /);
     expect(run.stdout).toMatch(/surface/);
@@ -71,10 +105,16 @@ describe('pairwright simulate', () => {
       expect(run.status, run.stderr).toBe(2);
       expect(run.stderr).toMatch(pattern);
     };
-    bad(['simulate', 'Fe-Pt', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10'], /elementA.*Fe has no tight-binding parameters/);
+    bad(
+      ['simulate', 'Fe-Pt', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10'],
+      /elementA.*Fe has no tight-binding parameters/,
+    );
     bad(['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '0', '--sweeps', '10'], /temperatureK/);
     bad(['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '0'], /sweeps/);
-    bad(['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10', '--shells', '45'], /shells.*limit is 50000 atoms/);
+    bad(
+      ['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10', '--shells', '45'],
+      /shells.*limit is 50000 atoms/,
+    );
     bad(['simulate', 'Ag-Pd', '--temperature-k', '600', '--sweeps', '10'], /--xB is required/);
     bad(['simulate', 'AgPdX', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10'], /not a pair/);
     bad(['energy', join(dir, 'missing.xyz')], /cannot read/);

@@ -14,7 +14,16 @@ describe('pairwright CLI', () => {
     const data = tempDataDir();
     const campaign = runPairwrightJson<Campaign>(['campaigns', 'create', 'Fuel-cell cathode screen', '--data', data]);
     expect(campaign.name).toBe('Fuel-cell cathode screen');
-    const pair = runPairwrightJson<CandidatePair>(['pairs', 'add', 'Fuel-cell cathode screen', 'Pt-Ni', '--target', 'Ni@Pt', '--data', data]);
+    const pair = runPairwrightJson<CandidatePair>([
+      'pairs',
+      'add',
+      'Fuel-cell cathode screen',
+      'Pt-Ni',
+      '--target',
+      'Ni@Pt',
+      '--data',
+      data,
+    ]);
     expect(pair).toMatchObject({ elementA: 'Pt', elementB: 'Ni', target: 'Ni@Pt' });
     const table = runPairwright(['pairs', 'list', String(campaign.id), '--data', data]);
     expect(table.status).toBe(0);

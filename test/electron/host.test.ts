@@ -79,14 +79,18 @@ describe('browser host login', () => {
 
   it('refuses API calls without the cookie, with a wrong one, without the call header or from another origin', async () => {
     const cookie = await logIn(fixture.host);
-    const list = (headers: Record<string, string>) => send(port(), '/api/campaigns.list', { method: 'POST', headers, body: '{}' });
+    const list = (headers: Record<string, string>) =>
+      send(port(), '/api/campaigns.list', { method: 'POST', headers, body: '{}' });
     expect((await list({ [CALL_HEADER]: '1' })).status).toBe(401);
     expect((await list(apiHeaders(`${fixture.host.cookieName}=${'x'.repeat(43)}`))).status).toBe(401);
     expect((await list({ cookie, 'content-type': 'application/json' })).status).toBe(401);
     expect((await list({ ...apiHeaders(cookie), origin: 'http://127.0.0.1:1' })).status).toBe(403);
     expect((await list({ ...apiHeaders(cookie), origin: 'null' })).status).toBe(403);
     expect((await list({ ...apiHeaders(cookie), origin: fixture.host.origin })).status).toBe(200);
-    expect((await send(port(), '/api/campaigns.list', { method: 'OPTIONS', headers: { origin: 'http://evil.example' } })).status).toBe(405);
+    expect(
+      (await send(port(), '/api/campaigns.list', { method: 'OPTIONS', headers: { origin: 'http://evil.example' } }))
+        .status,
+    ).toBe(405);
   });
 
   it('refuses a foreign Host header (DNS rebinding)', async () => {
@@ -94,7 +98,9 @@ describe('browser host login', () => {
     const headers = { ...apiHeaders(cookie), host: `evil.example:${port()}` };
     const foreign = await send(port(), '/api/campaigns.list', { method: 'POST', headers, body: '{}' });
     expect(foreign.status).toBe(421);
-    const login = await send(port(), loginPath(fixture.host.issueLoginUrl()), { headers: { host: `evil.example:${port()}` } });
+    const login = await send(port(), loginPath(fixture.host.issueLoginUrl()), {
+      headers: { host: `evil.example:${port()}` },
+    });
     expect(login.status).toBe(421);
   });
 });
@@ -105,7 +111,11 @@ describe('browser host requests', () => {
     const bad = await callApi(fixture.host, cookie, 'campaigns.create', { name: '' });
     expect(bad.status).toBe(400);
     expect(JSON.parse(bad.body)).toMatchObject({ ok: false, error: { code: 'invalid_input', field: 'name' } });
-    const notJson = await send(port(), '/api/campaigns.create', { method: 'POST', headers: apiHeaders(cookie), body: '{name:' });
+    const notJson = await send(port(), '/api/campaigns.create', {
+      method: 'POST',
+      headers: apiHeaders(cookie),
+      body: '{name:',
+    });
     expect(notJson.status).toBe(400);
     expect(JSON.parse(notJson.body).error.message).toMatch(/not valid JSON/);
     const unknown = await callApi(fixture.host, cookie, 'nothing.here', {});
@@ -114,7 +124,11 @@ describe('browser host requests', () => {
 
   it('answers a malformed % escape with 400, not 500', async () => {
     const cookie = await logIn(fixture.host);
-    const api = await send(port(), '/api/campaigns.%E0%A4%A', { method: 'POST', headers: apiHeaders(cookie), body: '{}' });
+    const api = await send(port(), '/api/campaigns.%E0%A4%A', {
+      method: 'POST',
+      headers: apiHeaders(cookie),
+      body: '{}',
+    });
     expect(api.status).toBe(400);
     expect(JSON.parse(api.body).error.message).toMatch(/malformed % escape/);
     const page = await send(port(), '/%', { headers: { cookie } });
@@ -131,7 +145,12 @@ describe('browser host requests', () => {
 
   it('does not serve files outside the renderer build (encoded variants)', async () => {
     const cookie = await logIn(fixture.host);
-    const attempts = ['/..%2F..%2Fpackage.json', '/%2e%2e/%2e%2e/package.json', '/..%5c..%5cpackage.json', '/%252e%252e/package.json'];
+    const attempts = [
+      '/..%2F..%2Fpackage.json',
+      '/%2e%2e/%2e%2e/package.json',
+      '/..%5c..%5cpackage.json',
+      '/%252e%252e/package.json',
+    ];
     for (const path of attempts) {
       const answer = await send(port(), path, { headers: { cookie } });
       expect(answer.body).not.toContain('"name": "pairwright"');

@@ -43,7 +43,8 @@ function standInElectron() {
       id: 7,
       mainFrame: { url: '' },
       on: (event: string, listener: Listener) => void webContentsListeners.set(event, listener),
-      setWindowOpenHandler: (handler: (details: { url: string }) => { action: 'deny' | 'allow' }) => void (windowOpenHandler = handler),
+      setWindowOpenHandler: (handler: (details: { url: string }) => { action: 'deny' | 'allow' }) =>
+        void (windowOpenHandler = handler),
       printToPDF: async () => new Uint8Array([37, 80, 68, 70]),
     };
     constructor(options: BrowserWindowOptions) {
@@ -113,17 +114,30 @@ afterEach(() => {
 async function wired() {
   const fake = standInElectron();
   store = openStore({ dataDir: tempDataDir() });
-  await wireDesktopApp(fake.electron, { store }, { rendererIndex: RENDERER_INDEX, preload: '/opt/Pairwright/dist-electron/preload.cjs' });
+  await wireDesktopApp(
+    fake.electron,
+    { store },
+    { rendererIndex: RENDERER_INDEX, preload: '/opt/Pairwright/dist-electron/preload.cjs' },
+  );
   return fake;
 }
 
-const trustedEvent = (): IpcMainInvokeEventLike => ({ sender: { id: 7 }, senderFrame: { url: pathToFileURL(RENDERER_INDEX).href } });
+const trustedEvent = (): IpcMainInvokeEventLike => ({
+  sender: { id: 7 },
+  senderFrame: { url: pathToFileURL(RENDERER_INDEX).href },
+});
 
 describe('Electron main process wiring', () => {
   it('opens one window with isolation, sandbox and no Node in the page', async () => {
     const fake = await wired();
     const prefs = fake.windowOptions?.webPreferences;
-    expect(prefs).toMatchObject({ contextIsolation: true, sandbox: true, nodeIntegration: false, webSecurity: true, webviewTag: false });
+    expect(prefs).toMatchObject({
+      contextIsolation: true,
+      sandbox: true,
+      nodeIntegration: false,
+      webSecurity: true,
+      webviewTag: false,
+    });
     expect(fake.loadedFile).toBe(RENDERER_INDEX);
   });
 
@@ -140,7 +154,11 @@ describe('Electron main process wiring', () => {
   it('refuses calls from other frames, other pages and unknown operations', async () => {
     const fake = await wired();
     const call = fake.handlers.get(CALL_CHANNEL);
-    const foreignPage = await call?.({ sender: { id: 7 }, senderFrame: { url: 'https://example.org/' } }, 'campaigns.list', {});
+    const foreignPage = await call?.(
+      { sender: { id: 7 }, senderFrame: { url: 'https://example.org/' } },
+      'campaigns.list',
+      {},
+    );
     expect(foreignPage).toMatchObject({ ok: false, error: { code: 'forbidden' } });
     const otherWindow = await call?.({ ...trustedEvent(), sender: { id: 99 } }, 'campaigns.list', {});
     expect(otherWindow).toMatchObject({ ok: false, error: { code: 'forbidden' } });
@@ -156,7 +174,11 @@ describe('Electron main process wiring', () => {
     const trusted = { ...trustedEvent(), returnValue: undefined as unknown };
     ask?.(trusted);
     expect(trusted.returnValue).toEqual(OPERATION_NAMES);
-    const foreign = { sender: { id: 7 }, senderFrame: { url: 'https://example.org/' }, returnValue: undefined as unknown };
+    const foreign = {
+      sender: { id: 7 },
+      senderFrame: { url: 'https://example.org/' },
+      returnValue: undefined as unknown,
+    };
     ask?.(foreign);
     expect(foreign.returnValue).toEqual([]);
   });
@@ -164,11 +186,16 @@ describe('Electron main process wiring', () => {
   it('refuses navigation and new windows; vetted https links go to the OS browser', async () => {
     const fake = await wired();
     let prevented = false;
-    const navigate = fake.webContentsListeners.get('will-navigate') as (event: { preventDefault(): void }, url: string) => void;
+    const navigate = fake.webContentsListeners.get('will-navigate') as (
+      event: { preventDefault(): void },
+      url: string,
+    ) => void;
     navigate({ preventDefault: () => (prevented = true) }, 'https://example.org/');
     expect(prevented).toBe(true);
     expect(fake.windowOpenHandler?.({ url: 'https://example.org/' })).toEqual({ action: 'deny' });
-    expect(fake.windowOpenHandler?.({ url: 'https://echa.europa.eu/information-on-chemicals' })).toEqual({ action: 'deny' });
+    expect(fake.windowOpenHandler?.({ url: 'https://echa.europa.eu/information-on-chemicals' })).toEqual({
+      action: 'deny',
+    });
     expect(fake.opened).toEqual(['https://echa.europa.eu/information-on-chemicals']);
     expect(isVettedExternalLink('http://echa.europa.eu/')).toBe(false);
     expect(isVettedExternalLink('https://echa.europa.eu.evil.example/')).toBe(false);
@@ -199,8 +226,13 @@ describe('Electron main process wiring', () => {
   it('builds the usual application menu', async () => {
     const fake = await wired();
     expect(fake.menu.map((item) => item.label)).toEqual(['File', 'Edit', 'View', 'Window', 'Help']);
-    const roles = fake.menu.flatMap((item) => item.submenu ?? []).map((item) => item.role).filter(Boolean);
-    expect(roles).toEqual(expect.arrayContaining(['quit', 'undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'reload', 'minimize']));
+    const roles = fake.menu
+      .flatMap((item) => item.submenu ?? [])
+      .map((item) => item.role)
+      .filter(Boolean);
+    expect(roles).toEqual(
+      expect.arrayContaining(['quit', 'undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'reload', 'minimize']),
+    );
   });
 
   it('backs the store up from File → Back up the store… to the file the user chose', async () => {

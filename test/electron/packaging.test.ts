@@ -21,7 +21,10 @@ const { getConfig, validateConfiguration } = require('app-builder-lib/out/util/c
 };
 const { DebugLogger } = require('builder-util') as { DebugLogger: new (enabled: boolean) => unknown };
 const root = process.cwd();
-const packageJson = require(join(root, 'package.json')) as { optionalDependencies: Record<string, string>; main: string };
+const packageJson = require(join(root, 'package.json')) as {
+  optionalDependencies: Record<string, string>;
+  main: string;
+};
 
 describe('desktop packaging configuration', () => {
   it('passes electron-builder’s schema and names the promised targets', async () => {
@@ -36,6 +39,11 @@ describe('desktop packaging configuration', () => {
 
   it('the schema check bites on an unknown key', async () => {
     const config = await getConfig(root, join(root, 'electron-builder.yml'), null);
-    await expect(validateConfiguration({ ...config, linux: { ...config.linux, colour: 'teal' } } as BuilderConfig, new DebugLogger(false))).rejects.toThrow(/unknown property/);
+    await expect(
+      validateConfiguration(
+        { ...config, linux: { ...config.linux, colour: 'teal' } } as BuilderConfig,
+        new DebugLogger(false),
+      ),
+    ).rejects.toThrow(/unknown property/);
   });
 });

@@ -57,10 +57,23 @@ function radiiOf(shape: ParticleShape, shells: number): number[] {
   let nn = Infinity;
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
-      nn = Math.min(nn, Math.hypot(c.positions[3 * i]! - c.positions[3 * j]!, c.positions[3 * i + 1]! - c.positions[3 * j + 1]!, c.positions[3 * i + 2]! - c.positions[3 * j + 2]!));
+      nn = Math.min(
+        nn,
+        Math.hypot(
+          c.positions[3 * i]! - c.positions[3 * j]!,
+          c.positions[3 * i + 1]! - c.positions[3 * j + 1]!,
+          c.positions[3 * i + 2]! - c.positions[3 * j + 2]!,
+        ),
+      );
     }
   }
-  return Array.from({ length: n }, (_, i) => Math.round((Math.hypot(c.positions[3 * i]! - cx, c.positions[3 * i + 1]! - cy, c.positions[3 * i + 2]! - cz) / nn) * 1e6) / 1e6).sort((a, b) => a - b);
+  return Array.from(
+    { length: n },
+    (_, i) =>
+      Math.round(
+        (Math.hypot(c.positions[3 * i]! - cx, c.positions[3 * i + 1]! - cy, c.positions[3 * i + 2]! - cz) / nn) * 1e6,
+      ) / 1e6,
+  ).sort((a, b) => a - b);
 }
 
 describe.skipIf(!available)('cluster builders and extended XYZ vs ASE', () => {
@@ -82,8 +95,16 @@ describe.skipIf(!available)('cluster builders and extended XYZ vs ASE', () => {
     const c = buildCluster('cuboctahedron', { shells: 2 }, 2.78);
     const symbols = Array.from({ length: c.atoms }, (_, i) => (i % 4 === 0 ? 'Pt' : 'Ni'));
     const path = join(tempDir('pairwright-xyz-'), 'cluster.xyz');
-    writeFileSync(path, writeExtendedXyz({ symbols, positions: c.positions }, { energy: -210.5, pair: 'Ni-Pt', note: 'a b' }));
-    const read = runPythonJson<{ symbols: string[]; positions: number[][]; pbc: boolean[]; info: Record<string, string> }>(READ_XYZ, { path });
+    writeFileSync(
+      path,
+      writeExtendedXyz({ symbols, positions: c.positions }, { energy: -210.5, pair: 'Ni-Pt', note: 'a b' }),
+    );
+    const read = runPythonJson<{
+      symbols: string[];
+      positions: number[][];
+      pbc: boolean[];
+      info: Record<string, string>;
+    }>(READ_XYZ, { path });
     expect(read.symbols).toEqual(symbols);
     read.positions.forEach((p, i) => p.forEach((v, d) => expect(v).toBeCloseTo(c.positions[3 * i + d]!, 7)));
     expect(read.pbc).toEqual([false, false, false]);

@@ -15,7 +15,14 @@ import { lammpsGuptaEnergyEv } from '../support/gupta-lammps';
 
 const available = referenceAvailable({ command: 'lmp' });
 
-function randomConfiguration(elementA: string, elementB: string, xB: number, shape: 'cuboctahedron' | 'icosahedron' | 'sphere', shells: number, seed: number) {
+function randomConfiguration(
+  elementA: string,
+  elementB: string,
+  xB: number,
+  shape: 'cuboctahedron' | 'icosahedron' | 'sphere',
+  shells: number,
+  seed: number,
+) {
   const rng = createRandom(seed);
   const nn = (1 - xB) * guptaElement(elementA).r0Angstrom + xB * guptaElement(elementB).r0Angstrom;
   const geometry = buildCluster(shape, { shells }, nn);
@@ -47,7 +54,17 @@ describe.skipIf(!available)('Gupta energy vs LAMMPS eam/fs', () => {
 
   it('the final configuration of a Monte Carlo run: engine energy = LAMMPS', () => {
     const result = runSimulation(
-      { elementA: 'Cu', elementB: 'Ag', xB: 0.4, shape: 'cuboctahedron', shells: 4, temperatureK: 500, sweeps: 100, seed: 3, relaxation: 'rigid' },
+      {
+        elementA: 'Cu',
+        elementB: 'Ag',
+        xB: 0.4,
+        shape: 'cuboctahedron',
+        shells: 4,
+        temperatureK: 500,
+        sweeps: 100,
+        seed: 3,
+        relaxation: 'rigid',
+      },
       createRandom(3),
     );
     const geometry = rebuildGeometry(result.spec);

@@ -33,24 +33,31 @@ describe.skipIf(!available)('off-lattice Gupta vs LAMMPS eam/fs with the same sw
     const s = displacedAlloy(a, b, xB, 4, 0.2, seed);
     const ours = offLatticeEnergyEv(s.symbols, s.positions);
     const lammps = lammpsSwitchedEnergyEv(s.symbols, s.positions);
-    console.log(`${a}-${b}: ours ${ours.toFixed(9)} eV, LAMMPS ${lammps.toFixed(9)} eV, diff ${((ours - lammps) / 309).toExponential(2)} eV/atom`);
+    console.log(
+      `${a}-${b}: ours ${ours.toFixed(9)} eV, LAMMPS ${lammps.toFixed(9)} eV, diff ${((ours - lammps) / 309).toExponential(2)} eV/atom`,
+    );
     expect(Math.abs(ours - lammps) / s.symbols.length).toBeLessThan(1e-6);
   });
 
   it.each([
     ['Au', 'Ni', 0.5, 4],
     ['Ag', 'Pd', 0.5, 5],
-  ] as const)('%s–%s 147-atom cluster: FIRE relaxed energy = LAMMPS minimize cg within 1e-4 eV/atom', (a, b, xB, seed) => {
-    const s = displacedAlloy(a, b, xB, 3, 0.02, seed);
-    const ours = relaxStructure(s, { forceToleranceEvPerAngstrom: 1e-5, maxIterations: 50_000 });
-    expect(ours.converged).toBe(true);
-    const lammps = lammpsSwitchedEnergyEv(s.symbols, s.positions, { minimize: true });
-    const diff = (ours.energyEv - lammps) / s.symbols.length;
-    console.log(`${a}-${b} relaxed: ours ${ours.energyEv.toFixed(7)} eV (${ours.iterations} FIRE steps), LAMMPS ${lammps.toFixed(7)} eV, diff ${diff.toExponential(2)} eV/atom`);
-    expect(Math.abs(diff)).toBeLessThan(1e-4);
-    expect(ours.energyEv).toBeLessThan(ours.initialEnergyEv - 1);
-    // Our minimum is LAMMPS' minimum too: started there, cg does not find anything lower.
-    const again = lammpsSwitchedEnergyEv(s.symbols, ours.positions, { minimize: true });
-    expect(Math.abs(again - ours.energyEv) / s.symbols.length).toBeLessThan(1e-6);
-  });
+  ] as const)(
+    '%s–%s 147-atom cluster: FIRE relaxed energy = LAMMPS minimize cg within 1e-4 eV/atom',
+    (a, b, xB, seed) => {
+      const s = displacedAlloy(a, b, xB, 3, 0.02, seed);
+      const ours = relaxStructure(s, { forceToleranceEvPerAngstrom: 1e-5, maxIterations: 50_000 });
+      expect(ours.converged).toBe(true);
+      const lammps = lammpsSwitchedEnergyEv(s.symbols, s.positions, { minimize: true });
+      const diff = (ours.energyEv - lammps) / s.symbols.length;
+      console.log(
+        `${a}-${b} relaxed: ours ${ours.energyEv.toFixed(7)} eV (${ours.iterations} FIRE steps), LAMMPS ${lammps.toFixed(7)} eV, diff ${diff.toExponential(2)} eV/atom`,
+      );
+      expect(Math.abs(diff)).toBeLessThan(1e-4);
+      expect(ours.energyEv).toBeLessThan(ours.initialEnergyEv - 1);
+      // Our minimum is LAMMPS' minimum too: started there, cg does not find anything lower.
+      const again = lammpsSwitchedEnergyEv(s.symbols, ours.positions, { minimize: true });
+      expect(Math.abs(again - ours.energyEv) / s.symbols.length).toBeLessThan(1e-6);
+    },
+  );
 });

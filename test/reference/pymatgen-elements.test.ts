@@ -110,8 +110,10 @@ describe.skipIf(!available)('element table vs pymatgen (reference tier)', () => 
         if (theirs === null || theirs === undefined) continue; // pymatgen has no value (e.g. G of Mn, In)
         const mine = check.ours(symbol);
         const gap = Math.abs(mine - theirs);
-        const within = check.absolute !== undefined ? gap <= check.absolute : gap <= (check.relative ?? 0) * Math.abs(theirs);
-        if (symbol in check.known) expect(within, `${symbol} listed as a known disagreement but now agrees: update the list`).toBe(false);
+        const within =
+          check.absolute !== undefined ? gap <= check.absolute : gap <= (check.relative ?? 0) * Math.abs(theirs);
+        if (symbol in check.known)
+          expect(within, `${symbol} listed as a known disagreement but now agrees: update the list`).toBe(false);
         else expect(within, `${symbol} ${check.column}: ours ${mine}, pymatgen ${theirs}`).toBe(true);
         compared++;
       }

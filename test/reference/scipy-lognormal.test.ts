@@ -41,7 +41,10 @@ describe.skipIf(!available)('log-normal fit vs scipy.stats.lognorm.fit(floc=0)',
       [0.995, 249],
       [0.9, 2],
     ];
-    const ref = runPythonJson<{ fits: { s: number; loc: number; scale: number }[]; quantiles: { t: number; chi2: number }[] }>(SCRIPT, { samples, quantiles });
+    const ref = runPythonJson<{
+      fits: { s: number; loc: number; scale: number }[];
+      quantiles: { t: number; chi2: number }[];
+    }>(SCRIPT, { samples, quantiles });
     samples.forEach((sample, i) => {
       const ours = fitLogNormal(sample);
       const theirs = ref.fits[i]!;

@@ -71,24 +71,28 @@ const pearson = (x: number[], y: number[]) => {
 const mae = (x: number[], y: number[]) => x.reduce((s, v, i) => s + Math.abs(v - (y[i] as number)), 0) / x.length;
 
 describe.skipIf(!available)('segregation magnitudes vs Foiles–Baskes–Daw EAM slabs (LAMMPS)', () => {
-  it('calibrated model: lower MAE, same correlation, and the stored factor is the least-squares one', { timeout: 600_000 }, () => {
-    const pairs: Array<[string, string]> = [];
-    for (const host of METALS) for (const solute of METALS) if (host !== solute) pairs.push([host, solute]);
-    const lattice = { Ag: 4.09, Au: 4.08, Cu: 3.615, Ni: 3.52, Pd: 3.89, Pt: 3.92 };
-    const reference = runPythonJson<number[]>(SCRIPT, { pairs, lattice, potentials: POTENTIALS });
-    const conditions = { xB: 0.5, diameterNm: 4, shape: 'cuboctahedron' as const, temperatureK: 600 };
-    const calibrated = pairs.map(([host, solute]) => predictPair(host, solute, conditions).segregation.bInA.total);
-    const old = calibrated.map((e) => e / SEGREGATION_CALIBRATION.scale);
-    const fitted = old.reduce((s, e, i) => s + e * (reference[i] as number), 0) / old.reduce((s, e) => s + e * e, 0);
-    const agree = calibrated.filter((e, i) => Math.sign(e) === Math.sign(reference[i] as number)).length;
-    console.log(
-      `dilute (111) segregation energies, ${pairs.length} pairs of ${METALS.join(' ')} vs FBD EAM (LAMMPS, relaxed slabs):\n` +
-        `  uncalibrated: correlation ${pearson(old, reference).toFixed(3)}, MAE ${mae(old, reference).toFixed(3)} eV\n` +
-        `  calibrated ×${SEGREGATION_CALIBRATION.scale}: correlation ${pearson(calibrated, reference).toFixed(3)}, MAE ${mae(calibrated, reference).toFixed(3)} eV\n` +
-        `  least-squares factor of this run ${fitted.toFixed(3)}; signs agree in ${agree}/${pairs.length}`,
-    );
-    expect(Math.abs(fitted - SEGREGATION_CALIBRATION.scale)).toBeLessThan(0.01);
-    expect(mae(calibrated, reference)).toBeLessThan(mae(old, reference));
-    expect(pearson(calibrated, reference)).toBeGreaterThan(0.9);
-  });
+  it(
+    'calibrated model: lower MAE, same correlation, and the stored factor is the least-squares one',
+    { timeout: 600_000 },
+    () => {
+      const pairs: Array<[string, string]> = [];
+      for (const host of METALS) for (const solute of METALS) if (host !== solute) pairs.push([host, solute]);
+      const lattice = { Ag: 4.09, Au: 4.08, Cu: 3.615, Ni: 3.52, Pd: 3.89, Pt: 3.92 };
+      const reference = runPythonJson<number[]>(SCRIPT, { pairs, lattice, potentials: POTENTIALS });
+      const conditions = { xB: 0.5, diameterNm: 4, shape: 'cuboctahedron' as const, temperatureK: 600 };
+      const calibrated = pairs.map(([host, solute]) => predictPair(host, solute, conditions).segregation.bInA.total);
+      const old = calibrated.map((e) => e / SEGREGATION_CALIBRATION.scale);
+      const fitted = old.reduce((s, e, i) => s + e * (reference[i] as number), 0) / old.reduce((s, e) => s + e * e, 0);
+      const agree = calibrated.filter((e, i) => Math.sign(e) === Math.sign(reference[i] as number)).length;
+      console.log(
+        `dilute (111) segregation energies, ${pairs.length} pairs of ${METALS.join(' ')} vs FBD EAM (LAMMPS, relaxed slabs):\n` +
+          `  uncalibrated: correlation ${pearson(old, reference).toFixed(3)}, MAE ${mae(old, reference).toFixed(3)} eV\n` +
+          `  calibrated ×${SEGREGATION_CALIBRATION.scale}: correlation ${pearson(calibrated, reference).toFixed(3)}, MAE ${mae(calibrated, reference).toFixed(3)} eV\n` +
+          `  least-squares factor of this run ${fitted.toFixed(3)}; signs agree in ${agree}/${pairs.length}`,
+      );
+      expect(Math.abs(fitted - SEGREGATION_CALIBRATION.scale)).toBeLessThan(0.01);
+      expect(mae(calibrated, reference)).toBeLessThan(mae(old, reference));
+      expect(pearson(calibrated, reference)).toBeGreaterThan(0.9);
+    },
+  );
 });

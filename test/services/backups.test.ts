@@ -41,8 +41,12 @@ describe('backup and restore', () => {
     await dispatchValue(context, 'campaigns.loadDemo', {});
     await dispatchValue(context, 'backups.setKeep', { keep: 9 });
     const before = dumpTables(context.store.db);
-    const filled = Object.entries(before).filter(([, rows]) => rows.length > 0).map(([table]) => table);
-    expect(filled).toEqual(expect.arrayContaining(['campaigns', 'pairs', 'predictions', 'batches', 'outcome_diameters', 'settings']));
+    const filled = Object.entries(before)
+      .filter(([, rows]) => rows.length > 0)
+      .map(([table]) => table);
+    expect(filled).toEqual(
+      expect.arrayContaining(['campaigns', 'pairs', 'predictions', 'batches', 'outcome_diameters', 'settings']),
+    );
     closeStore();
 
     const file = join(outside, 'copy.sqlite');
@@ -61,7 +65,9 @@ describe('backup and restore', () => {
     expect(after).toEqual(before);
     closeStore();
     const aside = new Database(report.previousStoreKeptAt, { readonly: true });
-    expect(aside.prepare("SELECT count(*) AS n FROM campaigns WHERE name = 'Written after the backup'").get()).toEqual({ n: 1 });
+    expect(aside.prepare("SELECT count(*) AS n FROM campaigns WHERE name = 'Written after the backup'").get()).toEqual({
+      n: 1,
+    });
     aside.close();
     expect(report.previousStoreKeptAt).toMatch(/backups[/\\]pairwright-v\d+-.*-before-restore\.sqlite$/);
   });

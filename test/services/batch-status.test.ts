@@ -138,7 +138,11 @@ describe('recording an outcome moves the statuses', () => {
     const { campaign, pair } = await campaignWithPair();
     const batch = await ok<SavedBatch>('batches.save', { name: 'AuPd 2', campaignId: campaign.id, design: auPd });
     const gold = await stock('haucl4-3h2o', 1, 'g');
-    const failed = await dispatch(context, 'outcomes.record', { batchId: batch.id, sizes: SIZES, observed: { decision: 'confirmed' } });
+    const failed = await dispatch(context, 'outcomes.record', {
+      batchId: batch.id,
+      sizes: SIZES,
+      observed: { decision: 'confirmed' },
+    });
     expect(failed.ok).toBe(false);
     expect((await ok<SavedBatch>('batches.get', { id: batch.id })).status).toBe('planned');
     expect((await ok<CandidatePair[]>('pairs.list', { campaignId: campaign.id }))[0]?.status).toBe('candidate');
@@ -162,7 +166,11 @@ describe('batch lists follow the campaign', () => {
     await ok('campaigns.archive', { id: old.id });
     const ids = (list: BatchSummary[]) => list.map((b) => b.id);
     expect(ids(await ok<BatchSummary[]>('batches.list', {}))).toEqual([loose.id, mine.id]);
-    expect(ids(await ok<BatchSummary[]>('batches.list', { includeArchived: true }))).toEqual([loose.id, theirs.id, mine.id]);
+    expect(ids(await ok<BatchSummary[]>('batches.list', { includeArchived: true }))).toEqual([
+      loose.id,
+      theirs.id,
+      mine.id,
+    ]);
     expect(ids(await ok<BatchSummary[]>('batches.list', { campaignId: old.id }))).toEqual([theirs.id]);
 
     const seeds = await ok<SavedBatch>('batches.save', { name: 'Au seeds', campaignId: current.id, design: auSeeds });

@@ -46,9 +46,21 @@ describe('catalog', () => {
       wasteStream: 'precious-metal-recovery',
     });
     expect(added.molarMassGPerMol).toBeCloseTo(326.43, 1); // CRC Handbook (from memory): 326.43
-    expect(await dispatch(context, 'reagents.add', { ...added, key: 'k2pdcl4' })).toMatchObject({ ok: false, error: { code: 'conflict', field: 'key' } });
-    expect(await dispatch(context, 'reagents.add', { ...added, key: 'broken', formula: 'K2PdCl4)' })).toMatchObject({ ok: false, error: { field: 'formula' } });
-    expect(await dispatch(context, 'reagents.add', { ...added, key: 'broken', metal: { symbol: 'Pt', oxidationState: 2, coupleId: 'PtCl4/Pt' } })).toMatchObject({
+    expect(await dispatch(context, 'reagents.add', { ...added, key: 'k2pdcl4' })).toMatchObject({
+      ok: false,
+      error: { code: 'conflict', field: 'key' },
+    });
+    expect(await dispatch(context, 'reagents.add', { ...added, key: 'broken', formula: 'K2PdCl4)' })).toMatchObject({
+      ok: false,
+      error: { field: 'formula' },
+    });
+    expect(
+      await dispatch(context, 'reagents.add', {
+        ...added,
+        key: 'broken',
+        metal: { symbol: 'Pt', oxidationState: 2, coupleId: 'PtCl4/Pt' },
+      }),
+    ).toMatchObject({
       ok: false,
       error: { field: 'metal.symbol' },
     });
@@ -59,8 +71,15 @@ describe('catalog', () => {
 describe('designing and saving batches', () => {
   it('designs with the thermodynamic prediction wired in', async () => {
     const design = await ok<BatchDesign>('batches.design', ptNi);
-    expect(design.thermodynamicSurfaceElement === null || ['Pt', 'Ni'].includes(design.thermodynamicSurfaceElement as string)).toBe(true);
-    expect(design.checks.some((c) => c.kind === 'kinetics-vs-thermodynamics' && c.message.startsWith('No thermodynamic prediction'))).toBe(false);
+    expect(
+      design.thermodynamicSurfaceElement === null ||
+        ['Pt', 'Ni'].includes(design.thermodynamicSurfaceElement as string),
+    ).toBe(true);
+    expect(
+      design.checks.some(
+        (c) => c.kind === 'kinetics-vs-thermodynamics' && c.message.startsWith('No thermodynamic prediction'),
+      ),
+    ).toBe(false);
     expect(design.latticeNm.Pt).toBeCloseTo(0.39242, 4);
     // the same answer as the prediction model at the designed particle (x_B 0.25, 4 nm, 25 °C)
     const prediction = predictPair('Pt', 'Ni', { xB: 0.25, diameterNm: 4, shape: 'sphere', temperatureK: 298.15 });
@@ -81,15 +100,23 @@ describe('designing and saving batches', () => {
     const cases: [unknown, string][] = [
       [{ ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1.2 } }, 'design.size.xB'],
       [{ ...ptNi, reducer: undefined }, 'reducer'],
-      [{ ...ptNi, precursors: [ptNi.precursors[0], { element: 'Ni', reagentKey: 'agno3' }] }, 'precursors.1.reagentKey'],
+      [
+        { ...ptNi, precursors: [ptNi.precursors[0], { element: 'Ni', reagentKey: 'agno3' }] },
+        'precursors.1.reagentKey',
+      ],
     ];
     for (const [design, field] of cases) {
       const result = await dispatch(context, 'batches.save', { name: 'bad', design });
       expect(result.ok).toBe(false);
       expect(result.ok ? '' : result.error.field).toBe(field);
     }
-    expect(await dispatch(context, 'batches.save', { name: '', design: ptNi })).toMatchObject({ ok: false, error: { field: 'name' } });
-    expect(await dispatch(context, 'batches.save', { name: 'x', design: ptNi, lots: [{ reagentKey: 'ctab', lot: 'L1' }] })).toMatchObject({ ok: false, error: { field: 'lots.0.reagentKey' } });
+    expect(await dispatch(context, 'batches.save', { name: '', design: ptNi })).toMatchObject({
+      ok: false,
+      error: { field: 'name' },
+    });
+    expect(
+      await dispatch(context, 'batches.save', { name: 'x', design: ptNi, lots: [{ reagentKey: 'ctab', lot: 'L1' }] }),
+    ).toMatchObject({ ok: false, error: { field: 'lots.0.reagentKey' } });
     expect(count('batches')).toBe(0);
   });
 
@@ -103,7 +130,11 @@ describe('designing and saving batches', () => {
   });
 
   it('keeps a saved batch as computed when the catalog changes, and says so', async () => {
-    const saved = await ok<SavedBatch>('batches.save', { name: 'PtNi 4 nm', design: ptNi, lots: [{ reagentKey: 'nabh4', lot: 'BCBX9' }] });
+    const saved = await ok<SavedBatch>('batches.save', {
+      name: 'PtNi 4 nm',
+      design: ptNi,
+      lots: [{ reagentKey: 'nabh4', lot: 'BCBX9' }],
+    });
     expect(saved.status).toBe('planned');
     expect(saved.catalogChanges).toEqual([]);
     expect(saved.lots).toEqual([{ reagentKey: 'nabh4', lot: 'BCBX9' }]);
@@ -111,25 +142,42 @@ describe('designing and saving batches', () => {
 
     const catalog = await ok<CatalogReagent[]>('reagents.catalog', {});
     const h2ptcl6 = catalog.find((r) => r.key === 'h2ptcl6-6h2o') as CatalogReagent;
-    const edited = await ok<CatalogReagent>('reagents.edit', { ...h2ptcl6, formula: 'H2PtCl6·5H2O', name: 'Chloroplatinic acid (assay edited)' });
+    const edited = await ok<CatalogReagent>('reagents.edit', {
+      ...h2ptcl6,
+      formula: 'H2PtCl6·5H2O',
+      name: 'Chloroplatinic acid (assay edited)',
+    });
     expect(edited.revision).toBe(2);
 
     const reread = await ok<SavedBatch>('batches.get', { id: saved.id });
     expect(reread.design.reagents.find((r) => r.key === 'h2ptcl6-6h2o')?.massMg).toBe(massBefore);
-    expect(reread.catalogChanges).toEqual([{ reagentKey: 'h2ptcl6-6h2o', name: 'Chloroplatinic acid hexahydrate', savedRevision: 1, currentRevision: 2 }]);
+    expect(reread.catalogChanges).toEqual([
+      { reagentKey: 'h2ptcl6-6h2o', name: 'Chloroplatinic acid hexahydrate', savedRevision: 1, currentRevision: 2 },
+    ]);
     const list = await ok<{ id: number; catalogChanged: boolean }[]>('batches.list', {});
     expect(list[0]?.catalogChanged).toBe(true);
   });
 
   it('moves planned → made → characterized, refuses skipping, records stock dates', async () => {
     const saved = await ok<SavedBatch>('batches.save', { name: 'B', design: ptNi });
-    expect(await dispatch(context, 'batches.setStatus', { id: saved.id, status: 'characterized' })).toMatchObject({ ok: false, error: { field: 'status' } });
+    expect(await dispatch(context, 'batches.setStatus', { id: saved.id, status: 'characterized' })).toMatchObject({
+      ok: false,
+      error: { field: 'status' },
+    });
     await ok('batches.setStatus', { id: saved.id, status: 'made' });
-    const done = await ok<SavedBatch>('batches.setStatus', { id: saved.id, status: 'characterized', measured: { diameterNm: 4.3 } });
+    const done = await ok<SavedBatch>('batches.setStatus', {
+      id: saved.id,
+      status: 'characterized',
+      measured: { diameterNm: 4.3 },
+    });
     expect(done.status).toBe('characterized');
     expect(done.measured).toEqual({ diameterNm: 4.3, particlesPerMl: null });
     const old = new Date(Date.now() - 3 * 3600_000).toISOString();
-    const recorded = await ok<SavedBatch>('batches.record', { id: saved.id, stocks: [{ reagentKey: 'nabh4', preparedAt: old }], notes: 'ice bath' });
+    const recorded = await ok<SavedBatch>('batches.record', {
+      id: saved.id,
+      stocks: [{ reagentKey: 'nabh4', preparedAt: old }],
+      notes: 'ice bath',
+    });
     expect(recorded.notes).toBe('ice bath');
     expect(recorded.stockAges[0]?.stale).toBe(true);
     expect(recorded.stockAges[0]?.ageHours).toBeGreaterThan(2.9);
@@ -138,7 +186,11 @@ describe('designing and saving batches', () => {
   it('lineage: a growth batch takes the seed batch’s measured size and concentration; the seed batch cannot be removed', async () => {
     const seeds = await ok<SavedBatch>('batches.save', { name: 'Au seeds 15 nm', design: auSeeds });
     await ok('batches.setStatus', { id: seeds.id, status: 'made' });
-    await ok('batches.setStatus', { id: seeds.id, status: 'characterized', measured: { diameterNm: 13.2, particlesPerMl: 2.1e12 } });
+    await ok('batches.setStatus', {
+      id: seeds.id,
+      status: 'characterized',
+      measured: { diameterNm: 13.2, particlesPerMl: 2.1e12 },
+    });
     const growth = await ok<SavedBatch>('batches.save', {
       name: 'Au@Pt 1 ML',
       design: {
@@ -157,8 +209,16 @@ describe('designing and saving batches', () => {
     expect(growth.design.coreDiameterNm).toBe(13.2);
     expect(growth.design.particles).toBeCloseTo(2.1e13, -6);
     expect(growth.input.seeds?.diameterNm).toBe(13.2);
-    expect(await dispatch(context, 'batches.remove', { id: seeds.id, confirm: true })).toMatchObject({ ok: false, error: { code: 'conflict' } });
-    expect(await dispatch(context, 'batches.save', { name: 'x', design: { ...growth.input, seeds: { metal: 'Pt', volumeMl: 1, seedBatchId: seeds.id } } })).toMatchObject({
+    expect(await dispatch(context, 'batches.remove', { id: seeds.id, confirm: true })).toMatchObject({
+      ok: false,
+      error: { code: 'conflict' },
+    });
+    expect(
+      await dispatch(context, 'batches.save', {
+        name: 'x',
+        design: { ...growth.input, seeds: { metal: 'Pt', volumeMl: 1, seedBatchId: seeds.id } },
+      }),
+    ).toMatchObject({
       ok: false,
       error: { field: 'seeds.metal' },
     });
@@ -168,10 +228,25 @@ describe('designing and saving batches', () => {
 describe('reagent lists', () => {
   it('totals batches against the inventory and exports CSV', async () => {
     const a = await ok<SavedBatch>('batches.save', { name: 'A', design: ptNi });
-    const b = await ok<SavedBatch>('batches.save', { name: 'B', design: { ...ptNi, amount: { kind: 'total-metal', totalMetalMmol: 0.3 } } });
-    await ok('inventory.upsert', { reagentKey: 'h2ptcl6-6h2o', amount: 100, unit: 'mg', location: 'desiccator', lot: 'MK1' });
-    expect(await dispatch(context, 'inventory.upsert', { reagentKey: 'nope', amount: 1, unit: 'g' })).toMatchObject({ ok: false, error: { field: 'reagentKey' } });
-    expect(await dispatch(context, 'inventory.upsert', { reagentKey: 'nabh4', amount: -1, unit: 'g' })).toMatchObject({ ok: false, error: { field: 'amount' } });
+    const b = await ok<SavedBatch>('batches.save', {
+      name: 'B',
+      design: { ...ptNi, amount: { kind: 'total-metal', totalMetalMmol: 0.3 } },
+    });
+    await ok('inventory.upsert', {
+      reagentKey: 'h2ptcl6-6h2o',
+      amount: 100,
+      unit: 'mg',
+      location: 'desiccator',
+      lot: 'MK1',
+    });
+    expect(await dispatch(context, 'inventory.upsert', { reagentKey: 'nope', amount: 1, unit: 'g' })).toMatchObject({
+      ok: false,
+      error: { field: 'reagentKey' },
+    });
+    expect(await dispatch(context, 'inventory.upsert', { reagentKey: 'nabh4', amount: -1, unit: 'g' })).toMatchObject({
+      ok: false,
+      error: { field: 'amount' },
+    });
     const list = await ok<ReagentList>('reagents.list', { batchIds: [a.id, b.id] });
     const pt = list.lines.find((l) => l.key === 'h2ptcl6-6h2o');
     // 0.075 + 0.225 mmol = 0.3 mmol × 517.91 g/mol = 155.4 mg against 100 mg on hand
@@ -181,7 +256,13 @@ describe('reagent lists', () => {
     const csv = await ok<{ csv: string; filename: string }>('reagents.csv', { batchIds: [a.id, b.id] });
     expect(csv.filename).toBe(`pairwright-reagents-batches-${a.id}-${b.id}.csv`);
     expect(csv.csv.split('\n')[0]).toContain('reagent,formula,roles');
-    expect(await dispatch(context, 'reagents.list', { batchIds: [a.id, 999] })).toMatchObject({ ok: false, error: { code: 'not_found', field: 'batchIds.1' } });
-    expect(await dispatch(context, 'reagents.list', { batchIds: [] })).toMatchObject({ ok: false, error: { field: 'batchIds' } });
+    expect(await dispatch(context, 'reagents.list', { batchIds: [a.id, 999] })).toMatchObject({
+      ok: false,
+      error: { code: 'not_found', field: 'batchIds.1' },
+    });
+    expect(await dispatch(context, 'reagents.list', { batchIds: [] })).toMatchObject({
+      ok: false,
+      error: { field: 'batchIds' },
+    });
   });
 });

@@ -56,9 +56,13 @@ const DEMO_TABLES = [
   'inventory',
 ] as const;
 const counts = (db: Store['db'] = store.db): Record<string, number> =>
-  Object.fromEntries(DEMO_TABLES.map((table) => [table, (db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n]));
+  Object.fromEntries(
+    DEMO_TABLES.map((table) => [table, (db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n]),
+  );
 
-async function loadDemo(on: ServiceContext = context): Promise<{ campaign: Campaign; batches: Map<string, BatchSummary> }> {
+async function loadDemo(
+  on: ServiceContext = context,
+): Promise<{ campaign: Campaign; batches: Map<string, BatchSummary> }> {
   const campaign = await ok<Campaign>('campaigns.loadDemo', {}, on);
   const list = await ok<BatchSummary[]>('batches.list', { campaignId: campaign.id }, on);
   return { campaign, batches: new Map(list.map((b) => [b.name, b])) };
@@ -124,13 +128,22 @@ describe('the demo campaign', () => {
       expect(outcome.compositions[0]?.measurements.map((m) => m.method)).toEqual(spec.composition.map((m) => m.method));
       expect(outcome.lineScans).toHaveLength(1);
       expect(outcome.lineScans[0]?.name).toMatch(/^Demo .*invented/);
-      expect(outcome.observed).toMatchObject({ label: spec.observed, decision: 'confirmed', suggestedLabel: spec.observed });
+      expect(outcome.observed).toMatchObject({
+        label: spec.observed,
+        decision: 'confirmed',
+        suggestedLabel: spec.observed,
+      });
       expect(outcome.observed?.reason.startsWith(DEMO_NOTE_PREFIX)).toBe(true);
       expect(outcome.predictions.find((p) => p.source === 'analytic')).toBeDefined();
     }
     for (const name of [DEMO_BATCH_NAMES.pdSeeds, DEMO_BATCH_NAMES.agPd]) {
       const outcome = await ok<BatchOutcome>('outcomes.get', { batchId: batchId(batches, name) });
-      expect([outcome.sizes.length, outcome.compositions.length, outcome.lineScans.length, outcome.observed]).toEqual([0, 0, 0, null]);
+      expect([outcome.sizes.length, outcome.compositions.length, outcome.lineScans.length, outcome.observed]).toEqual([
+        0,
+        0,
+        0,
+        null,
+      ]);
     }
 
     // The prediction-vs-outcome table and the confusion matrix hold the two characterized batches.
@@ -138,7 +151,9 @@ describe('the demo campaign', () => {
     expect(rows).toHaveLength(4);
     const observedRows = rows.filter((r) => r.observed !== null);
     expect(observedRows.map((r) => r.batchName).sort()).toEqual([DEMO_BATCH_NAMES.pdAu, DEMO_BATCH_NAMES.ptNi].sort());
-    expect(observedRows.every((r) => r.predicted !== null && r.agreement !== null && r.meanDiameterNm !== null)).toBe(true);
+    expect(observedRows.every((r) => r.predicted !== null && r.agreement !== null && r.meanDiameterNm !== null)).toBe(
+      true,
+    );
     const confusion = await ok<CampaignConfusion>('outcomes.confusion', { campaignId: campaign.id });
     expect(confusion.matrix.total).toBe(2);
     expect(confusion.unmatched).toBe(0);
@@ -155,8 +170,12 @@ describe('the demo campaign', () => {
       const fit = outcome.sizes[0]?.lognormal;
       const n = spec.sizes.count;
       // Large-sample standard errors of the log-normal MLE (from memory): μ ± σ/√n, σ ± σ/√(2n); allow 4 of them.
-      expect(Math.abs((fit?.mu ?? Number.NaN) - Math.log(spec.sizes.medianNm))).toBeLessThan((4 * spec.sizes.sigmaLog) / Math.sqrt(n));
-      expect(Math.abs((fit?.sigma ?? Number.NaN) - spec.sizes.sigmaLog)).toBeLessThan((4 * spec.sizes.sigmaLog) / Math.sqrt(2 * n));
+      expect(Math.abs((fit?.mu ?? Number.NaN) - Math.log(spec.sizes.medianNm))).toBeLessThan(
+        (4 * spec.sizes.sigmaLog) / Math.sqrt(n),
+      );
+      expect(Math.abs((fit?.sigma ?? Number.NaN) - spec.sizes.sigmaLog)).toBeLessThan(
+        (4 * spec.sizes.sigmaLog) / Math.sqrt(2 * n),
+      );
 
       // The four-model fit picks the kind the scan was generated as, with the particle's radius.
       const analysis = outcome.lineScans[0]?.analysis;
@@ -177,7 +196,9 @@ describe('the demo campaign', () => {
     const { batches } = await loadDemo();
     const inventory = await ok<InventoryRecord[]>('inventory.list', {});
     expect(inventory.length).toBeGreaterThanOrEqual(2);
-    expect(inventory.every((item) => item.location === DEMO_INVENTORY_LOCATION && item.lot.startsWith('DEMO-'))).toBe(true);
+    expect(inventory.every((item) => item.location === DEMO_INVENTORY_LOCATION && item.lot.startsWith('DEMO-'))).toBe(
+      true,
+    );
     const list = await ok<ReagentList>('reagents.list', { batchIds: [batchId(batches, DEMO_BATCH_NAMES.agPd)] });
     const short = list.lines.filter((line) => line.status === 'short');
     expect(short.map((line) => line.key)).toEqual(['agno3']);
@@ -185,7 +206,13 @@ describe('the demo campaign', () => {
   });
 
   it('leaves a real inventory alone', async () => {
-    await ok('inventory.upsert', { reagentKey: 'haucl4-3h2o', amount: 1, unit: 'g', location: 'desiccator', lot: 'MK1' });
+    await ok('inventory.upsert', {
+      reagentKey: 'haucl4-3h2o',
+      amount: 1,
+      unit: 'g',
+      location: 'desiccator',
+      lot: 'MK1',
+    });
     await loadDemo();
     const inventory = await ok<InventoryRecord[]>('inventory.list', {});
     expect(inventory.map((item) => item.lot)).toEqual(['MK1']);

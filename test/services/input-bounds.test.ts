@@ -22,7 +22,12 @@ async function refusal(name: string, input: unknown): Promise<{ code: string; fi
 
 describe('input bounds and odd values', () => {
   it('refuses denormal and absurd temperatures, naming the field', async () => {
-    expect(await refusal('prediction.predict', { pair: 'Au-Pd', conditions: { xB: 0.5, diameterNm: 5, temperatureK: 5e-324 } })).toMatchObject({
+    expect(
+      await refusal('prediction.predict', {
+        pair: 'Au-Pd',
+        conditions: { xB: 0.5, diameterNm: 5, temperatureK: 5e-324 },
+      }),
+    ).toMatchObject({
       code: 'invalid_input',
       field: 'conditions.temperatureK',
     });
@@ -35,8 +40,12 @@ describe('input bounds and odd values', () => {
   it('refuses extreme probe widths and cut-offs', async () => {
     const xyz = '2\nProperties=species:S:1:pos:R:3\nAu 0 0 0\nAu 0 0 2.885\n';
     expect(await refusal('simulation.energy', { xyz, cutoffAngstrom: 100 })).toMatchObject({ field: 'cutoffAngstrom' });
-    expect(await refusal('outcomes.refitLineScan', { id: 1, probeSigmaNm: 1e-6 })).toMatchObject({ field: 'probeSigmaNm' });
-    expect(await refusal('outcomes.refitLineScan', { id: 1, probeSigmaNm: 1e6 })).toMatchObject({ field: 'probeSigmaNm' });
+    expect(await refusal('outcomes.refitLineScan', { id: 1, probeSigmaNm: 1e-6 })).toMatchObject({
+      field: 'probeSigmaNm',
+    });
+    expect(await refusal('outcomes.refitLineScan', { id: 1, probeSigmaNm: 1e6 })).toMatchObject({
+      field: 'probeSigmaNm',
+    });
   });
 
   it('refuses NUL characters in names with a field message and stores nothing', async () => {

@@ -22,7 +22,17 @@ afterEach(() => {
 });
 
 const spec = (sweeps: number) =>
-  simulationSpecSchema.parse({ elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 6, temperatureK: 600, sweeps, seed: 3, stopping: null });
+  simulationSpecSchema.parse({
+    elementA: 'Ag',
+    elementB: 'Pd',
+    xB: 0.5,
+    shape: 'cuboctahedron',
+    shells: 6,
+    temperatureK: 600,
+    sweeps,
+    seed: 3,
+    stopping: null,
+  });
 
 function freshStore(): Store {
   dataDir = mkdtempSync(join(tmpdir(), 'pairwright-stopping-'));
@@ -47,9 +57,25 @@ describe('stopping Monte Carlo runs', () => {
     const gone = spawnSync(process.execPath, ['-e', 'process.stdout.write(String(process.pid))'], { encoding: 'utf8' });
     const deadPid = Number(gone.stdout); // that process has exited: its pid is free
     const parsed = spec(100);
-    const left = insertRun(db.db, { spec: parsed, label: 'left running', pairId: null, engineVersion: 'x', plannedAtoms: 1, totalSweeps: 100, owner: `${deadPid}-abcdef` });
+    const left = insertRun(db.db, {
+      spec: parsed,
+      label: 'left running',
+      pairId: null,
+      engineVersion: 'x',
+      plannedAtoms: 1,
+      totalSweeps: 100,
+      owner: `${deadPid}-abcdef`,
+    });
     markRunning(db.db, left.id);
-    const alive = insertRun(db.db, { spec: parsed, label: 'other live process', pairId: null, engineVersion: 'x', plannedAtoms: 1, totalSweeps: 100, owner: `${process.ppid}-abcdef` });
+    const alive = insertRun(db.db, {
+      spec: parsed,
+      label: 'other live process',
+      pairId: null,
+      engineVersion: 'x',
+      plannedAtoms: 1,
+      totalSweeps: 100,
+      owner: `${process.ppid}-abcdef`,
+    });
     db.close();
     store = null;
     const context = openWorkspace({ dataDir });
@@ -67,7 +93,10 @@ describe('stopping Monte Carlo runs', () => {
     for (let i = 0; i < MAX_QUEUED; i++) queue.enqueue(small, `run ${i}`, null);
     expect(() => queue.enqueue(small, 'one too many', null)).toThrow(/the run queue is full: 200 runs are waiting/);
     await queue.close();
-    const statuses = db.db.prepare('SELECT status, error FROM simulation_runs').all() as { status: string; error: string }[];
+    const statuses = db.db.prepare('SELECT status, error FROM simulation_runs').all() as {
+      status: string;
+      error: string;
+    }[];
     expect(statuses).toHaveLength(MAX_QUEUED);
     expect(statuses.every((row) => row.status === 'cancelled' && row.error.startsWith(APP_CLOSED))).toBe(true);
   });

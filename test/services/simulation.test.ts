@@ -35,7 +35,17 @@ async function waitForEnd(id: number, timeoutMs = 60_000): Promise<SimulationRun
   }
 }
 
-const small = { elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 3, temperatureK: 600, sweeps: 150, seed: 7, stopping: null };
+const small = {
+  elementA: 'Ag',
+  elementB: 'Pd',
+  xB: 0.5,
+  shape: 'cuboctahedron',
+  shells: 3,
+  temperatureK: 600,
+  sweeps: 150,
+  seed: 7,
+  stopping: null,
+};
 
 describe('simulation service', () => {
   it('by default a run stops at the answer (the default rule is stored) and a size-mismatched pair runs relaxed', async () => {
@@ -48,7 +58,13 @@ describe('simulation service', () => {
     expect(run.result?.stopping.stoppedAtAnswer).toBe(true);
     expect(run.result?.stopping.sweepsTaken).toBeLessThan(2000);
     expect(run.result?.surfaceXBStandardError).toBeLessThan(DEFAULT_STOPPING.surfaceStandardError);
-    const mismatched = await value<SimulationRunSummary>('simulation.start', { ...small, elementA: 'Au', elementB: 'Ni', shells: 2, sweeps: 30 });
+    const mismatched = await value<SimulationRunSummary>('simulation.start', {
+      ...small,
+      elementA: 'Au',
+      elementB: 'Ni',
+      shells: 2,
+      sweeps: 30,
+    });
     expect(mismatched.engineVersion).toBe(RELAXED_ENGINE_VERSION);
     expect((await waitForEnd(mismatched.id)).status).toBe('done');
     const relaxed = await value<SimulationRun>('simulation.get', { id: mismatched.id });
@@ -120,8 +136,14 @@ describe('simulation service', () => {
     for (const run of queued.slice(0, -1)) await value('simulation.cancel', { id: run.id });
     await queueFor(store).whenIdle();
 
-    expect(await dispatch(context, 'simulation.cancel', { id: first.id })).toMatchObject({ ok: false, error: { code: 'conflict' } });
-    expect(await dispatch(context, 'simulation.exportXyz', { id: first.id })).toMatchObject({ ok: false, error: { code: 'conflict' } });
+    expect(await dispatch(context, 'simulation.cancel', { id: first.id })).toMatchObject({
+      ok: false,
+      error: { code: 'conflict' },
+    });
+    expect(await dispatch(context, 'simulation.exportXyz', { id: first.id })).toMatchObject({
+      ok: false,
+      error: { code: 'conflict' },
+    });
   });
 
   it('refuses bad input before any work, naming the field', async () => {
@@ -143,9 +165,14 @@ describe('simulation service', () => {
       expect(result, JSON.stringify(change)).toMatchObject({ ok: false, error: { code: 'invalid_input', field } });
     }
     const fe = await dispatch(context, 'simulation.start', { ...small, elementA: 'Fe' });
-    expect(fe.ok ? '' : fe.error.message).toMatch(/Fe has no tight-binding parameters; the simulation supports Ni, Cu, Rh, Pd, Ag, Ir, Pt, Au, Al, Pb/);
+    expect(fe.ok ? '' : fe.error.message).toMatch(
+      /Fe has no tight-binding parameters; the simulation supports Ni, Cu, Rh, Pd, Ag, Ir, Pt, Au, Al, Pb/,
+    );
     expect(await value<SimulationRunSummary[]>('simulation.list', {})).toEqual([]);
-    expect(await dispatch(context, 'simulation.get', { id: 99 })).toMatchObject({ ok: false, error: { code: 'not_found', field: 'id' } });
+    expect(await dispatch(context, 'simulation.get', { id: 99 })).toMatchObject({
+      ok: false,
+      error: { code: 'not_found', field: 'id' },
+    });
   });
 
   it('computes the energy of a given structure and names what is wrong in a bad one', async () => {
@@ -153,17 +180,30 @@ describe('simulation service', () => {
     const energy = await value<StructureEnergy>('simulation.energy', { xyz });
     expect(energy.atoms).toBe(2);
     expect(energy.energyEv).toBeLessThan(0);
-    expect(await dispatch(context, 'simulation.energy', { xyz: '2\n\nFe 0 0 0\nAu 0 0 2.5\n' })).toMatchObject({ ok: false, error: { code: 'invalid_input', field: 'atoms[1].species' } });
-    expect(await dispatch(context, 'simulation.energy', { xyz: '3\n\nAu 0 0 0\n' })).toMatchObject({ ok: false, error: { field: 'xyz' } });
+    expect(await dispatch(context, 'simulation.energy', { xyz: '2\n\nFe 0 0 0\nAu 0 0 2.5\n' })).toMatchObject({
+      ok: false,
+      error: { code: 'invalid_input', field: 'atoms[1].species' },
+    });
+    expect(await dispatch(context, 'simulation.energy', { xyz: '3\n\nAu 0 0 0\n' })).toMatchObject({
+      ok: false,
+      error: { field: 'xyz' },
+    });
   });
 
   it('a run left behind by a process that ended is reported as interrupted', async () => {
-    const started = await value<SimulationRunSummary>('simulation.start', { ...small, shells: 6, sweeps: 50_000, stopping: null });
+    const started = await value<SimulationRunSummary>('simulation.start', {
+      ...small,
+      shells: 6,
+      sweeps: 50_000,
+      stopping: null,
+    });
     await value('simulation.cancel', { id: started.id });
     await queueFor(store).whenIdle();
     // Simulate a dead owner: a queued row whose heartbeat is old.
     store.db
-      .prepare("UPDATE simulation_runs SET status = 'running', error = NULL, finished_at = NULL, owner = 'gone', heartbeat_at = '2000-01-01T00:00:00.000Z' WHERE id = ?")
+      .prepare(
+        "UPDATE simulation_runs SET status = 'running', error = NULL, finished_at = NULL, owner = 'gone', heartbeat_at = '2000-01-01T00:00:00.000Z' WHERE id = ?",
+      )
       .run(started.id);
     const status = await value<SimulationRunSummary>('simulation.status', { id: started.id });
     expect(status.status).toBe('failed');

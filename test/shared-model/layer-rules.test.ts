@@ -44,9 +44,17 @@ describe('layer rules', () => {
   });
 
   it("refuses 'electron' in services, the CLI and the host, and allows it in electron/desktop/", async () => {
-    for (const path of ['electron/services/campaigns.ts', 'electron/cli/main.ts', 'electron/host/server.ts', 'electron/workers/montecarlo-queue.ts']) {
+    for (const path of [
+      'electron/services/campaigns.ts',
+      'electron/cli/main.ts',
+      'electron/host/server.ts',
+      'electron/workers/montecarlo-queue.ts',
+    ]) {
       const messages = await lintAs(path, fixture('service-imports-electron.ts'));
-      expect(messages.some((m) => m.startsWith('no-restricted-imports')), path).toBe(true);
+      expect(
+        messages.some((m) => m.startsWith('no-restricted-imports')),
+        path,
+      ).toBe(true);
     }
     const inDesktop = await lintAs('electron/desktop/main.ts', fixture('service-imports-electron.ts'));
     expect(inDesktop.filter((m) => m.startsWith('no-restricted-imports'))).toEqual([]);
@@ -55,7 +63,10 @@ describe('layer rules', () => {
   it('refuses db imports in the CLI and the host, and allows them in services', async () => {
     for (const path of ['electron/cli/main.ts', 'electron/host/serve.ts']) {
       const messages = await lintAs(path, fixture('cli-imports-db.ts'));
-      expect(messages.some((m) => m.startsWith('no-restricted-imports') && m.includes('through services')), path).toBe(true);
+      expect(
+        messages.some((m) => m.startsWith('no-restricted-imports') && m.includes('through services')),
+        path,
+      ).toBe(true);
     }
     const inService = await lintAs('electron/services/workspace.ts', fixture('cli-imports-db.ts'));
     expect(inService.filter((m) => m.startsWith('no-restricted-imports'))).toEqual([]);
@@ -64,26 +75,46 @@ describe('layer rules', () => {
   it('refuses a promise nobody awaits or handles', async () => {
     const messages = await lintAs('electron/services/campaigns.ts', fixture('floating-promise.ts'));
     expect(messages.some((m) => m.startsWith('@typescript-eslint/no-floating-promises'))).toBe(true);
-    const handled = await lintAs('electron/services/campaigns.ts', fixture('floating-promise.ts').replace('  save();', '  void save();'));
+    const handled = await lintAs(
+      'electron/services/campaigns.ts',
+      fixture('floating-promise.ts').replace('  save();', '  void save();'),
+    );
     expect(handled.filter((m) => m.startsWith('@typescript-eslint/no-floating-promises'))).toEqual([]);
   });
 
   it('the same pure file lints clean in shared-model (the rules do not refuse everything)', async () => {
-    const messages = await lintAs('shared-model/prediction/rank.ts', 'export const twice = (x: number): number => 2 * x;\n');
+    const messages = await lintAs(
+      'shared-model/prediction/rank.ts',
+      'export const twice = (x: number): number => 2 * x;\n',
+    );
     expect(messages).toEqual([]);
   });
 
   it('shared-model compiler settings reject Node globals', () => {
     const dir = tempDir('pairwright-layer-');
     writeFileSync(join(dir, 'uses-process.ts'), fixture('shared-model-uses-process.ts'));
-    const config = JSON.parse(readFileSync('shared-model/tsconfig.json', 'utf8')) as { compilerOptions: { lib: string[]; types: string[] } };
+    const config = JSON.parse(readFileSync('shared-model/tsconfig.json', 'utf8')) as {
+      compilerOptions: { lib: string[]; types: string[] };
+    };
     writeFileSync(
       join(dir, 'tsconfig.json'),
-      JSON.stringify({ compilerOptions: { ...config.compilerOptions, strict: true, noEmit: true, skipLibCheck: true, outDir: undefined, rootDir: undefined }, include: ['*.ts'] }),
+      JSON.stringify({
+        compilerOptions: {
+          ...config.compilerOptions,
+          strict: true,
+          noEmit: true,
+          skipLibCheck: true,
+          outDir: undefined,
+          rootDir: undefined,
+        },
+        include: ['*.ts'],
+      }),
     );
     let output = '';
     try {
-      execFileSync(process.execPath, [join(process.cwd(), 'node_modules', 'typescript', 'bin', 'tsc'), '-p', dir], { encoding: 'utf8' });
+      execFileSync(process.execPath, [join(process.cwd(), 'node_modules', 'typescript', 'bin', 'tsc'), '-p', dir], {
+        encoding: 'utf8',
+      });
     } catch (error) {
       output = String((error as { stdout?: string }).stdout ?? error);
     }

@@ -10,7 +10,10 @@ export interface CliRun {
   stderr: string;
 }
 
-export function runPairwright(args: readonly string[], options: { cwd?: string; env?: NodeJS.ProcessEnv } = {}): CliRun {
+export function runPairwright(
+  args: readonly string[],
+  options: { cwd?: string; env?: NodeJS.ProcessEnv } = {},
+): CliRun {
   const result = spawnSync(process.execPath, [CLI_PATH, ...args], {
     cwd: options.cwd ?? process.cwd(),
     env: { ...process.env, ...options.env },
@@ -22,7 +25,10 @@ export function runPairwright(args: readonly string[], options: { cwd?: string; 
 }
 
 /** Runs a command with --json and parses stdout; fails the test with stderr when the exit code is not 0. */
-export function runPairwrightJson<T>(args: readonly string[], options: { cwd?: string; env?: NodeJS.ProcessEnv } = {}): T {
+export function runPairwrightJson<T>(
+  args: readonly string[],
+  options: { cwd?: string; env?: NodeJS.ProcessEnv } = {},
+): T {
   const run = runPairwright([...args, '--json'], options);
   if (run.status !== 0) throw new Error(`pairwright ${args.join(' ')} exited ${run.status}: ${run.stderr}`);
   return JSON.parse(run.stdout) as T;

@@ -10,11 +10,27 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { guptaElement, guptaPair, pairDensityEv2, pairRepulsionEv } from '../../shared-model/montecarlo/gupta-parameters';
+import {
+  guptaElement,
+  guptaPair,
+  pairDensityEv2,
+  pairRepulsionEv,
+} from '../../shared-model/montecarlo/gupta-parameters';
 import { OffLatticeGupta } from '../../shared-model/montecarlo/offlattice-gupta';
 
 /** Atomic numbers (IUPAC periodic table) of the ten Gupta metals. */
-const ATOMIC_NUMBER: Record<string, number> = { Al: 13, Ni: 28, Cu: 29, Rh: 45, Pd: 46, Ag: 47, Ir: 77, Pt: 78, Au: 79, Pb: 82 };
+const ATOMIC_NUMBER: Record<string, number> = {
+  Al: 13,
+  Ni: 28,
+  Cu: 29,
+  Rh: 45,
+  Pd: 46,
+  Ag: 47,
+  Ir: 77,
+  Pt: 78,
+  Au: 79,
+  Pb: 82,
+};
 
 export interface EamTableOptions {
   /** Points of the r grid (0 .. cutoff). */
@@ -30,7 +46,8 @@ export interface EamTableOptions {
 
 function fmt(values: Float64Array): string {
   const lines: string[] = [];
-  for (let k = 0; k < values.length; k += 5) lines.push(Array.from(values.subarray(k, k + 5), (v) => v.toExponential(16)).join(' '));
+  for (let k = 0; k < values.length; k += 5)
+    lines.push(Array.from(values.subarray(k, k + 5), (v) => v.toExponential(16)).join(' '));
   return lines.join('\n');
 }
 
@@ -53,8 +70,10 @@ export function writeEamFs(elements: readonly string[], cutoffAngstrom: number, 
   rhoMax *= 1.5;
   const drho = rhoMax / (nrho - 1);
   const smooth = options.switched ? new OffLatticeGupta(elements) : null;
-  const density = (a: number, b: number, r: number) => (smooth ? smooth.pairTerms(a, b, r).rho : pairDensityEv2(guptaPair(elements[a]!, elements[b]!), r));
-  const repulsion = (a: number, b: number, r: number) => (smooth ? smooth.pairTerms(a, b, r).phi : pairRepulsionEv(guptaPair(elements[a]!, elements[b]!), r));
+  const density = (a: number, b: number, r: number) =>
+    smooth ? smooth.pairTerms(a, b, r).rho : pairDensityEv2(guptaPair(elements[a]!, elements[b]!), r);
+  const repulsion = (a: number, b: number, r: number) =>
+    smooth ? smooth.pairTerms(a, b, r).phi : pairRepulsionEv(guptaPair(elements[a]!, elements[b]!), r);
   const out: string[] = [
     'Pairwright Gupta (second-moment tight-binding) potential, Cleri & Rosato PRB 48, 22 (1993) parameters',
     smooth
@@ -87,7 +106,11 @@ export function writeEamFs(elements: readonly string[], cutoffAngstrom: number, 
 }
 
 /** LAMMPS data file (atom_style atomic) in a box with free boundaries around the cluster. */
-export function writeLammpsData(symbols: readonly string[], positions: Float64Array, elements: readonly string[]): string {
+export function writeLammpsData(
+  symbols: readonly string[],
+  positions: Float64Array,
+  elements: readonly string[],
+): string {
   const n = symbols.length;
   let lo = Infinity;
   let hi = -Infinity;
@@ -115,7 +138,9 @@ export function writeLammpsData(symbols: readonly string[], positions: Float64Ar
     '',
   ];
   for (let i = 0; i < n; i++) {
-    lines.push(`${i + 1} ${elements.indexOf(symbols[i]!) + 1} ${positions[3 * i]!.toFixed(12)} ${positions[3 * i + 1]!.toFixed(12)} ${positions[3 * i + 2]!.toFixed(12)}`);
+    lines.push(
+      `${i + 1} ${elements.indexOf(symbols[i]!) + 1} ${positions[3 * i]!.toFixed(12)} ${positions[3 * i + 1]!.toFixed(12)} ${positions[3 * i + 2]!.toFixed(12)}`,
+    );
   }
   return lines.join('\n') + '\n';
 }
@@ -131,7 +156,12 @@ export function runLammps(script: string, files: Record<string, string>, timeout
   try {
     for (const [name, content] of Object.entries(files)) writeFileSync(join(dir, name), content);
     writeFileSync(join(dir, 'in.pairwright'), script);
-    return execFileSync('lmp', ['-in', 'in.pairwright', '-log', 'none', '-nocite'], { cwd: dir, encoding: 'utf8', timeout: timeoutMs, maxBuffer: 64 * 1024 * 1024 });
+    return execFileSync('lmp', ['-in', 'in.pairwright', '-log', 'none', '-nocite'], {
+      cwd: dir,
+      encoding: 'utf8',
+      timeout: timeoutMs,
+      maxBuffer: 64 * 1024 * 1024,
+    });
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
@@ -159,20 +189,35 @@ export function runLammpsGuptaCluster(
     `pair_coeff * * gupta.eam.fs ${elements.join(' ')}`,
     ...commands,
   ].join('\n');
-  return runLammps(script, { 'cluster.data': writeLammpsData(symbols, positions, elements), 'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom, table) });
+  return runLammps(script, {
+    'cluster.data': writeLammpsData(symbols, positions, elements),
+    'gupta.eam.fs': writeEamFs(elements, cutoffAngstrom, table),
+  });
 }
 
 /** Total energy (eV) LAMMPS computes for a cluster with the tabulated Gupta potential. */
-export function lammpsGuptaEnergyEv(symbols: readonly string[], positions: Float64Array, cutoffAngstrom: number): number {
+export function lammpsGuptaEnergyEv(
+  symbols: readonly string[],
+  positions: Float64Array,
+  cutoffAngstrom: number,
+): number {
   const elements = [...new Set(symbols)];
-  const stdout = runLammpsGuptaCluster(symbols, positions, elements, cutoffAngstrom, ['thermo_style custom step pe', 'run 0', 'print "PAIRWRIGHT_ENERGY $(pe:%.12f)"']);
+  const stdout = runLammpsGuptaCluster(symbols, positions, elements, cutoffAngstrom, [
+    'thermo_style custom step pe',
+    'run 0',
+    'print "PAIRWRIGHT_ENERGY $(pe:%.12f)"',
+  ]);
   const match = /PAIRWRIGHT_ENERGY (-?[0-9.eE+-]+)/.exec(stdout);
   if (!match) throw new Error(`LAMMPS printed no energy:\n${stdout.slice(-2000)}`);
   return Number(match[1]);
 }
 
 /** Energy (eV) LAMMPS computes with the switched (off-lattice) table; `minimize` first when asked (cg). */
-export function lammpsSwitchedEnergyEv(symbols: readonly string[], positions: Float64Array, options: { minimize?: boolean } = {}): number {
+export function lammpsSwitchedEnergyEv(
+  symbols: readonly string[],
+  positions: Float64Array,
+  options: { minimize?: boolean } = {},
+): number {
   const elements = [...new Set(symbols)];
   const cutoff = new OffLatticeGupta(elements).maxCutoffAngstrom;
   const commands = ['thermo_style custom step pe fmax', 'thermo_modify format float %.12f'];

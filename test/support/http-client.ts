@@ -20,7 +20,9 @@ export function send(port: number, path: string, options: RawRequest = {}): Prom
     const req = request({ host: '127.0.0.1', port, path, method: options.method ?? 'GET', headers }, (res) => {
       const chunks: Buffer[] = [];
       res.on('data', (chunk: Buffer) => chunks.push(chunk));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks).toString('utf8') }));
+      res.on('end', () =>
+        resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks).toString('utf8') }),
+      );
     });
     req.on('error', reject);
     if (options.body !== undefined) req.write(options.body);
@@ -42,6 +44,15 @@ export function apiHeaders(cookie: string): Record<string, string> {
   return { cookie, [CALL_HEADER]: '1', 'content-type': 'application/json' };
 }
 
-export async function callApi(host: RunningHost, cookie: string, operation: string, input: unknown): Promise<RawResponse> {
-  return send(host.port, `/api/${operation}`, { method: 'POST', headers: apiHeaders(cookie), body: JSON.stringify(input) });
+export async function callApi(
+  host: RunningHost,
+  cookie: string,
+  operation: string,
+  input: unknown,
+): Promise<RawResponse> {
+  return send(host.port, `/api/${operation}`, {
+    method: 'POST',
+    headers: apiHeaders(cookie),
+    body: JSON.stringify(input),
+  });
 }

@@ -26,7 +26,8 @@ function commandExists(command: string): boolean {
  */
 export function referenceAvailable(tool: { python?: string; command?: string }): boolean {
   const missing: string[] = [];
-  if (tool.python && !pythonHas(tool.python)) missing.push(`python module "${tool.python}" in ${DEBIAN_PYTHON} (apt-get install python3-${tool.python})`);
+  if (tool.python && !pythonHas(tool.python))
+    missing.push(`python module "${tool.python}" in ${DEBIAN_PYTHON} (apt-get install python3-${tool.python})`);
   if (tool.command && !commandExists(tool.command)) missing.push(`command "${tool.command}"`);
   if (missing.length === 0) return true;
   const reason = `reference tier needs ${missing.join(' and ')}; .ci/run installs it`;

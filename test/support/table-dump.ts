@@ -2,7 +2,9 @@
 import type { SqliteDatabase } from '../../db/store';
 
 export function tableNames(db: SqliteDatabase): string[] {
-  const rows = db.prepare("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name").all();
+  const rows = db
+    .prepare("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name")
+    .all();
   return (rows as { name: string }[]).map((row) => row.name);
 }
 

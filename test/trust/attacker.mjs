@@ -12,11 +12,14 @@ let attempts = 0;
 
 function send(path, { method = 'GET', headers = {}, body } = {}) {
   return new Promise((resolve) => {
-    const req = request({ host: '127.0.0.1', port: Number(port), path, method, headers: { host: `127.0.0.1:${port}`, ...headers } }, (res) => {
-      let text = '';
-      res.on('data', (chunk) => (text += chunk));
-      res.on('end', () => resolve({ status: res.statusCode, headers: res.headers, body: text }));
-    });
+    const req = request(
+      { host: '127.0.0.1', port: Number(port), path, method, headers: { host: `127.0.0.1:${port}`, ...headers } },
+      (res) => {
+        let text = '';
+        res.on('data', (chunk) => (text += chunk));
+        res.on('end', () => resolve({ status: res.statusCode, headers: res.headers, body: text }));
+      },
+    );
     req.on('error', (error) => resolve({ status: 0, headers: {}, body: String(error) }));
     if (body !== undefined) req.write(body);
     req.end();
@@ -51,14 +54,22 @@ await tryHttp('index.html', '/index.html');
 await tryHttp('guessed login key', `/?login=${random()}`);
 await tryHttp('empty login key', '/?login=');
 for (const operation of ['campaigns.list', 'campaigns.create', 'batches.remove', 'pairs.list']) {
-  await tryHttp(`${operation} without a session`, `/api/${operation}`, { method: 'POST', headers: call, body: '{"name":"x","id":1}' });
+  await tryHttp(`${operation} without a session`, `/api/${operation}`, {
+    method: 'POST',
+    headers: call,
+    body: '{"name":"x","id":1}',
+  });
   await tryHttp(`${operation} with a guessed session`, `/api/${operation}`, {
     method: 'POST',
     headers: { ...call, cookie: `pairwright_session_${port}=${random()}` },
     body: '{"name":"x","id":1}',
   });
 }
-await tryHttp('old token header', '/api/campaigns.list', { method: 'POST', headers: { ...call, 'x-pairwright-token': random() }, body: '{}' });
+await tryHttp('old token header', '/api/campaigns.list', {
+  method: 'POST',
+  headers: { ...call, 'x-pairwright-token': random() },
+  body: '{}',
+});
 await tryHttp('traversal', '/..%2F..%2F..%2Fetc%2Fpasswd');
 await tryFile('list the data folder', () => readdirSync(dataDir));
 await tryFile('read the store', () => readFileSync(join(dataDir, 'pairwright.sqlite')));

@@ -43,7 +43,9 @@ beforeAll(async () => {
     target: 'node20',
     outfile: writer,
     external: ['better-sqlite3', 'tsx', 'tsx/*'],
-    banner: { js: "import { createRequire as pwCreateRequire } from 'node:module'; const require = pwCreateRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as pwCreateRequire } from 'node:module'; const require = pwCreateRequire(import.meta.url);",
+    },
     logLevel: 'error',
   });
   cpSync(defaultMigrationsDir(), join(bundleDir, 'migrations'), { recursive: true }); // as the desktop bundle does
@@ -54,8 +56,17 @@ async function prepareStore(): Promise<void> {
   dataDir = tempDir('pairwright-crash-');
   const context = openWorkspace({ dataDir });
   const campaign = await dispatchValue<Campaign>(context, 'campaigns.create', { name: 'Crash test' });
-  const pair = await dispatchValue<CandidatePair>(context, 'pairs.add', { campaignId: campaign.id, pair: 'Au-Pd', target: 'alloy' });
-  const batch = await dispatchValue<SavedBatch>(context, 'batches.save', { name: 'AuPd', campaignId: campaign.id, pairId: pair.id, design: auPd });
+  const pair = await dispatchValue<CandidatePair>(context, 'pairs.add', {
+    campaignId: campaign.id,
+    pair: 'Au-Pd',
+    target: 'alloy',
+  });
+  const batch = await dispatchValue<SavedBatch>(context, 'batches.save', {
+    name: 'AuPd',
+    campaignId: campaign.id,
+    pairId: pair.id,
+    design: auPd,
+  });
   batchId = batch.id;
   await closeWorkspace(context);
 }
@@ -78,7 +89,9 @@ function readAcks(text: string, into: Acks): void {
 /** Runs the writer; kills it with SIGKILL `killAfterMs` after its first acknowledgement (or lets it finish). */
 function runWriter(tag: string, count: number | 'forever', killAfterMs: number | null, acks: Acks): Promise<void> {
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, [writer, dataDir, tag, String(batchId), String(count)], { stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, [writer, dataDir, tag, String(batchId), String(count)], {
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let out = '';
     let err = '';
     let armed = false;
@@ -94,20 +107,31 @@ function runWriter(tag: string, count: number | 'forever', killAfterMs: number |
     child.on('exit', (code, signal) => {
       // Only whole lines count: a line cut by the kill was not acknowledged.
       readAcks(out.slice(0, out.lastIndexOf('\n') + 1), acks);
-      if (killAfterMs === null && code !== 0) reject(new Error(`writer ${tag} exited ${code}: ${err}${out.slice(-500)}`));
-      else if (killAfterMs !== null && signal !== 'SIGKILL' && code !== 0) reject(new Error(`writer ${tag} failed: ${err}`));
+      if (killAfterMs === null && code !== 0)
+        reject(new Error(`writer ${tag} exited ${code}: ${err}${out.slice(-500)}`));
+      else if (killAfterMs !== null && signal !== 'SIGKILL' && code !== 0)
+        reject(new Error(`writer ${tag} failed: ${err}`));
       else resolve();
     });
   });
 }
 
-function checkStore(acks: Acks): { integrity: string; lostCampaigns: string[]; lostImports: string[]; partialImports: string[] } {
+function checkStore(acks: Acks): {
+  integrity: string;
+  lostCampaigns: string[];
+  lostImports: string[];
+  partialImports: string[];
+} {
   const db = new Database(join(dataDir, STORE_FILE_NAME));
   try {
     const integrity = String(db.pragma('integrity_check', { simple: true }));
-    const names = new Set((db.prepare('SELECT name FROM campaigns').all() as { name: string }[]).map((row) => row.name));
+    const names = new Set(
+      (db.prepare('SELECT name FROM campaigns').all() as { name: string }[]).map((row) => row.name),
+    );
     const imports = db
-      .prepare('SELECT i.source_file AS file, count(d.seq) AS n FROM outcome_size_imports i LEFT JOIN outcome_diameters d ON d.import_id = i.id GROUP BY i.id')
+      .prepare(
+        'SELECT i.source_file AS file, count(d.seq) AS n FROM outcome_size_imports i LEFT JOIN outcome_diameters d ON d.import_id = i.id GROUP BY i.id',
+      )
       .all() as { file: string; n: number }[];
     const byFile = new Map(imports.map((row) => [row.file, row.n]));
     const expected = (file: string) => 20 + (Number(/-(\d+)\.csv$/.exec(file)?.[1] ?? 0) % 40);
@@ -115,7 +139,9 @@ function checkStore(acks: Acks): { integrity: string; lostCampaigns: string[]; l
       integrity,
       lostCampaigns: acks.campaigns.filter((name) => !names.has(name)),
       lostImports: [...acks.sizes.entries()].filter(([file, n]) => byFile.get(file) !== n).map(([file]) => file),
-      partialImports: imports.filter((row) => row.n !== expected(row.file)).map((row) => `${row.file}: ${row.n} diameters`),
+      partialImports: imports
+        .filter((row) => row.n !== expected(row.file))
+        .map((row) => `${row.file}: ${row.n} diameters`),
     };
   } finally {
     db.close();
@@ -164,7 +190,9 @@ describe('crashes and concurrent writers', () => {
       expect(hostErrors).toEqual([]);
       expect(acks.errors).toEqual([]);
       const state = checkStore({ ...acks, campaigns: [...acks.campaigns, ...hostNames] });
-      console.log(`[two writers] ${hostNames.length} host + ${acks.campaigns.length} program writes; lost ${state.lostCampaigns.length}`);
+      console.log(
+        `[two writers] ${hostNames.length} host + ${acks.campaigns.length} program writes; lost ${state.lostCampaigns.length}`,
+      );
       expect(state.lostCampaigns).toEqual([]);
       expect(state.integrity).toBe('ok');
     } finally {

@@ -67,7 +67,9 @@ describe.skipIf(missing !== null)('another local account against the browser hos
 
   const attack = async (asOtherUser: boolean): Promise<AttackReport> => {
     const args = [join(scriptDir, 'attacker.mjs'), String(fixture.host.port), dataDir];
-    const { stdout } = asOtherUser ? await run('runuser', ['-u', attackerUser, '--', NODE, ...args]) : await run(NODE, args);
+    const { stdout } = asOtherUser
+      ? await run('runuser', ['-u', attackerUser, '--', NODE, ...args])
+      : await run(NODE, args);
     return JSON.parse(stdout.trim().split('\n').pop() ?? '{}') as AttackReport;
   };
 

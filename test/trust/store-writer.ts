@@ -29,7 +29,10 @@ for (let step = 0; step < count; step++) {
   process.stdout.write(`ack campaign ${name}\n`);
   if (step % 3 === 0 && batchId > 0) {
     const { csv, n } = diameters(step);
-    const recorded = await dispatch(context, 'outcomes.record', { batchId, sizes: { csvText: csv, sourceFile: `${name}.csv` } });
+    const recorded = await dispatch(context, 'outcomes.record', {
+      batchId,
+      sizes: { csvText: csv, sourceFile: `${name}.csv` },
+    });
     if (!recorded.ok) {
       process.stdout.write(`error ${recorded.error.code} ${recorded.error.message}\n`);
       process.exit(1);

@@ -2,14 +2,29 @@
  * `pairwright recipe`, `pairwright reagents`, `pairwright catalog`, `pairwright batches …`: batch design
  * from the command line, with the same services as the app.
  */
-import type { BatchStatus, BatchSummary, CatalogReagent, InventoryRecord, StatusChange } from '../../../shared-model/api/batches';
+import type {
+  BatchStatus,
+  BatchSummary,
+  CatalogReagent,
+  InventoryRecord,
+  StatusChange,
+} from '../../../shared-model/api/batches';
 import { BATCH_STATUSES } from '../../../shared-model/api/batches';
 import type { BatchDesign } from '../../../shared-model/recipes/design';
 import type { BatchDesignRequest } from '../../../shared-model/recipes/design-input';
 import { ROUTES } from '../../../shared-model/recipes/design-input';
 import type { ReagentList } from '../../../shared-model/recipes/reagent-list';
 import { splitPair } from '../../../shared-model/api/schemas';
-import { CliError, optionalNumber, optionalString, readNumberText, requirePositional, type CliCommand, type OptionSpec, type ParsedArgs } from '../command';
+import {
+  CliError,
+  optionalNumber,
+  optionalString,
+  readNumberText,
+  requirePositional,
+  type CliCommand,
+  type OptionSpec,
+  type ParsedArgs,
+} from '../command';
 import { formatTable } from '../table';
 import { resolveCampaign } from './campaigns';
 
@@ -25,7 +40,11 @@ const RECIPE_OPTIONS: Record<string, OptionSpec> = {
   'total-metal': { type: 'string', description: 'total metal, mmol' },
   'particles-per-ml': { type: 'string', description: 'particle concentration target, particles/mL' },
   volume: { type: 'string', description: 'batch volume, mL' },
-  precursor: { type: 'string', multiple: true, description: 'EL=reagent-key[@stock mM], once per metal, e.g. Pt=h2ptcl6-6h2o@20' },
+  precursor: {
+    type: 'string',
+    multiple: true,
+    description: 'EL=reagent-key[@stock mM], once per metal, e.g. Pt=h2ptcl6-6h2o@20',
+  },
   reducer: { type: 'string', description: 'reducer reagent key, e.g. nabh4' },
   excess: { type: 'string', description: 'reducer excess over the electron balance (default 1)' },
   'reducer-stock': { type: 'string', description: 'reducer stock concentration, mM' },
@@ -40,7 +59,10 @@ const RECIPE_OPTIONS: Record<string, OptionSpec> = {
   'seed-conc': { type: 'string', description: 'seed concentration, particles/mL' },
   'seed-metal-mm': { type: 'string', description: 'seed concentration as metal, mM' },
   'seed-volume': { type: 'string', description: 'volume of seed dispersion used, mL' },
-  'seed-batch': { type: 'string', description: 'id of the batch the seeds come from (its measured size and concentration are used)' },
+  'seed-batch': {
+    type: 'string',
+    description: 'id of the batch the seeds come from (its measured size and concentration are used)',
+  },
   temperature: { type: 'string', description: 'highest temperature, °C (default by route)' },
   save: { type: 'string', description: 'save the batch under this name (status planned)' },
   campaign: { type: 'string', description: 'campaign (id or name) to file a saved batch under' },
@@ -48,9 +70,17 @@ const RECIPE_OPTIONS: Record<string, OptionSpec> = {
 
 function precursorOption(text: string): { element: string; reagentKey: string; stockMm?: number } {
   const match = /^([A-Z][a-z]?)=([a-z0-9-]+)(?:@([^@\s]+))?$/.exec(text.trim());
-  if (!match) throw new CliError(`--precursor "${text}" must look like Pt=h2ptcl6-6h2o or Pt=h2ptcl6-6h2o@20 (stock mM)`);
-  const stock = match[3] === undefined ? undefined : readNumberText(match[3], `--precursor "${text}": the stock concentration (mM)`);
-  return { element: match[1] as string, reagentKey: match[2] as string, ...(stock !== undefined ? { stockMm: stock } : {}) };
+  if (!match)
+    throw new CliError(`--precursor "${text}" must look like Pt=h2ptcl6-6h2o or Pt=h2ptcl6-6h2o@20 (stock mM)`);
+  const stock =
+    match[3] === undefined
+      ? undefined
+      : readNumberText(match[3], `--precursor "${text}": the stock concentration (mM)`);
+  return {
+    element: match[1] as string,
+    reagentKey: match[2] as string,
+    ...(stock !== undefined ? { stockMm: stock } : {}),
+  };
 }
 
 function requireNumber(args: ParsedArgs, name: string): number {
@@ -72,16 +102,23 @@ export function recipeRequest(args: ParsedArgs): BatchDesignRequest {
   const shellMl = optionalNumber(args, 'shell-ml');
   const diameter = optionalNumber(args, 'diameter');
   let size: BatchDesignRequest['size'];
-  if (single !== undefined) size = { kind: 'single-metal', element: single, diameterNm: requireNumber(args, 'diameter') };
-  else if (route === 'seed-mediated' || core !== undefined || shellMl !== undefined || (shellNm !== undefined && diameter === undefined)) {
+  if (single !== undefined)
+    size = { kind: 'single-metal', element: single, diameterNm: requireNumber(args, 'diameter') };
+  else if (
+    route === 'seed-mediated' ||
+    core !== undefined ||
+    shellMl !== undefined ||
+    (shellNm !== undefined && diameter === undefined)
+  ) {
     size = {
       kind: 'core-shell',
       ...(core !== undefined ? { coreDiameterNm: core } : {}),
       ...(shellNm !== undefined ? { shellThicknessNm: shellNm } : {}),
       ...(shellMl !== undefined ? { shellMonolayers: shellMl } : {}),
     };
-  } else if (shellNm !== undefined) size = { kind: 'core-shell-overall', diameterNm: requireNumber(args, 'diameter'), shellThicknessNm: shellNm };
-    else {
+  } else if (shellNm !== undefined)
+    size = { kind: 'core-shell-overall', diameterNm: requireNumber(args, 'diameter'), shellThicknessNm: shellNm };
+  else {
     // --composition is typed in at.% of B; the contract takes the atomic fraction x_B
     size = { kind: 'alloy', diameterNm: requireNumber(args, 'diameter'), xB: requireNumber(args, 'composition') / 100 };
   }
@@ -89,7 +126,11 @@ export function recipeRequest(args: ParsedArgs): BatchDesignRequest {
   const totalMetal = optionalNumber(args, 'total-metal');
   const particlesPerMl = optionalNumber(args, 'particles-per-ml');
   const rawPrecursors = args.values.precursor;
-  const precursorTexts = Array.isArray(rawPrecursors) ? rawPrecursors.map(String) : typeof rawPrecursors === 'string' ? [rawPrecursors] : [];
+  const precursorTexts = Array.isArray(rawPrecursors)
+    ? rawPrecursors.map(String)
+    : typeof rawPrecursors === 'string'
+      ? [rawPrecursors]
+      : [];
   const reducer = optionalString(args, 'reducer');
   const capping = optionalString(args, 'capping');
   const solvent = optionalString(args, 'solvent');
@@ -110,13 +151,22 @@ export function recipeRequest(args: ParsedArgs): BatchDesignRequest {
   if (reducer) {
     const excess = optionalNumber(args, 'excess');
     const stock = optionalNumber(args, 'reducer-stock');
-    request.reducer = { reagentKey: reducer, ...(excess !== undefined ? { excess } : {}), ...(stock !== undefined ? { stockMm: stock } : {}) };
+    request.reducer = {
+      reagentKey: reducer,
+      ...(excess !== undefined ? { excess } : {}),
+      ...(stock !== undefined ? { stockMm: stock } : {}),
+    };
   }
   if (capping) {
     const ratio = optionalNumber(args, 'capping-ratio');
     const mm = optionalNumber(args, 'capping-mm');
     const stock = optionalNumber(args, 'capping-stock');
-    request.capping = { reagentKey: capping, ...(ratio !== undefined ? { molPerMolMetal: ratio } : {}), ...(mm !== undefined ? { concentrationMm: mm } : {}), ...(stock !== undefined ? { stockMm: stock } : {}) };
+    request.capping = {
+      reagentKey: capping,
+      ...(ratio !== undefined ? { molPerMolMetal: ratio } : {}),
+      ...(mm !== undefined ? { concentrationMm: mm } : {}),
+      ...(stock !== undefined ? { stockMm: stock } : {}),
+    };
   }
   if (solvent) {
     const volume = optionalNumber(args, 'solvent-volume');
@@ -154,7 +204,16 @@ export function recipeJson(design: BatchDesign, saved: { id: number } | null) {
     coreAtoms: design.coreAtoms,
     shellAtoms: design.shellAtoms,
     particles: design.particles,
-    reagents: design.reagents.map((r) => ({ name: r.name, formula: r.formula, role: r.role, amountMmol: r.amountMmol, massMg: r.massMg, volumeMl: r.volumeMl, key: r.key, stockMm: r.stockMm })),
+    reagents: design.reagents.map((r) => ({
+      name: r.name,
+      formula: r.formula,
+      role: r.role,
+      amountMmol: r.amountMmol,
+      massMg: r.massMg,
+      volumeMl: r.volumeMl,
+      key: r.key,
+      stockMm: r.stockMm,
+    })),
     checks: design.checks.map((c) => ({ kind: c.kind, severity: c.severity, message: c.message })),
     hazards: design.hazards,
     design,
@@ -193,7 +252,9 @@ export function recipeText(design: BatchDesign, saved: { id: number } | null): s
 function parseBatchIds(text: string | undefined): number[] {
   if (!text) throw new CliError('--batches is required, e.g. --batches 3,4,7');
   const ids = text.split(',').map((part) => part.trim());
-  for (const id of ids) if (!/^\d+$/.test(id) || Number(id) === 0) throw new CliError(`--batches must be batch ids separated by commas, got "${text}"`);
+  for (const id of ids)
+    if (!/^\d+$/.test(id) || Number(id) === 0)
+      throw new CliError(`--batches must be batch ids separated by commas, got "${text}"`);
   return ids.map(Number);
 }
 
@@ -320,7 +381,14 @@ export const batchCommands: CliCommand[] = [
       const batch = await context.call('batches.setStatus', {
         id: Number(idText),
         status: requirePositional(args, 1, 'status') as BatchStatus,
-        ...(diameter !== undefined || conc !== undefined ? { measured: { ...(diameter !== undefined ? { diameterNm: diameter } : {}), ...(conc !== undefined ? { particlesPerMl: conc } : {}) } } : {}),
+        ...(diameter !== undefined || conc !== undefined
+          ? {
+              measured: {
+                ...(diameter !== undefined ? { diameterNm: diameter } : {}),
+                ...(conc !== undefined ? { particlesPerMl: conc } : {}),
+              },
+            }
+          : {}),
       });
       return { json: batch, text: statusText(batch) };
     },

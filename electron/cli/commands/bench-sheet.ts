@@ -13,7 +13,8 @@ export const benchSheetCommands: CliCommand[] = [
   {
     words: ['batches', 'sheet'],
     args: '<batch>',
-    summary: 'Write the bench sheet of a saved batch (reagents to pipette, order of addition, GHS hazards) as PDF or HTML',
+    summary:
+      'Write the bench sheet of a saved batch (reagents to pipette, order of addition, GHS hazards) as PDF or HTML',
     options: {
       pdf: { type: 'string', description: 'write the sheet as PDF to this file (needs Chromium)' },
       html: { type: 'string', description: 'write the sheet as printable HTML to this file' },
@@ -39,7 +40,9 @@ export const benchSheetCommands: CliCommand[] = [
         `Bench sheet for batch #${s.batchId} "${s.batchName}" (${s.campaignName ?? 'no campaign'}), ${s.pair}, ${s.routeLabel}`,
         `${s.reagents.length} reagents, ${s.procedure.length} steps, ${s.hazards.length} hazard and ` +
           `${s.precautions.length} precautionary statements`,
-        ...(written.length > 0 ? written.map((path) => `written: ${path}`) : ['give --pdf FILE or --html FILE to write it']),
+        ...(written.length > 0
+          ? written.map((path) => `written: ${path}`)
+          : ['give --pdf FILE or --html FILE to write it']),
       ];
       return { json: { ...document, written }, text: lines.join('\n') };
     },

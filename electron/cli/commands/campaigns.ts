@@ -16,7 +16,8 @@ export async function resolveCampaign(context: CliContext, reference: string): P
   const campaigns = await context.call('campaigns.list', { includeArchived: true });
   const byId = /^\d+$/.test(reference) ? campaigns.find((c) => c.id === Number(reference)) : undefined;
   const found = byId ?? campaigns.find((c) => c.name.toLowerCase() === reference.trim().toLowerCase());
-  if (!found) throw new CliError(`no campaign "${reference}" (give its id or exact name; see: pairwright campaigns list)`);
+  if (!found)
+    throw new CliError(`no campaign "${reference}" (give its id or exact name; see: pairwright campaigns list)`);
   return found;
 }
 
@@ -50,7 +51,10 @@ export const campaignCommands: CliCommand[] = [
     options: {},
     run: async (args, context) => {
       const campaign = await resolveCampaign(context, requirePositional(args, 0, 'campaign'));
-      const renamed = await context.call('campaigns.rename', { id: campaign.id, name: requirePositional(args, 1, 'new name') });
+      const renamed = await context.call('campaigns.rename', {
+        id: campaign.id,
+        name: requirePositional(args, 1, 'new name'),
+      });
       return { json: renamed, text: `renamed campaign ${renamed.id} to "${renamed.name}"` };
     },
   },
@@ -61,8 +65,14 @@ export const campaignCommands: CliCommand[] = [
     options: { restore: { type: 'boolean', description: 'restore instead of archive' } },
     run: async (args, context) => {
       const campaign = await resolveCampaign(context, requirePositional(args, 0, 'campaign'));
-      const updated = await context.call('campaigns.archive', { id: campaign.id, archived: args.values.restore !== true });
-      return { json: updated, text: `${updated.archived ? 'archived' : 'restored'} campaign ${updated.id} "${updated.name}"` };
+      const updated = await context.call('campaigns.archive', {
+        id: campaign.id,
+        archived: args.values.restore !== true,
+      });
+      return {
+        json: updated,
+        text: `${updated.archived ? 'archived' : 'restored'} campaign ${updated.id} "${updated.name}"`,
+      };
     },
   },
   {

@@ -66,7 +66,10 @@ export const pairCommands: CliCommand[] = [
         ...(optionalString(args, 'target') !== undefined ? { target: optionalString(args, 'target') } : {}),
         ...(optionalString(args, 'notes') !== undefined ? { notes: optionalString(args, 'notes') } : {}),
       });
-      return { json: pair, text: `pair ${pair.id} ${pair.elementA}-${pair.elementB}: target ${pair.target}, status ${pair.status}` };
+      return {
+        json: pair,
+        text: `pair ${pair.id} ${pair.elementA}-${pair.elementB}: target ${pair.target}, status ${pair.status}`,
+      };
     },
   },
   {

@@ -5,7 +5,14 @@
  */
 import type { ScreenStatus } from '../../../shared-model/api/screen';
 import { readUserNumber } from '../../../shared-model/text/user-number';
-import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type ParsedArgs } from '../command';
+import {
+  CliError,
+  optionalNumber,
+  optionalString,
+  requirePositional,
+  type CliCommand,
+  type ParsedArgs,
+} from '../command';
 import { formatTable } from '../table';
 import { resolveCampaign } from './campaigns';
 
@@ -56,9 +63,13 @@ export const screenCommands: CliCommand[] = [
   {
     words: ['screen'],
     args: '<campaign>',
-    summary: "Monte Carlo for every pair of a campaign's elements × composition × size (all cores but one); prints the matrix",
+    summary:
+      "Monte Carlo for every pair of a campaign's elements × composition × size (all cores but one); prints the matrix",
     options: {
-      xB: { type: 'string', description: 'compositions of B, comma-separated, in at.% (25,50,75) or fractions; required' },
+      xB: {
+        type: 'string',
+        description: 'compositions of B, comma-separated, in at.% (25,50,75) or fractions; required',
+      },
       'diameter-nm': { type: 'string', description: 'particle diameters in nm, comma-separated (e.g. 3,6); required' },
       'temperature-k': { type: 'string', description: 'temperature in K, required' },
       shape: { type: 'string', description: 'cuboctahedron (default), icosahedron, truncated-octahedron or sphere' },
@@ -100,7 +111,9 @@ export const screenCommands: CliCommand[] = [
         wallTimeMs: status.elapsedMs,
       };
       const skipped = started.skipped.map((s) => `skipped ${s.pair}: ${s.reason}`);
-      const failed = status.runs.filter((r) => r.status !== 'done').map((r) => `run ${r.runId} ${r.elementA}-${r.elementB} ${r.status}: ${r.error ?? ''}`);
+      const failed = status.runs
+        .filter((r) => r.status !== 'done')
+        .map((r) => `run ${r.runId} ${r.elementA}-${r.elementB} ${r.status}: ${r.error ?? ''}`);
       const text = [
         `${status.total} runs over ${started.concurrency} worker(s) for ${campaign.name}${status.elapsedMs !== null ? `, ${(status.elapsedMs / 1000).toFixed(1)} s` : ''}`,
         matrixText(status),

@@ -7,7 +7,15 @@ import type { SimulationRun, SimulationRunSummary } from '../../../shared-model/
 import { splitPair } from '../../../shared-model/api/schemas';
 import type { StructureEnergy } from '../../../shared-model/montecarlo/gupta-energy';
 import type { SimulationResult } from '../../../shared-model/montecarlo/simulate';
-import { CliError, optionalNumber, optionalString, requirePositional, type CliCommand, type CliContext, type ParsedArgs } from '../command';
+import {
+  CliError,
+  optionalNumber,
+  optionalString,
+  requirePositional,
+  type CliCommand,
+  type CliContext,
+  type ParsedArgs,
+} from '../command';
 import { formatTable } from '../table';
 
 const f = (value: number, digits = 4) => (Number.isFinite(value) ? value.toPrecision(digits) : String(value));
@@ -107,7 +115,8 @@ function pairOption(args: ParsedArgs): [string, string] {
 
 function integerOption(args: ParsedArgs, name: string): number | undefined {
   const value = optionalNumber(args, name);
-  if (value !== undefined && !Number.isInteger(value)) throw new CliError(`--${name} must be a whole number, got ${value}`);
+  if (value !== undefined && !Number.isInteger(value))
+    throw new CliError(`--${name} must be a whole number, got ${value}`);
   return value;
 }
 
@@ -122,11 +131,27 @@ export const simulationCommands: CliCommand[] = [
       shells: { type: 'string', description: 'shells around the centre atom (or give --diameter-nm)' },
       'diameter-nm': { type: 'string', description: 'particle diameter in nm (nearest closed shell; sphere: cut)' },
       'temperature-k': { type: 'string', description: 'temperature in K, required' },
-      sweeps: { type: 'string', description: 'most sweeps to run (one swap attempt per atom each), required; the run stops earlier at the answer' },
-      relaxation: { type: 'string', description: 'rigid or relaxed (default: relaxed when the metals differ in size by more than 6 %)' },
-      'fixed-sweeps': { type: 'boolean', description: 'run every sweep instead of stopping once the surface composition is known to ±0.005' },
-      'anneal-from-k': { type: 'string', description: 'anneal: start temperature in K, cooled to --temperature-k first' },
-      'anneal-sweeps': { type: 'string', description: 'anneal: sweeps spent cooling (default 1000 when --anneal-from-k is given)' },
+      sweeps: {
+        type: 'string',
+        description:
+          'most sweeps to run (one swap attempt per atom each), required; the run stops earlier at the answer',
+      },
+      relaxation: {
+        type: 'string',
+        description: 'rigid or relaxed (default: relaxed when the metals differ in size by more than 6 %)',
+      },
+      'fixed-sweeps': {
+        type: 'boolean',
+        description: 'run every sweep instead of stopping once the surface composition is known to ±0.005',
+      },
+      'anneal-from-k': {
+        type: 'string',
+        description: 'anneal: start temperature in K, cooled to --temperature-k first',
+      },
+      'anneal-sweeps': {
+        type: 'string',
+        description: 'anneal: sweeps spent cooling (default 1000 when --anneal-from-k is given)',
+      },
       seed: { type: 'string', description: 'random seed (default 1)' },
       label: { type: 'string', description: 'a label stored with the run' },
       xyz: { type: 'string', description: 'also write the final structure as extended XYZ to this file' },
@@ -143,10 +168,12 @@ export const simulationCommands: CliCommand[] = [
       const diameterNm = optionalNumber(args, 'diameter-nm');
       const annealFrom = optionalNumber(args, 'anneal-from-k');
       const annealSweeps = integerOption(args, 'anneal-sweeps');
-      if (annealSweeps !== undefined && annealFrom === undefined) throw new CliError('--anneal-sweeps needs --anneal-from-k');
+      if (annealSweeps !== undefined && annealFrom === undefined)
+        throw new CliError('--anneal-sweeps needs --anneal-from-k');
       const shape = optionalString(args, 'shape') ?? 'cuboctahedron';
       const relaxation = optionalString(args, 'relaxation');
-      if (relaxation !== undefined && relaxation !== 'rigid' && relaxation !== 'relaxed') throw new CliError(`--relaxation must be rigid or relaxed, got "${relaxation}"`);
+      if (relaxation !== undefined && relaxation !== 'rigid' && relaxation !== 'relaxed')
+        throw new CliError(`--relaxation must be rigid or relaxed, got "${relaxation}"`);
       const started = await context.call('simulation.start', {
         elementA,
         elementB,
@@ -175,7 +202,10 @@ export const simulationCommands: CliCommand[] = [
         context.writeTextFile(xyzPath, exported.content);
         note = `\nfinal structure written to ${xyzPath}`;
       }
-      return { json: { ...simulationJson(run, result), xyzFile: xyzPath ?? null }, text: simulationText(run, result) + note };
+      return {
+        json: { ...simulationJson(run, result), xyzFile: xyzPath ?? null },
+        text: simulationText(run, result) + note,
+      };
     },
   },
   {
@@ -183,12 +213,18 @@ export const simulationCommands: CliCommand[] = [
     args: '<structure.xyz>',
     summary: 'Gupta (Cleri & Rosato) energy of a cluster given as (extended) XYZ in Å; stores nothing',
     options: {
-      'cutoff-angstrom': { type: 'string', description: 'pair cutoff in Å (default 2.35 × the structure\'s nearest-neighbour distance)' },
+      'cutoff-angstrom': {
+        type: 'string',
+        description: "pair cutoff in Å (default 2.35 × the structure's nearest-neighbour distance)",
+      },
     },
     run: async (args, context) => {
       const path = requirePositional(args, 0, 'structure.xyz');
       const cutoff = optionalNumber(args, 'cutoff-angstrom');
-      const energy: StructureEnergy = await context.call('simulation.energy', { xyz: context.readTextFile(path), ...(cutoff !== undefined ? { cutoffAngstrom: cutoff } : {}) });
+      const energy: StructureEnergy = await context.call('simulation.energy', {
+        xyz: context.readTextFile(path),
+        ...(cutoff !== undefined ? { cutoffAngstrom: cutoff } : {}),
+      });
       const composition = Object.entries(energy.composition)
         .map(([symbol, count]) => `${symbol}${count}`)
         .join(' ');
@@ -225,7 +261,9 @@ export const simulationCommands: CliCommand[] = [
       const text = [
         `${relaxed.atoms} atoms: ${f(relaxed.initialEnergyEv, 10)} eV → ${f(relaxed.relaxedEnergyEv, 10)} eV (${f(relaxed.relaxedEnergyPerAtomEv, 8)} eV/atom)`,
         `${relaxed.iterations} steps, largest force ${f(relaxed.maxForceEvPerAngstrom, 3)} eV/Å` +
-          (relaxed.converged ? '' : ` — NOT converged to ${relaxed.forceToleranceEvPerAngstrom} eV/Å; raise --max-iterations`),
+          (relaxed.converged
+            ? ''
+            : ` — NOT converged to ${relaxed.forceToleranceEvPerAngstrom} eV/Å; raise --max-iterations`),
         relaxed.method,
         ...(out ? [`relaxed structure written to ${out}`] : []),
       ].join('\n');

@@ -48,7 +48,10 @@ export const storeCommands: CliCommand[] = [
       const file = requirePositional(args, 0, 'backup file');
       const report = await context.maintenance.restore(resolve(file));
       const kept = report.previousStoreKeptAt ? `; the previous store is kept at ${report.previousStoreKeptAt}` : '';
-      return { json: report, text: `restored ${report.restoredFrom} (schema ${report.fromSchemaVersion} → ${report.schemaVersion})${kept}` };
+      return {
+        json: report,
+        text: `restored ${report.restoredFrom} (schema ${report.fromSchemaVersion} → ${report.schemaVersion})${kept}`,
+      };
     },
   },
   {
@@ -59,7 +62,10 @@ export const storeCommands: CliCommand[] = [
     run: (_args, context) => {
       const result = context.maintenance.check();
       if (result.schemaVersion < 1) throw new CliError(`${result.path} has no schema`);
-      return Promise.resolve({ json: { ...result, ok: true }, text: `${result.path}: integrity ok (schema ${result.schemaVersion})` });
+      return Promise.resolve({
+        json: { ...result, ok: true },
+        text: `${result.path}: integrity ok (schema ${result.schemaVersion})`,
+      });
     },
   },
 ];

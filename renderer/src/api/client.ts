@@ -21,11 +21,18 @@ export function transport(): Transport {
   return window.pairwright ? 'desktop' : 'browser';
 }
 
-export async function call<Name extends OperationName>(name: Name, input: OperationInput<Name>): Promise<ApiResult<OperationOutput<Name>>> {
+export async function call<Name extends OperationName>(
+  name: Name,
+  input: OperationInput<Name>,
+): Promise<ApiResult<OperationOutput<Name>>> {
   const bridge = window.pairwright;
   if (bridge) {
     const operation = bridge[name];
-    if (!operation) return { ok: false, error: { code: 'unknown_operation', message: `operation ${name} is not exposed by this window` } };
+    if (!operation)
+      return {
+        ok: false,
+        error: { code: 'unknown_operation', message: `operation ${name} is not exposed by this window` },
+      };
     return (await operation(input)) as ApiResult<OperationOutput<Name>>;
   }
   let response: Response;
@@ -37,7 +44,13 @@ export async function call<Name extends OperationName>(name: Name, input: Operat
       body: JSON.stringify(input ?? {}),
     });
   } catch (error) {
-    return { ok: false, error: { code: 'internal', message: `the Pairwright host did not answer (${String(error)}); is "npm run serve" still running?` } };
+    return {
+      ok: false,
+      error: {
+        code: 'internal',
+        message: `the Pairwright host did not answer (${String(error)}); is "npm run serve" still running?`,
+      },
+    };
   }
   if (response.status === 401) {
     const message = 'this browser is not logged in to the Pairwright host; open the address printed in its terminal';
@@ -46,12 +59,21 @@ export async function call<Name extends OperationName>(name: Name, input: Operat
   try {
     return (await response.json()) as ApiResult<OperationOutput<Name>>;
   } catch (error) {
-    return { ok: false, error: { code: 'internal', message: `unreadable answer from the host (HTTP ${response.status}): ${String(error)}` } };
+    return {
+      ok: false,
+      error: {
+        code: 'internal',
+        message: `unreadable answer from the host (HTTP ${response.status}): ${String(error)}`,
+      },
+    };
   }
 }
 
 /** Calls an operation and throws its error message; for places where a failure is shown as a banner. */
-export async function callOrThrow<Name extends OperationName>(name: Name, input: OperationInput<Name>): Promise<OperationOutput<Name>> {
+export async function callOrThrow<Name extends OperationName>(
+  name: Name,
+  input: OperationInput<Name>,
+): Promise<OperationOutput<Name>> {
   const result = await call(name, input);
   if (!result.ok) throw new Error(result.error.message);
   return result.value;

@@ -11,7 +11,11 @@ export interface QueryState<T> {
 }
 
 /** Runs a query operation whenever `key` changes (pass a stable string built from the input). */
-export function useQuery<Name extends OperationName>(name: Name, input: OperationInput<Name> | null, key: string): QueryState<OperationOutput<Name>> {
+export function useQuery<Name extends OperationName>(
+  name: Name,
+  input: OperationInput<Name> | null,
+  key: string,
+): QueryState<OperationOutput<Name>> {
   const [data, setData] = useState<OperationOutput<Name> | null>(null);
   const [error, setError] = useState<ApiError | null>(null);
   const [loading, setLoading] = useState(false);

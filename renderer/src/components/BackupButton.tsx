@@ -10,7 +10,11 @@ export function BackupButton() {
     setBusy(true);
     const result = await call('backups.create', {});
     setBusy(false);
-    setMessage(result.ok ? { tone: 'info', text: `Backed up to ${result.value.path}` } : { tone: 'error', text: result.error.message });
+    setMessage(
+      result.ok
+        ? { tone: 'info', text: `Backed up to ${result.value.path}` }
+        : { tone: 'error', text: result.error.message },
+    );
   };
   return (
     <div className="backup-button">

@@ -1,7 +1,13 @@
 import { useEffect, useRef } from 'react';
 
 /** A modal question with explicit confirm / cancel buttons; Escape cancels. */
-export function ConfirmDialog(props: { title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void }) {
+export function ConfirmDialog(props: {
+  title: string;
+  message: string;
+  confirmLabel: string;
+  onConfirm: () => void;
+  onCancel: () => void;
+}) {
   const cancelRef = useRef<HTMLButtonElement>(null);
   useEffect(() => {
     cancelRef.current?.focus();

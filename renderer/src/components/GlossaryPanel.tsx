@@ -16,7 +16,13 @@ export function GlossaryPanel(props: { onClose: () => void }) {
   const needle = filter.trim().toLowerCase();
   const shown = GLOSSARY.filter((t) => needle === '' || `${t.term} ${t.meaning}`.toLowerCase().includes(needle));
   return (
-    <aside className="glossary" role="dialog" aria-modal="false" aria-labelledby="glossary-title" data-testid="glossary">
+    <aside
+      className="glossary"
+      role="dialog"
+      aria-modal="false"
+      aria-labelledby="glossary-title"
+      data-testid="glossary"
+    >
       <div className="glossary__head">
         <h2 id="glossary-title">Terms and symbols</h2>
         <button type="button" ref={closeRef} onClick={props.onClose}>

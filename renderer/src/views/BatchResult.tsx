@@ -39,10 +39,18 @@ export function BatchResult(props: { design: BatchDesign }) {
           <Stat label="Core atoms" value={formatNumber(d.coreAtoms)} />
           <Stat label="Shell atoms" value={formatNumber(d.shellAtoms)} />
           <Stat label="Diameter" value={`${formatNumber(d.diameterNm)} nm`} />
-          {d.shellMonolayers !== null ? <Stat label="Shell" value={`${formatNumber(d.shellThicknessNm)} nm = ${formatNumber(d.shellMonolayers, 3)} ML`} /> : null}
+          {d.shellMonolayers !== null ? (
+            <Stat
+              label="Shell"
+              value={`${formatNumber(d.shellThicknessNm)} nm = ${formatNumber(d.shellMonolayers, 3)} ML`}
+            />
+          ) : null}
           <Stat label={`Composition`} value={`${formatNumber(d.xBPct, 3)} at.% ${d.elementB}`} />
           <Stat label="Particles" value={formatNumber(d.particles)} testId="particles" />
-          <Stat label="Concentration" value={`${formatNumber(d.particlesPerMl)} /mL (${formatNumber(d.particleNanomolar, 3)} nM)`} />
+          <Stat
+            label="Concentration"
+            value={`${formatNumber(d.particlesPerMl)} /mL (${formatNumber(d.particleNanomolar, 3)} nM)`}
+          />
           <Stat label="Electrons needed" value={`${formatNumber(d.electronsMmol)} mmol`} />
         </div>
         <div className="chart" aria-label="Atoms in core and shell">
@@ -91,7 +99,8 @@ export function BatchResult(props: { design: BatchDesign }) {
         </table>
         {d.reducer ? (
           <p className="muted small">
-            Reducer: {d.reducer.halfReaction} ({d.reducer.electronsPerUnit} e⁻ per formula unit), stoichiometric {formatNumber(d.reducer.stoichiometricMmol)} mmol × {formatNumber(d.reducer.excess, 3)}.
+            Reducer: {d.reducer.halfReaction} ({d.reducer.electronsPerUnit} e⁻ per formula unit), stoichiometric{' '}
+            {formatNumber(d.reducer.stoichiometricMmol)} mmol × {formatNumber(d.reducer.excess, 3)}.
           </p>
         ) : null}
       </section>
@@ -100,7 +109,8 @@ export function BatchResult(props: { design: BatchDesign }) {
         <section className="card" aria-label="Expected as made">
           <h2 className="card__title">Expected as made</h2>
           <p>
-            As made: <strong data-testid="batch-as-made">{d.asMade.label}</strong> ({d.asMade.basis === 'kinetic' ? 'kinetics decide' : 'equilibrium reached'}) · after annealing:{' '}
+            As made: <strong data-testid="batch-as-made">{d.asMade.label}</strong> (
+            {d.asMade.basis === 'kinetic' ? 'kinetics decide' : 'equilibrium reached'}) · after annealing:{' '}
             <strong>{d.asMade.afterAnnealing}</strong>
           </p>
           <p className="small muted" data-testid="batch-as-made-text">
@@ -117,11 +127,13 @@ export function BatchResult(props: { design: BatchDesign }) {
         <h2 className="card__title">Kinetic and practical checks</h2>
         <p className="muted small">Safety warnings are in the hazard block below.</p>
         <ul className="check-list">
-          {d.checks.filter((c) => c.kind !== 'hazard').map((c, index) => (
-            <li key={index} className={`check check--${c.severity}`} data-check={c.kind} data-severity={c.severity}>
-              <span className="check__kind">{c.kind.replace(/-/g, ' ')}</span> {c.message}
-            </li>
-          ))}
+          {d.checks
+            .filter((c) => c.kind !== 'hazard')
+            .map((c, index) => (
+              <li key={index} className={`check check--${c.severity}`} data-check={c.kind} data-severity={c.severity}>
+                <span className="check__kind">{c.kind.replace(/-/g, ' ')}</span> {c.message}
+              </li>
+            ))}
         </ul>
       </section>
 

@@ -11,7 +11,11 @@ import { useAppState } from '../app-state';
 
 export function BenchSheetView() {
   const { campaignId, revision } = useAppState();
-  const batches = useQuery('batches.list', campaignId === null ? null : { campaignId }, `sheet-list:${campaignId}:${revision}`);
+  const batches = useQuery(
+    'batches.list',
+    campaignId === null ? null : { campaignId },
+    `sheet-list:${campaignId}:${revision}`,
+  );
   const [batchId, setBatchId] = useState<number | null>(null);
   const [printMessage, setPrintMessage] = useState<string | null>(null);
   useEffect(() => {

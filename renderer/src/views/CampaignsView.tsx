@@ -32,7 +32,12 @@ function CreateCampaignForm(props: { onCreated: (campaign: Campaign) => void }) 
         <input name="name" value={name} onChange={(event) => setName(event.target.value)} autoComplete="off" />
       </Field>
       <Field label="Description" name="description" error={errors.description} wide>
-        <input name="description" value={description} onChange={(event) => setDescription(event.target.value)} autoComplete="off" />
+        <input
+          name="description"
+          value={description}
+          onChange={(event) => setDescription(event.target.value)}
+          autoComplete="off"
+        />
       </Field>
       <div className="form-actions">
         <button type="submit" className="button--primary">
@@ -66,7 +71,10 @@ function CampaignRow(props: { campaign: Campaign; selected: boolean; onSelect: (
     else props.onChanged();
   };
   return (
-    <li className={`campaign-row${props.selected ? ' campaign-row--selected' : ''}${campaign.archived ? ' campaign-row--archived' : ''}`} data-campaign={campaign.name}>
+    <li
+      className={`campaign-row${props.selected ? ' campaign-row--selected' : ''}${campaign.archived ? ' campaign-row--archived' : ''}`}
+      data-campaign={campaign.name}
+    >
       {editing ? (
         <form className="inline-form" onSubmit={rename} aria-label={`Rename ${campaign.name}`}>
           <Field label="New name" name="name" error={errors.name}>
@@ -129,7 +137,8 @@ export function CampaignsView() {
       <header className="view__header">
         <h1 id="campaigns-title">Campaigns</h1>
         <label className="toggle">
-          <input type="checkbox" checked={showArchived} onChange={(event) => setShowArchived(event.target.checked)} /> show archived
+          <input type="checkbox" checked={showArchived} onChange={(event) => setShowArchived(event.target.checked)} />{' '}
+          show archived
         </label>
         <BackupButton />
       </header>
@@ -138,8 +147,8 @@ export function CampaignsView() {
         <div className="empty-state card" data-testid="empty-state">
           <h2>No campaigns yet</h2>
           <p>
-            A campaign gathers the metal pairs you are screening, the batches you plan for them and what TEM and EDX showed. Create your first
-            one below, or look around in a populated example first.
+            A campaign gathers the metal pairs you are screening, the batches you plan for them and what TEM and EDX
+            showed. Create your first one below, or look around in a populated example first.
           </p>
           <button type="button" className="button--primary" onClick={loadDemo}>
             Load demo campaign
@@ -152,7 +161,13 @@ export function CampaignsView() {
         <div className="split__side">
           <ul className="campaign-list" aria-label="Campaigns">
             {list.map((campaign) => (
-              <CampaignRow key={`${campaign.id}:${campaign.updatedAt}`} campaign={campaign} selected={campaign.id === campaignId} onSelect={() => selectCampaign(campaign.id)} onChanged={changed} />
+              <CampaignRow
+                key={`${campaign.id}:${campaign.updatedAt}`}
+                campaign={campaign}
+                selected={campaign.id === campaignId}
+                onSelect={() => selectCampaign(campaign.id)}
+                onChanged={changed}
+              />
             ))}
           </ul>
           <CreateCampaignForm
@@ -166,7 +181,11 @@ export function CampaignsView() {
           {selected ? (
             <PairsPanel campaign={selected} onChanged={changed} />
           ) : (
-            <div className="card muted">{list.length > 0 ? 'Choose a campaign on the left to see its candidate pairs.' : 'Create a campaign to start adding metal pairs.'}</div>
+            <div className="card muted">
+              {list.length > 0
+                ? 'Choose a campaign on the left to see its candidate pairs.'
+                : 'Create a campaign to start adding metal pairs.'}
+            </div>
           )}
         </div>
       </div>

@@ -55,7 +55,9 @@ const COLUMNS: Array<{ key: SortKey; label: string; numeric: boolean; value: (r:
 ];
 
 function airText(r: Row): string {
-  return r.p.oxidation.oxidisingInAir.length === 0 ? '—' : r.p.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ');
+  return r.p.oxidation.oxidisingInAir.length === 0
+    ? '—'
+    : r.p.oxidation.oxidisingInAir.map((e) => `${e} oxide`).join(', ');
 }
 
 const TARGET_KINDS = ['alloy', 'core@shell any', 'core@shell with', 'Janus', 'intermetallic'] as const;
@@ -128,7 +130,12 @@ export function CandidatesView() {
 
   const visible = useMemo(() => {
     const needle = filter.trim().toLowerCase();
-    const kept = needle === '' ? shown : shown.filter((r) => `${r.p.pair} ${r.p.architecture} ${r.p.surfaceElement ?? ''}`.toLowerCase().includes(needle));
+    const kept =
+      needle === ''
+        ? shown
+        : shown.filter((r) =>
+            `${r.p.pair} ${r.p.architecture} ${r.p.surfaceElement ?? ''}`.toLowerCase().includes(needle),
+          );
     const column = COLUMNS.find((c) => c.key === sort.key) ?? COLUMNS[0];
     if (!column) return kept;
     return [...kept].sort((x, y) => {
@@ -152,21 +159,36 @@ export function CandidatesView() {
     else return;
     event.preventDefault();
   };
-  const sortBy = (key: SortKey) => setSort((current) => ({ key, direction: current.key === key ? (current.direction === 1 ? -1 : 1) : key === 'rank' || key === 'pair' ? 1 : -1 }));
+  const sortBy = (key: SortKey) =>
+    setSort((current) => ({
+      key,
+      direction: current.key === key ? (current.direction === 1 ? -1 : 1) : key === 'rank' || key === 'pair' ? 1 : -1,
+    }));
 
   return (
     <div className="stack" data-testid="candidates-view">
       <div className="view__header">
         <h1>Candidates</h1>
         <p className="muted">
-          Which element goes to the surface of each pair, how much, and why — Miedema mixing, Wynblatt–Ku segregation terms and a Langmuir–McLean surface/core balance for a
-          particle of this size. Recomputed as you type.
+          Which element goes to the surface of each pair, how much, and why — Miedema mixing, Wynblatt–Ku segregation
+          terms and a Langmuir–McLean surface/core balance for a particle of this size. Recomputed as you type.
         </p>
       </div>
       <div className="card">
         <div className="form-grid" role="group" aria-label="Pairs and target">
-          <Field label="Elements" name="elements" error={ranking.errors.elements} hint={`symbols, or "all" (${METAL_SYMBOLS.length} metals)`} wide>
-            <input name="elements" value={elementsText} onChange={(e) => setElementsText(e.target.value)} autoComplete="off" />
+          <Field
+            label="Elements"
+            name="elements"
+            error={ranking.errors.elements}
+            hint={`symbols, or "all" (${METAL_SYMBOLS.length} metals)`}
+            wide
+          >
+            <input
+              name="elements"
+              value={elementsText}
+              onChange={(e) => setElementsText(e.target.value)}
+              autoComplete="off"
+            />
           </Field>
           <Field label="Target" name="target">
             <select name="target" value={targetKind} onChange={(e) => setTargetKind(e.target.value as TargetKind)}>
@@ -193,28 +215,48 @@ export function CandidatesView() {
         <h2 className="card__title">
           {ranking.target ? `Best for ${ranking.target}` : 'Ranking'}{' '}
           <span className="muted small" data-testid="ranking-count">
-            ({ranking.meeting.length} of {ranking.meeting.length + ranking.missing.length} pairs meet the target; {visible.length} shown; ↑/↓ to move, Enter to open)
+            ({ranking.meeting.length} of {ranking.meeting.length + ranking.missing.length} pairs meet the target;{' '}
+            {visible.length} shown; ↑/↓ to move, Enter to open)
           </span>
         </h2>
         {noneMeets ? (
           <Banner tone="info">
-            No pair of these elements meets {ranking.target} under these conditions; {showRest ? 'all pairs' : `the closest ${Math.min(CLOSEST, ranking.missing.length)}`} are shown, each with why
-            it misses.
+            No pair of these elements meets {ranking.target} under these conditions;{' '}
+            {showRest ? 'all pairs' : `the closest ${Math.min(CLOSEST, ranking.missing.length)}`} are shown, each with
+            why it misses.
           </Banner>
         ) : null}
         {ranking.missing.length > 0 ? (
           <p>
-            <button type="button" className="button--quiet" aria-pressed={showRest} onClick={() => setShowRest((v) => !v)}>
-              {showRest ? 'Hide the pairs that miss the target' : `Show the rest (${ranking.missing.length} pairs that miss the target)`}
+            <button
+              type="button"
+              className="button--quiet"
+              aria-pressed={showRest}
+              onClick={() => setShowRest((v) => !v)}
+            >
+              {showRest
+                ? 'Hide the pairs that miss the target'
+                : `Show the rest (${ranking.missing.length} pairs that miss the target)`}
             </button>
           </p>
         ) : null}
-        <div style={{ maxHeight: 480, overflow: 'auto' }} tabIndex={0} onKeyDown={onKey} role="region" aria-label="Ranked pairs, use arrow keys" data-testid="ranking-region">
+        <div
+          style={{ maxHeight: 480, overflow: 'auto' }}
+          tabIndex={0}
+          onKeyDown={onKey}
+          role="region"
+          aria-label="Ranked pairs, use arrow keys"
+          data-testid="ranking-region"
+        >
           <table className="data-table" aria-label="Ranked candidates" aria-rowcount={visible.length}>
             <thead>
               <tr>
                 {COLUMNS.map((c) => (
-                  <th key={c.key} scope="col" aria-sort={sort.key === c.key ? (sort.direction === 1 ? 'ascending' : 'descending') : 'none'}>
+                  <th
+                    key={c.key}
+                    scope="col"
+                    aria-sort={sort.key === c.key ? (sort.direction === 1 ? 'ascending' : 'descending') : 'none'}
+                  >
                     <button type="button" className="button--quiet" onClick={() => sortBy(c.key)}>
                       {c.label}
                       {sort.key === c.key ? (sort.direction === 1 ? ' ▲' : ' ▼') : ''}
@@ -230,7 +272,11 @@ export function CandidatesView() {
                 <tr
                   key={row.p.pair}
                   aria-selected={index === active}
-                  style={index === active ? { background: 'rgba(59, 130, 246, 0.14)', cursor: 'pointer' } : { cursor: 'pointer' }}
+                  style={
+                    index === active
+                      ? { background: 'rgba(59, 130, 246, 0.14)', cursor: 'pointer' }
+                      : { cursor: 'pointer' }
+                  }
                   data-pair={row.p.pair}
                   data-meets={row.miss === null ? 'yes' : 'no'}
                   className={row.miss === null ? undefined : 'muted'}
@@ -268,7 +314,9 @@ export function CandidatesView() {
           </table>
         </div>
       </div>
-      {open && conditions ? <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} /> : null}
+      {open && conditions ? (
+        <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} />
+      ) : null}
     </div>
   );
 }

@@ -6,11 +6,31 @@
  * square outlines coloured by the OBSERVED architecture, one square per batch.
  */
 import { useMemo, useState } from 'react';
-import { CartesianGrid, LabelList, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from 'recharts';
+import {
+  CartesianGrid,
+  LabelList,
+  Legend,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  Tooltip,
+  XAxis,
+  YAxis,
+  ZAxis,
+} from 'recharts';
 import { DomainError } from '../../../shared-model/api/result';
 import type { OutcomeRow } from '../../../shared-model/api/outcomes';
-import { describeArchitecture, parseArchitecture, type ArchitectureKind } from '../../../shared-model/architecture/labels';
-import { DESCRIPTOR_KEYS, DESCRIPTOR_LABELS, relativeDifference, type DescriptorKey } from '../../../shared-model/prediction/descriptors';
+import {
+  describeArchitecture,
+  parseArchitecture,
+  type ArchitectureKind,
+} from '../../../shared-model/architecture/labels';
+import {
+  DESCRIPTOR_KEYS,
+  DESCRIPTOR_LABELS,
+  relativeDifference,
+  type DescriptorKey,
+} from '../../../shared-model/prediction/descriptors';
 import { recordProperty } from '../../../shared-model/elements/element-table';
 import { predictWithContext } from '../../../shared-model/prediction/predict';
 import { checkElementList, pairContexts } from '../../../shared-model/prediction/rank';
@@ -38,8 +58,16 @@ const SHORT: Record<DescriptorKey, string> = {
 
 const AXES: Array<{ key: AxisKey; short: string; label: string }> = [
   ...DESCRIPTOR_KEYS.map((key) => ({ key: key as AxisKey, short: SHORT[key], label: DESCRIPTOR_LABELS[key] })),
-  { key: 'segregationBinA', short: 'ΔH_seg B in A, eV', label: 'segregation enthalpy of dilute B at the surface of A, eV' },
-  { key: 'segregationAinB', short: 'ΔH_seg A in B, eV', label: 'segregation enthalpy of dilute A at the surface of B, eV' },
+  {
+    key: 'segregationBinA',
+    short: 'ΔH_seg B in A, eV',
+    label: 'segregation enthalpy of dilute B at the surface of A, eV',
+  },
+  {
+    key: 'segregationAinB',
+    short: 'ΔH_seg A in B, eV',
+    label: 'segregation enthalpy of dilute A at the surface of B, eV',
+  },
   { key: 'enrichment', short: 'surface enrichment E', label: 'predicted surface enrichment E' },
   { key: 'unlikeNeighbourRatio', short: 'unlike neighbours / random', label: 'unlike neighbours relative to random' },
 ];
@@ -121,7 +149,11 @@ export function DescriptorMapView() {
   const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
   const conditions = conditionsState.conditions;
   const { campaignId, revision } = useAppState();
-  const outcomeRows = useQuery('outcomes.listByCampaign', campaignId === null ? null : { campaignId }, `map-outcomes-${campaignId}-${revision}`);
+  const outcomeRows = useQuery(
+    'outcomes.listByCampaign',
+    campaignId === null ? null : { campaignId },
+    `map-outcomes-${campaignId}-${revision}`,
+  );
 
   const result = useMemo((): { points: Point[]; error: string | null } => {
     if (conditions === null) return { points: [], error: null };
@@ -151,7 +183,15 @@ export function DescriptorMapView() {
             }
           }
         };
-        return { x: value(xKey), y: value(yKey), pair: p.pair, elementA: p.elementA, elementB: p.elementB, label: p.architecture, kind: p.architectureKind };
+        return {
+          x: value(xKey),
+          y: value(yKey),
+          pair: p.pair,
+          elementA: p.elementA,
+          elementB: p.elementB,
+          label: p.architecture,
+          kind: p.architectureKind,
+        };
       });
       return { points, error: null };
     } catch (error) {
@@ -171,7 +211,9 @@ export function DescriptorMapView() {
   }, [result.points]);
 
   const overlay = useMemo(() => {
-    const logged = (outcomeRows.data ?? []).filter((row): row is OutcomeRow & { observed: string } => row.observed !== null);
+    const logged = (outcomeRows.data ?? []).filter(
+      (row): row is OutcomeRow & { observed: string } => row.observed !== null,
+    );
     const onMap = new Map(result.points.map((point) => [pairKey(point.elementA, point.elementB), point]));
     const stacks = new Map<string, number>();
     const points: OutcomePoint[] = [];
@@ -186,7 +228,19 @@ export function DescriptorMapView() {
       const stack = stacks.get(key) ?? 0;
       stacks.set(key, stack + 1);
       const observedKind = parseArchitecture(row.observed)?.kind ?? 'other';
-      points.push({ x: point.x, y: point.y, outcome: true, batchName: row.batchName, pair: point.pair, elementA: point.elementA, elementB: point.elementB, observed: row.observed, observedKind, predicted: row.predicted, stack });
+      points.push({
+        x: point.x,
+        y: point.y,
+        outcome: true,
+        batchName: row.batchName,
+        pair: point.pair,
+        elementA: point.elementA,
+        elementB: point.elementB,
+        observed: row.observed,
+        observedKind,
+        predicted: row.predicted,
+        stack,
+      });
     }
     const byKind = new Map<ArchitectureKind, OutcomePoint[]>();
     for (const point of points) byKind.set(point.observedKind, [...(byKind.get(point.observedKind) ?? []), point]);
@@ -201,12 +255,20 @@ export function DescriptorMapView() {
     <div className="stack" data-testid="descriptor-map-view">
       <div className="view__header">
         <h1>Descriptor map</h1>
-        <p className="muted">Pairs placed by two descriptors (B relative to A for element properties), coloured by the predicted architecture at the conditions below.</p>
+        <p className="muted">
+          Pairs placed by two descriptors (B relative to A for element properties), coloured by the predicted
+          architecture at the conditions below.
+        </p>
       </div>
       <div className="card">
         <div className="form-grid" role="group" aria-label="Map axes">
           <Field label="Elements" name="elements" error={result.error ?? undefined} hint='symbols, or "all"' wide>
-            <input name="elements" value={elementsText} onChange={(e) => setElementsText(e.target.value)} autoComplete="off" />
+            <input
+              name="elements"
+              value={elementsText}
+              onChange={(e) => setElementsText(e.target.value)}
+              autoComplete="off"
+            />
           </Field>
           <Field label="x axis" name="xAxis">
             <select name="xAxis" value={xKey} onChange={(e) => setXKey(e.target.value as AxisKey)}>
@@ -237,7 +299,13 @@ export function DescriptorMapView() {
         <ResponsiveContainer width="100%" height={460}>
           <ScatterChart margin={{ left: 24, right: 24, top: 16, bottom: 32 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="x" type="number" name={axisLabel(xKey)} label={{ value: axisLabel(xKey), position: 'insideBottom', offset: -16 }} tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()} />
+            <XAxis
+              dataKey="x"
+              type="number"
+              name={axisLabel(xKey)}
+              label={{ value: axisLabel(xKey), position: 'insideBottom', offset: -16 }}
+              tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()}
+            />
             <YAxis
               dataKey="y"
               type="number"
@@ -259,15 +327,15 @@ export function DescriptorMapView() {
                       <br />
                       observed {point.observed}, predicted at planning {point.predicted ?? '(none recorded)'}
                       <br />
-                      map prediction at these conditions: {result.points.find((p) => p.pair === point.pair)?.label ?? '–'}
+                      map prediction at these conditions:{' '}
+                      {result.points.find((p) => p.pair === point.pair)?.label ?? '–'}
                     </div>
                   );
                 }
                 return (
                   <div className="card small">
                     <strong>{point.pair}</strong>: {point.label}
-                    <br />
-                    x = {point.x.toPrecision(3)}, y = {point.y.toPrecision(3)}
+                    <br />x = {point.x.toPrecision(3)}, y = {point.y.toPrecision(3)}
                   </div>
                 );
               }}
@@ -313,11 +381,15 @@ export function DescriptorMapView() {
               : overlay.logged === 0
                 ? 'No logged outcomes in this campaign yet.'
                 : `Squares: ${overlay.logged} logged outcome${overlay.logged === 1 ? '' : 's'} of this campaign, coloured by the observed architecture (dots keep the predicted colours); hover a square for batch, observed and predicted label.${
-                    overlay.offMap.length > 0 ? ` Not on this map (pair outside the element set): ${overlay.offMap.join(', ')}.` : ''
+                    overlay.offMap.length > 0
+                      ? ` Not on this map (pair outside the element set): ${overlay.offMap.join(', ')}.`
+                      : ''
                   }`}
         </p>
       </div>
-      {open && conditions ? <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} /> : null}
+      {open && conditions ? (
+        <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} />
+      ) : null}
     </div>
   );
 }

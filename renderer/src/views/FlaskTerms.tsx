@@ -18,8 +18,8 @@ export function FlaskVerdicts(props: { prediction: Prediction }) {
   return (
     <div className="flask-verdicts" aria-label="Verdicts">
       <p>
-        <strong>As made</strong>: <span data-testid="verdict-as-made">{p.verdicts.asMade}</span> · <strong>after annealing</strong>:{' '}
-        <span data-testid="verdict-after-annealing">{p.verdicts.afterAnnealing}</span>
+        <strong>As made</strong>: <span data-testid="verdict-as-made">{p.verdicts.asMade}</span> ·{' '}
+        <strong>after annealing</strong>: <span data-testid="verdict-after-annealing">{p.verdicts.afterAnnealing}</span>
         {p.certainty.uncertain ? (
           <>
             {' '}
@@ -55,8 +55,12 @@ export function FlaskTerms(props: { prediction: Prediction }) {
           : `S = γ(${w.core}) − γ(${w.shell}) − γ_AB = ${w.gammaCoreJPerM2.toFixed(2)} − ${w.gammaShellJPerM2.toFixed(2)} − ${w.interfaceJPerM2.toFixed(2)} = ${jm2(w.spreadingJPerM2)} (γ_AB: chemical ${w.interfaceChemicalJPerM2.toFixed(2)}, misfit ${w.interfaceMisfitJPerM2.toFixed(2)} of at most ${w.interfaceMisfitCapJPerM2.toFixed(2)}) → ${w.verdict}${w.flipDiameterNm !== null ? `; core@shell below ${w.flipDiameterNm.toFixed(1)} nm, Janus above` : '; the answer does not flip with size'}`}
       </p>
       <p data-testid="term-kinetics">
-        <strong>Kinetics</strong>: L = √(D̃t) = {nm(p.kinetics.lengthNm)} in {p.timeH} h at {p.temperatureK} K against a radius of {p.kinetics.radiusNm.toFixed(1)} nm (L/r ={' '}
-        {p.kinetics.ratio.toPrecision(2)}: {p.kinetics.regime}); L = r at ≈ {p.kinetics.annealingTemperatureK.toFixed(0)} K. {p.kinetic ? `Reduction order: ${p.kinetic.text} (${p.kinetic.couples.join(', ')}).` : 'No reduction potentials tabulated for this pair.'}
+        <strong>Kinetics</strong>: L = √(D̃t) = {nm(p.kinetics.lengthNm)} in {p.timeH} h at {p.temperatureK} K against a
+        radius of {p.kinetics.radiusNm.toFixed(1)} nm (L/r = {p.kinetics.ratio.toPrecision(2)}: {p.kinetics.regime}); L
+        = r at ≈ {p.kinetics.annealingTemperatureK.toFixed(0)} K.{' '}
+        {p.kinetic
+          ? `Reduction order: ${p.kinetic.text} (${p.kinetic.couples.join(', ')}).`
+          : 'No reduction potentials tabulated for this pair.'}
       </p>
       <p data-testid="term-oxidation">
         <strong>In air or water</strong>:{' '}
@@ -66,7 +70,8 @@ export function FlaskTerms(props: { prediction: Prediction }) {
       </p>
       <p data-testid="term-sources">
         <strong>Surface energies</strong>: {p.certainty.sources.note}
-        {p.certainty.uncertain ? ` — within the scatter (±${p.certainty.scatterEv.toFixed(3)} eV): uncertain` : ''}. Terms ×{p.calibrationScale} (calibrated against EAM slab energies).
+        {p.certainty.uncertain ? ` — within the scatter (±${p.certainty.scatterEv.toFixed(3)} eV): uncertain` : ''}.
+        Terms ×{p.calibrationScale} (calibrated against EAM slab energies).
       </p>
     </div>
   );

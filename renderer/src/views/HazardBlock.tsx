@@ -9,7 +9,10 @@ export function HazardBlock(props: { summary: HazardSummary; title?: string; per
     <section className="card hazard-block" aria-label={props.title ?? 'Hazard cautions'}>
       <h2 className="card__title">{props.title ?? 'Hazard cautions'}</h2>
       <p className="hazard-block__headline">
-        <span className={`signal-word signal-word--${(summary.signalWord ?? 'none').toLowerCase()}`} data-testid="signal-word">
+        <span
+          className={`signal-word signal-word--${(summary.signalWord ?? 'none').toLowerCase()}`}
+          data-testid="signal-word"
+        >
           {summary.signalWord ?? 'No signal word'}
         </span>
         {summary.pictograms.map((p) => (
@@ -57,8 +60,8 @@ export function HazardBlock(props: { summary: HazardSummary; title?: string; per
               <li key={r.key}>
                 <strong>{r.name}</strong> — {r.signalWord ?? 'no signal word'}
                 {r.pictograms.length ? `; ${r.pictograms.map((p) => p.code).join(' ')}` : ''}
-                {r.hazards.length ? `; ${r.hazards.map((h) => h.code).join(' ')}` : ''}. Waste: {r.wasteStream.label}.{r.note ? ` ${r.note}` : ''}{' '}
-                <span className="muted small">({r.source})</span>
+                {r.hazards.length ? `; ${r.hazards.map((h) => h.code).join(' ')}` : ''}. Waste: {r.wasteStream.label}.
+                {r.note ? ` ${r.note}` : ''} <span className="muted small">({r.source})</span>
               </li>
             ))}
           </ul>

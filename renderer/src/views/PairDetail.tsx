@@ -5,7 +5,17 @@
  * conditions to the Simulation view (lattice Monte Carlo) when both metals have Gupta parameters.
  */
 import { useMemo, useState } from 'react';
-import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import { describeArchitecture } from '../../../shared-model/architecture/labels';
 import { GUPTA_ELEMENTS, isGuptaElement } from '../../../shared-model/montecarlo/gupta-parameters';
 import { computeIsotherm, type IsothermSweep } from '../../../shared-model/prediction/isotherm';
@@ -26,7 +36,12 @@ const TERM_NAMES = {
 } as const;
 const ev = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(3)} eV`;
 
-function IsothermChart(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; sweep: IsothermSweep }) {
+function IsothermChart(props: {
+  elementA: string;
+  elementB: string;
+  conditions: Required<PredictionConditions>;
+  sweep: IsothermSweep;
+}) {
   const { elementA, elementB, conditions, sweep } = props;
   const data = useMemo(
     () =>
@@ -39,9 +54,14 @@ function IsothermChart(props: { elementA: string; elementB: string; conditions: 
     [elementA, elementB, conditions, sweep],
   );
   const xLabel = sweep === 'xB' ? `overall at.% ${elementB}` : sweep === 'diameter' ? 'diameter, nm' : 'temperature, K';
-  const marker = sweep === 'xB' ? 100 * conditions.xB : sweep === 'diameter' ? conditions.diameterNm : conditions.temperatureK;
+  const marker =
+    sweep === 'xB' ? 100 * conditions.xB : sweep === 'diameter' ? conditions.diameterNm : conditions.temperatureK;
   return (
-    <figure style={{ margin: 0 }} aria-label={`${elementB} at the surface vs ${xLabel}`} data-testid={`isotherm-${sweep}`}>
+    <figure
+      style={{ margin: 0 }}
+      aria-label={`${elementB} at the surface vs ${xLabel}`}
+      data-testid={`isotherm-${sweep}`}
+    >
       <figcaption className="small">
         at.% {elementB} in the surface layer and in the core vs {xLabel}
       </figcaption>
@@ -57,25 +77,67 @@ function IsothermChart(props: { elementA: string; elementB: string; conditions: 
             label={{ value: xLabel, position: 'insideBottom', offset: -8 }}
           />
           <YAxis domain={[0, 100]} unit="%" width={48} />
-          <Tooltip formatter={(value) => `${Number(value).toFixed(1)} %`} labelFormatter={(v) => `${xLabel} ${Number(v).toPrecision(3)}`} />
+          <Tooltip
+            formatter={(value) => `${Number(value).toFixed(1)} %`}
+            labelFormatter={(v) => `${xLabel} ${Number(v).toPrecision(3)}`}
+          />
           <Legend verticalAlign="top" height={24} />
           <ReferenceLine x={marker} stroke="#888" strokeDasharray="4 4" />
-          <Line type="monotone" dataKey="surface" name={`surface ${elementB}`} stroke="#c2410c" dot={false} strokeWidth={2} isAnimationActive={false} />
-          <Line type="monotone" dataKey="core" name={`core ${elementB}`} stroke="#1d4ed8" dot={false} strokeWidth={2} isAnimationActive={false} />
-          {sweep !== 'xB' ? <Line type="monotone" dataKey="overall" name="overall" stroke="#6b7280" dot={false} strokeDasharray="2 2" isAnimationActive={false} /> : null}
+          <Line
+            type="monotone"
+            dataKey="surface"
+            name={`surface ${elementB}`}
+            stroke="#c2410c"
+            dot={false}
+            strokeWidth={2}
+            isAnimationActive={false}
+          />
+          <Line
+            type="monotone"
+            dataKey="core"
+            name={`core ${elementB}`}
+            stroke="#1d4ed8"
+            dot={false}
+            strokeWidth={2}
+            isAnimationActive={false}
+          />
+          {sweep !== 'xB' ? (
+            <Line
+              type="monotone"
+              dataKey="overall"
+              name="overall"
+              stroke="#6b7280"
+              dot={false}
+              strokeDasharray="2 2"
+              isAnimationActive={false}
+            />
+          ) : null}
         </LineChart>
       </ResponsiveContainer>
     </figure>
   );
 }
 
-export function PairDetail(props: { elementA: string; elementB: string; conditions: Required<PredictionConditions>; onClose?: () => void }) {
+export function PairDetail(props: {
+  elementA: string;
+  elementB: string;
+  conditions: Required<PredictionConditions>;
+  onClose?: () => void;
+}) {
   const { elementA, elementB, conditions } = props;
   const p = useMemo(() => predictPair(elementA, elementB, conditions), [elementA, elementB, conditions]);
   const { campaignId, revision, bumpRevision, requestSimulation } = useAppState();
   const pairs = useQuery('pairs.list', campaignId === null ? null : { campaignId }, `pairs-${campaignId}-${revision}`);
-  const linked = (pairs.data ?? []).find((x) => (x.elementA === elementA && x.elementB === elementB) || (x.elementA === elementB && x.elementB === elementA)) ?? null;
-  const saved = useQuery('prediction.listForPair', linked ? { pairId: linked.id } : null, `saved-${linked?.id}-${revision}`);
+  const linked =
+    (pairs.data ?? []).find(
+      (x) =>
+        (x.elementA === elementA && x.elementB === elementB) || (x.elementA === elementB && x.elementB === elementA),
+    ) ?? null;
+  const saved = useQuery(
+    'prediction.listForPair',
+    linked ? { pairId: linked.id } : null,
+    `saved-${linked?.id}-${revision}`,
+  );
   const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
 
   const save = async () => {
@@ -88,7 +150,12 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
       setMessage({ tone: 'error', text: result.error.message });
       return;
     }
-    setMessage({ tone: 'info', text: linked ? `saved as prediction ${result.value.id} for pair ${linked.elementA}-${linked.elementB} of this campaign` : `saved as prediction ${result.value.id} (no campaign pair to link)` });
+    setMessage({
+      tone: 'info',
+      text: linked
+        ? `saved as prediction ${result.value.id} for pair ${linked.elementA}-${linked.elementB} of this campaign`
+        : `saved as prediction ${result.value.id} (no campaign pair to link)`,
+    });
     bumpRevision();
   };
 
@@ -112,7 +179,8 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
     <section className="card pair-detail" aria-label={`Pair detail ${p.pair}`}>
       <div className="view__header">
         <h2 className="card__title">
-          {p.pair}: <span data-testid="detail-architecture">{p.architecture}</span> <span className="muted small">({describeArchitecture(p.architecture)})</span>
+          {p.pair}: <span data-testid="detail-architecture">{p.architecture}</span>{' '}
+          <span className="muted small">({describeArchitecture(p.architecture)})</span>
         </h2>
         {props.onClose ? (
           <button type="button" className="button--quiet" onClick={props.onClose}>
@@ -123,8 +191,9 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
       <p>
         {p.surfaceElement ? (
           <>
-            <strong>{p.surfaceElement}</strong> goes to the surface: {pct(p.surfaceFraction)} of {p.surfaceSites} surface sites ({p.atoms} atoms), enrichment E ={' '}
-            {p.enrichment.toFixed(2)}; the core holds {pct(p.coreXB)} {elementB}.
+            <strong>{p.surfaceElement}</strong> goes to the surface: {pct(p.surfaceFraction)} of {p.surfaceSites}{' '}
+            surface sites ({p.atoms} atoms), enrichment E = {p.enrichment.toFixed(2)}; the core holds {pct(p.coreXB)}{' '}
+            {elementB}.
           </>
         ) : (
           <>No surface enrichment.</>
@@ -158,8 +227,10 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
         </tbody>
       </table>
       <p className="small muted">
-        Miedema ΔHmix {p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical {p.mixingChemicalKjPerMol.toFixed(1)}, elastic {p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×
-        {p.unlikeNeighbourRatio.toFixed(2)} of random{p.miscibilityGap ? ', inside the miscibility gap' : ''}. ({p.facet}) facet, strain rule “{p.strainRule}”, model {p.modelVersion}.
+        Miedema ΔHmix {p.mixingEnthalpyKjPerMol.toFixed(1)} kJ/mol (chemical {p.mixingChemicalKjPerMol.toFixed(1)},
+        elastic {p.mixingElasticKjPerMol.toFixed(1)}); unlike neighbours ×{p.unlikeNeighbourRatio.toFixed(2)} of random
+        {p.miscibilityGap ? ', inside the miscibility gap' : ''}. ({p.facet}) facet, strain rule “{p.strainRule}”, model{' '}
+        {p.modelVersion}.
       </p>
       <FlaskTerms prediction={p} />
       {p.flags.length > 0 ? (
@@ -178,12 +249,26 @@ export function PairDetail(props: { elementA: string; elementB: string; conditio
         <button type="button" className="button--primary" onClick={save}>
           Save prediction{linked ? ` to ${linked.elementA}-${linked.elementB}` : ''}
         </button>
-        <button type="button" onClick={simulate} disabled={withoutParameters.length > 0} title={simulateTitle} data-testid="simulate-pair">
+        <button
+          type="button"
+          onClick={simulate}
+          disabled={withoutParameters.length > 0}
+          title={simulateTitle}
+          data-testid="simulate-pair"
+        >
           Simulate this pair
         </button>
-        {withoutParameters.length > 0 ? <span className="small muted">no simulation: {simulateTitle.split(';')[0]}</span> : null}
-        {linked && saved.data ? <span className="small muted">{saved.data.length} saved for this campaign pair</span> : null}
-        {!linked ? <span className="small muted">{campaignId === null ? 'no campaign selected' : 'this pair is not in the current campaign'}: saved unlinked</span> : null}
+        {withoutParameters.length > 0 ? (
+          <span className="small muted">no simulation: {simulateTitle.split(';')[0]}</span>
+        ) : null}
+        {linked && saved.data ? (
+          <span className="small muted">{saved.data.length} saved for this campaign pair</span>
+        ) : null}
+        {!linked ? (
+          <span className="small muted">
+            {campaignId === null ? 'no campaign selected' : 'this pair is not in the current campaign'}: saved unlinked
+          </span>
+        ) : null}
       </div>
       {message ? <Banner tone={message.tone}>{message.text}</Banner> : null}
     </section>

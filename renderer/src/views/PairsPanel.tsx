@@ -30,7 +30,12 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
       show({ code: 'invalid_input', message: 'choose both elements of the pair', field: 'pair' });
       return;
     }
-    const result = await call('pairs.add', { campaignId: props.campaign.id, pair: `${elementA}-${elementB}`, target: chosenTarget, notes });
+    const result = await call('pairs.add', {
+      campaignId: props.campaign.id,
+      pair: `${elementA}-${elementB}`,
+      target: chosenTarget,
+      notes,
+    });
     if (!result.ok) {
       show(result.error);
       return;
@@ -54,10 +59,22 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
         ))}
       </datalist>
       <Field label="Element A" name="pair" error={errors.pair} hint="symbol, e.g. Pt">
-        <input name="elementA" list="element-symbols" value={elementA} onChange={(event) => setElementA(event.target.value.trim())} autoComplete="off" />
+        <input
+          name="elementA"
+          list="element-symbols"
+          value={elementA}
+          onChange={(event) => setElementA(event.target.value.trim())}
+          autoComplete="off"
+        />
       </Field>
       <Field label="Element B" name="elementB" hint="symbol, e.g. Ni">
-        <input name="elementB" list="element-symbols" value={elementB} onChange={(event) => setElementB(event.target.value.trim())} autoComplete="off" />
+        <input
+          name="elementB"
+          list="element-symbols"
+          value={elementB}
+          onChange={(event) => setElementB(event.target.value.trim())}
+          autoComplete="off"
+        />
       </Field>
       <Field label="Target architecture" name="target" error={errors.target} hint={describeArchitecture(chosenTarget)}>
         <select name="target" value={chosenTarget} onChange={(event) => setTarget(event.target.value)}>
@@ -98,7 +115,11 @@ function PairRow(props: { pair: CandidatePair; onChanged: () => void; onRemove: 
         {pair.elementA}–{pair.elementB}
       </th>
       <td>
-        <select aria-label={`Target of ${pair.elementA}-${pair.elementB}`} value={pair.target} onChange={(event) => update({ target: event.target.value })}>
+        <select
+          aria-label={`Target of ${pair.elementA}-${pair.elementB}`}
+          value={pair.target}
+          onChange={(event) => update({ target: event.target.value })}
+        >
           {targetChoices(pair.elementA, pair.elementB).map((choice) => (
             <option key={choice} value={choice}>
               {choice}
@@ -107,7 +128,11 @@ function PairRow(props: { pair: CandidatePair; onChanged: () => void; onRemove: 
         </select>
       </td>
       <td>
-        <select aria-label={`Status of ${pair.elementA}-${pair.elementB}`} value={pair.status} onChange={(event) => update({ status: event.target.value as PairStatus })}>
+        <select
+          aria-label={`Status of ${pair.elementA}-${pair.elementB}`}
+          value={pair.status}
+          onChange={(event) => update({ status: event.target.value as PairStatus })}
+        >
           {PAIR_STATUSES.map((status) => (
             <option key={status} value={status}>
               {status}
@@ -120,7 +145,12 @@ function PairRow(props: { pair: CandidatePair; onChanged: () => void; onRemove: 
         {error ? <span className="field__error">{error}</span> : null}
       </td>
       <td>
-        <button type="button" className="button--quiet" onClick={props.onRemove} aria-label={`Remove ${pair.elementA}-${pair.elementB}`}>
+        <button
+          type="button"
+          className="button--quiet"
+          onClick={props.onRemove}
+          aria-label={`Remove ${pair.elementA}-${pair.elementB}`}
+        >
           Remove
         </button>
       </td>
@@ -150,10 +180,14 @@ export function PairsPanel(props: { campaign: Campaign; onChanged: () => void })
           {campaign.name} {campaign.isDemo ? <span className="tag tag--demo">demo data</span> : null}
         </h2>
         {campaign.description ? <p className="muted">{campaign.description}</p> : null}
-        {campaign.isDemo ? <Banner tone="demo">Invented demo data: the pairs, notes and results here are not measurements.</Banner> : null}
+        {campaign.isDemo ? (
+          <Banner tone="demo">Invented demo data: the pairs, notes and results here are not measurements.</Banner>
+        ) : null}
         {pairs.error ? <Banner tone="error">{pairs.error.message}</Banner> : null}
         {error ? <Banner tone="error">{error}</Banner> : null}
-        {pairs.data && pairs.data.length === 0 ? <p className="muted">No pairs yet. Add the first candidate below.</p> : null}
+        {pairs.data && pairs.data.length === 0 ? (
+          <p className="muted">No pairs yet. Add the first candidate below.</p>
+        ) : null}
         {pairs.data && pairs.data.length > 0 ? (
           <table className="data-table" aria-label="Candidate pairs">
             <thead>
@@ -169,13 +203,22 @@ export function PairsPanel(props: { campaign: Campaign; onChanged: () => void })
             </thead>
             <tbody>
               {pairs.data.map((pair) => (
-                <PairRow key={`${pair.id}:${pair.updatedAt}`} pair={pair} onChanged={props.onChanged} onRemove={() => setRemoving(pair)} />
+                <PairRow
+                  key={`${pair.id}:${pair.updatedAt}`}
+                  pair={pair}
+                  onChanged={props.onChanged}
+                  onRemove={() => setRemoving(pair)}
+                />
               ))}
             </tbody>
           </table>
         ) : null}
       </div>
-      {!campaign.archived ? <AddPairForm campaign={campaign} onAdded={props.onChanged} /> : <Banner tone="info">This campaign is archived; restore it to add pairs.</Banner>}
+      {!campaign.archived ? (
+        <AddPairForm campaign={campaign} onAdded={props.onChanged} />
+      ) : (
+        <Banner tone="info">This campaign is archived; restore it to add pairs.</Banner>
+      )}
       {removing ? (
         <ConfirmDialog
           title={`Remove ${removing.elementA}–${removing.elementB}?`}

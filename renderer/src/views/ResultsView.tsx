@@ -30,7 +30,11 @@ function BatchResults(props: { batchId: number; revision: number; onChanged: () 
         <CompositionPanel key={`composition:${o.batchId}`} outcome={o} onChanged={props.onChanged} />
       </div>
       <LineScanPanel key={`scans:${o.batchId}`} outcome={o} onChanged={props.onChanged} />
-      <ObservedPanel key={`observed:${o.batchId}:${o.observed?.updatedAt ?? ''}`} outcome={o} onChanged={props.onChanged} />
+      <ObservedPanel
+        key={`observed:${o.batchId}:${o.observed?.updatedAt ?? ''}`}
+        outcome={o}
+        onChanged={props.onChanged}
+      />
     </>
   );
 }
@@ -58,7 +62,12 @@ export function ResultsView() {
           <button type="button" aria-pressed={mode === 'batch'} onClick={() => setMode('batch')}>
             Per batch
           </button>
-          <button type="button" aria-pressed={mode === 'campaign'} onClick={() => setMode('campaign')} disabled={campaignId === null}>
+          <button
+            type="button"
+            aria-pressed={mode === 'campaign'}
+            onClick={() => setMode('campaign')}
+            disabled={campaignId === null}
+          >
             Per campaign
           </button>
         </div>
@@ -68,14 +77,19 @@ export function ResultsView() {
         <>
           {batches.data && list.length === 0 ? (
             <div className="card muted" data-testid="no-batches">
-              No saved batches {campaignId !== null ? 'in this campaign ' : ''}yet. Save a batch in Batch design; its TEM sizes, composition and line scans are
-              recorded here once it is made.
+              No saved batches {campaignId !== null ? 'in this campaign ' : ''}yet. Save a batch in Batch design; its
+              TEM sizes, composition and line scans are recorded here once it is made.
             </div>
           ) : null}
           {list.length > 0 ? (
             <label className="toggle">
               Batch{' '}
-              <select name="batch" value={batchId ?? ''} onChange={(event) => setBatchId(Number(event.target.value))} aria-label="Batch">
+              <select
+                name="batch"
+                value={batchId ?? ''}
+                onChange={(event) => setBatchId(Number(event.target.value))}
+                aria-label="Batch"
+              >
                 {list.map((b) => (
                   <option key={b.id} value={b.id}>
                     {b.name} ({b.elementA}–{b.elementB}, {b.status})

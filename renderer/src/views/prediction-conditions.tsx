@@ -37,9 +37,15 @@ export function useConditions(): ConditionsState {
   const [facet, setFacet] = useState<SurfaceFacet>(initial.facet);
   const [environment, setEnvironment] = useState<Environment>(initial.environment);
   useEffect(() => {
-    window.sessionStorage.setItem(STORAGE_KEY, JSON.stringify({ text, shape, facet, environment } satisfies ConditionsForm));
+    window.sessionStorage.setItem(
+      STORAGE_KEY,
+      JSON.stringify({ text, shape, facet, environment } satisfies ConditionsForm),
+    );
   }, [text, shape, facet, environment]);
-  const { conditions, errors } = useMemo(() => readConditions({ text, shape, facet, environment }), [text, shape, facet, environment]);
+  const { conditions, errors } = useMemo(
+    () => readConditions({ text, shape, facet, environment }),
+    [text, shape, facet, environment],
+  );
   return {
     text,
     shape,
@@ -54,28 +60,61 @@ export function useConditions(): ConditionsState {
   };
 }
 
-export function ConditionsBar(props: { state: ConditionsState; elementB?: string; extraErrors?: Record<string, string> }) {
+export function ConditionsBar(props: {
+  state: ConditionsState;
+  elementB?: string;
+  extraErrors?: Record<string, string>;
+}) {
   const { state } = props;
   const errors = { ...state.errors, ...(props.extraErrors ?? {}) };
   return (
     <div className="form-grid conditions-bar" role="group" aria-label="Conditions">
-      <Field label={`Composition, at.% ${props.elementB ?? 'B'}`} name="atPercentB" error={errors.atPercentB} hint="second element of each pair">
-        <input name="atPercentB" inputMode="decimal" value={state.text.atPercentB} onChange={(e) => state.setText('atPercentB', e.target.value)} />
+      <Field
+        label={`Composition, at.% ${props.elementB ?? 'B'}`}
+        name="atPercentB"
+        error={errors.atPercentB}
+        hint="second element of each pair"
+      >
+        <input
+          name="atPercentB"
+          inputMode="decimal"
+          value={state.text.atPercentB}
+          onChange={(e) => state.setText('atPercentB', e.target.value)}
+        />
       </Field>
       <Field label="Diameter, nm" name="diameterNm" error={errors.diameterNm}>
-        <input name="diameterNm" inputMode="decimal" value={state.text.diameterNm} onChange={(e) => state.setText('diameterNm', e.target.value)} />
+        <input
+          name="diameterNm"
+          inputMode="decimal"
+          value={state.text.diameterNm}
+          onChange={(e) => state.setText('diameterNm', e.target.value)}
+        />
       </Field>
       <Field label="Shape" name="shape" error={errors.shape}>
         <ShapeSelect name="shape" value={state.shape} onChange={state.setShape} />
       </Field>
       <Field label="Temperature, K" name="temperatureK" error={errors.temperatureK} hint="synthesis or annealing">
-        <input name="temperatureK" inputMode="decimal" value={state.text.temperatureK} onChange={(e) => state.setText('temperatureK', e.target.value)} />
+        <input
+          name="temperatureK"
+          inputMode="decimal"
+          value={state.text.temperatureK}
+          onChange={(e) => state.setText('temperatureK', e.target.value)}
+        />
       </Field>
       <Field label="Time, h" name="timeH" error={errors.timeH} hint="at that temperature">
-        <input name="timeH" inputMode="decimal" value={state.text.timeH} onChange={(e) => state.setText('timeH', e.target.value)} />
+        <input
+          name="timeH"
+          inputMode="decimal"
+          value={state.text.timeH}
+          onChange={(e) => state.setText('timeH', e.target.value)}
+        />
       </Field>
       <Field label="Environment" name="environment" error={errors.environment} hint="gas or ligand">
-        <select name="environment" value={state.environment} onChange={(e) => state.setEnvironment(e.target.value as Environment)}>
+        <select
+          name="environment"
+          value={state.environment}
+          onChange={(e) => state.setEnvironment(e.target.value as Environment)}
+        >
           {ENVIRONMENTS.map((environment) => (
             <option key={environment} value={environment}>
               {ENVIRONMENT_LABELS[environment]}

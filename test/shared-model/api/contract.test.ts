@@ -13,7 +13,10 @@ describe('API contract', () => {
   });
 
   it('trims names and refuses empty ones with the field named', () => {
-    expect(validateInput('campaigns.create', { name: '  Screen  ' })).toEqual({ ok: true, value: { name: 'Screen', description: '' } });
+    expect(validateInput('campaigns.create', { name: '  Screen  ' })).toEqual({
+      ok: true,
+      value: { name: 'Screen', description: '' },
+    });
     const empty = validateInput('campaigns.create', { name: '   ' });
     expect(empty).toMatchObject({ ok: false, error: { code: 'invalid_input', field: 'name' } });
   });
@@ -25,15 +28,27 @@ describe('API contract', () => {
     const unknown = validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Xx' });
     expect(unknown).toMatchObject({ ok: false, error: { field: 'pair' } });
     if (!unknown.ok) expect(unknown.error.message).toContain('Xx');
-    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Pt' })).toMatchObject({ ok: false, error: { field: 'pair' } });
-    expect(validateInput('pairs.add', { campaignId: 1, pair: 42 })).toMatchObject({ ok: false, error: { field: 'pair' } });
+    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Pt' })).toMatchObject({
+      ok: false,
+      error: { field: 'pair' },
+    });
+    expect(validateInput('pairs.add', { campaignId: 1, pair: 42 })).toMatchObject({
+      ok: false,
+      error: { field: 'pair' },
+    });
   });
 
   it('checks the target against the pair', () => {
     expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'Ni@Pt' }).ok).toBe(true);
     expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'janus' }).ok).toBe(true);
-    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'Au@Pt' })).toMatchObject({ ok: false, error: { field: 'target' } });
-    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'hollow' })).toMatchObject({ ok: false, error: { field: 'target' } });
+    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'Au@Pt' })).toMatchObject({
+      ok: false,
+      error: { field: 'target' },
+    });
+    expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Ni', target: 'hollow' })).toMatchObject({
+      ok: false,
+      error: { field: 'target' },
+    });
   });
 
   it('requires confirmation to remove a pair', () => {
@@ -43,7 +58,10 @@ describe('API contract', () => {
 
   it('refuses ids that are not positive whole numbers', () => {
     for (const id of [0, -1, 1.5, '1', null, Number.NaN]) {
-      expect(validateInput('pairs.list', { campaignId: id })).toMatchObject({ ok: false, error: { field: 'campaignId' } });
+      expect(validateInput('pairs.list', { campaignId: id })).toMatchObject({
+        ok: false,
+        error: { field: 'campaignId' },
+      });
     }
   });
 });

@@ -50,14 +50,22 @@ describe('order of addition per route (common practice)', () => {
   });
 
   it('polyol and organic routes heat to the batch temperature; organic runs under inert gas', () => {
-    expect(procedureFor('polyol', coReduction, 160).map((s) => s.text).join(' ')).toContain('160 °C');
-    const organic = procedureFor('organic', coReduction, 220).map((s) => s.text).join(' ');
+    expect(
+      procedureFor('polyol', coReduction, 160)
+        .map((s) => s.text)
+        .join(' '),
+    ).toContain('160 °C');
+    const organic = procedureFor('organic', coReduction, 220)
+      .map((s) => s.text)
+      .join(' ');
     expect(organic).toContain('220 °C');
     expect(organic).toContain('inert gas');
   });
 
   it('names generic reagents when the batch has none of a role', () => {
-    const steps = procedureFor('co-reduction', [], 25).map((s) => s.text).join(' ');
+    const steps = procedureFor('co-reduction', [], 25)
+      .map((s) => s.text)
+      .join(' ');
     expect(steps).toContain('the metal precursor(s)');
     expect(steps).toContain('the capping agent');
   });

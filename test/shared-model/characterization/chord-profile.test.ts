@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { BlurredChordGrid, chordAntiderivative, regionChordsNm, sphereChordNm, type LineScanModelKind } from '../../../shared-model/characterization/chord-profile';
+import {
+  BlurredChordGrid,
+  chordAntiderivative,
+  regionChordsNm,
+  sphereChordNm,
+  type LineScanModelKind,
+} from '../../../shared-model/characterization/chord-profile';
 import { exactBlurredProfiles, positions } from './synthetic-line-scan';
 
 /** Composite Simpson rule of f over [a, b] with `panels` (even) panels. */
@@ -24,7 +30,10 @@ describe('chord-length geometry', () => {
   it('the antiderivative matches numerical integration at interior points', () => {
     const R = 4;
     for (const u of [-3.5, -1, 0.3, 2.9]) {
-      expect(chordAntiderivative(u, R)).toBeCloseTo(simpson((t) => sphereChordNm(t, R), -R, u, 20000), 4);
+      expect(chordAntiderivative(u, R)).toBeCloseTo(
+        simpson((t) => sphereChordNm(t, R), -R, u, 20000),
+        4,
+      );
     }
   });
 
@@ -58,7 +67,19 @@ describe('probe blur on the grid', () => {
 
   it('agrees with direct quadrature of the Gaussian convolution', () => {
     for (const kind of ['alloy', 'A@B', 'B@A', 'Janus'] as const) {
-      const spec = { kind, centerNm: 0.3, radiusNm: 5, coreRadiusNm: 3, janusALow: false, probeSigmaNm: 0.6, amplitudeA: 1, amplitudeB: 1, backgroundA: 0, backgroundB: 0, positionsNm: pos };
+      const spec = {
+        kind,
+        centerNm: 0.3,
+        radiusNm: 5,
+        coreRadiusNm: 3,
+        janusALow: false,
+        probeSigmaNm: 0.6,
+        amplitudeA: 1,
+        amplitudeB: 1,
+        backgroundA: 0,
+        backgroundB: 0,
+        positionsNm: pos,
+      };
       grid.evaluate({ ...spec }, spec.probeSigmaNm, a, b);
       const exact = exactBlurredProfiles(spec);
       // Peak chord is 10 nm; the cell discretisation (h = R/40) should stay within 0.5 % of it.
@@ -75,7 +96,19 @@ describe('probe blur on the grid', () => {
     const a2 = new Float64Array(offset.length);
     const b2 = new Float64Array(offset.length);
     g2.evaluate({ kind: 'alloy', centerNm: 0.3, radiusNm: 5, coreRadiusNm: 0, janusALow: true }, 0.6, a2, b2);
-    const exact = exactBlurredProfiles({ kind: 'alloy', centerNm: 0.3, radiusNm: 5, coreRadiusNm: 0, probeSigmaNm: 0.6, amplitudeA: 1, amplitudeB: 1, backgroundA: 0, backgroundB: 0, positionsNm: [...offset] });
-    for (let i = 0; i < offset.length; i++) expect(Math.abs((a2[i] as number) - (exact.a[i] as number))).toBeLessThan(0.05);
+    const exact = exactBlurredProfiles({
+      kind: 'alloy',
+      centerNm: 0.3,
+      radiusNm: 5,
+      coreRadiusNm: 0,
+      probeSigmaNm: 0.6,
+      amplitudeA: 1,
+      amplitudeB: 1,
+      backgroundA: 0,
+      backgroundB: 0,
+      positionsNm: [...offset],
+    });
+    for (let i = 0; i < offset.length; i++)
+      expect(Math.abs((a2[i] as number) - (exact.a[i] as number))).toBeLessThan(0.05);
   });
 });

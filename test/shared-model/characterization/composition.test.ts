@@ -22,20 +22,39 @@ describe('composition comparison', () => {
   });
 
   it('warns when the grid is one of the pair metals', () => {
-    const cu = compareComposition({ elementA: 'Cu', elementB: 'Pt', nominalXB: 0.25, measurements: [], gridMetal: 'Cu' });
+    const cu = compareComposition({
+      elementA: 'Cu',
+      elementB: 'Pt',
+      nominalXB: 0.25,
+      measurements: [],
+      gridMetal: 'Cu',
+    });
     const grid = cu.warnings.find((w) => w.code === 'grid-metal');
     expect(grid?.message).toMatch(/grid is Cu/);
     expect(grid?.message).not.toMatch(/use a Cu/);
     const unknown = compareComposition({ elementA: 'Ni', elementB: 'Pt', nominalXB: 0.25, measurements: [] });
     expect(unknown.warnings.some((w) => w.code === 'grid-unknown')).toBe(true);
-    const fine = compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 0.5, measurements: [], gridMetal: 'Cu' });
+    const fine = compareComposition({
+      elementA: 'Au',
+      elementB: 'Pd',
+      nominalXB: 0.5,
+      measurements: [],
+      gridMetal: 'Cu',
+    });
     expect(fine.warnings.filter((w) => w.code.startsWith('grid'))).toEqual([]);
   });
 
   it('rejects fractions outside 0–1', () => {
-    expect(() => compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 50, measurements: [] })).toThrow(/nominalXB/);
+    expect(() => compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 50, measurements: [] })).toThrow(
+      /nominalXB/,
+    );
     expect(() =>
-      compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 0.5, measurements: [{ method: 'ICP-MS', xB: 0.5, uncertaintyXB: -1 }] }),
+      compareComposition({
+        elementA: 'Au',
+        elementB: 'Pd',
+        nominalXB: 0.5,
+        measurements: [{ method: 'ICP-MS', xB: 0.5, uncertaintyXB: -1 }],
+      }),
     ).toThrow(/uncertainty/);
   });
 });
@@ -66,7 +85,12 @@ describe('X-ray line overlaps', () => {
 
 describe('composition edge', () => {
   it('a deviation exactly equal to the uncertainty is within it (0.48 vs 0.50 ± 0.02)', () => {
-    const r = compareComposition({ elementA: 'Au', elementB: 'Pd', nominalXB: 0.5, measurements: [{ method: 'ICP-OES', xB: 0.48, uncertaintyXB: 0.02 }] });
+    const r = compareComposition({
+      elementA: 'Au',
+      elementB: 'Pd',
+      nominalXB: 0.5,
+      measurements: [{ method: 'ICP-OES', xB: 0.48, uncertaintyXB: 0.02 }],
+    });
     expect(r.rows[0]!.flagged).toBe(false);
   });
 });

@@ -11,7 +11,8 @@ describe('confusion matrix of predicted vs observed architectures', () => {
       { predicted: 'alloy', observed: 'hollow' },
     ]);
     expect(m.labels).toEqual(['alloy', 'Ni@Pt', 'Pt@Ni', 'Janus', 'hollow']);
-    const cell = (observed: string, predicted: string) => m.counts[m.labels.indexOf(observed)]![m.labels.indexOf(predicted)];
+    const cell = (observed: string, predicted: string) =>
+      m.counts[m.labels.indexOf(observed)]![m.labels.indexOf(predicted)];
     expect(cell('alloy', 'alloy')).toBe(1);
     expect(cell('alloy', 'Janus')).toBe(1);
     expect(cell('Pt@Ni', 'Ni@Pt')).toBe(1);

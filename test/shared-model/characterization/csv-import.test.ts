@@ -41,7 +41,9 @@ describe('diameter CSV import', () => {
   });
 
   it('converts µm to nm and refuses pixels', () => {
-    expect(parseDiameterCsv('Diameter (µm)\n0.005\n0.006\n0.007\n').diametersNm.map((d) => Number(d.toFixed(9)))).toEqual([5, 6, 7]);
+    expect(
+      parseDiameterCsv('Diameter (µm)\n0.005\n0.006\n0.007\n').diametersNm.map((d) => Number(d.toFixed(9))),
+    ).toEqual([5, 6, 7]);
     expect(errorOf(() => parseDiameterCsv('Feret (px)\n50\n60\n70\n')).message).toMatch(/pixels/);
   });
 
@@ -56,7 +58,9 @@ describe('diameter CSV import', () => {
     expect(errorOf(() => parseDiameterCsv('5\n-3\n6\n')).message).toBe('line 2: diameter "-3" is not positive');
     expect(errorOf(() => parseDiameterCsv('\r\n  \n')).message).toMatch(/empty/);
     expect(errorOf(() => parseDiameterCsv('d\n5\n6\n')).message).toMatch(/at least 3/);
-    expect(errorOf(() => parseDiameterCsv('a;b\n1;2\n3;4\n5;6\n', { column: 3 })).message).toMatch(/column 3 does not exist/);
+    expect(errorOf(() => parseDiameterCsv('a;b\n1;2\n3;4\n5;6\n', { column: 3 })).message).toMatch(
+      /column 3 does not exist/,
+    );
   });
 });
 
@@ -91,10 +95,18 @@ describe('line-scan CSV import', () => {
 
   it('reports malformed rows, duplicate positions and short scans', () => {
     const bad = `pos,Au,Pd\n${rows(',', String)}\n7.5,12,abc`;
-    expect(errorOf(() => parseLineScanCsv(bad, { elementA: 'Au', elementB: 'Pd' })).message).toBe('line 17: "abc" in column "Pd" is not a number');
-    expect(errorOf(() => parseLineScanCsv('pos,Au,Pd\n1,2,3\n2,3,4\n', { elementA: 'Au', elementB: 'Pd' })).message).toMatch(/at least 12 points/);
+    expect(errorOf(() => parseLineScanCsv(bad, { elementA: 'Au', elementB: 'Pd' })).message).toBe(
+      'line 17: "abc" in column "Pd" is not a number',
+    );
+    expect(
+      errorOf(() => parseLineScanCsv('pos,Au,Pd\n1,2,3\n2,3,4\n', { elementA: 'Au', elementB: 'Pd' })).message,
+    ).toMatch(/at least 12 points/);
     const dup = Array.from({ length: 13 }, (_, i) => `${i === 12 ? 3 : 12 - i},1,1`).join('\n');
-    expect(errorOf(() => parseLineScanCsv(dup, { elementA: 'Au', elementB: 'Pd' })).message).toMatch(/both give position 3 nm/);
-    expect(errorOf(() => parseLineScanCsv('1,2\n3,4\n', { elementA: 'Au', elementB: 'Pd' })).message).toMatch(/three columns/);
+    expect(errorOf(() => parseLineScanCsv(dup, { elementA: 'Au', elementB: 'Pd' })).message).toMatch(
+      /both give position 3 nm/,
+    );
+    expect(errorOf(() => parseLineScanCsv('1,2\n3,4\n', { elementA: 'Au', elementB: 'Pd' })).message).toMatch(
+      /three columns/,
+    );
   });
 });

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { chiSquareQuantile, erfc, logGamma, normalQuantile, studentTCdf, studentTQuantile } from '../../../shared-model/characterization/distributions';
+import {
+  chiSquareQuantile,
+  erfc,
+  logGamma,
+  normalQuantile,
+  studentTCdf,
+  studentTQuantile,
+} from '../../../shared-model/characterization/distributions';
 
 describe('special functions', () => {
   it('log-gamma matches exact values', () => {

@@ -40,7 +40,8 @@ function inconsistency(diameters: number[], binWidthNm?: number): string | null 
     let inside = 0;
     while (cursor < sorted.length && (last || (sorted[cursor] as number) < bin.toNm - tolerance)) {
       const d = sorted[cursor] as number;
-      if (d < bin.fromNm - tolerance || d >= bin.toNm + tolerance) return `${d} nm counted in [${bin.fromNm}, ${bin.toNm})`;
+      if (d < bin.fromNm - tolerance || d >= bin.toNm + tolerance)
+        return `${d} nm counted in [${bin.fromNm}, ${bin.toNm})`;
       inside++;
       cursor++;
     }

@@ -68,7 +68,9 @@ describe('line-scan model fits on synthetic scans', () => {
       }
     }
     const header = ['generated \\ chosen', ...LINE_SCAN_MODELS].map((c) => c.padEnd(20)).join('');
-    const lines = LINE_SCAN_MODELS.map((g) => [g, ...LINE_SCAN_MODELS.map((c) => String(confusion.get(`${g}→${c}`) ?? 0))].map((c) => c.padEnd(20)).join(''));
+    const lines = LINE_SCAN_MODELS.map((g) =>
+      [g, ...LINE_SCAN_MODELS.map((c) => String(confusion.get(`${g}→${c}`) ?? 0))].map((c) => c.padEnd(20)).join(''),
+    );
     console.log(
       `Line-scan model choice by BIC, SNR ${SNR}, ${TRIALS_PER_MODEL} trials per model:\n${header}\n${lines.join('\n')}\n` +
         `correct ${correct}/${total}; worst radius error ${worst.radius.toFixed(3)} nm, worst shell error ${worst.shell.toFixed(3)} nm; ` +
@@ -87,7 +89,10 @@ describe('line-scan model fits on synthetic scans', () => {
     expect(analysis.models.map((m) => m.label)).toEqual(['alloy', 'Au@Pd', 'Pd@Au', 'Janus']);
     const chosen = analysis.models.find((m) => m.label === 'Pd@Au')!;
     // The shell of Pd@Au is Au: monolayers use Au's (111) spacing a/√3.
-    expect(chosen.shellMonolayers!.value).toBeCloseTo(chosen.shellThicknessNm!.value / monolayerThicknessNm(LATTICE.latticeANm), 10);
+    expect(chosen.shellMonolayers!.value).toBeCloseTo(
+      chosen.shellThicknessNm!.value / monolayerThicknessNm(LATTICE.latticeANm),
+      10,
+    );
     expect(analysis.suggestion.label).toBe('Pd@Au');
     expect(analysis.analysisVersion).toMatch(/characterization-/);
     expect(analysis.models.reduce((s, m) => s + m.bicWeight, 0)).toBeCloseTo(1, 10);
@@ -120,7 +125,12 @@ describe('line-scan model fits on synthetic scans', () => {
       }
       return k;
     };
-    const scan = { positionsNm: s.positionsNm, signalA: a.map((v) => poisson(10 * v + 5)), signalB: b.map((v) => poisson(8 * v + 3)), unit: 'counts' as const };
+    const scan = {
+      positionsNm: s.positionsNm,
+      signalA: a.map((v) => poisson(10 * v + 5)),
+      signalB: b.map((v) => poisson(8 * v + 3)),
+      unit: 'counts' as const,
+    };
     const analysis = fitLineScan(scan, OPTIONS);
     expect(analysis.noise.model).toBe('poisson');
     expect(analysis.chosenKind).toBe('A@B');
@@ -141,18 +151,33 @@ describe('line-scan bad input', () => {
 
   it('a scan shorter than the particle', () => {
     const full = good();
-    const cut = { ...full, positionsNm: full.positionsNm.slice(0, 26), signalA: full.signalA.slice(0, 26), signalB: full.signalB.slice(0, 26) };
+    const cut = {
+      ...full,
+      positionsNm: full.positionsNm.slice(0, 26),
+      signalA: full.signalA.slice(0, 26),
+      signalB: full.signalB.slice(0, 26),
+    };
     expect(errorOf(() => fitLineScan(cut, OPTIONS)).message).toMatch(/shorter than the particle/);
   });
 
   it('too few points, a flat channel, and at.% normalised to the two metals', () => {
     const full = good();
-    const few = { ...full, positionsNm: full.positionsNm.slice(0, 8), signalA: full.signalA.slice(0, 8), signalB: full.signalB.slice(0, 8) };
+    const few = {
+      ...full,
+      positionsNm: full.positionsNm.slice(0, 8),
+      signalA: full.signalA.slice(0, 8),
+      signalB: full.signalB.slice(0, 8),
+    };
     expect(errorOf(() => fitLineScan(few, OPTIONS)).message).toMatch(/at least 12 points/);
     const rng = createRandom(4);
     const flat = { ...full, signalA: full.signalA.map(() => 5 + rng.nextNormal()) };
     expect(errorOf(() => fitLineScan(flat, OPTIONS)).message).toMatch(/Au channel shows no particle signal/);
-    const normalised = { ...full, unit: 'atPercent' as const, signalA: full.signalA.map(() => 50), signalB: full.signalB.map(() => 50) };
+    const normalised = {
+      ...full,
+      unit: 'atPercent' as const,
+      signalA: full.signalA.map(() => 50),
+      signalB: full.signalB.map(() => 50),
+    };
     expect(errorOf(() => fitLineScan(normalised, OPTIONS)).message).toMatch(/add up to 100/);
   });
 });

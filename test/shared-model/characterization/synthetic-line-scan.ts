@@ -3,7 +3,11 @@
  * blur of the analytic chord profile is integrated by composite Simpson quadrature on a fine local mesh.
  */
 import { createRandom } from '../../../shared-model/random';
-import { regionChordsNm, type LineScanModelKind, type ProfileGeometry } from '../../../shared-model/characterization/chord-profile';
+import {
+  regionChordsNm,
+  type LineScanModelKind,
+  type ProfileGeometry,
+} from '../../../shared-model/characterization/chord-profile';
 import type { LineScanData } from '../../../shared-model/characterization/csv-import';
 
 export interface SyntheticScanSpec {
@@ -22,7 +26,13 @@ export interface SyntheticScanSpec {
 
 /** Blurred region chords at each position by Simpson quadrature over ±6σ (2000 panels). */
 export function exactBlurredProfiles(spec: SyntheticScanSpec): { a: number[]; b: number[] } {
-  const geometry: ProfileGeometry = { kind: spec.kind, centerNm: spec.centerNm, radiusNm: spec.radiusNm, coreRadiusNm: spec.coreRadiusNm, janusALow: spec.janusALow ?? true };
+  const geometry: ProfileGeometry = {
+    kind: spec.kind,
+    centerNm: spec.centerNm,
+    radiusNm: spec.radiusNm,
+    coreRadiusNm: spec.coreRadiusNm,
+    janusALow: spec.janusALow ?? true,
+  };
   const a: number[] = [];
   const b: number[] = [];
   const s = spec.probeSigmaNm;

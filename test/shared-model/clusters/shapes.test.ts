@@ -9,7 +9,12 @@ import {
   equivalentDiameterNm,
   shellsForDiameter,
 } from '../../../shared-model/clusters/shapes';
-import { buildNeighbourList, coordinationNumbers, FIVE_SHELL_CUTOFF_FACTOR, pairsWithin } from '../../../shared-model/clusters/neighbours';
+import {
+  buildNeighbourList,
+  coordinationNumbers,
+  FIVE_SHELL_CUTOFF_FACTOR,
+  pairsWithin,
+} from '../../../shared-model/clusters/neighbours';
 import {
   magicClusterAtoms,
   magicClusterSurfaceAtoms,
@@ -30,7 +35,14 @@ function minimumDistance(positions: Float64Array): number {
   let best = Infinity;
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
-      best = Math.min(best, Math.hypot(positions[3 * i]! - positions[3 * j]!, positions[3 * i + 1]! - positions[3 * j + 1]!, positions[3 * i + 2]! - positions[3 * j + 2]!));
+      best = Math.min(
+        best,
+        Math.hypot(
+          positions[3 * i]! - positions[3 * j]!,
+          positions[3 * i + 1]! - positions[3 * j + 1]!,
+          positions[3 * i + 2]! - positions[3 * j + 2]!,
+        ),
+      );
     }
   }
   return best;
@@ -95,7 +107,10 @@ describe('closed-shell clusters match the closed-form magic numbers (Mackay, Act
       // Lattice-point counting error in a sphere grows like the surface area (common practice: ~N^(2/3)).
       expect(Math.abs(c.atoms - bulk)).toBeLessThan(2 * bulk ** (2 / 3));
       const r = (diameterNm * 10) / 2;
-      for (let i = 0; i < c.atoms; i++) expect(Math.hypot(c.positions[3 * i]!, c.positions[3 * i + 1]!, c.positions[3 * i + 2]!)).toBeLessThanOrEqual(r * (1 + 1e-9));
+      for (let i = 0; i < c.atoms; i++)
+        expect(Math.hypot(c.positions[3 * i]!, c.positions[3 * i + 1]!, c.positions[3 * i + 2]!)).toBeLessThanOrEqual(
+          r * (1 + 1e-9),
+        );
     }
   });
 
@@ -103,7 +118,8 @@ describe('closed-shell clusters match the closed-form magic numbers (Mackay, Act
     for (const shape of ['cuboctahedron', 'icosahedron', 'truncated-octahedron'] as const) {
       for (const target of [1.5, 2.7, 4.2]) {
         const n = shellsForDiameter(shape, target, NN);
-        const gap = (m: number) => Math.abs(equivalentDiameterNm(buildCluster(shape, { shells: m }, NN).atoms, NN) - target);
+        const gap = (m: number) =>
+          Math.abs(equivalentDiameterNm(buildCluster(shape, { shells: m }, NN).atoms, NN) - target);
         expect(gap(n)).toBeLessThanOrEqual(gap(n + 1));
         if (n > 1) expect(gap(n)).toBeLessThanOrEqual(gap(n - 1));
       }

@@ -33,7 +33,18 @@ describe('element table: coverage and accessors', () => {
   it('names a source for every column', () => {
     for (const column of ELEMENT_COLUMN_SOURCES) expect(column.source.length).toBeGreaterThan(10);
     const named = ELEMENT_COLUMN_SOURCES.map((c) => c.column).join(' ');
-    for (const word of ['lattice', 'cohesive', 'metallicRadius', 'surfaceEnergy', 'electronegativity', 'bulkModulus', 'shearModulus', 'atomicMass', 'miedema', 'oxidation']) {
+    for (const word of [
+      'lattice',
+      'cohesive',
+      'metallicRadius',
+      'surfaceEnergy',
+      'electronegativity',
+      'bulkModulus',
+      'shearModulus',
+      'atomicMass',
+      'miedema',
+      'oxidation',
+    ]) {
       expect(named).toContain(word);
     }
   });
@@ -69,7 +80,12 @@ describe('element table: derived geometry', () => {
     // bcc Fe: Ω = a³/2; fcc edge with the same Ω is (4Ω)^(1/3) = a·2^(1/3)
     expect(latticeConstantNm('Fe')).toBeCloseTo((2.87 * Math.cbrt(2)) / 10, 6);
     // hcp with ideal c/a = √(8/3) has exactly the fcc density: a_fcc = √2·a_hcp (pure geometry)
-    const ideal = cellAtomicVolumeAngstrom3({ structure: 'hcp', aAngstrom: 2.5, cAngstrom: 2.5 * Math.sqrt(8 / 3), atomsPerCell: 2 });
+    const ideal = cellAtomicVolumeAngstrom3({
+      structure: 'hcp',
+      aAngstrom: 2.5,
+      cAngstrom: 2.5 * Math.sqrt(8 / 3),
+      atomsPerCell: 2,
+    });
     expect(Math.cbrt(4 * ideal)).toBeCloseTo(2.5 * Math.SQRT2, 10);
   });
 
@@ -138,8 +154,10 @@ describe('element table vs named sources (values recalled from the sources: "fro
   });
 
   it('structures: fcc for the ten Cleri–Rosato metals, bcc for Fe Cr V Nb Mo Ta W, hcp for Ti Co Zn Zr Ru Cd Hf Re Os (Kittel ch.1)', () => {
-    for (const s of ['Ni', 'Cu', 'Rh', 'Pd', 'Ag', 'Ir', 'Pt', 'Au', 'Al', 'Pb']) expect(getElement(s).cell.structure).toBe('fcc');
+    for (const s of ['Ni', 'Cu', 'Rh', 'Pd', 'Ag', 'Ir', 'Pt', 'Au', 'Al', 'Pb'])
+      expect(getElement(s).cell.structure).toBe('fcc');
     for (const s of ['Fe', 'Cr', 'V', 'Nb', 'Mo', 'Ta', 'W']) expect(getElement(s).cell.structure).toBe('bcc');
-    for (const s of ['Ti', 'Co', 'Zn', 'Zr', 'Ru', 'Cd', 'Hf', 'Re', 'Os']) expect(getElement(s).cell.structure).toBe('hcp');
+    for (const s of ['Ti', 'Co', 'Zn', 'Zr', 'Ru', 'Cd', 'Hf', 'Re', 'Os'])
+      expect(getElement(s).cell.structure).toBe('hcp');
   });
 });

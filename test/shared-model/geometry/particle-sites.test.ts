@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
 import { sphereDiameterForAtoms } from '../../../shared-model/geometry/fcc';
-import { magicClusterAtoms, magicClusterSurfaceAtoms, truncatedOctahedronAtoms, truncatedOctahedronSurfaceAtoms } from '../../../shared-model/geometry/magic-numbers';
+import {
+  magicClusterAtoms,
+  magicClusterSurfaceAtoms,
+  truncatedOctahedronAtoms,
+  truncatedOctahedronSurfaceAtoms,
+} from '../../../shared-model/geometry/magic-numbers';
 import { PARTICLE_SHAPES, particleSiteCounts } from '../../../shared-model/geometry/particle-sites';
 
 const A_PT_NM = 0.39242;

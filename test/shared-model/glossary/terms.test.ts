@@ -4,10 +4,18 @@ import { GLOSSARY, glossaryText } from '../../../shared-model/glossary/terms';
 describe('glossary', () => {
   it('explains every term the views and the CLI print, each with a source', () => {
     const terms = GLOSSARY.map((t) => t.term).join(' | ');
-    for (const needed of ['E (surface enrichment)', 'ω', 'ΔHmix', 'Warren–Cowley α', 'Unlike-neighbour ratio', 'ΔBIC']) {
+    for (const needed of [
+      'E (surface enrichment)',
+      'ω',
+      'ΔHmix',
+      'Warren–Cowley α',
+      'Unlike-neighbour ratio',
+      'ΔBIC',
+    ]) {
       expect(terms).toContain(needed);
     }
-    for (const route of ['Co-reduction', 'Seed-mediated growth', 'Polyol', 'Oleylamine']) expect(terms).toContain(route);
+    for (const route of ['Co-reduction', 'Seed-mediated growth', 'Polyol', 'Oleylamine'])
+      expect(terms).toContain(route);
     expect(terms).toContain('Agree in kind');
     expect(terms).toContain('Monolayer');
     for (const t of GLOSSARY) {

@@ -70,7 +70,17 @@ describe('H-statement texts vs UN GHS Annex 3', () => {
 
 describe('pictograms (UN GHS 1.4.10.4.3 precedence)', () => {
   it('nine codes with their names', () => {
-    expect(Object.keys(PICTOGRAMS)).toEqual(['GHS01', 'GHS02', 'GHS03', 'GHS04', 'GHS05', 'GHS06', 'GHS07', 'GHS08', 'GHS09']);
+    expect(Object.keys(PICTOGRAMS)).toEqual([
+      'GHS01',
+      'GHS02',
+      'GHS03',
+      'GHS04',
+      'GHS05',
+      'GHS06',
+      'GHS07',
+      'GHS08',
+      'GHS09',
+    ]);
     expect(PICTOGRAMS.GHS06).toBe('Skull and crossbones');
   });
   it('silver nitrate: oxidizer, corrosion, environment', () => {

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
-import { BOROHYDRIDE_HYDROLYSIS, hydrogenFromBorohydride, idealGasVolumeMl, MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../../../shared-model/hazards/hydrogen';
+import {
+  BOROHYDRIDE_HYDROLYSIS,
+  hydrogenFromBorohydride,
+  idealGasVolumeMl,
+  MOLAR_GAS_CONSTANT_J_PER_MOL_K,
+} from '../../../shared-model/hazards/hydrogen';
 
 describe('hydrogen from borohydride hydrolysis', () => {
   it('uses the CODATA molar gas constant', () => {
@@ -24,7 +29,7 @@ describe('hydrogen from borohydride hydrolysis', () => {
 
   it('100 mg NaBH4 (2.643 mmol at 37.83 g/mol) → 258.7 mL', () => {
     const mmol = 100 / 37.833;
-    expect(hydrogenFromBorohydride(mmol).hydrogenMl).toBeCloseTo((4 * mmol * 24.4654037) , 2);
+    expect(hydrogenFromBorohydride(mmol).hydrogenMl).toBeCloseTo(4 * mmol * 24.4654037, 2);
   });
 
   it('refuses negative amounts and temperatures naming the field', () => {

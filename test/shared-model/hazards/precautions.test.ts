@@ -5,7 +5,9 @@ import { hasPrecautionsFor, precautionsFor, PRECAUTIONARY_STATEMENTS } from '../
 
 describe('precautionary statements', () => {
   it('carry the UN GHS Annex 3 texts (Rev. 9, Section 2; from memory)', () => {
-    expect(PRECAUTIONARY_STATEMENTS.P280).toBe('Wear protective gloves/protective clothing/eye protection/face protection.');
+    expect(PRECAUTIONARY_STATEMENTS.P280).toBe(
+      'Wear protective gloves/protective clothing/eye protection/face protection.',
+    );
     expect(PRECAUTIONARY_STATEMENTS['P305+P351+P338']).toBe(
       'IF IN EYES: Rinse cautiously with water for several minutes. Remove contact lenses, if present and easy to do. Continue rinsing.',
     );

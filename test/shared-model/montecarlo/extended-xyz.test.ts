@@ -8,7 +8,10 @@ describe('extended XYZ', () => {
   it('round-trips species, positions and info', () => {
     const c = buildCuboctahedron(2, 2.8);
     const symbols = Array.from({ length: c.atoms }, (_, i) => (i % 3 === 0 ? 'Pd' : 'Ag'));
-    const text = writeExtendedXyz({ symbols, positions: c.positions }, { energy: -123.5, note: 'Ag-Pd run 4', engine: 'gupta-swap-mc-1' });
+    const text = writeExtendedXyz(
+      { symbols, positions: c.positions },
+      { energy: -123.5, note: 'Ag-Pd run 4', engine: 'gupta-swap-mc-1' },
+    );
     const lines = text.split('\n');
     expect(lines[0]).toBe('55');
     expect(lines[1]).toContain('Properties=species:S:1:pos:R:3');
@@ -21,7 +24,8 @@ describe('extended XYZ', () => {
   });
 
   it('reads other column orders and extra columns, plain XYZ, and lower-case symbols', () => {
-    const text = '2\nProperties=id:I:1:pos:R:3:species:S:1:mass:R:1 pbc="F F F"\n1 0 0 0 pt 195.08\n2 2.77 0 0 Pt 195.08\n';
+    const text =
+      '2\nProperties=id:I:1:pos:R:3:species:S:1:mass:R:1 pbc="F F F"\n1 0 0 0 pt 195.08\n2 2.77 0 0 Pt 195.08\n';
     const frame = readExtendedXyz(text);
     expect(frame.symbols).toEqual(['Pt', 'Pt']);
     expect(Array.from(frame.positions)).toEqual([0, 0, 0, 2.77, 0, 0]);

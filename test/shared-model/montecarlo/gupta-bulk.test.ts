@@ -6,7 +6,12 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
 import { bulkEnergyPerAtomEv } from '../../../shared-model/montecarlo/gupta-energy';
-import { GUPTA_ELEMENTS, guptaElement, guptaPair, GUPTA_TABLE } from '../../../shared-model/montecarlo/gupta-parameters';
+import {
+  GUPTA_ELEMENTS,
+  guptaElement,
+  guptaPair,
+  GUPTA_TABLE,
+} from '../../../shared-model/montecarlo/gupta-parameters';
 
 /** Cohesive energies, eV/atom: Kittel, Introduction to Solid State Physics, 8th ed., Ch. 3 Table 1 (from memory). */
 const KITTEL_COHESIVE_EV: Record<string, number> = {

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { buildNeighbourList, FIRST_SHELL_FACTOR, FIVE_SHELL_CUTOFF_FACTOR } from '../../../shared-model/clusters/neighbours';
+import {
+  buildNeighbourList,
+  FIRST_SHELL_FACTOR,
+  FIVE_SHELL_CUTOFF_FACTOR,
+} from '../../../shared-model/clusters/neighbours';
 import { buildCluster } from '../../../shared-model/clusters/shapes';
 import { layersFromSurface } from '../../../shared-model/montecarlo/analysis';
 import { bulkEnergyPerAtomEv, totalEnergy } from '../../../shared-model/montecarlo/gupta-energy';
@@ -37,14 +41,20 @@ describe('quintic switch', () => {
 });
 
 describe('off-lattice Gupta energy', () => {
-  it.each(GUPTA_ELEMENTS.map((s) => [s]))('%s on its own lattice: exactly the five-shell sum of the rigid engine', (symbol) => {
-    const nn = guptaElement(symbol).r0Angstrom;
-    const geometry = buildCluster('cuboctahedron', { shells: 4 }, nn);
-    const symbols = Array.from({ length: geometry.atoms }, () => symbol);
-    const rigid = totalEnergy({ symbols, positions: geometry.positions }, { cutoffAngstrom: FIVE_SHELL_CUTOFF_FACTOR * nn }).energyEv;
-    const smooth = offLatticeEnergyEv(symbols, geometry.positions);
-    expect(Math.abs(smooth - rigid) / Math.abs(rigid)).toBeLessThan(1e-12);
-  });
+  it.each(GUPTA_ELEMENTS.map((s) => [s]))(
+    '%s on its own lattice: exactly the five-shell sum of the rigid engine',
+    (symbol) => {
+      const nn = guptaElement(symbol).r0Angstrom;
+      const geometry = buildCluster('cuboctahedron', { shells: 4 }, nn);
+      const symbols = Array.from({ length: geometry.atoms }, () => symbol);
+      const rigid = totalEnergy(
+        { symbols, positions: geometry.positions },
+        { cutoffAngstrom: FIVE_SHELL_CUTOFF_FACTOR * nn },
+      ).energyEv;
+      const smooth = offLatticeEnergyEv(symbols, geometry.positions);
+      expect(Math.abs(smooth - rigid) / Math.abs(rigid)).toBeLessThan(1e-12);
+    },
+  );
 
   it('bulk limit: a large pure Cu cube-free sphere approaches the five-shell bulk energy from above', () => {
     // Kittel's cohesive energy of Cu (3.49 eV/atom, from memory) is what the fit reproduces in bulk.
@@ -61,37 +71,44 @@ describe('off-lattice Gupta energy', () => {
     ['Ag', 'Cu', 0.3],
     ['Pt', 'Pd', 0.6],
     ['Pb', 'Al', 0.5],
-  ] as const)('%s–%s: analytic forces = central finite differences to 1e-6 eV/Å (displaced random cluster)', (a, b, xB) => {
-    const { symbols, positions } = randomAlloy(a, b, xB, 3, 0.25, 11);
-    const model = new OffLatticeGupta([a, b]);
-    const types = model.typesOf(symbols);
-    const list = new VerletList(symbols.length, model.maxCutoffAngstrom, 1.0);
-    list.build(positions);
-    const forces = new Float64Array(positions.length);
-    energyAndForces(model, positions, types, list, forces);
-    // Pairs inside a switch window: the switch and its derivative are exercised.
-    let inWindow = 0;
-    for (let i = 0; i < symbols.length; i++) {
-      for (let j = i + 1; j < symbols.length; j++) {
-        const r = Math.hypot(positions[3 * i]! - positions[3 * j]!, positions[3 * i + 1]! - positions[3 * j + 1]!, positions[3 * i + 2]! - positions[3 * j + 2]!);
-        const w = model.window(types[i]!, types[j]!);
-        if (r > w.startAngstrom && r < w.endAngstrom) inWindow++;
+  ] as const)(
+    '%s–%s: analytic forces = central finite differences to 1e-6 eV/Å (displaced random cluster)',
+    (a, b, xB) => {
+      const { symbols, positions } = randomAlloy(a, b, xB, 3, 0.25, 11);
+      const model = new OffLatticeGupta([a, b]);
+      const types = model.typesOf(symbols);
+      const list = new VerletList(symbols.length, model.maxCutoffAngstrom, 1.0);
+      list.build(positions);
+      const forces = new Float64Array(positions.length);
+      energyAndForces(model, positions, types, list, forces);
+      // Pairs inside a switch window: the switch and its derivative are exercised.
+      let inWindow = 0;
+      for (let i = 0; i < symbols.length; i++) {
+        for (let j = i + 1; j < symbols.length; j++) {
+          const r = Math.hypot(
+            positions[3 * i]! - positions[3 * j]!,
+            positions[3 * i + 1]! - positions[3 * j + 1]!,
+            positions[3 * i + 2]! - positions[3 * j + 2]!,
+          );
+          const w = model.window(types[i]!, types[j]!);
+          if (r > w.startAngstrom && r < w.endAngstrom) inWindow++;
+        }
       }
-    }
-    expect(inWindow).toBeGreaterThan(20);
-    const h = 1e-5;
-    let worst = 0;
-    for (let k = 0; k < positions.length; k += 7) {
-      const saved = positions[k]!;
-      positions[k] = saved + h;
-      const plus = energyAndForces(model, positions, types, list);
-      positions[k] = saved - h;
-      const minus = energyAndForces(model, positions, types, list);
-      positions[k] = saved;
-      worst = Math.max(worst, Math.abs(-(plus - minus) / (2 * h) - forces[k]!));
-    }
-    expect(worst).toBeLessThan(1e-6);
-  });
+      expect(inWindow).toBeGreaterThan(20);
+      const h = 1e-5;
+      let worst = 0;
+      for (let k = 0; k < positions.length; k += 7) {
+        const saved = positions[k]!;
+        positions[k] = saved + h;
+        const plus = energyAndForces(model, positions, types, list);
+        positions[k] = saved - h;
+        const minus = energyAndForces(model, positions, types, list);
+        positions[k] = saved;
+        worst = Math.max(worst, Math.abs(-(plus - minus) / (2 * h) - forces[k]!));
+      }
+      expect(worst).toBeLessThan(1e-6);
+    },
+  );
 
   it('forces vanish (below the tolerance) after relaxation and still match finite differences there', () => {
     const { symbols, positions } = randomAlloy('Ag', 'Ni', 0.4, 3, 0.1, 5);

@@ -25,18 +25,21 @@ describe('relaxed Monte Carlo engine', () => {
   it.each([
     ['Au', 'Ni', 0.5],
     ['Ag', 'Cu', 0.3],
-  ] as const)('%s–%s: the incrementally kept energy equals a from-scratch sum after many swaps and displacements', (a, b, xB) => {
-    const { engine, symbols } = engineFor(a, b, xB, 3, 9);
-    const start = engine.energyEv;
-    expect(Math.abs(start - offLatticeEnergyEv(symbols(), engine.positions))).toBeLessThan(1e-9);
-    for (let s = 0; s < 20; s++) engine.runSweep(900);
-    expect(engine.stats.swapAccepted).toBeGreaterThan(0);
-    expect(engine.stats.displacementAccepted).toBeGreaterThan(100);
-    const scratch = offLatticeEnergyEv(symbols(), engine.positions);
-    // Bookkeeping: accumulated ΔE = final − initial, and the kept energy = the from-scratch sum.
-    expect(Math.abs(engine.energyEv - scratch)).toBeLessThan(1e-8);
-    expect(Math.abs(engine.acceptedDeltaSumEv - (scratch - start))).toBeLessThan(1e-8);
-  });
+  ] as const)(
+    '%s–%s: the incrementally kept energy equals a from-scratch sum after many swaps and displacements',
+    (a, b, xB) => {
+      const { engine, symbols } = engineFor(a, b, xB, 3, 9);
+      const start = engine.energyEv;
+      expect(Math.abs(start - offLatticeEnergyEv(symbols(), engine.positions))).toBeLessThan(1e-9);
+      for (let s = 0; s < 20; s++) engine.runSweep(900);
+      expect(engine.stats.swapAccepted).toBeGreaterThan(0);
+      expect(engine.stats.displacementAccepted).toBeGreaterThan(100);
+      const scratch = offLatticeEnergyEv(symbols(), engine.positions);
+      // Bookkeeping: accumulated ΔE = final − initial, and the kept energy = the from-scratch sum.
+      expect(Math.abs(engine.energyEv - scratch)).toBeLessThan(1e-8);
+      expect(Math.abs(engine.acceptedDeltaSumEv - (scratch - start))).toBeLessThan(1e-8);
+    },
+  );
 
   it('trial deltas equal energy differences computed from scratch (swap and displacement)', () => {
     const { engine, symbols } = engineFor('Pt', 'Ni', 0.4, 2, 4);
@@ -64,12 +67,22 @@ describe('relaxed Monte Carlo engine', () => {
     const relaxed = relaxStructure({ symbols, positions: geometry.positions }, { forceToleranceEvPerAngstrom: 1e-7 });
     const rng = createRandom(17);
     const model = new OffLatticeGupta(['Pt', 'Au']);
-    const engine = new RelaxedEngine(model, relaxed.positions, new Uint8Array(geometry.atoms), new Uint8Array(geometry.atoms), rng, 0.01);
+    const engine = new RelaxedEngine(
+      model,
+      relaxed.positions,
+      new Uint8Array(geometry.atoms),
+      new Uint8Array(geometry.atoms),
+      rng,
+      0.01,
+    );
     const temperatureK = 8;
     for (let s = 0; s < 200; s++) {
       const before = { ...engine.stats };
       engine.runSweep(temperatureK);
-      engine.tuneStep((engine.stats.displacementAccepted - before.displacementAccepted) / (engine.stats.displacementAttempts - before.displacementAttempts));
+      engine.tuneStep(
+        (engine.stats.displacementAccepted - before.displacementAccepted) /
+          (engine.stats.displacementAttempts - before.displacementAttempts),
+      );
     }
     let sum = 0;
     const sweeps = 4000;
@@ -88,7 +101,9 @@ describe('relaxed Monte Carlo engine', () => {
     for (let s = 0; s < 30; s++) {
       const before = { ...engine.stats };
       engine.runSweep(600);
-      acceptance = (engine.stats.displacementAccepted - before.displacementAccepted) / (engine.stats.displacementAttempts - before.displacementAttempts);
+      acceptance =
+        (engine.stats.displacementAccepted - before.displacementAccepted) /
+        (engine.stats.displacementAttempts - before.displacementAttempts);
       engine.tuneStep(acceptance);
     }
     expect(acceptance).toBeGreaterThan(0.33);

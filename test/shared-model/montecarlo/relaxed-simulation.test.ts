@@ -26,7 +26,10 @@ function relaxedMixingEnergyPerAtomEv(a: string, b: string, xB: number, seed: nu
   const x = symbols.filter((s) => s === b).length / geometry.atoms;
   const alloy = relaxStructure({ symbols, positions: geometry.positions }).energyEv / geometry.atoms;
   const pure = (s: string) =>
-    relaxStructure({ symbols: symbols.map(() => s), positions: Float64Array.from(geometry.positions, (v) => (v * guptaElement(s).r0Angstrom) / nn) }).energyEv / geometry.atoms;
+    relaxStructure({
+      symbols: symbols.map(() => s),
+      positions: Float64Array.from(geometry.positions, (v) => (v * guptaElement(s).r0Angstrom) / nn),
+    }).energyEv / geometry.atoms;
   return alloy - (1 - x) * pure(a) - x * pure(b);
 }
 
@@ -56,7 +59,20 @@ function coreUnlikeRatio(result: SimulationResult): number {
 }
 
 const run = (elementA: string, elementB: string, extra: Partial<SimulationSpec>) =>
-  runSimulation({ elementA, elementB, xB: 0.5, shape: 'cuboctahedron', shells: 4, temperatureK: 600, sweeps: 300, seed: 3, ...extra }, createRandom(3));
+  runSimulation(
+    {
+      elementA,
+      elementB,
+      xB: 0.5,
+      shape: 'cuboctahedron',
+      shells: 4,
+      temperatureK: 600,
+      sweeps: 300,
+      seed: 3,
+      ...extra,
+    },
+    createRandom(3),
+  );
 
 describe('sign of mixing with relaxation', () => {
   it.each([
@@ -69,14 +85,17 @@ describe('sign of mixing with relaxation', () => {
   it.each([
     ['Au', 'Ni'],
     ['Ag', 'Cu'],
-  ])('%s–%s at 600 K: relaxed Monte Carlo demixes (unlike-neighbour ratio well below 1 and below the rigid run)', (a, b) => {
-    const relaxed = run(a!, b!, { relaxation: 'relaxed' });
-    const rigid = run(a!, b!, { relaxation: 'rigid' });
-    expect(relaxed.relaxation.mode).toBe('relaxed');
-    expect(relaxed.unlikeNeighbourRatio).toBeLessThan(0.72);
-    expect(relaxed.unlikeNeighbourRatio).toBeLessThan(rigid.unlikeNeighbourRatio - 0.15);
-    expect(Math.abs(relaxed.energyDriftEv)).toBeLessThan(1e-6);
-  });
+  ])(
+    '%s–%s at 600 K: relaxed Monte Carlo demixes (unlike-neighbour ratio well below 1 and below the rigid run)',
+    (a, b) => {
+      const relaxed = run(a!, b!, { relaxation: 'relaxed' });
+      const rigid = run(a!, b!, { relaxation: 'rigid' });
+      expect(relaxed.relaxation.mode).toBe('relaxed');
+      expect(relaxed.unlikeNeighbourRatio).toBeLessThan(0.72);
+      expect(relaxed.unlikeNeighbourRatio).toBeLessThan(rigid.unlikeNeighbourRatio - 0.15);
+      expect(Math.abs(relaxed.energyDriftEv)).toBeLessThan(1e-6);
+    },
+  );
 
   it.each([
     ['Ag', 'Pd'],
@@ -90,13 +109,35 @@ describe('sign of mixing with relaxation', () => {
 
 describe('default mode by size mismatch', () => {
   it('Au–Ni, Ag–Cu, Pt–Ni run relaxed by default; Ag–Pd, Au–Pd, Au–Ag rigid; the reason is stated', () => {
-    for (const [a, b] of [['Au', 'Ni'], ['Ag', 'Cu'], ['Pt', 'Ni']]) expect(defaultRelaxation(a!, b!).mode).toBe('relaxed');
-    for (const [a, b] of [['Ag', 'Pd'], ['Au', 'Pd'], ['Au', 'Ag']]) expect(defaultRelaxation(a!, b!).mode).toBe('rigid');
+    for (const [a, b] of [
+      ['Au', 'Ni'],
+      ['Ag', 'Cu'],
+      ['Pt', 'Ni'],
+    ])
+      expect(defaultRelaxation(a!, b!).mode).toBe('relaxed');
+    for (const [a, b] of [
+      ['Ag', 'Pd'],
+      ['Au', 'Pd'],
+      ['Au', 'Ag'],
+    ])
+      expect(defaultRelaxation(a!, b!).mode).toBe('rigid');
     expect(defaultRelaxation('Au', 'Ni').reason).toMatch(/differ by 14\.\d % \(more than 6 %\)/);
   });
 
   it('a relaxed run stores its design, step, acceptances and final positions', () => {
-    const result = runSimulation({ elementA: 'Au', elementB: 'Ni', xB: 0.3, shape: 'cuboctahedron', shells: 2, temperatureK: 600, sweeps: 60, seed: 2 }, createRandom(2));
+    const result = runSimulation(
+      {
+        elementA: 'Au',
+        elementB: 'Ni',
+        xB: 0.3,
+        shape: 'cuboctahedron',
+        shells: 2,
+        temperatureK: 600,
+        sweeps: 60,
+        seed: 2,
+      },
+      createRandom(2),
+    );
     expect(result.relaxation.mode).toBe('relaxed');
     expect(result.relaxation.design).toMatch(/displacement/);
     expect(result.relaxation.displacementAcceptance).toBeGreaterThan(0.3);
@@ -109,7 +150,16 @@ describe('default mode by size mismatch', () => {
 
 describe('runs that stop at the answer', () => {
   it('Ag–Pd 3 nm at 600 K: stops with SE < 0.005 within 300 sweeps and agrees with a 3,000-sweep run within 2 SE', () => {
-    const spec: SimulationSpec = { elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', diameterNm: 3, temperatureK: 600, sweeps: 3000, seed: 5 };
+    const spec: SimulationSpec = {
+      elementA: 'Ag',
+      elementB: 'Pd',
+      xB: 0.5,
+      shape: 'cuboctahedron',
+      diameterNm: 3,
+      temperatureK: 600,
+      sweeps: 3000,
+      seed: 5,
+    };
     const stopped = runSimulation({ ...spec, stopping: DEFAULT_STOPPING }, createRandom(5));
     expect(stopped.stopping.stoppedAtAnswer).toBe(true);
     expect(stopped.stopping.sweepsTaken).toBeLessThanOrEqual(300);

@@ -1,12 +1,28 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
-import { planSimulation, rebuildGeometry, runSimulation, scheduledTemperatureK, SIMULATION_LIMITS, type SimulationSpec } from '../../../shared-model/montecarlo/simulate';
+import {
+  planSimulation,
+  rebuildGeometry,
+  runSimulation,
+  scheduledTemperatureK,
+  SIMULATION_LIMITS,
+  type SimulationSpec,
+} from '../../../shared-model/montecarlo/simulate';
 import { totalEnergy } from '../../../shared-model/montecarlo/gupta-energy';
 import { magicClusterAtoms, magicClusterSurfaceAtoms } from '../../../shared-model/geometry/magic-numbers';
 import { createRandom } from '../../../shared-model/random';
 import { predictPair } from '../../../shared-model/prediction/predict';
 
-const base: SimulationSpec = { elementA: 'Ag', elementB: 'Pd', xB: 0.5, shape: 'cuboctahedron', shells: 3, temperatureK: 600, sweeps: 200, seed: 7 };
+const base: SimulationSpec = {
+  elementA: 'Ag',
+  elementB: 'Pd',
+  xB: 0.5,
+  shape: 'cuboctahedron',
+  shells: 3,
+  temperatureK: 600,
+  sweeps: 200,
+  seed: 7,
+};
 
 function fieldOf(spec: Partial<SimulationSpec> & Record<string, unknown>): string | undefined {
   try {
@@ -62,7 +78,9 @@ describe('bad input is refused before any work, naming the field', () => {
 describe('a run', () => {
   it('reports progress, fills the result and repeats from its seed', () => {
     const reports: number[] = [];
-    const result = runSimulation({ ...base, progressEverySweeps: 50 }, createRandom(7), { onProgress: (p) => reports.push(p.sweep) });
+    const result = runSimulation({ ...base, progressEverySweeps: 50 }, createRandom(7), {
+      onProgress: (p) => reports.push(p.sweep),
+    });
     expect(reports).toEqual([50, 100, 150, 200]);
     expect(result.atoms).toBe(147);
     expect(result.countB).toBe(74); // round(0.5 × 147)
@@ -132,7 +150,16 @@ describe('surface enrichment direction vs published expectations and the analyti
   for (const { pair, surface, minimumShift } of cases) {
     it(`${pair[0]}–${pair[1]}: ${surface} enriches the surface (309-atom cuboctahedron, 600 K)`, () => {
       const result = runSimulation(
-        { elementA: pair[0], elementB: pair[1], xB: 0.3, shape: 'cuboctahedron', shells: 4, temperatureK: 600, sweeps: 300, seed: 11 },
+        {
+          elementA: pair[0],
+          elementB: pair[1],
+          xB: 0.3,
+          shape: 'cuboctahedron',
+          shells: 4,
+          temperatureK: 600,
+          sweeps: 300,
+          seed: 11,
+        },
         createRandom(11),
       );
       expect(result.classification.enrichedElement).toBe(surface);
@@ -144,7 +171,12 @@ describe('surface enrichment direction vs published expectations and the analyti
       const labels = ['surface-enriched alloy', `${pair[0]}@${pair[1]}`, `${pair[1]}@${pair[0]}`];
       if (result.relaxation.mode === 'relaxed') labels.push('Janus');
       expect(labels).toContain(result.architecture);
-      const analytic = predictPair(pair[0], pair[1], { xB: result.xB, diameterNm: result.geometry.equivalentDiameterNm, shape: 'cuboctahedron', temperatureK: 600 });
+      const analytic = predictPair(pair[0], pair[1], {
+        xB: result.xB,
+        diameterNm: result.geometry.equivalentDiameterNm,
+        shape: 'cuboctahedron',
+        temperatureK: 600,
+      });
       expect(analytic.surfaceElement).toBe(surface);
     });
   }

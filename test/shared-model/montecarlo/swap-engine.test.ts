@@ -5,10 +5,22 @@ import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../../../shared-mo
 import { surfaceSites } from '../../../shared-model/montecarlo/analysis';
 import { bruteForceEnergyEv, totalEnergy } from '../../../shared-model/montecarlo/gupta-energy';
 import { guptaElement } from '../../../shared-model/montecarlo/gupta-parameters';
-import { BOLTZMANN_EV_PER_K, binaryTables, configurationEnergyEv, SwapEngine } from '../../../shared-model/montecarlo/swap-engine';
+import {
+  BOLTZMANN_EV_PER_K,
+  binaryTables,
+  configurationEnergyEv,
+  SwapEngine,
+} from '../../../shared-model/montecarlo/swap-engine';
 import { createRandom, type SeededRandom } from '../../../shared-model/random';
 
-function setup(shape: ParticleShape, shells: number, elementA: string, elementB: string, xB: number, rng: SeededRandom) {
+function setup(
+  shape: ParticleShape,
+  shells: number,
+  elementA: string,
+  elementB: string,
+  xB: number,
+  rng: SeededRandom,
+) {
   const nn = (1 - xB) * guptaElement(elementA).r0Angstrom + xB * guptaElement(elementB).r0Angstrom;
   const geometry = buildCluster(shape, { shells }, nn);
   const list = buildNeighbourList(geometry.positions, FIVE_SHELL_CUTOFF_FACTOR * nn);
@@ -17,7 +29,8 @@ function setup(shape: ParticleShape, shells: number, elementA: string, elementB:
   const tables = binaryTables(elementA, elementB, list);
   const engine = new SwapEngine(list, geometry.positions, tables, species, surfaceSites(list, nn), rng);
   const symbolsOf = (s: Uint8Array) => Array.from(s, (v) => (v ? elementB : elementA));
-  const brute = (s: Uint8Array) => bruteForceEnergyEv({ symbols: symbolsOf(s), positions: geometry.positions }, FIVE_SHELL_CUTOFF_FACTOR * nn);
+  const brute = (s: Uint8Array) =>
+    bruteForceEnergyEv({ symbols: symbolsOf(s), positions: geometry.positions }, FIVE_SHELL_CUTOFF_FACTOR * nn);
   return { nn, geometry, list, tables, engine, brute, symbolsOf };
 }
 
@@ -69,14 +82,22 @@ describe('local energy change', () => {
       if (trial % 2 === 0) {
         let best = Infinity;
         for (const k of b) {
-          const d = Math.hypot(geometry.positions[3 * i]! - geometry.positions[3 * k]!, geometry.positions[3 * i + 1]! - geometry.positions[3 * k + 1]!, geometry.positions[3 * i + 2]! - geometry.positions[3 * k + 2]!);
+          const d = Math.hypot(
+            geometry.positions[3 * i]! - geometry.positions[3 * k]!,
+            geometry.positions[3 * i + 1]! - geometry.positions[3 * k + 1]!,
+            geometry.positions[3 * i + 2]! - geometry.positions[3 * k + 2]!,
+          );
           if (d < best) {
             best = d;
             j = k;
           }
         }
       }
-      const d = Math.hypot(geometry.positions[3 * i]! - geometry.positions[3 * j]!, geometry.positions[3 * i + 1]! - geometry.positions[3 * j + 1]!, geometry.positions[3 * i + 2]! - geometry.positions[3 * j + 2]!);
+      const d = Math.hypot(
+        geometry.positions[3 * i]! - geometry.positions[3 * j]!,
+        geometry.positions[3 * i + 1]! - geometry.positions[3 * j + 1]!,
+        geometry.positions[3 * i + 2]! - geometry.positions[3 * j + 2]!,
+      );
       if (d < 2 * engine.list.cutoffAngstrom) near++;
       else far++;
       const delta = engine.trialSwapDeltaEv(i, j);

@@ -18,15 +18,37 @@ describe('asMadeForBatch', () => {
   });
 
   it('seeded growth: Ag on Au seeds stays Au@Ag; Au(III) on Pd seeds replaces Pd (hollow)', () => {
-    const agOnAu = asMadeForBatch({ elementA: 'Au', elementB: 'Ag', xB: 0.3, diameterNm: 20, route: 'seed-mediated', seedElement: 'Au' });
+    const agOnAu = asMadeForBatch({
+      elementA: 'Au',
+      elementB: 'Ag',
+      xB: 0.3,
+      diameterNm: 20,
+      route: 'seed-mediated',
+      seedElement: 'Au',
+    });
     expect(agOnAu.label).toBe('Au@Ag');
-    const auOnPd = asMadeForBatch({ elementA: 'Pd', elementB: 'Au', xB: 0.3, diameterNm: 20, route: 'seed-mediated', seedElement: 'Pd' });
+    const auOnPd = asMadeForBatch({
+      elementA: 'Pd',
+      elementB: 'Au',
+      xB: 0.3,
+      diameterNm: 20,
+      route: 'seed-mediated',
+      seedElement: 'Pd',
+    });
     expect(auOnPd.label).toBe('hollow');
     expect(auOnPd.kinetic?.text).toMatch(/galvanic replacement/);
   });
 
   it('hot enough for long enough, the as-made structure is the equilibrium one', () => {
-    const e = asMadeForBatch({ elementA: 'Au', elementB: 'Pd', xB: 0.5, diameterNm: 3, route: 'organic', temperatureK: 900, timeH: 10 });
+    const e = asMadeForBatch({
+      elementA: 'Au',
+      elementB: 'Pd',
+      xB: 0.5,
+      diameterNm: 3,
+      route: 'organic',
+      temperatureK: 900,
+      timeH: 10,
+    });
     expect(e.basis).toBe('equilibrium');
     expect(e.label).toBe(e.afterAnnealing);
     expect(e.environment).toBe('ligand');

@@ -4,7 +4,12 @@
  * (they are not tuning targets); sources named beside each, from memory.
  */
 import { describe, expect, it } from 'vitest';
-import { arrheniusDiffusivity, diffusionLengthNm, interdiffusionEstimate, selfDiffusionParameters } from '../../../shared-model/prediction/diffusion';
+import {
+  arrheniusDiffusivity,
+  diffusionLengthNm,
+  interdiffusionEstimate,
+  selfDiffusionParameters,
+} from '../../../shared-model/prediction/diffusion';
 import { adsorbateTerm, langmuirCoverage } from '../../../shared-model/prediction/environment';
 import { pairContext, predictPair, type PredictionConditions } from '../../../shared-model/prediction/predict';
 import { qualifiesFor, rankPairs } from '../../../shared-model/prediction/rank';
@@ -67,7 +72,11 @@ describe('adsorbate-induced segregation (environment)', () => {
 
 describe('wetting: Janus or core@shell for demixing pairs', () => {
   it('Ag–Ni, Ag–Cu and Au–Ni: the low-surface-energy element wets (core@shell), S and its terms shown', () => {
-    for (const [core, shell] of [['Ni', 'Ag'], ['Cu', 'Ag'], ['Ni', 'Au']] as const) {
+    for (const [core, shell] of [
+      ['Ni', 'Ag'],
+      ['Cu', 'Ag'],
+      ['Ni', 'Au'],
+    ] as const) {
       for (const diameterNm of [4, 10, 30]) {
         const p = predictPair(shell, core, { ...AT, diameterNm });
         expect(p.wetting, `${shell}-${core}`).not.toBeNull();
@@ -94,7 +103,10 @@ describe('wetting: Janus or core@shell for demixing pairs', () => {
   });
 
   it('Ag–Pd and Au–Pd are never Janus (they mix), at any size or temperature', () => {
-    for (const pair of [['Ag', 'Pd'], ['Au', 'Pd']] as const) {
+    for (const pair of [
+      ['Ag', 'Pd'],
+      ['Au', 'Pd'],
+    ] as const) {
       for (const diameterNm of [2, 4, 10, 30]) {
         for (const temperatureK of [300, 450, 600, 900]) {
           for (const environment of ['vacuum', 'CO'] as const) {
@@ -122,7 +134,16 @@ describe('oxidation in air or water (oxide formation enthalpy per O atom, CRC / 
   it('Cu, Co, Fe, Ni, Al, Pb, Sn, Zn oxidise; Pt, Au, Pd, Ag do not at room temperature', () => {
     // CRC Handbook ΔfH° (from memory): Cu₂O −168.6, NiO −239.7, CoO −237.9, PbO −219.0 kJ/mol;
     // Al₂O₃ −1675.7/3 = −558.6; Fe₃O₄ −1118.4/4 = −279.6; SnO₂ −577.6/2 = −288.8; ZnO −350.5
-    const cases: Array<[string, string]> = [['Cu', 'Pt'], ['Co', 'Au'], ['Fe', 'Pd'], ['Ni', 'Ag'], ['Al', 'Pt'], ['Pb', 'Au'], ['Sn', 'Pt'], ['Zn', 'Au']];
+    const cases: Array<[string, string]> = [
+      ['Cu', 'Pt'],
+      ['Co', 'Au'],
+      ['Fe', 'Pd'],
+      ['Ni', 'Ag'],
+      ['Al', 'Pt'],
+      ['Pb', 'Au'],
+      ['Sn', 'Pt'],
+      ['Zn', 'Au'],
+    ];
     for (const [base, noble] of cases) {
       const p = predictPair(base, noble, AT);
       expect(p.oxidation.oxidisingInAir, base).toEqual([base]);
@@ -172,7 +193,15 @@ describe('kinetics: interdiffusion length against the radius', () => {
 
 describe('honest confidence: surface-energy differences within the scatter between sources', () => {
   it('the near-degenerate pairs are uncertain and show both sources; Pt–Au is not', () => {
-    for (const [a, b] of [['Ir', 'Ru'], ['Co', 'Pt'], ['Fe', 'Pt'], ['Ni', 'Co'], ['Ni', 'Fe'], ['Cu', 'Pd'], ['Re', 'W']]) {
+    for (const [a, b] of [
+      ['Ir', 'Ru'],
+      ['Co', 'Pt'],
+      ['Fe', 'Pt'],
+      ['Ni', 'Co'],
+      ['Ni', 'Fe'],
+      ['Cu', 'Pd'],
+      ['Re', 'W'],
+    ]) {
       const p = predictPair(a!, b!, AT);
       expect(p.certainty.uncertain, `${a}-${b}`).toBe(true);
       expect(p.certainty.sources.second, `${a}-${b}`).not.toBeNull();

@@ -59,7 +59,12 @@ describe('Miedema mixing enthalpy', () => {
   });
 
   it('is symmetric: A(1−x)B(x) equals B(x)A(1−x), and vanishes for the pure metals', () => {
-    for (const [a, b] of [['Pt', 'Ni'], ['Ag', 'Cu'], ['Al', 'Zr'], ['Au', 'Pd']] as const) {
+    for (const [a, b] of [
+      ['Pt', 'Ni'],
+      ['Ag', 'Cu'],
+      ['Al', 'Zr'],
+      ['Au', 'Pd'],
+    ] as const) {
       for (const x of [0.1, 0.37, 0.5, 0.8]) {
         const ab = miedemaMixingEnthalpy(a, b, x);
         const ba = miedemaMixingEnthalpy(b, a, 1 - x);
@@ -72,7 +77,12 @@ describe('Miedema mixing enthalpy', () => {
   });
 
   it('solid = liquid chemical part (without hybridization) plus a non-negative elastic part', () => {
-    for (const [a, b] of [['Pt', 'Ni'], ['Ag', 'Cu'], ['Au', 'Pd'], ['Fe', 'Co']] as const) {
+    for (const [a, b] of [
+      ['Pt', 'Ni'],
+      ['Ag', 'Cu'],
+      ['Au', 'Pd'],
+      ['Fe', 'Co'],
+    ] as const) {
       const solid = miedemaMixingEnthalpy(a, b, 0.3, 'solid');
       const liquid = miedemaMixingEnthalpy(a, b, 0.3, 'liquid');
       expect(solid.hybridizationRtoP).toBe(0);
@@ -89,7 +99,8 @@ describe('Miedema mixing enthalpy', () => {
     for (const a of METAL_SYMBOLS) {
       for (const b of METAL_SYMBOLS) {
         if (a === b) continue;
-        for (const x of [1e-9, 0.5, 1 - 1e-9]) expect(Number.isFinite(miedemaMixingEnthalpy(a, b, x).totalKjPerMol)).toBe(true);
+        for (const x of [1e-9, 0.5, 1 - 1e-9])
+          expect(Number.isFinite(miedemaMixingEnthalpy(a, b, x).totalKjPerMol)).toBe(true);
       }
     }
   });

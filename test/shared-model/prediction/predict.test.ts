@@ -5,8 +5,21 @@ import { DEFAULT_THRESHOLDS } from '../../../shared-model/architecture/classify'
 import { elementProperty } from '../../../shared-model/elements/element-table';
 import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
 import { conditionsSchema } from '../../../shared-model/api/prediction';
-import { MODEL_VERSION, PREDICTION_DEFAULTS, resolveConditions, pairContext, predictCore, predictPair, regularSolutionBinodal, type PredictionConditions } from '../../../shared-model/prediction/predict';
-import { friedelStrainEnergyEv, segregationCoefficients, segregationTermsB } from '../../../shared-model/prediction/segregation';
+import {
+  MODEL_VERSION,
+  PREDICTION_DEFAULTS,
+  resolveConditions,
+  pairContext,
+  predictCore,
+  predictPair,
+  regularSolutionBinodal,
+  type PredictionConditions,
+} from '../../../shared-model/prediction/predict';
+import {
+  friedelStrainEnergyEv,
+  segregationCoefficients,
+  segregationTermsB,
+} from '../../../shared-model/prediction/segregation';
 import { solveSurfaceEquilibrium } from '../../../shared-model/prediction/surface-equilibrium';
 
 const BASE: PredictionConditions = { xB: 0.5, diameterNm: 3, shape: 'cuboctahedron', temperatureK: 600 };
@@ -24,7 +37,26 @@ function fieldOf(fn: () => unknown): string | undefined {
 describe('predictPair: output', () => {
   it('has the promised fields, finite numbers, and the stored settings', () => {
     const p = predictPair('Ag', 'Pd', BASE);
-    for (const key of ['pair', 'surfaceElement', 'surfaceFraction', 'enrichment', 'architecture', 'confidence', 'terms', 'mixingEnthalpyKjPerMol', 'atoms', 'surfaceSites', 'xB', 'diameterNm', 'shape', 'temperatureK', 'thresholds', 'modelVersion', 'flags', 'reason']) {
+    for (const key of [
+      'pair',
+      'surfaceElement',
+      'surfaceFraction',
+      'enrichment',
+      'architecture',
+      'confidence',
+      'terms',
+      'mixingEnthalpyKjPerMol',
+      'atoms',
+      'surfaceSites',
+      'xB',
+      'diameterNm',
+      'shape',
+      'temperatureK',
+      'thresholds',
+      'modelVersion',
+      'flags',
+      'reason',
+    ]) {
       expect(p, key).toHaveProperty(key);
     }
     expect(p.pair).toBe('Ag-Pd');
@@ -45,7 +77,17 @@ describe('predictPair: output', () => {
       for (const b of METAL_SYMBOLS) {
         if (a >= b) continue;
         const p = predictPair(a, b, { ...BASE, xB: 0.3, diameterNm: 2 });
-        for (const value of [p.surfaceXB, p.coreXB, p.enrichment, p.confidence, p.terms.total, p.mixingEnthalpyKjPerMol, p.unlikeNeighbourRatio, p.segregation.aInB.total, p.segregation.bInA.total]) {
+        for (const value of [
+          p.surfaceXB,
+          p.coreXB,
+          p.enrichment,
+          p.confidence,
+          p.terms.total,
+          p.mixingEnthalpyKjPerMol,
+          p.unlikeNeighbourRatio,
+          p.segregation.aInB.total,
+          p.segregation.bInA.total,
+        ]) {
           expect(Number.isFinite(value), `${a}-${b}`).toBe(true);
         }
         expect(p.surfaceXB * p.surfaceSites + 0).toBeGreaterThanOrEqual(0);
@@ -54,7 +96,12 @@ describe('predictPair: output', () => {
   });
 
   it('does not depend on the order of the pair: (A, B, x) ≡ (B, A, 1 − x)', () => {
-    for (const [a, b, x] of [['Ag', 'Pd', 0.3], ['Pt', 'Ni', 0.75], ['Cu', 'Au', 0.5], ['Fe', 'Pt', 0.5]] as const) {
+    for (const [a, b, x] of [
+      ['Ag', 'Pd', 0.3],
+      ['Pt', 'Ni', 0.75],
+      ['Cu', 'Au', 0.5],
+      ['Fe', 'Pt', 0.5],
+    ] as const) {
       const ab = predictPair(a, b, { ...BASE, xB: x });
       const ba = predictPair(b, a, { ...BASE, xB: 1 - x });
       expect(ba.surfaceElement).toBe(ab.surfaceElement);
@@ -72,14 +119,25 @@ describe('predictPair: physics checks', () => {
     const conditions = resolveConditions({ ...BASE, xB: 0.2, diameterNm: 1e5 });
     const ctx = pairContext('Pd', 'Ag');
     const core = predictCore(ctx, conditions);
-    const semi = solveSurfaceEquilibrium({ xB: 0.2, surfaceShare: 0, kTEv: core.kT, c0: core.k.c0, cS: core.k.cS, cC: core.k.cC });
+    const semi = solveSurfaceEquilibrium({
+      xB: 0.2,
+      surfaceShare: 0,
+      kTEv: core.kT,
+      c0: core.k.c0,
+      cS: core.k.cS,
+      cC: core.k.cC,
+    });
     const p = predictPair('Pd', 'Ag', { ...BASE, xB: 0.2, diameterNm: 1e5 });
     expect(p.coreXB).toBeCloseTo(0.2, 4);
     expect(p.surfaceXB).toBeCloseTo(semi.surfaceXB, 4);
   });
 
   it('T → ∞ → no enrichment', () => {
-    for (const [a, b] of [['Pd', 'Ag'], ['Pt', 'Au'], ['Ni', 'Cu']] as const) {
+    for (const [a, b] of [
+      ['Pd', 'Ag'],
+      ['Pt', 'Au'],
+      ['Ni', 'Cu'],
+    ] as const) {
       const p = predictPair(a, b, { ...BASE, temperatureK: 1e8 });
       expect(p.enrichment).toBeLessThan(1e-3);
       expect(p.architecture).toBe('alloy');
@@ -93,12 +151,14 @@ describe('predictPair: physics checks', () => {
       expect(Number.isFinite(p.surfaceXB) && Number.isFinite(p.enrichment)).toBe(true);
     }
     const dilute = predictPair('Pd', 'Ag', { ...BASE, xB: 1e-9, diameterNm: 1e3 });
-    const ratio = Math.log((dilute.surfaceXB / (1 - dilute.surfaceXB)) / (dilute.coreXB / (1 - dilute.coreXB)));
+    const ratio = Math.log(dilute.surfaceXB / (1 - dilute.surfaceXB) / (dilute.coreXB / (1 - dilute.coreXB)));
     expect(ratio).toBeCloseTo(-dilute.segregation.bInA.total / kT, 2);
   });
 
   it('small particles deplete their core (DOMAIN.md Models 3)', () => {
-    const cores = [1.5, 2, 3, 5, 10, 50].map((d) => predictPair('Pd', 'Ag', { ...BASE, xB: 0.2, diameterNm: d }).coreXB);
+    const cores = [1.5, 2, 3, 5, 10, 50].map(
+      (d) => predictPair('Pd', 'Ag', { ...BASE, xB: 0.2, diameterNm: d }).coreXB,
+    );
     for (let i = 1; i < cores.length; i++) expect(cores[i] as number).toBeGreaterThan(cores[i - 1] as number);
     expect(cores[0] as number).toBeLessThan(0.05);
   });
@@ -111,7 +171,9 @@ describe('predictPair: physics checks', () => {
     // every term carries the calibration factor s (calibration.ts: fitted to EAM slab energies)
     const s = SEGREGATION_CALIBRATION.scale;
     expect(p.calibrationScale).toBe(s);
-    const expected = ((elementProperty('Au', 'surfaceEnergyJPerM2') - elementProperty('Pt', 'surfaceEnergyJPerM2')) * sigma) / 1.602176634e-19;
+    const expected =
+      ((elementProperty('Au', 'surfaceEnergyJPerM2') - elementProperty('Pt', 'surfaceEnergyJPerM2')) * sigma) /
+      1.602176634e-19;
     expect(p.segregation.bInA.surfaceEnergy).toBeCloseTo(s * expected, 10);
     // Au is larger than Pt: Friedel strain relief applies, −E_el(Au in Pt)
     expect(p.segregation.bInA.elastic).toBeCloseTo(-s * friedelStrainEnergyEv('Pt', 'Au'), 12);
@@ -131,15 +193,39 @@ describe('predictPair: physics checks', () => {
   });
 
   it('the composition-dependent enthalpy joins the two dilute limits: ΔH_B(1, 1) = −ΔH_A(dilute)', () => {
-    const k = segregationCoefficients({ gammaAJPerM2: 2.0, gammaBJPerM2: 1.2, latticeNm: 0.4, facet: '111', omegaEv: 0.02, strainBinAEv: 0.1, strainAinBEv: 0.05 });
-    const kReverse = segregationCoefficients({ gammaAJPerM2: 1.2, gammaBJPerM2: 2.0, latticeNm: 0.4, facet: '111', omegaEv: 0.02, strainBinAEv: 0.05, strainAinBEv: 0.1 });
+    const k = segregationCoefficients({
+      gammaAJPerM2: 2.0,
+      gammaBJPerM2: 1.2,
+      latticeNm: 0.4,
+      facet: '111',
+      omegaEv: 0.02,
+      strainBinAEv: 0.1,
+      strainAinBEv: 0.05,
+    });
+    const kReverse = segregationCoefficients({
+      gammaAJPerM2: 1.2,
+      gammaBJPerM2: 2.0,
+      latticeNm: 0.4,
+      facet: '111',
+      omegaEv: 0.02,
+      strainBinAEv: 0.05,
+      strainAinBEv: 0.1,
+    });
     expect(segregationTermsB(k, 1, 1).totalEv).toBeCloseTo(-segregationTermsB(kReverse, 0, 0).totalEv, 12);
     // ω > 0: a B-rich surface layer attracts more B (lateral like-bonds), ΔH falls as x_s rises
     expect(segregationTermsB(k, 0.8, 0.2).chemicalEv).toBeLessThan(segregationTermsB(k, 0.2, 0.2).chemicalEv);
   });
 
   it('rules of the trade: Ag, Au and Pb cover strongly bound, small-atom partners (common practice)', () => {
-    for (const [core, shell] of [['Pt', 'Ag'], ['Pd', 'Au'], ['Ni', 'Ag'], ['Cu', 'Pb'], ['Pt', 'Au'], ['Ir', 'Ag'], ['Rh', 'Au']] as const) {
+    for (const [core, shell] of [
+      ['Pt', 'Ag'],
+      ['Pd', 'Au'],
+      ['Ni', 'Ag'],
+      ['Cu', 'Pb'],
+      ['Pt', 'Au'],
+      ['Ir', 'Ag'],
+      ['Rh', 'Au'],
+    ] as const) {
       const p = predictPair(core, shell, { ...BASE, xB: 0.3 });
       expect(p.surfaceElement, `${core}-${shell}`).toBe(shell);
     }
@@ -171,7 +257,9 @@ describe('predictPair: classification settings and confidence', () => {
     expect(bcc.flags.some((f) => f.includes('Fe is bcc'))).toBe(true);
     const tiny = predictPair('Pt', 'Pd', { ...BASE, diameterNm: 1 });
     expect(tiny.flags.some((f) => f.includes('atoms'))).toBe(true);
-    expect(tiny.confidence).toBeLessThan(predictPair('Pt', 'Pd', { ...BASE, diameterNm: 1, temperatureK: 600 }).confidence + 1e-12);
+    expect(tiny.confidence).toBeLessThan(
+      predictPair('Pt', 'Pd', { ...BASE, diameterNm: 1, temperatureK: 600 }).confidence + 1e-12,
+    );
   });
 
   it('Janus and intermetallic labels come from the mixing tendency (quasi-chemical / miscibility gap)', () => {

@@ -90,7 +90,9 @@ describe('computeIsotherm', () => {
 
   it('vs temperature: enrichment falls as T rises', () => {
     const iso = computeIsotherm('Pt', 'Au', { ...BASE, xB: 0.1, diameterNm: 20 }, 'temperature', 11);
-    expect((iso.points[0] as { enrichment: number }).enrichment).toBeGreaterThan((iso.points.at(-1) as { enrichment: number }).enrichment);
+    expect((iso.points[0] as { enrichment: number }).enrichment).toBeGreaterThan(
+      (iso.points.at(-1) as { enrichment: number }).enrichment,
+    );
   });
 
   it('rejects a bad sweep or number of points', () => {

@@ -1,6 +1,12 @@
 /** A ranking answers the question asked: only the pairs that meet the target, the rest marked with why. */
 import { describe, expect, it } from 'vitest';
-import { missReason, parseRankTarget, qualifiesFor, rankPairs, splitByTarget } from '../../../shared-model/prediction/rank';
+import {
+  missReason,
+  parseRankTarget,
+  qualifiesFor,
+  rankPairs,
+  splitByTarget,
+} from '../../../shared-model/prediction/rank';
 
 const BASE = { xB: 0.5, diameterNm: 3, shape: 'cuboctahedron' as const, temperatureK: 600 };
 const SEVEN = ['Pt', 'Pd', 'Au', 'Ag', 'Ni', 'Cu', 'Co'];
@@ -39,8 +45,14 @@ describe('splitByTarget', () => {
       const target = parseRankTarget(text);
       const ranked = rankPairs(SEVEN, target, BASE);
       const { meeting, missing } = splitByTarget(ranked, target);
-      expect(meeting.every((row) => qualifiesFor(target, row.prediction)), text).toBe(true);
-      expect(missing.every((row) => !qualifiesFor(target, row.prediction)), text).toBe(true);
+      expect(
+        meeting.every((row) => qualifiesFor(target, row.prediction)),
+        text,
+      ).toBe(true);
+      expect(
+        missing.every((row) => !qualifiesFor(target, row.prediction)),
+        text,
+      ).toBe(true);
       expect(new Set([...meeting, ...missing].map((row) => row.pair)).size, text).toBe(21);
     }
   });

@@ -66,11 +66,14 @@ describe('segregation direction vs Ruban, Skriver & Nørskov (1999) and experime
     expect(pairs.size).toBeGreaterThanOrEqual(15);
   });
 
-  it.each(CASES.filter(([h, s]) => !KNOWN_LIMITS.has(`${h}-${s}`)))('%s host, %s solute: segregates = %s (%s)', (host, solute, segregates) => {
-    const energy = soluteSegregationEv(host, solute);
-    if (segregates) expect(energy).toBeLessThan(0);
-    else expect(energy).toBeGreaterThan(0);
-  });
+  it.each(CASES.filter(([h, s]) => !KNOWN_LIMITS.has(`${h}-${s}`)))(
+    '%s host, %s solute: segregates = %s (%s)',
+    (host, solute, segregates) => {
+      const energy = soluteSegregationEv(host, solute);
+      if (segregates) expect(energy).toBeLessThan(0);
+      else expect(energy).toBeGreaterThan(0);
+    },
+  );
 
   it('known limits still disagree and are written in docs/known-limits-prediction.md', () => {
     const doc = readFileSync(join(here, '../../../docs/known-limits-prediction.md'), 'utf8');

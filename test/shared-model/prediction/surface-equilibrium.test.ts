@@ -9,7 +9,7 @@ function residual(input: EquilibriumInput, xs: number, xc: number): number {
 }
 
 describe('Langmuir–McLean surface/core equilibrium with mass balance', () => {
-  it('semi-infinite limit with constant ΔH is McLean\'s closed form x_s/(1−x_s) = x/(1−x)·exp(−ΔH/kT)', () => {
+  it("semi-infinite limit with constant ΔH is McLean's closed form x_s/(1−x_s) = x/(1−x)·exp(−ΔH/kT)", () => {
     for (const [xB, dH, kT] of [
       [0.1, -0.2, 0.05],
       [0.5, 0.1, 0.0517],
@@ -58,7 +58,8 @@ describe('Langmuir–McLean surface/core equilibrium with mass balance', () => {
     const cases: EquilibriumInput[] = [];
     for (const xB of [1e-12, 1e-6, 0.5, 1 - 1e-6, 1 - 1e-12]) {
       for (const c0 of [-1e3, -50, 0, 50, 1e3]) {
-        for (const f of [0, 1e-9, 0.4, 1 - 1e-9, 1]) cases.push({ xB, surfaceShare: f, kTEv: 0.01, c0, cS: 0.3, cC: -0.2 });
+        for (const f of [0, 1e-9, 0.4, 1 - 1e-9, 1])
+          cases.push({ xB, surfaceShare: f, kTEv: 0.01, c0, cS: 0.3, cC: -0.2 });
       }
     }
     for (const input of cases) {
@@ -96,6 +97,10 @@ describe('Langmuir–McLean surface/core equilibrium with mass balance', () => {
   });
 
   it('every atom on the surface: nothing to exchange, x_s = x', () => {
-    expect(solveSurfaceEquilibrium({ xB: 0.3, surfaceShare: 1, kTEv: 0.05, c0: -1, cS: 0, cC: 0 })).toEqual({ surfaceXB: 0.3, coreXB: 0.3, iterations: 0 });
+    expect(solveSurfaceEquilibrium({ xB: 0.3, surfaceShare: 1, kTEv: 0.05, c0: -1, cS: 0, cC: 0 })).toEqual({
+      surfaceXB: 0.3,
+      coreXB: 0.3,
+      iterations: 0,
+    });
   });
 });

@@ -10,7 +10,11 @@ import { auOnAg, auSeeds, ptNi, ptNiPolyol } from '../../support/sample-batches'
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 // Kittel, Introduction to Solid State Physics, 8th ed. (from memory)
 const LATTICE: Record<string, number> = { Au: 0.40782, Pt: 0.39242, Ag: 0.40853, Ni: 0.3524, Pd: 0.38907, Fe: 0.2866 };
-const context = (extra: Partial<DesignContext> = {}): DesignContext => ({ catalog, latticeNm: (s) => LATTICE[s], ...extra });
+const context = (extra: Partial<DesignContext> = {}): DesignContext => ({
+  catalog,
+  latticeNm: (s) => LATTICE[s],
+  ...extra,
+});
 
 function design(request: BatchDesignRequest, extra: Partial<DesignContext> = {}): BatchDesign {
   return designBatch(batchDesignInputSchema.parse(request), context(extra));
@@ -68,7 +72,9 @@ describe('co-reduction of a Pt75Ni25 alloy, worked by hand', () => {
   });
   it('kinetic checks: Pt reduces first, the large gap is flagged for an alloy target', () => {
     expect(d.reductionOrder?.first).toBe('Pt');
-    expect(d.checks.some((c) => c.kind === 'reduction-order' && c.severity === 'warning' && c.message.includes('alloy'))).toBe(true);
+    expect(
+      d.checks.some((c) => c.kind === 'reduction-order' && c.severity === 'warning' && c.message.includes('alloy')),
+    ).toBe(true);
   });
   it('hazards: union of both precursors and the borohydride, hydrogen estimate', () => {
     const codes = d.hazards.map((h) => h.code);
@@ -81,8 +87,20 @@ describe('co-reduction of a Pt75Ni25 alloy, worked by hand', () => {
     expect(d.hazardSummary.caution).toContain('never replace');
   });
   it('the CLI fields are present', () => {
-    for (const key of ['atomsPerParticle', 'coreAtoms', 'shellAtoms', 'particles', 'reagents', 'checks', 'hazards'] as const) expect(d[key]).toBeDefined();
-    for (const r of d.reagents) expect(Object.keys(r)).toEqual(expect.arrayContaining(['name', 'formula', 'role', 'amountMmol', 'massMg', 'volumeMl']));
+    for (const key of [
+      'atomsPerParticle',
+      'coreAtoms',
+      'shellAtoms',
+      'particles',
+      'reagents',
+      'checks',
+      'hazards',
+    ] as const)
+      expect(d[key]).toBeDefined();
+    for (const r of d.reagents)
+      expect(Object.keys(r)).toEqual(
+        expect.arrayContaining(['name', 'formula', 'role', 'amountMmol', 'massMg', 'volumeMl']),
+      );
   });
 });
 
@@ -135,7 +153,11 @@ describe('seed-mediated growth', () => {
     const planned = seedsFromBatch({ id: 3, name: 'Au seeds', design: seedBatch }, 'Au', 10);
     expect(planned.diameterFrom).toBe('planned');
     expect(planned.seeds.particlesPerMl).toBeCloseTo(seedBatch.particlesPerMl, 6);
-    const measured = seedsFromBatch({ id: 3, name: 'Au seeds', design: seedBatch, measured: { diameterNm: 13.2, particlesPerMl: 2.1e12 } }, 'Au', 10);
+    const measured = seedsFromBatch(
+      { id: 3, name: 'Au seeds', design: seedBatch, measured: { diameterNm: 13.2, particlesPerMl: 2.1e12 } },
+      'Au',
+      10,
+    );
     expect(measured.seeds.diameterNm).toBe(13.2);
     expect(measured.concentrationFrom).toBe('measured');
     const growth = design({
@@ -197,7 +219,11 @@ describe('other routes', () => {
 
   it('a core@shell target against the reduction order earns a warning', () => {
     const d = design({ ...ptNi, target: 'Ni@Pt', size: { kind: 'core-shell', coreDiameterNm: 4, shellMonolayers: 2 } });
-    expect(d.checks.some((c) => c.kind === 'reduction-order' && c.severity === 'warning' && c.message.includes('seed-mediated'))).toBe(true);
+    expect(
+      d.checks.some(
+        (c) => c.kind === 'reduction-order' && c.severity === 'warning' && c.message.includes('seed-mediated'),
+      ),
+    ).toBe(true);
     expect(d.coreElement).toBe('Ni');
     expect(d.shellMonolayers).toBeCloseTo(2, 10);
   });
@@ -206,7 +232,7 @@ describe('other routes', () => {
     const d = design({ ...ptNi, amount: { kind: 'particle-concentration', particlesPerMl: 1e13 } });
     // 1e13/mL × 50 mL × 2396.8 atoms / N_A = 1.990e-6 mol = 1.990e-3 mmol
     const total = d.metals.reduce((s, m) => s + m.amountMmol, 0);
-    expect(total).toBeCloseTo((1e13 * 50 * d.atomsPerParticle) / 6.02214076e23 * 1000, 12);
+    expect(total).toBeCloseTo(((1e13 * 50 * d.atomsPerParticle) / 6.02214076e23) * 1000, 12);
     expect(d.particlesPerMl).toBeCloseTo(1e13, -3);
   });
 
@@ -236,7 +262,16 @@ describe('the thermodynamic prediction, asked once about the designed particle',
         return { element: 'Ni', note: null };
       },
     });
-    const particle = { elementA: 'Pt', elementB: 'Ni', architecture: 'alloy', xB: 0.25, diameterNm: 4, temperatureC: 25, route: 'co-reduction', seedElement: null };
+    const particle = {
+      elementA: 'Pt',
+      elementB: 'Ni',
+      architecture: 'alloy',
+      xB: 0.25,
+      diameterNm: 4,
+      temperatureC: 25,
+      route: 'co-reduction',
+      seedElement: null,
+    };
     expect(asked).toEqual([particle]);
     expect(d.thermodynamicSurfaceElement).toBe('Ni');
     expect(d.asMade).toBeNull();
@@ -258,26 +293,76 @@ describe('bad input names the field', () => {
     ['composition x_B = 0', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 0 } }, 'size.xB'],
     ['composition x_B = 1', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1 } }, 'size.xB'],
     ['composition x_B = 1.3', { ...ptNi, size: { kind: 'alloy', diameterNm: 4, xB: 1.3 } }, 'size.xB'],
-    ['negative metal amount', { ...ptNi, amount: { kind: 'total-metal', totalMetalMmol: -1 } }, 'amount.totalMetalMmol'],
+    [
+      'negative metal amount',
+      { ...ptNi, amount: { kind: 'total-metal', totalMetalMmol: -1 } },
+      'amount.totalMetalMmol',
+    ],
     ['zero batch volume', { ...ptNi, batchVolumeMl: 0 }, 'batchVolumeMl'],
     ['zero diameter', { ...ptNi, size: { kind: 'alloy', diameterNm: 0, xB: 0.25 } }, 'size.diameterNm'],
     ['reducer excess ≤ 0', { ...ptNi, reducer: { reagentKey: 'nabh4', excess: 0 } }, 'reducer.excess'],
-    ['precursor of the wrong metal', { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Ni', reagentKey: 'cocl2-6h2o' }] }, 'precursors.1.reagentKey'],
-    ['precursor for a metal outside the pair', { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Au', reagentKey: 'haucl4-3h2o' }] }, 'precursors.1.element'],
+    [
+      'precursor of the wrong metal',
+      { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Ni', reagentKey: 'cocl2-6h2o' }] },
+      'precursors.1.reagentKey',
+    ],
+    [
+      'precursor for a metal outside the pair',
+      { ...ptNi, precursors: [ptNi.precursors[0] as never, { element: 'Au', reagentKey: 'haucl4-3h2o' }] },
+      'precursors.1.element',
+    ],
     ['missing precursor', { ...ptNi, precursors: [ptNi.precursors[0] as never] }, 'precursors'],
     ['missing reducer', { ...ptNi, reducer: undefined }, 'reducer'],
     ['a reducer that is not one', { ...ptNi, reducer: { reagentKey: 'ctab', excess: 1 } }, 'reducer.reagentKey'],
     ['unknown reagent', { ...ptNi, reducer: { reagentKey: 'unobtainium', excess: 1 } }, 'reducer.reagentKey'],
-    ['shell thicker than the radius', { ...ptNi, target: 'Pt@Ni', size: { kind: 'core-shell-overall', diameterNm: 4, shellThicknessNm: 2.5 } }, 'size.shellThicknessNm'],
-    ['shell below a tenth of a monolayer', { ...ptNi, target: 'Pt@Ni', size: { kind: 'core-shell', coreDiameterNm: 4, shellMonolayers: 0.05 } }, 'size.shellMonolayers'],
-    ['both shell forms', { ...ptNi, target: 'Pt@Ni', size: { kind: 'core-shell', coreDiameterNm: 4, shellMonolayers: 1, shellThicknessNm: 0.3 } }, 'size.shellThicknessNm'],
+    [
+      'shell thicker than the radius',
+      { ...ptNi, target: 'Pt@Ni', size: { kind: 'core-shell-overall', diameterNm: 4, shellThicknessNm: 2.5 } },
+      'size.shellThicknessNm',
+    ],
+    [
+      'shell below a tenth of a monolayer',
+      { ...ptNi, target: 'Pt@Ni', size: { kind: 'core-shell', coreDiameterNm: 4, shellMonolayers: 0.05 } },
+      'size.shellMonolayers',
+    ],
+    [
+      'both shell forms',
+      {
+        ...ptNi,
+        target: 'Pt@Ni',
+        size: { kind: 'core-shell', coreDiameterNm: 4, shellMonolayers: 1, shellThicknessNm: 0.3 },
+      },
+      'size.shellThicknessNm',
+    ],
     ['alloy size for a core@shell target', { ...ptNi, target: 'Pt@Ni' }, 'size.kind'],
     ['unknown target', { ...ptNi, target: 'Au@Pt' }, 'target'],
     ['same element twice', { ...ptNi, elementB: 'Pt' }, 'elementB'],
-    ['seed route without seeds', { ...ptNi, route: 'seed-mediated', target: 'Pt@Ni', size: { kind: 'core-shell', shellMonolayers: 1 } }, 'seeds'],
-    ['seeds without concentration', { ...ptNi, route: 'seed-mediated', target: 'Pt@Ni', size: { kind: 'core-shell', shellMonolayers: 1 }, seeds: { metal: 'Pt', diameterNm: 3, volumeMl: 1 } }, 'seeds.particlesPerMl'],
-    ['polyol without solvent volume', { ...ptNi, route: 'polyol', solvent: { reagentKey: 'ethylene-glycol' } }, 'solvent.volumeMl'],
-    ['stock date that is not a date', { ...ptNi, stocks: [{ reagentKey: 'nabh4', preparedAt: 'yesterday' }] }, 'stocks.0.preparedAt'],
+    [
+      'seed route without seeds',
+      { ...ptNi, route: 'seed-mediated', target: 'Pt@Ni', size: { kind: 'core-shell', shellMonolayers: 1 } },
+      'seeds',
+    ],
+    [
+      'seeds without concentration',
+      {
+        ...ptNi,
+        route: 'seed-mediated',
+        target: 'Pt@Ni',
+        size: { kind: 'core-shell', shellMonolayers: 1 },
+        seeds: { metal: 'Pt', diameterNm: 3, volumeMl: 1 },
+      },
+      'seeds.particlesPerMl',
+    ],
+    [
+      'polyol without solvent volume',
+      { ...ptNi, route: 'polyol', solvent: { reagentKey: 'ethylene-glycol' } },
+      'solvent.volumeMl',
+    ],
+    [
+      'stock date that is not a date',
+      { ...ptNi, stocks: [{ reagentKey: 'nabh4', preparedAt: 'yesterday' }] },
+      'stocks.0.preparedAt',
+    ],
   ])('%s', (_label, request, field) => {
     expect(fieldOf(request)).toBe(field);
   });

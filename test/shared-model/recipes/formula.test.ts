@@ -1,7 +1,12 @@
 import { MF } from 'mf-parser';
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../shared-model/api/result';
-import { atomicMassGPerMol, molarMassGPerMol, normalizeFormula, parseFormula } from '../../../shared-model/recipes/formula';
+import {
+  atomicMassGPerMol,
+  molarMassGPerMol,
+  normalizeFormula,
+  parseFormula,
+} from '../../../shared-model/recipes/formula';
 import { REAGENT_SEED } from '../../../shared-model/recipes/reagent-seed';
 
 /**
@@ -59,10 +64,13 @@ describe('hydrate notation', () => {
     expect(Math.abs(raw.mass - 393.83)).toBeGreaterThan(20);
   });
 
-  it.each(['HAuCl4·3H2O', 'HAuCl4.3H2O', 'HAuCl4•3H2O', 'HAuCl4*3H2O', 'HAuCl4 . 3H2O', 'HAuCl4∙3H2O'])('%s → 393.83 g/mol', (formula) => {
-    expect(molarMassGPerMol(formula)).toBeCloseTo(393.83, 1);
-    expect(normalizeFormula(formula)).toBe('HAuCl4 . 3H2O');
-  });
+  it.each(['HAuCl4·3H2O', 'HAuCl4.3H2O', 'HAuCl4•3H2O', 'HAuCl4*3H2O', 'HAuCl4 . 3H2O', 'HAuCl4∙3H2O'])(
+    '%s → 393.83 g/mol',
+    (formula) => {
+      expect(molarMassGPerMol(formula)).toBeCloseTo(393.83, 1);
+      expect(normalizeFormula(formula)).toBe('HAuCl4 . 3H2O');
+    },
+  );
 
   it('counts the water of hydration in the atoms', () => {
     expect(parseFormula('CuCl2·2H2O').atoms).toEqual({ Cu: 1, Cl: 2, H: 4, O: 2 });

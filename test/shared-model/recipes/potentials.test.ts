@@ -41,7 +41,9 @@ describe('standard reduction potentials vs the CRC Electrochemical Series', () =
     const reference = REFERENCE[id];
     expect(reference, `no reference value written for ${id}`).toBeDefined();
     const couple = reductionCouple(id);
-    expect(Math.abs(couple.eStandardV - (reference as { e: number }).e)).toBeLessThanOrEqual(reference?.tolerance ?? 0.0005);
+    expect(Math.abs(couple.eStandardV - (reference as { e: number }).e)).toBeLessThanOrEqual(
+      reference?.tolerance ?? 0.0005,
+    );
     expect(couple.fromMemory).toBe(reference?.source === 'memory');
   });
 

@@ -9,7 +9,8 @@ import { ptNi } from '../../support/sample-batches';
 
 const catalog = REAGENT_SEED.map((r) => prepareReagent(r));
 const LATTICE: Record<string, number> = { Au: 0.40782, Pt: 0.39242, Ni: 0.3524 };
-const design = (request: BatchDesignRequest) => designBatch(batchDesignInputSchema.parse(request), { catalog, latticeNm: (s) => LATTICE[s] });
+const design = (request: BatchDesignRequest) =>
+  designBatch(batchDesignInputSchema.parse(request), { catalog, latticeNm: (s) => LATTICE[s] });
 
 const auPt: BatchDesignRequest = {
   elementA: 'Au',
@@ -89,7 +90,23 @@ describe('reagent list across batches', () => {
     const csv = reagentListCsv(list);
     const parsed = Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual(['reagent', 'formula', 'roles', 'total_mmol', 'total_mass_mg', 'total_volume_ml', 'total_stock_ml', 'batches', 'on_hand', 'location', 'lot', 'shortfall_mg', 'status', 'h_codes', 'signal_word']);
+    expect(parsed.meta.fields).toEqual([
+      'reagent',
+      'formula',
+      'roles',
+      'total_mmol',
+      'total_mass_mg',
+      'total_volume_ml',
+      'total_stock_ml',
+      'batches',
+      'on_hand',
+      'location',
+      'lot',
+      'shortfall_mg',
+      'status',
+      'h_codes',
+      'signal_word',
+    ]);
     const row = parsed.data.find((d) => d.formula === 'H2PtCl6·6H2O');
     expect(Number(row?.total_mass_mg)).toBeCloseTo(90.63, 1);
     expect(row?.status).toBe('short');
@@ -132,7 +149,10 @@ describe('hazard cautions over a reagent list: incompatibilities only within a b
     precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o', stockMm: 25 }],
     reducer: { reagentKey: 'trisodium-citrate-2h2o', excess: 3, stockMm: 34 },
   };
-  const goldWithBorohydride: BatchDesignRequest = { ...goldOnly, reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 } };
+  const goldWithBorohydride: BatchDesignRequest = {
+    ...goldOnly,
+    reducer: { reagentKey: 'nabh4', excess: 5, stockMm: 100 },
+  };
   const lines = (request: BatchDesignRequest) => design(request).reagents;
   const hydrolysis = (list: ReturnType<typeof buildReagentList>) =>
     list.hazardSummary.warnings.filter((w) => w.id === 'borohydride-hydrolysis');

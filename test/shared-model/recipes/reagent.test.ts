@@ -35,7 +35,24 @@ describe('the seed catalog', () => {
 
   it('covers the reagents the issue names', () => {
     const formulas = new Set(REAGENT_SEED.map((r) => r.formula));
-    for (const formula of ['HAuCl4·3H2O', 'H2PtCl6·6H2O', 'K2PtCl4', 'Pt(C5H7O2)2', 'Pd(C5H7O2)2', 'Na2PdCl4', 'AgNO3', 'NaBH4', 'C6H8O6', 'N2H4·H2O', 'C2H6O2', 'C18H37N', 'C18H34O2', 'C19H42BrN', 'CH2O', 'C4H11N·BH3']) {
+    for (const formula of [
+      'HAuCl4·3H2O',
+      'H2PtCl6·6H2O',
+      'K2PtCl4',
+      'Pt(C5H7O2)2',
+      'Pd(C5H7O2)2',
+      'Na2PdCl4',
+      'AgNO3',
+      'NaBH4',
+      'C6H8O6',
+      'N2H4·H2O',
+      'C2H6O2',
+      'C18H37N',
+      'C18H34O2',
+      'C19H42BrN',
+      'CH2O',
+      'C4H11N·BH3',
+    ]) {
       expect(formulas.has(formula), formula).toBe(true);
     }
   });
@@ -83,9 +100,15 @@ describe('user-added or edited reagents: bad input names the field', () => {
     expect(fieldOf({ ...base, key: 'x', metal: null })).toBe('metal');
   });
   it('a couple of another metal or oxidation state', () => {
-    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 3, coupleId: 'PdCl4/Pd' } })).toBe('metal.coupleId');
-    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 1, coupleId: 'AuCl4/Au' } })).toBe('metal.coupleId');
-    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 3, coupleId: 'nonsense' } })).toBe('metal.coupleId');
+    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 3, coupleId: 'PdCl4/Pd' } })).toBe(
+      'metal.coupleId',
+    );
+    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 1, coupleId: 'AuCl4/Au' } })).toBe(
+      'metal.coupleId',
+    );
+    expect(fieldOf({ ...base, key: 'x', metal: { symbol: 'Au', oxidationState: 3, coupleId: 'nonsense' } })).toBe(
+      'metal.coupleId',
+    );
   });
   it('a reducer without a half-reaction', () => {
     const nabh4 = REAGENT_SEED.find((r) => r.key === 'nabh4') as ReagentInput;
@@ -101,7 +124,12 @@ describe('user-added or edited reagents: bad input names the field', () => {
     expect(fieldOf({ ...base, key: 'x', assayWtPct: 0 })).toBe('assayWtPct');
   });
   it('a valid edit goes through with its molar mass', () => {
-    const edited = prepareReagent({ ...base, key: 'haucl4-anhydrous', name: 'Tetrachloroauric acid, anhydrous', formula: 'HAuCl4' });
+    const edited = prepareReagent({
+      ...base,
+      key: 'haucl4-anhydrous',
+      name: 'Tetrachloroauric acid, anhydrous',
+      formula: 'HAuCl4',
+    });
     expect(edited.molarMassGPerMol).toBeCloseTo(339.79, 1);
   });
 });

@@ -5,10 +5,22 @@ import { Banner } from '../../components/Banner';
 import { ConfusionHeatmap } from './ConfusionHeatmap';
 import { fixed } from './format';
 
-export function CampaignResults(props: { campaignId: number; revision: number; onOpenBatch: (batchId: number) => void }) {
+export function CampaignResults(props: {
+  campaignId: number;
+  revision: number;
+  onOpenBatch: (batchId: number) => void;
+}) {
   const [against, setAgainst] = useState<'prediction' | 'simulation'>('prediction');
-  const rows = useQuery('outcomes.listByCampaign', { campaignId: props.campaignId }, `${props.campaignId}:${props.revision}`);
-  const confusion = useQuery('outcomes.confusion', { campaignId: props.campaignId, against }, `${props.campaignId}:${against}:${props.revision}`);
+  const rows = useQuery(
+    'outcomes.listByCampaign',
+    { campaignId: props.campaignId },
+    `${props.campaignId}:${props.revision}`,
+  );
+  const confusion = useQuery(
+    'outcomes.confusion',
+    { campaignId: props.campaignId, against },
+    `${props.campaignId}:${against}:${props.revision}`,
+  );
   const list = rows.data ?? [];
   const m = confusion.data?.matrix;
   return (
@@ -50,7 +62,9 @@ export function CampaignResults(props: { campaignId: number; revision: number; o
                     {row.observed ?? '–'}
                     {row.decision === 'override' ? <span className="tag tag--muted">override</span> : null}
                   </td>
-                  <td className={row.agreement ? `agreement--${row.agreement.replace(' ', '-')}` : undefined}>{row.agreement ?? '–'}</td>
+                  <td className={row.agreement ? `agreement--${row.agreement.replace(' ', '-')}` : undefined}>
+                    {row.agreement ?? '–'}
+                  </td>
                   <td>{fixed(row.meanDiameterNm)}</td>
                   <td>{fixed(row.cvPercent, 1)}</td>
                   <td>
@@ -67,7 +81,11 @@ export function CampaignResults(props: { campaignId: number; revision: number; o
         <h2 className="card__title">Confusion matrix</h2>
         <label className="toggle">
           compare observed with{' '}
-          <select value={against} onChange={(event) => setAgainst(event.target.value as 'prediction' | 'simulation')} aria-label="Compare with">
+          <select
+            value={against}
+            onChange={(event) => setAgainst(event.target.value as 'prediction' | 'simulation')}
+            aria-label="Compare with"
+          >
             <option value="prediction">the analytic prediction</option>
             <option value="simulation">the simulation</option>
           </select>
@@ -77,8 +95,11 @@ export function CampaignResults(props: { campaignId: number; revision: number; o
           <>
             <p data-testid="agreement-summary">
               {m.total} batch{m.total === 1 ? '' : 'es'} compared: {m.exactAgreement} agree exactly
-              {m.exactAgreementRate !== null ? ` (${(m.exactAgreementRate * 100).toFixed(0)} %)` : ''}, {m.kindAgreement} agree in kind.
-              {confusion.data && confusion.data.unmatched > 0 ? ` ${confusion.data.unmatched} observed batch(es) have no ${against} to compare with.` : ''}
+              {m.exactAgreementRate !== null ? ` (${(m.exactAgreementRate * 100).toFixed(0)} %)` : ''},{' '}
+              {m.kindAgreement} agree in kind.
+              {confusion.data && confusion.data.unmatched > 0
+                ? ` ${confusion.data.unmatched} observed batch(es) have no ${against} to compare with.`
+                : ''}
             </p>
             <ConfusionHeatmap matrix={m} predictedLabel={against === 'prediction' ? 'predicted' : 'simulated'} />
           </>

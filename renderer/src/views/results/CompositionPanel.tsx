@@ -40,8 +40,15 @@ function CompositionTable(props: { record: CompositionRecord; elementB: string }
               </td>
               <td>{atPct(row.xB)}</td>
               <td>{row.uncertaintyXB === null ? '–' : atPct(row.uncertaintyXB)}</td>
-              <td>{row.deviationFromNominal === null ? '–' : `${row.deviationFromNominal >= 0 ? '+' : ''}${atPct(row.deviationFromNominal)}`}</td>
-              <td className={row.flagged === true ? 'flag--over' : row.flagged === false ? 'flag--ok' : 'flag--unknown'} title={row.comment}>
+              <td>
+                {row.deviationFromNominal === null
+                  ? '–'
+                  : `${row.deviationFromNominal >= 0 ? '+' : ''}${atPct(row.deviationFromNominal)}`}
+              </td>
+              <td
+                className={row.flagged === true ? 'flag--over' : row.flagged === false ? 'flag--ok' : 'flag--unknown'}
+                title={row.comment}
+              >
                 {row.flagged === true ? 'beyond uncertainty' : row.flagged === false ? 'within' : 'cannot judge'}
               </td>
             </tr>
@@ -56,10 +63,11 @@ function CompositionTable(props: { record: CompositionRecord; elementB: string }
       ))}
       <p className="muted small">
         Lines clear of overlaps: {comparison.elementA} {comparison.suggestedLines.elementA?.line ?? 'none'}
-        {comparison.suggestedLines.elementA ? ` (${comparison.suggestedLines.elementA.energyKev.toFixed(3)} keV)` : ''}, {comparison.elementB}{' '}
-        {comparison.suggestedLines.elementB?.line ?? 'none'}
-        {comparison.suggestedLines.elementB ? ` (${comparison.suggestedLines.elementB.energyKev.toFixed(3)} keV)` : ''}. K lines above ~10 keV need a TEM; an SEM
-        at 20–30 kV reaches only L and M lines there.
+        {comparison.suggestedLines.elementA
+          ? ` (${comparison.suggestedLines.elementA.energyKev.toFixed(3)} keV)`
+          : ''}, {comparison.elementB} {comparison.suggestedLines.elementB?.line ?? 'none'}
+        {comparison.suggestedLines.elementB ? ` (${comparison.suggestedLines.elementB.energyKev.toFixed(3)} keV)` : ''}.
+        K lines above ~10 keV need a TEM; an SEM at 20–30 kV reaches only L and M lines there.
       </p>
     </div>
   );
@@ -71,7 +79,8 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
   const [grid, setGrid] = useState('');
   const [rows, setRows] = useState<RowDraft[]>([emptyRow('ICP-OES'), emptyRow('EDX particle')]);
   const { errors, general, show, clear } = useFieldErrors();
-  const setRow = (index: number, change: Partial<RowDraft>) => setRows((current) => current.map((row, i) => (i === index ? { ...row, ...change } : row)));
+  const setRow = (index: number, change: Partial<RowDraft>) =>
+    setRows((current) => current.map((row, i) => (i === index ? { ...row, ...change } : row)));
 
   const submit = async (event: FormEvent) => {
     event.preventDefault();
@@ -102,8 +111,18 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
       <h2 className="card__title">Composition ({outcome.elementB} content)</h2>
       <form onSubmit={submit} aria-label="Record composition" noValidate>
         <div className="form-grid">
-          <Field label={`Nominal ${outcome.elementB} (at.%)`} name="nominalXB" error={errors.nominalXB} hint="feed composition; from the batch design">
-            <input name="nominalXB" value={nominal} onChange={(event) => setNominal(event.target.value)} inputMode="decimal" />
+          <Field
+            label={`Nominal ${outcome.elementB} (at.%)`}
+            name="nominalXB"
+            error={errors.nominalXB}
+            hint="feed composition; from the batch design"
+          >
+            <input
+              name="nominalXB"
+              value={nominal}
+              onChange={(event) => setNominal(event.target.value)}
+              inputMode="decimal"
+            />
           </Field>
           <Field label="TEM grid metal" name="gridMetal" error={errors.gridMetal} hint="e.g. Cu, Ni, Au, Mo">
             <input name="gridMetal" value={grid} onChange={(event) => setGrid(event.target.value)} autoComplete="off" />
@@ -112,22 +131,54 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
         {rows.map((row, i) => (
           <div className="measurement-row" key={i} data-row={i}>
             <Field label="Method" name={`measurements.${i}.method`} error={errors[`measurements.${i}.method`]}>
-              <select name={`method-${i}`} value={row.method} onChange={(event) => setRow(i, { method: event.target.value as CompositionMethod })}>
+              <select
+                name={`method-${i}`}
+                value={row.method}
+                onChange={(event) => setRow(i, { method: event.target.value as CompositionMethod })}
+              >
                 {COMPOSITION_METHODS.map((m) => (
                   <option key={m}>{m}</option>
                 ))}
               </select>
             </Field>
-            <Field label={`${outcome.elementB} (at.%)`} name={`measurements.${i}.xB`} error={errors[`measurements.${i}.xB`]}>
-              <input name={`xB-${i}`} value={row.xBPct} onChange={(event) => setRow(i, { xBPct: event.target.value })} inputMode="decimal" />
+            <Field
+              label={`${outcome.elementB} (at.%)`}
+              name={`measurements.${i}.xB`}
+              error={errors[`measurements.${i}.xB`]}
+            >
+              <input
+                name={`xB-${i}`}
+                value={row.xBPct}
+                onChange={(event) => setRow(i, { xBPct: event.target.value })}
+                inputMode="decimal"
+              />
             </Field>
-            <Field label="± (at.%)" name={`measurements.${i}.uncertaintyXB`} error={errors[`measurements.${i}.uncertaintyXB`]}>
-              <input name={`uncertainty-${i}`} value={row.uncertaintyPct} onChange={(event) => setRow(i, { uncertaintyPct: event.target.value })} inputMode="decimal" />
+            <Field
+              label="± (at.%)"
+              name={`measurements.${i}.uncertaintyXB`}
+              error={errors[`measurements.${i}.uncertaintyXB`]}
+            >
+              <input
+                name={`uncertainty-${i}`}
+                value={row.uncertaintyPct}
+                onChange={(event) => setRow(i, { uncertaintyPct: event.target.value })}
+                inputMode="decimal"
+              />
             </Field>
             <Field label="Lines used" name={`measurements.${i}.lines`} error={errors[`measurements.${i}.lines`]}>
-              <input name={`lines-${i}`} value={row.lines} onChange={(event) => setRow(i, { lines: event.target.value })} placeholder="e.g. Pt L, Ni K" />
+              <input
+                name={`lines-${i}`}
+                value={row.lines}
+                onChange={(event) => setRow(i, { lines: event.target.value })}
+                placeholder="e.g. Pt L, Ni K"
+              />
             </Field>
-            <button type="button" className="button--quiet" onClick={() => setRows((current) => current.filter((_, j) => j !== i))} aria-label={`Remove row ${i + 1}`}>
+            <button
+              type="button"
+              className="button--quiet"
+              onClick={() => setRows((current) => current.filter((_, j) => j !== i))}
+              aria-label={`Remove row ${i + 1}`}
+            >
               ×
             </button>
           </div>
@@ -142,7 +193,11 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
         </div>
         {general ? <Banner tone="error">{general}</Banner> : null}
       </form>
-      {latest ? <CompositionTable record={latest} elementB={outcome.elementB} /> : <p className="muted">No composition recorded yet.</p>}
+      {latest ? (
+        <CompositionTable record={latest} elementB={outcome.elementB} />
+      ) : (
+        <p className="muted">No composition recorded yet.</p>
+      )}
     </section>
   );
 }

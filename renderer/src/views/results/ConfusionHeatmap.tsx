@@ -23,7 +23,13 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
   const cells: CellDatum[] = [];
   counts.forEach((row, observedIndex) =>
     row.forEach((count, predictedIndex) => {
-      cells.push({ x: predictedIndex, y: n - 1 - observedIndex, count, predicted: labels[predictedIndex] as string, observed: labels[observedIndex] as string });
+      cells.push({
+        x: predictedIndex,
+        y: n - 1 - observedIndex,
+        count,
+        predicted: labels[predictedIndex] as string,
+        observed: labels[observedIndex] as string,
+      });
     }),
   );
   const width = MARGIN.left + MARGIN.right + Y_AXIS_PX + n * CELL_PX;
@@ -34,11 +40,30 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
     const { count, predicted, observed } = p.payload;
     const strength = count / max;
     const diagonal = predicted === observed;
-    const fill = count === 0 ? '#f4f4f4' : diagonal ? `rgba(47, 111, 62, ${0.2 + 0.8 * strength})` : `rgba(164, 38, 44, ${0.2 + 0.8 * strength})`;
+    const fill =
+      count === 0
+        ? '#f4f4f4'
+        : diagonal
+          ? `rgba(47, 111, 62, ${0.2 + 0.8 * strength})`
+          : `rgba(164, 38, 44, ${0.2 + 0.8 * strength})`;
     return (
       <g data-cell={`${observed}|${predicted}`}>
-        <rect x={p.cx - CELL_PX / 2 + 1} y={p.cy - CELL_PX / 2 + 1} width={CELL_PX - 2} height={CELL_PX - 2} fill={fill} stroke="#ccc" />
-        <text x={p.cx} y={p.cy} textAnchor="middle" dominantBaseline="central" fontSize={18} fill={strength > 0.6 ? '#fff' : '#222'}>
+        <rect
+          x={p.cx - CELL_PX / 2 + 1}
+          y={p.cy - CELL_PX / 2 + 1}
+          width={CELL_PX - 2}
+          height={CELL_PX - 2}
+          fill={fill}
+          stroke="#ccc"
+        />
+        <text
+          x={p.cx}
+          y={p.cy}
+          textAnchor="middle"
+          dominantBaseline="central"
+          fontSize={18}
+          fill={strength > 0.6 ? '#fff' : '#222'}
+        >
           {count}
         </text>
       </g>
@@ -48,7 +73,8 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
   return (
     <div className="heatmap-wrap" data-testid="confusion-heatmap">
       <p className="muted small">
-        Rows: observed architecture. Columns: {props.predictedLabel}. Green cells agree, red cells disagree; the number is the count of batches.
+        Rows: observed architecture. Columns: {props.predictedLabel}. Green cells agree, red cells disagree; the number
+        is the count of batches.
       </p>
       <ScatterChart width={width} height={height} margin={MARGIN}>
         <CartesianGrid strokeDasharray="0" stroke="none" />

@@ -31,18 +31,56 @@ function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
       <ResponsiveContainer width="100%" height="100%">
         <ComposedChart data={data} margin={{ top: 10, right: 20, bottom: 20, left: 0 }}>
           <CartesianGrid strokeDasharray="3 3" />
-          <XAxis dataKey="x" type="number" domain={['dataMin', 'dataMax']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'position (nm)', position: 'insideBottom', offset: -10 }} />
+          <XAxis
+            dataKey="x"
+            type="number"
+            domain={['dataMin', 'dataMax']}
+            tickFormatter={(v: number) => v.toFixed(0)}
+            label={{ value: 'position (nm)', position: 'insideBottom', offset: -10 }}
+          />
           <YAxis label={{ value: scan.unit === 'counts' ? 'counts' : 'at.%', angle: -90, position: 'insideLeft' }} />
-          <Tooltip formatter={(value) => (typeof value === 'number' ? value.toFixed(1) : String(value))} labelFormatter={(v) => `${Number(v).toFixed(2)} nm`} />
+          <Tooltip
+            formatter={(value) => (typeof value === 'number' ? value.toFixed(1) : String(value))}
+            labelFormatter={(v) => `${Number(v).toFixed(2)} nm`}
+          />
           <Legend verticalAlign="top" />
-          <Line dataKey="dataA" name={`${a.elementA} data`} stroke="none" dot={{ r: 2, fill: '#e08a1e' }} isAnimationActive={false} />
-          <Line dataKey="dataB" name={`${a.elementB} data`} stroke="none" dot={{ r: 2, fill: '#5b3fa3' }} isAnimationActive={false} />
+          <Line
+            dataKey="dataA"
+            name={`${a.elementA} data`}
+            stroke="none"
+            dot={{ r: 2, fill: '#e08a1e' }}
+            isAnimationActive={false}
+          />
+          <Line
+            dataKey="dataB"
+            name={`${a.elementB} data`}
+            stroke="none"
+            dot={{ r: 2, fill: '#5b3fa3' }}
+            isAnimationActive={false}
+          />
           {models.map((m) => {
             const colour = MODEL_COLOURS[a.models.indexOf(m)] ?? '#333';
             const width = m.label === a.chosenModel ? 2.5 : 1.2;
             return [
-              <Line key={`${m.label}:A`} dataKey={`${m.label}:A`} name={`${m.label} fit ${a.elementA}`} stroke={colour} strokeWidth={width} dot={false} isAnimationActive={false} />,
-              <Line key={`${m.label}:B`} dataKey={`${m.label}:B`} name={`${m.label} fit ${a.elementB}`} stroke={colour} strokeDasharray="6 3" strokeWidth={width} dot={false} isAnimationActive={false} />,
+              <Line
+                key={`${m.label}:A`}
+                dataKey={`${m.label}:A`}
+                name={`${m.label} fit ${a.elementA}`}
+                stroke={colour}
+                strokeWidth={width}
+                dot={false}
+                isAnimationActive={false}
+              />,
+              <Line
+                key={`${m.label}:B`}
+                dataKey={`${m.label}:B`}
+                name={`${m.label} fit ${a.elementB}`}
+                stroke={colour}
+                strokeDasharray="6 3"
+                strokeWidth={width}
+                dot={false}
+                isAnimationActive={false}
+              />,
             ];
           })}
         </ComposedChart>
@@ -81,7 +119,8 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
         </span>
       </h3>
       <p data-testid="chosen-model">
-        Chosen by BIC: <strong>{a.chosenModel}</strong> — {a.evidence} evidence (ΔBIC {fixed(a.deltaBicToNext, 1)} to the next model).
+        Chosen by BIC: <strong>{a.chosenModel}</strong> — {a.evidence} evidence (ΔBIC {fixed(a.deltaBicToNext, 1)} to
+        the next model).
       </p>
       <label className="toggle">
         show fits of{' '}
@@ -114,8 +153,15 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
               <td>
                 {m.label}
                 {m.label === a.chosenModel ? ' ✓' : ''}
-                {m.model === 'Janus' && m.janusALow !== null ? <span className="muted small"> ({m.janusALow ? a.elementA : a.elementB} on the low side)</span> : null}
-                {m.atBounds.length > 0 ? <span className="muted small" title="a parameter on its bound has no meaningful uncertainty"> (on bound: {m.atBounds.join(', ')})</span> : null}
+                {m.model === 'Janus' && m.janusALow !== null ? (
+                  <span className="muted small"> ({m.janusALow ? a.elementA : a.elementB} on the low side)</span>
+                ) : null}
+                {m.atBounds.length > 0 ? (
+                  <span className="muted small" title="a parameter on its bound has no meaningful uncertainty">
+                    {' '}
+                    (on bound: {m.atBounds.join(', ')})
+                  </span>
+                ) : null}
               </td>
               <td>{fixed(m.deltaBic, 1)}</td>
               <td>{fixed(m.bicWeight, 3)}</td>
@@ -137,12 +183,18 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
         </p>
       ))}
       <p className="muted small">
-        Geometry: a sphere scanned through its centre; each element's signal ∝ the beam's path through its region (chord length), blurred by a Gaussian probe,
-        plus a background per channel. Janus = two hemispheres split by a plane containing the beam, perpendicular to the scan. Monolayer = a/√3 of the shell metal.
+        Geometry: a sphere scanned through its centre; each element's signal ∝ the beam's path through its region (chord
+        length), blurred by a Gaussian probe, plus a background per channel. Janus = two hemispheres split by a plane
+        containing the beam, perpendicular to the scan. Monolayer = a/√3 of the shell metal.
       </p>
       <form className="inline-form" onSubmit={refit} aria-label="Refit line scan" noValidate>
         <Field label="Probe σ (nm)" name="probeSigmaNm" error={errors.probeSigmaNm} hint="blank = fit it">
-          <input name="probeSigmaNm" value={sigma} onChange={(event) => setSigma(event.target.value)} inputMode="decimal" />
+          <input
+            name="probeSigmaNm"
+            value={sigma}
+            onChange={(event) => setSigma(event.target.value)}
+            inputMode="decimal"
+          />
         </Field>
         <button type="submit">Fit again</button>
         <button type="button" className="button--quiet" onClick={props.onRemove}>
@@ -188,8 +240,20 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
     <section className="card" aria-label="EDX line scans">
       <h2 className="card__title">EDX line scans</h2>
       <form className="form-grid" onSubmit={submit} aria-label="Import line scan" noValidate>
-        <Field label={`Line scan (CSV: position nm, ${outcome.elementA}, ${outcome.elementB})`} name="csvText" error={errors.csvText} hint="counts (or at.%) per element; headers naming the elements are matched" wide>
-          <textarea className="csv-input" name="lineScanCsv" value={csvText} onChange={(event) => setCsvText(event.target.value)} spellCheck={false} />
+        <Field
+          label={`Line scan (CSV: position nm, ${outcome.elementA}, ${outcome.elementB})`}
+          name="csvText"
+          error={errors.csvText}
+          hint="counts (or at.%) per element; headers naming the elements are matched"
+          wide
+        >
+          <textarea
+            className="csv-input"
+            name="lineScanCsv"
+            value={csvText}
+            onChange={(event) => setCsvText(event.target.value)}
+            spellCheck={false}
+          />
         </Field>
         <CsvFileField
           name="lineScanFile"
@@ -199,17 +263,31 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
           }}
         />
         <Field label="Name" name="name" error={errors.name}>
-          <input name="scanName" value={name} onChange={(event) => setName(event.target.value)} placeholder="e.g. particle 3" />
+          <input
+            name="scanName"
+            value={name}
+            onChange={(event) => setName(event.target.value)}
+            placeholder="e.g. particle 3"
+          />
         </Field>
         <Field label="Unit" name="unit" error={errors.unit}>
-          <select name="unit" value={unit} onChange={(event) => setUnit(event.target.value as 'auto' | 'counts' | 'atPercent')}>
+          <select
+            name="unit"
+            value={unit}
+            onChange={(event) => setUnit(event.target.value as 'auto' | 'counts' | 'atPercent')}
+          >
             <option value="auto">auto</option>
             <option value="counts">counts</option>
             <option value="atPercent">at.%</option>
           </select>
         </Field>
         <Field label="Probe σ (nm)" name="probeSigmaNm" error={errors.probeSigmaNm} hint="blank = fit it">
-          <input name="importProbeSigma" value={sigma} onChange={(event) => setSigma(event.target.value)} inputMode="decimal" />
+          <input
+            name="importProbeSigma"
+            value={sigma}
+            onChange={(event) => setSigma(event.target.value)}
+            inputMode="decimal"
+          />
         </Field>
         <div className="form-actions">
           <button type="submit" className="button--primary">
@@ -220,7 +298,12 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
       </form>
       {outcome.lineScans.length === 0 ? <p className="muted">No line scans yet.</p> : null}
       {outcome.lineScans.map((scan) => (
-        <LineScanResult key={`${scan.id}:${scan.analysis.chosenModel}:${scan.probeSigmaNm}`} scan={scan} onChanged={props.onChanged} onRemove={() => setRemoving(scan.id)} />
+        <LineScanResult
+          key={`${scan.id}:${scan.analysis.chosenModel}:${scan.probeSigmaNm}`}
+          scan={scan}
+          onChanged={props.onChanged}
+          onRemove={() => setRemoving(scan.id)}
+        />
       ))}
       {removing !== null ? (
         <ConfirmDialog

@@ -10,10 +10,24 @@ import { Field } from '../../components/Field';
 import { partError } from './part-error';
 
 export function observedChoices(a: string, b: string): string[] {
-  return ['alloy', 'surface-enriched alloy', `${a}@${b}`, `${b}@${a}`, 'Janus', 'intermetallic', 'hollow', 'other', 'unknown'];
+  return [
+    'alloy',
+    'surface-enriched alloy',
+    `${a}@${b}`,
+    `${b}@${a}`,
+    'Janus',
+    'intermetallic',
+    'hollow',
+    'other',
+    'unknown',
+  ];
 }
 
-const AGREEMENT_TEXT = { agree: 'agrees', 'same kind': 'same kind, elements the other way round', disagree: 'differs' } as const;
+const AGREEMENT_TEXT = {
+  agree: 'agrees',
+  'same kind': 'same kind, elements the other way round',
+  disagree: 'differs',
+} as const;
 
 export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => void }) {
   const { outcome } = props;
@@ -72,16 +86,25 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
         <dd data-testid="predicted-label">
           {outcome.predictions.length === 0
             ? 'no prediction stored before this batch was planned'
-            : outcome.predictions.map((p) => `${p.label} (${p.source}${p.modelVersion ? `, ${p.modelVersion}` : ''})`).join('; ')}
+            : outcome.predictions
+                .map((p) => `${p.label} (${p.source}${p.modelVersion ? `, ${p.modelVersion}` : ''})`)
+                .join('; ')}
         </dd>
         <dt>suggested from the line scan</dt>
-        <dd data-testid="suggested-label">{outcome.suggestion ? `${outcome.suggestion.label} — ${outcome.suggestion.reason}` : 'import a line scan for a suggestion'}</dd>
+        <dd data-testid="suggested-label">
+          {outcome.suggestion
+            ? `${outcome.suggestion.label} — ${outcome.suggestion.reason}`
+            : 'import a line scan for a suggestion'}
+        </dd>
         <dt>observed</dt>
         <dd data-testid="observed-label">
           {observed ? (
             <>
-              <strong>{observed.label}</strong> ({observed.decision === 'confirmed' ? 'confirmed suggestion' : `override${observed.suggestedLabel ? ` of ${observed.suggestedLabel}` : ''}`})
-              {observed.reason ? ` — ${observed.reason}` : ''}
+              <strong>{observed.label}</strong> (
+              {observed.decision === 'confirmed'
+                ? 'confirmed suggestion'
+                : `override${observed.suggestedLabel ? ` of ${observed.suggestedLabel}` : ''}`}
+              ){observed.reason ? ` — ${observed.reason}` : ''}
               <span className="muted small"> · {describeArchitecture(observed.label)}</span>
             </>
           ) : (
@@ -91,14 +114,22 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
         {observed && outcome.predictions[0] ? (
           <>
             <dt>prediction vs outcome</dt>
-            <dd className={`agreement--${labelAgreement(outcome.predictions[0].label, observed.label).replace(' ', '-')}`} data-testid="agreement">
+            <dd
+              className={`agreement--${labelAgreement(outcome.predictions[0].label, observed.label).replace(' ', '-')}`}
+              data-testid="agreement"
+            >
               {AGREEMENT_TEXT[labelAgreement(outcome.predictions[0].label, observed.label)]}
             </dd>
           </>
         ) : null}
       </dl>
       <div className="inline-form" aria-label="Set observed architecture">
-        <button type="button" className="button--primary" disabled={!outcome.suggestion} onClick={() => outcome.suggestion && setObserved(outcome.suggestion.label, 'confirmed')}>
+        <button
+          type="button"
+          className="button--primary"
+          disabled={!outcome.suggestion}
+          onClick={() => outcome.suggestion && setObserved(outcome.suggestion.label, 'confirmed')}
+        >
           Confirm suggestion
         </button>
         <Field label="Or record" name="label" error={observedErrors.errors.label ?? observedErrors.errors.decision}>
@@ -109,7 +140,12 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
           </select>
         </Field>
         <Field label="Reason" name="reason" error={observedErrors.errors.reason}>
-          <input name="reason" value={reason} onChange={(event) => setReason(event.target.value)} placeholder="e.g. HAADF contrast shows a shell" />
+          <input
+            name="reason"
+            value={reason}
+            onChange={(event) => setReason(event.target.value)}
+            placeholder="e.g. HAADF contrast shows a shell"
+          />
         </Field>
         <button type="button" onClick={() => setObserved(override, 'override')}>
           Save override
@@ -146,7 +182,12 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
       </ul>
       <form className="inline-form" onSubmit={addFile} aria-label="Add file path" noValidate>
         <Field label="Path" name="path" error={fileErrors.errors.path}>
-          <input name="path" value={path} onChange={(event) => setPath(event.target.value)} placeholder="/data/TEM/2024-05-02/batch7_012.dm4" />
+          <input
+            name="path"
+            value={path}
+            onChange={(event) => setPath(event.target.value)}
+            placeholder="/data/TEM/2024-05-02/batch7_012.dm4"
+          />
         </Field>
         <Field label="Kind" name="kind" error={fileErrors.errors.kind}>
           <select name="kind" value={kind} onChange={(event) => setKind(event.target.value as OutcomeFileKind)}>

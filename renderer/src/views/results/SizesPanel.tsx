@@ -1,6 +1,16 @@
 /** TEM sizes of a batch: import a CSV of diameters; statistics, log-normal fit and histogram with the fitted curve. */
 import { useState, type FormEvent } from 'react';
-import { CartesianGrid, ComposedChart, Legend, Line, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  CartesianGrid,
+  ComposedChart,
+  Legend,
+  Line,
+  ReferenceArea,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { BatchOutcome, SizeRecord } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
@@ -27,18 +37,52 @@ function SizeChart(props: { record: SizeRecord }) {
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={curve} margin={{ top: 10, right: 20, bottom: 20, left: 0 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="diameterNm" type="number" domain={[from, to]} tickFormatter={(v: number) => v.toFixed(1)} label={{ value: 'diameter (nm)', position: 'insideBottom', offset: -10 }} />
-            <YAxis domain={[0, Math.ceil(top)]} allowDecimals={false} label={{ value: 'particles', angle: -90, position: 'insideLeft' }} />
-            <Tooltip formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))} labelFormatter={(v) => `${Number(v).toFixed(2)} nm`} />
+            <XAxis
+              dataKey="diameterNm"
+              type="number"
+              domain={[from, to]}
+              tickFormatter={(v: number) => v.toFixed(1)}
+              label={{ value: 'diameter (nm)', position: 'insideBottom', offset: -10 }}
+            />
+            <YAxis
+              domain={[0, Math.ceil(top)]}
+              allowDecimals={false}
+              label={{ value: 'particles', angle: -90, position: 'insideLeft' }}
+            />
+            <Tooltip
+              formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))}
+              labelFormatter={(v) => `${Number(v).toFixed(2)} nm`}
+            />
             <Legend verticalAlign="top" />
             {histogram.bins.map((b) =>
-              b.count > 0 ? <ReferenceArea key={b.fromNm} x1={b.fromNm} x2={b.toNm} y1={0} y2={b.count} fill="#7a9cc6" fillOpacity={0.75} stroke="#4f74a3" ifOverflow="visible" /> : null,
+              b.count > 0 ? (
+                <ReferenceArea
+                  key={b.fromNm}
+                  x1={b.fromNm}
+                  x2={b.toNm}
+                  y1={0}
+                  y2={b.count}
+                  fill="#7a9cc6"
+                  fillOpacity={0.75}
+                  stroke="#4f74a3"
+                  ifOverflow="visible"
+                />
+              ) : null,
             )}
-            <Line dataKey="expectedCount" name="log-normal fit (ML)" stroke="#b5462c" dot={false} strokeWidth={2} isAnimationActive={false} />
+            <Line
+              dataKey="expectedCount"
+              name="log-normal fit (ML)"
+              stroke="#b5462c"
+              dot={false}
+              strokeWidth={2}
+              isAnimationActive={false}
+            />
           </ComposedChart>
         </ResponsiveContainer>
       </div>
-      <p className="muted small">Bars: particles per {num(histogram.binWidthNm, 2)} nm bin. Line: fitted log-normal density × n × bin width.</p>
+      <p className="muted small">
+        Bars: particles per {num(histogram.binWidthNm, 2)} nm bin. Line: fitted log-normal density × n × bin width.
+      </p>
     </>
   );
 }
@@ -50,7 +94,10 @@ function SizeSummary(props: { record: SizeRecord; onRemove: () => void }) {
   return (
     <div className="card" data-testid="size-summary" aria-label={`Size import ${record.id}`}>
       <h3 className="card__title">
-        {record.sourceFile ?? 'pasted diameters'} <span className="muted small">({record.createdAt.slice(0, 16).replace('T', ' ')}, {record.analysisVersion})</span>
+        {record.sourceFile ?? 'pasted diameters'}{' '}
+        <span className="muted small">
+          ({record.createdAt.slice(0, 16).replace('T', ' ')}, {record.analysisVersion})
+        </span>
       </h3>
       <dl className="stat-list">
         <dt>particles</dt>
@@ -89,7 +136,8 @@ function SizeSummary(props: { record: SizeRecord; onRemove: () => void }) {
           <>
             <dt>for ±{fixed(s.precision.halfWidthNm, 2)} nm on the mean</dt>
             <dd data-stat="more">
-              {s.precision.particlesNeeded} particles in all — {s.precision.moreParticles === 0 ? 'reached' : `${s.precision.moreParticles} more to count`}
+              {s.precision.particlesNeeded} particles in all —{' '}
+              {s.precision.moreParticles === 0 ? 'reached' : `${s.precision.moreParticles} more to count`}
             </dd>
           </>
         ) : null}
@@ -111,7 +159,9 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
   const [csvText, setCsvText] = useState('');
   const [sourceFile, setSourceFile] = useState<string | null>(null);
   const [column, setColumn] = useState('');
-  const [target, setTarget] = useState(props.outcome.targetDiameterNm !== null ? String(props.outcome.targetDiameterNm) : '');
+  const [target, setTarget] = useState(
+    props.outcome.targetDiameterNm !== null ? String(props.outcome.targetDiameterNm) : '',
+  );
   const [precision, setPrecision] = useState('2');
   const [removing, setRemoving] = useState<number | null>(null);
   const { errors, general, show, clear } = useFieldErrors();
@@ -152,8 +202,20 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
     <section className="card" aria-label="TEM sizes">
       <h2 className="card__title">TEM sizes</h2>
       <form className="form-grid" onSubmit={submit} aria-label="Import sizes" noValidate>
-        <Field label="Diameters (CSV, nm)" name="csvText" error={errors.csvText} hint="paste a column of diameters or pick a file; header, ; or tab and decimal commas are fine" wide>
-          <textarea className="csv-input" name="csvText" value={csvText} onChange={(event) => setCsvText(event.target.value)} spellCheck={false} />
+        <Field
+          label="Diameters (CSV, nm)"
+          name="csvText"
+          error={errors.csvText}
+          hint="paste a column of diameters or pick a file; header, ; or tab and decimal commas are fine"
+          wide
+        >
+          <textarea
+            className="csv-input"
+            name="csvText"
+            value={csvText}
+            onChange={(event) => setCsvText(event.target.value)}
+            spellCheck={false}
+          />
         </Field>
         <CsvFileField
           name="file"
@@ -166,10 +228,20 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
           <input name="column" value={column} onChange={(event) => setColumn(event.target.value)} autoComplete="off" />
         </Field>
         <Field label="Target diameter (nm)" name="targetDiameterNm" error={errors.targetDiameterNm}>
-          <input name="targetDiameterNm" value={target} onChange={(event) => setTarget(event.target.value)} inputMode="decimal" />
+          <input
+            name="targetDiameterNm"
+            value={target}
+            onChange={(event) => setTarget(event.target.value)}
+            inputMode="decimal"
+          />
         </Field>
         <Field label="Precision of the mean (± %)" name="precisionPercent" error={errors.precisionPercent}>
-          <input name="precisionPercent" value={precision} onChange={(event) => setPrecision(event.target.value)} inputMode="decimal" />
+          <input
+            name="precisionPercent"
+            value={precision}
+            onChange={(event) => setPrecision(event.target.value)}
+            inputMode="decimal"
+          />
         </Field>
         <div className="form-actions">
           <button type="submit" className="button--primary">
@@ -178,8 +250,14 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
         </div>
         {general ? <Banner tone="error">{general}</Banner> : null}
       </form>
-      {latest ? <SizeSummary record={latest} onRemove={() => setRemoving(latest.id)} /> : <p className="muted">No sizes recorded for this batch yet.</p>}
-      {props.outcome.sizes.length > 1 ? <p className="muted small">{props.outcome.sizes.length - 1} earlier import(s) kept; the newest is shown.</p> : null}
+      {latest ? (
+        <SizeSummary record={latest} onRemove={() => setRemoving(latest.id)} />
+      ) : (
+        <p className="muted">No sizes recorded for this batch yet.</p>
+      )}
+      {props.outcome.sizes.length > 1 ? (
+        <p className="muted small">{props.outcome.sizes.length - 1} earlier import(s) kept; the newest is shown.</p>
+      ) : null}
       {removing !== null ? (
         <ConfirmDialog
           title="Remove size import?"

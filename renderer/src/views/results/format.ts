@@ -15,7 +15,9 @@ export function fixed(value: number | null | undefined, decimals = 2): string {
 
 export function estimate(value: Estimate | null | undefined, decimals = 2): string {
   if (!value) return '–';
-  return value.sd === null ? fixed(value.value, decimals) : `${fixed(value.value, decimals)} ± ${fixed(value.sd, decimals)}`;
+  return value.sd === null
+    ? fixed(value.value, decimals)
+    : `${fixed(value.value, decimals)} ± ${fixed(value.sd, decimals)}`;
 }
 
 export const atPct = (fraction: number | null | undefined, decimals = 1): string =>

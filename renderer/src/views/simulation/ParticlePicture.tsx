@@ -29,12 +29,32 @@ interface Mark {
   species: 'A' | 'B';
 }
 
-function Discs(props: { discs: Disc[]; extent: number; label: string; testId: string; elementA: string; elementB: string; marks?: Mark[] }) {
+function Discs(props: {
+  discs: Disc[];
+  extent: number;
+  label: string;
+  testId: string;
+  elementA: string;
+  elementB: string;
+  marks?: Mark[];
+}) {
   const { discs, extent } = props;
   const size = 2 * extent;
   return (
     <figure style={{ margin: 0 }} data-testid={props.testId}>
-      <svg viewBox={`${-extent} ${-extent} ${size} ${size}`} width="100%" style={{ maxWidth: 320, aspectRatio: '1 / 1', background: '#fbfaf6', border: '1px solid var(--line)', borderRadius: 6 }} role="img" aria-label={props.label}>
+      <svg
+        viewBox={`${-extent} ${-extent} ${size} ${size}`}
+        width="100%"
+        style={{
+          maxWidth: 320,
+          aspectRatio: '1 / 1',
+          background: '#fbfaf6',
+          border: '1px solid var(--line)',
+          borderRadius: 6,
+        }}
+        role="img"
+        aria-label={props.label}
+      >
         {discs.map((d, k) => (
           <circle
             key={k}
@@ -50,7 +70,12 @@ function Discs(props: { discs: Disc[]; extent: number; label: string; testId: st
           />
         ))}
         {(props.marks ?? []).map((m) => (
-          <g key={m.species} data-testid={`centre-of-mass-${m.species === 'A' ? props.elementA : props.elementB}`} stroke={m.species === 'A' ? '#1d2d3a' : '#7c2d12'} strokeWidth={extent / 80}>
+          <g
+            key={m.species}
+            data-testid={`centre-of-mass-${m.species === 'A' ? props.elementA : props.elementB}`}
+            stroke={m.species === 'A' ? '#1d2d3a' : '#7c2d12'}
+            strokeWidth={extent / 80}
+          >
             <line x1={m.x - extent / 14} y1={-m.y} x2={m.x + extent / 14} y2={-m.y} />
             <line x1={m.x} y1={-m.y - extent / 14} x2={m.x} y2={-m.y + extent / 14} />
           </g>
@@ -64,13 +89,22 @@ function Discs(props: { discs: Disc[]; extent: number; label: string; testId: st
 const AXES = ['x', 'y', 'z'] as const;
 type Axis = (typeof AXES)[number];
 
-export function ParticlePicture(props: { spec: SimulationSpec; occupation: string; elementA: string; elementB: string; positions?: readonly number[] | null }) {
+export function ParticlePicture(props: {
+  spec: SimulationSpec;
+  occupation: string;
+  elementA: string;
+  elementB: string;
+  positions?: readonly number[] | null;
+}) {
   const { spec, occupation, elementA, elementB } = props;
   const [normal, setNormal] = useState<Axis>('z');
   const [offsetText, setOffsetText] = useState('0');
   const base = useMemo(() => {
     const geometry = rebuildGeometry(spec);
-    const p = props.positions && props.positions.length === geometry.positions.length ? Float64Array.from(props.positions) : geometry.positions;
+    const p =
+      props.positions && props.positions.length === geometry.positions.length
+        ? Float64Array.from(props.positions)
+        : geometry.positions;
     const nn = geometry.nearestNeighbourAngstrom;
     const n = geometry.atoms;
     let extent = 0;
@@ -94,9 +128,20 @@ export function ParticlePicture(props: { spec: SimulationSpec; occupation: strin
     // Slab: atoms within ±0.4 nn of the plane (for fcc shapes cut along a cube axis, one (001) layer).
     const discs: Disc[] = [];
     for (let i = 0; i < n; i++) {
-      if (Math.abs(p[3 * i + k]! - offset) <= 0.4 * nn) discs.push({ x: p[3 * i + u]!, y: p[3 * i + v]!, r: 0.48 * nn, species: occupation[i] === 'B' ? 'B' : 'A', shade: 1 });
+      if (Math.abs(p[3 * i + k]! - offset) <= 0.4 * nn)
+        discs.push({
+          x: p[3 * i + u]!,
+          y: p[3 * i + v]!,
+          r: 0.48 * nn,
+          species: occupation[i] === 'B' ? 'B' : 'A',
+          shade: 1,
+        });
     }
-    const marks: Mark[] = (['A', 'B'] as const).map((s) => ({ x: base.centres[s][u]!, y: base.centres[s][v]!, species: s }));
+    const marks: Mark[] = (['A', 'B'] as const).map((s) => ({
+      x: base.centres[s][u]!,
+      y: base.centres[s][v]!,
+      species: s,
+    }));
     return { discs, marks };
   }, [base, normal, offset, occupation]);
   const picture = useMemo(() => {
@@ -160,14 +205,45 @@ export function ParticlePicture(props: { spec: SimulationSpec; occupation: strin
           />
         </div>
         {picture.surface ? (
-          <Discs discs={picture.surface} extent={picture.extent} label="outer surface seen from above (nearer atoms darker)" testId="particle-surface" elementA={elementA} elementB={elementB} />
+          <Discs
+            discs={picture.surface}
+            extent={picture.extent}
+            label="outer surface seen from above (nearer atoms darker)"
+            testId="particle-surface"
+            elementA={elementA}
+            elementB={elementB}
+          />
         ) : (
-          <p className="small muted">The surface picture is drawn for particles up to {MAX_SURFACE_ATOMS.toLocaleString('en-US')} atoms.</p>
+          <p className="small muted">
+            The surface picture is drawn for particles up to {MAX_SURFACE_ATOMS.toLocaleString('en-US')} atoms.
+          </p>
         )}
       </div>
       <p className="small" aria-label="Legend" data-testid="particle-legend">
-        <span style={{ display: 'inline-block', width: 12, height: 12, borderRadius: 6, background: ELEMENT_COLOURS.A, verticalAlign: 'middle', marginRight: 4 }} /> {elementA}
-        <span style={{ display: 'inline-block', width: 12, height: 12, borderRadius: 6, background: ELEMENT_COLOURS.B, verticalAlign: 'middle', margin: '0 4px 0 16px' }} /> {elementB}
+        <span
+          style={{
+            display: 'inline-block',
+            width: 12,
+            height: 12,
+            borderRadius: 6,
+            background: ELEMENT_COLOURS.A,
+            verticalAlign: 'middle',
+            marginRight: 4,
+          }}
+        />{' '}
+        {elementA}
+        <span
+          style={{
+            display: 'inline-block',
+            width: 12,
+            height: 12,
+            borderRadius: 6,
+            background: ELEMENT_COLOURS.B,
+            verticalAlign: 'middle',
+            margin: '0 4px 0 16px',
+          }}
+        />{' '}
+        {elementB}
       </p>
     </div>
   );

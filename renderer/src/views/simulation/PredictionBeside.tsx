@@ -44,8 +44,8 @@ export function PredictionBeside(props: { result: SimulationResult; temperatureK
               {prediction.value.architecture}
             </div>
             <div className="small">
-              surface {result.elementB} {pct(prediction.value.surfaceXB)} (Langmuir–McLean with Wynblatt–Ku terms,
-              same size and temperature)
+              surface {result.elementB} {pct(prediction.value.surfaceXB)} (Langmuir–McLean with Wynblatt–Ku terms, same
+              size and temperature)
             </div>
           </>
         ) : (
@@ -54,7 +54,8 @@ export function PredictionBeside(props: { result: SimulationResult; temperatureK
       </div>
       {prediction.value ? (
         <p className="small muted" data-testid="sim-kinetics" style={{ gridColumn: '1 / -1' }}>
-          Both are equilibrium arrangements. In a synthesis of {prediction.value.timeH} h at {props.temperatureK} K: {prediction.value.verdicts.text}.
+          Both are equilibrium arrangements. In a synthesis of {prediction.value.timeH} h at {props.temperatureK} K:{' '}
+          {prediction.value.verdicts.text}.
         </p>
       ) : null}
     </div>

@@ -96,7 +96,8 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
       </div>
       {relaxation ? (
         <p className="small" data-testid="sim-relaxation">
-          <strong>{relaxation.mode === 'relaxed' ? 'Relaxed run' : 'Rigid lattice'}</strong> ({relaxation.reason}): {relaxation.design}
+          <strong>{relaxation.mode === 'relaxed' ? 'Relaxed run' : 'Rigid lattice'}</strong> ({relaxation.reason}):{' '}
+          {relaxation.design}
           {relaxation.displacementStepAngstrom !== null
             ? `; displacement step ${relaxation.displacementStepAngstrom.toFixed(3)} Å, acceptance ${pct(relaxation.displacementAcceptance ?? 0)}`
             : ''}
@@ -109,8 +110,8 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
       <p className="small muted">
         {eq.equilibrated ? 'Equilibrated' : 'Not equilibrated (energy still drifting in the last quarters: run longer)'}
         ; averages from sweep {eq.equilibratedFromSample + (run.spec.anneal?.sweeps ?? 0) + 1}. Unlike pairs:{' '}
-        {result.pairRule.description}. Sites at the Vegard spacing {result.geometry.nearestNeighbourAngstrom.toFixed(3)} Å;
-        engine {result.engineVersion}.
+        {result.pairRule.description}. Sites at the Vegard spacing {result.geometry.nearestNeighbourAngstrom.toFixed(3)}{' '}
+        Å; engine {result.engineVersion}.
       </p>
       <div className="sim-charts">
         <RadialProfile result={result} />

@@ -131,16 +131,25 @@ export function RunForm(props: {
         {text('sweeps', 'numeric')}
       </Field>
       <Field label="Atoms" name="relaxation" error={errors.relaxation}>
-        <select name="relaxation" value={form.relaxation} onChange={(e) => set('relaxation', e.target.value as RunFormState['relaxation'])}>
+        <select
+          name="relaxation"
+          value={form.relaxation}
+          onChange={(e) => set('relaxation', e.target.value as RunFormState['relaxation'])}
+        >
           <option value="auto">by size mismatch (relaxed above 6 %)</option>
           <option value="rigid">rigid lattice (swap moves only)</option>
           <option value="relaxed">relaxed (swap + displacement moves)</option>
         </select>
       </Field>
       <label style={{ gridColumn: '1 / -1' }}>
-        <input type="checkbox" name="stopAtAnswer" checked={form.stopAtAnswer} onChange={(e) => set('stopAtAnswer', e.target.checked)} /> Stop at
-        the answer: once equilibrated and the surface composition is known to ±0.005 (at least 100 sweeps; the sweeps
-        above are the cap)
+        <input
+          type="checkbox"
+          name="stopAtAnswer"
+          checked={form.stopAtAnswer}
+          onChange={(e) => set('stopAtAnswer', e.target.checked)}
+        />{' '}
+        Stop at the answer: once equilibrated and the surface composition is known to ±0.005 (at least 100 sweeps; the
+        sweeps above are the cap)
       </label>
       <Field label="Seed" name="seed" error={errors.seed}>
         {text('seed', 'numeric')}

@@ -59,8 +59,8 @@ export function RunPanel(props: { id: number; onChanged: () => void }) {
     <section className="card" aria-label={`Run ${run.id}`} data-testid="sim-run">
       <div className="view__header" style={{ marginBottom: 8 }}>
         <h2 className="card__title">
-          Run {run.id}: {spec.elementA}-{spec.elementB}, x({spec.elementB}) = {spec.xB}, {shapeLabel(spec.shape)}, {run.atoms}{' '}
-          atoms, {spec.anneal ? `${spec.anneal.startTemperatureK} → ` : ''}
+          Run {run.id}: {spec.elementA}-{spec.elementB}, x({spec.elementB}) = {spec.xB}, {shapeLabel(spec.shape)},{' '}
+          {run.atoms} atoms, {spec.anneal ? `${spec.anneal.startTemperatureK} → ` : ''}
           {spec.temperatureK} K
         </h2>
         <span className="tag tag--muted" data-testid="sim-status">

@@ -7,7 +7,11 @@
  */
 import { useEffect, useState, type FormEvent } from 'react';
 import type { ScreenStarted, ScreenStatus } from '../../../../shared-model/api/screen';
-import { describeArchitecture, parseArchitecture, type ArchitectureKind } from '../../../../shared-model/architecture/labels';
+import {
+  describeArchitecture,
+  parseArchitecture,
+  type ArchitectureKind,
+} from '../../../../shared-model/architecture/labels';
 import { readUserNumber } from '../../../../shared-model/text/user-number';
 import { call } from '../../api/client';
 import { useAppState } from '../../app-state';
@@ -65,7 +69,12 @@ function Matrix(props: { status: ScreenStatus; diameterNm: number; x: number; on
               const kind = kindOf(cell.status === 'done' ? cell.architecture : null);
               return (
                 <td key={column} style={{ background: kind ? KIND_COLOURS[kind] : undefined, padding: 4 }}>
-                  <button type="button" className="button--link" onClick={() => props.onOpen(cell.runId)} title={`open run ${cell.runId}`}>
+                  <button
+                    type="button"
+                    className="button--link"
+                    onClick={() => props.onOpen(cell.runId)}
+                    title={`open run ${cell.runId}`}
+                  >
                     {cell.status === 'done' ? cell.architecture : cell.status}
                   </button>
                   <div className="muted">analytic: {cell.prediction ?? '–'}</div>
@@ -137,7 +146,13 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
     if (!result.ok) setError(result.error.message);
   };
 
-  const kinds = status ? [...new Set(status.cells.map((c) => kindOf(c.status === 'done' ? c.architecture : null)).filter((k) => k !== null))] : [];
+  const kinds = status
+    ? [
+        ...new Set(
+          status.cells.map((c) => kindOf(c.status === 'done' ? c.architecture : null)).filter((k) => k !== null),
+        ),
+      ]
+    : [];
   return (
     <section className="card stack" aria-label="Campaign screen" data-testid="screen-panel">
       <h2 className="card__title">Screen this campaign</h2>
@@ -181,7 +196,13 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
             {status ? `: ${status.finished} of ${status.total} finished` : ''}
             {status?.elapsedMs ? `, ${(status.elapsedMs / 1000).toFixed(1)} s` : ''}.
           </p>
-          <div className="sim-progress" role="progressbar" aria-valuenow={Math.round(100 * (status?.progress ?? 0))} aria-valuemin={0} aria-valuemax={100}>
+          <div
+            className="sim-progress"
+            role="progressbar"
+            aria-valuenow={Math.round(100 * (status?.progress ?? 0))}
+            aria-valuemin={0}
+            aria-valuemax={100}
+          >
             <div className="sim-progress__bar" style={{ width: `${100 * (status?.progress ?? 0)}%` }} />
           </div>
           {started.skipped.length > 0 ? (
@@ -200,7 +221,8 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
                 <ul className="small" data-testid="screen-runs">
                   {status.runs.map((r) => (
                     <li key={r.runId}>
-                      {r.elementA}-{r.elementB} x({r.elementB}) {Math.round(100 * r.xB)} %, {r.diameterNm} nm: {r.status}
+                      {r.elementA}-{r.elementB} x({r.elementB}) {Math.round(100 * r.xB)} %, {r.diameterNm} nm:{' '}
+                      {r.status}
                       {r.architecture ? ` → ${r.architecture}` : ''}
                       {r.error ? ` (${r.error})` : ''}
                     </li>
@@ -208,13 +230,26 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
                 </ul>
               </details>
               {status.diameters.flatMap((d) =>
-                status.compositions.map((x) => <Matrix key={`${d}-${x}`} status={status} diameterNm={d} x={x} onOpen={props.onOpen} />),
+                status.compositions.map((x) => (
+                  <Matrix key={`${d}-${x}`} status={status} diameterNm={d} x={x} onOpen={props.onOpen} />
+                )),
               )}
               <p className="small" aria-label="Legend" data-testid="screen-legend">
                 {kinds.map((k) => (
                   <span key={k} style={{ marginRight: 16 }}>
-                    <span style={{ display: 'inline-block', width: 12, height: 12, background: KIND_COLOURS[k], verticalAlign: 'middle', marginRight: 4 }} />
-                    {k === 'core@shell' ? 'core@shell (A@B: A core under a B shell)' : `${k}: ${describeArchitecture(k)}`}
+                    <span
+                      style={{
+                        display: 'inline-block',
+                        width: 12,
+                        height: 12,
+                        background: KIND_COLOURS[k],
+                        verticalAlign: 'middle',
+                        marginRight: 4,
+                      }}
+                    />
+                    {k === 'core@shell'
+                      ? 'core@shell (A@B: A core under a B shell)'
+                      : `${k}: ${describeArchitecture(k)}`}
                   </span>
                 ))}
               </p>

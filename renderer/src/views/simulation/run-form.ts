@@ -57,28 +57,26 @@ const optional = (text: string, field: string, label: string) => optionalFieldNu
 
 /** Reads the typed text; range checks are left to the contract (zod) so the form and the API say the same. */
 export function readRunForm(form: RunFormState): RunFormReading {
-  const reading = readForm(
-    (): SimulationStartInput => ({
-      elementA: form.elementA,
-      elementB: form.elementB,
-      xB: fieldNumber(form.xB, 'xB', `x(${form.elementB})`),
-      shape: form.shape,
-      ...(form.sizeMode === 'shells'
-        ? { shells: optional(form.shells, 'shells', 'shells') }
-        : { diameterNm: optional(form.diameterNm, 'diameterNm', 'diameter, nm') }),
-      temperatureK: fieldNumber(form.temperatureK, 'temperatureK', 'temperature, K'),
-      sweeps: fieldNumber(form.sweeps, 'sweeps', 'sweeps'),
-      anneal: form.anneal
-        ? {
-            startTemperatureK: fieldNumber(form.annealStartK, 'anneal.startTemperatureK', 'anneal start, K'),
-            sweeps: fieldNumber(form.annealSweeps, 'anneal.sweeps', 'cooling sweeps'),
-          }
-        : null,
-      seed: optional(form.seed, 'seed', 'seed') ?? 1,
-      ...(form.relaxation !== 'auto' ? { relaxation: form.relaxation } : {}),
-      ...(form.stopAtAnswer ? {} : { stopping: null }),
-    }),
-  );
+  const reading = readForm((): SimulationStartInput => ({
+    elementA: form.elementA,
+    elementB: form.elementB,
+    xB: fieldNumber(form.xB, 'xB', `x(${form.elementB})`),
+    shape: form.shape,
+    ...(form.sizeMode === 'shells'
+      ? { shells: optional(form.shells, 'shells', 'shells') }
+      : { diameterNm: optional(form.diameterNm, 'diameterNm', 'diameter, nm') }),
+    temperatureK: fieldNumber(form.temperatureK, 'temperatureK', 'temperature, K'),
+    sweeps: fieldNumber(form.sweeps, 'sweeps', 'sweeps'),
+    anneal: form.anneal
+      ? {
+          startTemperatureK: fieldNumber(form.annealStartK, 'anneal.startTemperatureK', 'anneal start, K'),
+          sweeps: fieldNumber(form.annealSweeps, 'anneal.sweeps', 'cooling sweeps'),
+        }
+      : null,
+    seed: optional(form.seed, 'seed', 'seed') ?? 1,
+    ...(form.relaxation !== 'auto' ? { relaxation: form.relaxation } : {}),
+    ...(form.stopAtAnswer ? {} : { stopping: null }),
+  }));
   return reading.ok
     ? { ok: true, input: reading.value }
     : { ok: false, field: reading.error.field, message: reading.error.message };
