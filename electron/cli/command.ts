@@ -16,9 +16,7 @@ export interface CliContext {
   /** Store maintenance that needs the store closed (restore, full check); the store is not opened for these. */
   maintenance: {
     dataDir: string;
-    restore(
-      file: string,
-    ): Promise<{
+    restore(file: string): Promise<{
       restoredFrom: string;
       previousStoreKeptAt: string | null;
       fromSchemaVersion: number;
