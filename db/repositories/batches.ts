@@ -303,12 +303,12 @@ interface BatchForOutcomeRow {
   element_b: string;
   target: string;
   diameter_nm: unknown;
-  x_b_pct: unknown;
+  x_b: unknown;
   created_at: string;
 }
 
 const BATCH_FOR_OUTCOME_SELECT = `SELECT id, name, campaign_id, pair_id, element_a, element_b, target,
-  json_extract(computed, '$.diameterNm') AS diameter_nm, json_extract(computed, '$.xBPct') AS x_b_pct, created_at
+  json_extract(computed, '$.diameterNm') AS diameter_nm, json_extract(computed, '$.xB') AS x_b, created_at
   FROM batches`;
 
 function toBatchForOutcome(row: BatchForOutcomeRow): BatchForOutcome {
@@ -321,7 +321,7 @@ function toBatchForOutcome(row: BatchForOutcomeRow): BatchForOutcome {
     elementB: row.element_b,
     target: row.target,
     diameterNm: typeof row.diameter_nm === 'number' ? row.diameter_nm : null,
-    nominalXB: typeof row.x_b_pct === 'number' ? row.x_b_pct / 100 : null,
+    nominalXB: typeof row.x_b === 'number' ? row.x_b : null,
     createdAt: row.created_at,
   };
 }

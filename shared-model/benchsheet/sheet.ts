@@ -62,7 +62,7 @@ function particleLine(batch: SavedBatch): string {
     );
   }
   if (d.architecture === 'single-metal') return `${d.elementA} seeds, ${d.diameterNm.toFixed(1)} nm`;
-  return `${d.diameterNm.toFixed(1)} nm, ${d.xBPct.toFixed(1)} at.% ${d.elementB}`;
+  return `${d.diameterNm.toFixed(1)} nm, ${(d.xB * 100).toFixed(1)} at.% ${d.elementB}`;
 }
 
 export function benchSheet(batch: SavedBatch, campaignName: string | null, printedOn: string): BenchSheet {

@@ -69,7 +69,7 @@ export function designBatch(input: BatchDesignInput, context: DesignContext): Ba
     shellAtoms: geometry.shellAtoms,
     atomsA: geometry.atomsA,
     atomsB: geometry.atomsB,
-    xBPct: geometry.xB * 100,
+    xB: geometry.xB,
     particles: amounts.particles,
     particlesPerMl,
     particleNanomolar: particleNanomolar(particlesPerMl),

@@ -17,7 +17,7 @@ beforeEach(() => {
   const info = store.db
     .prepare(
       `INSERT INTO batches (name, element_a, element_b, target, route, inputs, computed, model_version, catalog_revisions, created_at, updated_at)
-       VALUES ('b', 'Au', 'Pd', 'alloy', 'co-reduction', '{}', '{"diameterNm": 10, "xBPct": 50}', 'test', '{}', ?, ?)`,
+       VALUES ('b', 'Au', 'Pd', 'alloy', 'co-reduction', '{}', '{"diameterNm": 10, "xB": 0.5}', 'test', '{}', ?, ?)`,
     )
     .run(now, now);
   batchId = Number(info.lastInsertRowid);

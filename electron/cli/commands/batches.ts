@@ -225,7 +225,7 @@ export function recipeText(design: BatchDesign, saved: { id: number } | null): s
   if (saved) lines.push(`saved as batch ${saved.id} (planned)`);
   lines.push(
     `${design.elementA}-${design.elementB}, target ${design.target}, ${design.routeLabel}`,
-    `particle ${num(design.diameterNm)} nm (${design.architecture}${design.shellMonolayers !== null ? `, shell ${num(design.shellMonolayers, 3)} ML` : ''}): ${num(design.atomsPerParticle)} atoms (core ${num(design.coreAtoms)}, shell ${num(design.shellAtoms)}), ${num(design.xBPct, 3)} at.% ${design.elementB}`,
+    `particle ${num(design.diameterNm)} nm (${design.architecture}${design.shellMonolayers !== null ? `, shell ${num(design.shellMonolayers, 3)} ML` : ''}): ${num(design.atomsPerParticle)} atoms (core ${num(design.coreAtoms)}, shell ${num(design.shellAtoms)}), ${num(design.xB * 100, 3)} at.% ${design.elementB}`,
     `${num(design.particles)} particles, ${num(design.particlesPerMl)} per mL (${num(design.particleNanomolar, 3)} nM) in ${num(design.batchVolumeMl)} mL`,
     '',
     formatTable(design.reagents, [

@@ -45,7 +45,7 @@ export function BatchResult(props: { design: BatchDesign }) {
               value={`${formatNumber(d.shellThicknessNm)} nm = ${formatNumber(d.shellMonolayers, 3)} ML`}
             />
           ) : null}
-          <Stat label={`Composition`} value={`${formatNumber(d.xBPct, 3)} at.% ${d.elementB}`} />
+          <Stat label={`Composition`} value={`${formatNumber(d.xB * 100, 3)} at.% ${d.elementB}`} />
           <Stat label="Particles" value={formatNumber(d.particles)} testId="particles" />
           <Stat
             label="Concentration"

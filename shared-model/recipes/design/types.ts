@@ -108,7 +108,8 @@ export interface BatchDesign {
   shellAtoms: number;
   atomsA: number;
   atomsB: number;
-  xBPct: number;
+  /** Composition as the atomic fraction of B (0–1), as in predictions and outcomes; shown as at.%. */
+  xB: number;
   particles: number;
   particlesPerMl: number;
   particleNanomolar: number;
