@@ -23,9 +23,13 @@ import type { ServiceContext } from '../services/context';
 export const CALL_HEADER = 'x-pairwright-call';
 export const LOGIN_PARAMETER = 'login';
 export const MAX_BODY_BYTES = 20 * 1024 * 1024;
-/** Slow senders are cut off: headers within 10 s, the whole request within 60 s (common practice). */
-const HEADERS_TIMEOUT_MS = 10_000;
-const REQUEST_TIMEOUT_MS = 60_000;
+/** JSON bodies nested deeper than this are refused before parsing (the deepest operation input is under 10 levels). */
+export const MAX_BODY_DEPTH = 64;
+/**
+ * Slow senders are cut off: headers within 10 s, the whole request (body included) within 60 s (common practice);
+ * the server checks its connections against these every second (Node's default is every 30 s).
+ */
+export const HOST_TIMEOUTS = { headersMs: 10_000, requestMs: 60_000, checkEveryMs: 1_000 } as const;
 
 export const CONTENT_SECURITY_POLICY =
   "default-src 'self'; script-src 'self'; style-src 'self' 'unsafe-inline'; img-src 'self' data: blob:; font-src 'self'; connect-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'; form-action 'none'";
@@ -48,6 +52,8 @@ export interface HostOptions {
   port: number;
   /** Called after a login key was used (serve.ts then prints a fresh address for another browser). */
   onLogin?: () => void;
+  /** Slow-sender limits; HOST_TIMEOUTS unless given (tests shorten them). */
+  timeouts?: { headersMs: number; requestMs: number; checkEveryMs: number };
 }
 
 export interface RunningHost {
@@ -143,6 +149,27 @@ function readBody(request: IncomingMessage): Promise<string> {
     });
     request.on('error', reject);
   });
+}
+
+/**
+ * Whether a JSON text nests arrays/objects deeper than `limit`: one pass over the characters, skipping strings,
+ * so a body of 100,000 opening brackets is refused without any recursion.
+ */
+export function jsonNestsDeeperThan(text: string, limit: number): boolean {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) {
+      if (++depth > limit) return true;
+    } else if (c === 0x5d || c === 0x7d) depth--;
+  }
+  return false;
 }
 
 function secretsMatch(given: string, expected: string): boolean {
@@ -293,6 +320,10 @@ export function startHost(options: HostOptions): Promise<RunningHost> {
     let input: unknown;
     try {
       const body = await readBody(request);
+      if (jsonNestsDeeperThan(body, MAX_BODY_DEPTH)) {
+        refuse(response, 400, 'invalid_input', `request body is nested deeper than ${MAX_BODY_DEPTH} levels`);
+        return;
+      }
       input = body.trim() === '' ? {} : JSON.parse(body);
     } catch (error) {
       if (error instanceof BodyTooLarge) {
@@ -315,15 +346,16 @@ export function startHost(options: HostOptions): Promise<RunningHost> {
     sendJson(response, result.ok ? 200 : (STATUS_BY_CODE[result.error.code] ?? 400), result);
   };
 
-  const server = createServer((request, response) => {
+  const timeouts = options.timeouts ?? HOST_TIMEOUTS;
+  const server = createServer({ connectionsCheckingInterval: timeouts.checkEveryMs }, (request, response) => {
     handle(request, response).catch((error: unknown) => {
       console.error('[pairwright host] request failed:', error);
       if (!response.headersSent) refuse(response, 500, 'internal', String(error));
       else response.destroy();
     });
   });
-  server.headersTimeout = HEADERS_TIMEOUT_MS;
-  server.requestTimeout = REQUEST_TIMEOUT_MS;
+  server.headersTimeout = timeouts.headersMs;
+  server.requestTimeout = timeouts.requestMs;
 
   return new Promise((resolvePromise, reject) => {
     server.once('error', reject);
