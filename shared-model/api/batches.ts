@@ -131,10 +131,11 @@ const batchIdsSchema = z
   .array(idSchema, { error: 'must be a list of batch ids' })
   .min(1, 'select at least one batch')
   .max(200, 'at most 200 batches at once');
-const positiveMeasure = (what: string) =>
+const positiveMeasure = (what: string, max: number) =>
   z
     .number({ error: `${what} must be a number` })
     .positive(`${what} must be greater than 0`)
+    .max(max, `${what} must be at most ${max}`)
     .nullable()
     .optional();
 
@@ -184,8 +185,8 @@ export const batchOperations = {
       inventory: z.boolean({ error: 'must be true or false' }).default(true),
       measured: z
         .object({
-          diameterNm: positiveMeasure('measured diameter (nm)'),
-          particlesPerMl: positiveMeasure('measured concentration (particles/mL)'),
+          diameterNm: positiveMeasure('measured diameter (nm)', 1000),
+          particlesPerMl: positiveMeasure('measured concentration (particles/mL)', 1e21),
         })
         .optional(),
     }),
@@ -234,7 +235,8 @@ export const batchOperations = {
     input: z.object({
       id: idSchema.optional(),
       reagentKey: z.string({ error: 'must name a catalog reagent' }).trim().min(1, 'must name a catalog reagent'),
-      amount: z.number({ error: 'must be a number' }).min(0, 'must be ≥ 0'),
+      // In the row's unit (g, mg, mL, …): up to a million of it, far above any shelf (common practice).
+      amount: z.number({ error: 'must be a number' }).min(0, 'must be ≥ 0').max(1e6, 'must be at most 1000000'),
       unit: z.enum(INVENTORY_UNITS, { error: `must be one of: ${INVENTORY_UNITS.join(', ')}` }),
       location: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters').default(''),
       lot: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters').default(''),

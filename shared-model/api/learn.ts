@@ -9,7 +9,7 @@ import type { ModelReview } from '../learn/review';
 import type { Proposal } from '../learn/proposals';
 import type { SynthesisRoute } from '../recipes/design-input';
 import { operation } from './operation';
-import { elementSymbolSchema, idSchema } from './schemas';
+import { elementSymbolSchema, idSchema, seedSchema } from './schemas';
 
 export interface HistoryImportSummary {
   id: number;
@@ -126,7 +126,11 @@ export const learnOperations = {
     summary: 'Enter the price per gram of a metal on a date',
     input: z.object({
       symbol: elementSymbolSchema,
-      pricePerGram: z.number({ error: 'must be a number (price per gram)' }).positive('must be above 0').finite(),
+      pricePerGram: z
+        .number({ error: 'must be a number (price per gram)' })
+        .positive('must be above 0')
+        // Up to a million per gram: the dearest metals here cost hundreds per gram (from memory).
+        .max(1e6, 'must be at most 1000000 per gram'),
       currency: text.trim().min(1, 'must not be empty').max(8, 'must be at most 8 characters').default('EUR'),
       pricedOn: z.iso.date({ error: 'must be an ISO date (YYYY-MM-DD)' }),
     }),
@@ -144,7 +148,12 @@ export const learnOperations = {
       priorWeight: z
         .union([z.literal('tune'), z.number().positive('must be above 0').max(1, 'must be at most 1')])
         .default('tune'),
-      C: z.number({ error: 'must be a number' }).positive('must be above 0').max(1e6, 'must be at most 1e6').default(1),
+      C: z
+        .number({ error: 'must be a number' })
+        .positive('must be above 0')
+        .min(1e-6, 'must be at least 1e-6')
+        .max(1e6, 'must be at most 1e6')
+        .default(1),
     }),
   }),
   'learn.job': operation<LearnJob>()({
@@ -186,7 +195,7 @@ export const learnOperations = {
         .positive('must be above 0')
         .max(1000, 'must be at most 1000 mmol')
         .default(0.1),
-      seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
+      seed: seedSchema.default(1),
     }),
   }),
 };

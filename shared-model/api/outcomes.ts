@@ -177,7 +177,11 @@ const csvTextSchema = z
 const columnSchema = z.union(
   [
     z.string().trim().min(1, 'must name a column'),
-    z.number().int('must be a column number').positive('columns count from 1'),
+    z
+      .number()
+      .int('must be a column number')
+      .positive('columns count from 1')
+      .max(10_000, 'must be a column number of at most 10000'),
   ],
   {
     error: 'must be a column name or number',
@@ -213,11 +217,13 @@ const sizeImportFields = {
   targetDiameterNm: z
     .number({ error: 'must be a number of nm' })
     .positive('must be greater than 0')
+    .max(1000, 'must be at most 1000 nm')
     .nullable()
     .optional(),
   precisionPercent: z
     .number({ error: 'must be a number' })
     .positive('must be greater than 0')
+    .min(0.01, 'must be at least 0.01 %')
     .max(50, 'must be at most 50 %')
     .default(2),
 };

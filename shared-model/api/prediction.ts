@@ -18,37 +18,47 @@ import { DomainError } from './result';
 import { operation } from './operation';
 import { elementSymbolSchema, idSchema, pairTextSchema, particleShapeSchema } from './schemas';
 
-const finite = (what: string) =>
-  z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, { error: 'must be a finite number' });
+// z.number() refuses NaN and ±Infinity (zod 4), so every bound below is a finite physical range.
+const finite = (what: string) => z.number({ error: `must be a number (${what})` });
 
-export const xBSchema = finite('atomic fraction of B').refine((x) => x > 0 && x < 1, {
-  error: 'must lie strictly between 0 and 1 (atomic fraction of B)',
-});
+export const xBSchema = finite('atomic fraction of B')
+  .gt(0, 'must lie strictly between 0 and 1 (atomic fraction of B)')
+  .lt(1, 'must lie strictly between 0 and 1 (atomic fraction of B)');
+// Clusters below a few atoms are refused by the model itself (field diameterNm, with the smallest size it takes).
 export const diameterNmSchema = finite('nm')
-  .refine((d) => d > 0, { error: 'must be a positive diameter in nm' })
-  .refine((d) => d <= 1000, { error: 'must be at most 1000 nm' });
+  .gt(0, 'must be a positive diameter in nm')
+  .max(1000, 'must be at most 1000 nm');
 export const temperatureKSchema = finite('K')
-  .refine((t) => t > 0, { error: 'must be a positive temperature in K' })
+  .gt(0, 'must be a positive temperature in K')
   // At least 1 K: the models are for synthesis and annealing temperatures; a denormal such as 5e-324 K is refused.
-  .refine((t) => t <= 0 || t >= 1, { error: 'must be at least 1 K' })
-  .refine((t) => t <= 5000, { error: 'must be at most 5000 K' });
+  .min(1, 'must be at least 1 K')
+  .max(5000, 'must be at most 5000 K');
 export const facetSchema = z.enum(SURFACE_FACETS, { error: 'must be "111" or "100"' });
 export const environmentSchema = z.enum(ENVIRONMENTS, { error: `must be one of: ${ENVIRONMENTS.join(', ')}` });
+// 1e-15 bar (below ultra-high vacuum, ~1e-13 bar; common practice) to 1000 bar.
 export const pressureBarSchema = finite('bar')
-  .refine((p) => p > 0, { error: 'must be a positive pressure in bar' })
-  .refine((p) => p <= 1000, { error: 'must be at most 1000 bar' });
+  .gt(0, 'must be a positive pressure in bar')
+  .min(1e-15, 'must be at least 1e-15 bar')
+  .max(1000, 'must be at most 1000 bar');
+// One second (1/3600 h) to 10,000 h (over a year of annealing).
 export const timeHSchema = finite('h')
-  .refine((t) => t > 0, { error: 'must be a positive time in hours' })
-  .refine((t) => t <= 10000, { error: 'must be at most 10000 h' });
+  .gt(0, 'must be a positive time in hours')
+  .min(1 / 3600, 'must be at least one second (1/3600 h)')
+  .max(10000, 'must be at most 10000 h');
 export const strainRuleSchema = z.enum(STRAIN_RULES, { error: `must be one of: ${STRAIN_RULES.join(', ')}` });
 
-const thresholdValue = finite('threshold').refine((v) => v > 0, { error: 'must be a positive number' });
+// Enrichment E = (xs − x)/(1 − x) lies in (0, 1]; the unlike-neighbour ratio to a random alloy stays within a few
+// units for any composition, so 100 is a generous cap (common practice).
+const enrichmentThreshold = finite('enrichment, 0–1').gt(0, 'must be above 0').max(1, 'must be at most 1');
+const unlikeRatioThreshold = finite('unlike-neighbour ratio')
+  .gt(0, 'must be a positive number')
+  .max(100, 'must be at most 100');
 export const thresholdsSchema = z
   .object({
-    coreShellEnrichment: thresholdValue.refine((v) => v <= 1, { error: 'must be at most 1' }),
-    enrichedAlloyEnrichment: thresholdValue.refine((v) => v <= 1, { error: 'must be at most 1' }),
-    janusUnlikeRatio: thresholdValue,
-    intermetallicUnlikeRatio: thresholdValue,
+    coreShellEnrichment: enrichmentThreshold,
+    enrichedAlloyEnrichment: enrichmentThreshold,
+    janusUnlikeRatio: unlikeRatioThreshold,
+    intermetallicUnlikeRatio: unlikeRatioThreshold,
   })
   .partial()
   .transform((t): ClassificationThresholds => ({ ...PREDICTION_DEFAULTS.thresholds, ...t }))

@@ -6,7 +6,18 @@ import { normaliseShapeName, PARTICLE_SHAPES } from '../geometry/shapes';
 export const idSchema = z
   .number({ error: 'must be a number' })
   .int('must be a whole number')
-  .positive('must be a positive id');
+  .positive('must be a positive id')
+  .max(Number.MAX_SAFE_INTEGER, `must be a stored id (at most ${Number.MAX_SAFE_INTEGER})`);
+
+/**
+ * A seed of the seeded generator (shared-model/random.ts reads it as an unsigned 32-bit integer): 0 to 2^32 − 1,
+ * so two different seeds never give the same stream.
+ */
+export const seedSchema = z
+  .number({ error: 'must be a whole number' })
+  .int('must be a whole number')
+  .min(0, 'must be a seed from 0 to 4294967295')
+  .max(0xffff_ffff, 'must be a seed from 0 to 4294967295');
 
 /** True when text holds a NUL or another control character that no name or note should carry (tab and newline pass). */
 export function hasControlCharacters(text: string): boolean {

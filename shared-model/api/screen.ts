@@ -6,7 +6,7 @@
  */
 import { z } from 'zod';
 import { operation } from './operation';
-import { idSchema, particleShapeSchema } from './schemas';
+import { idSchema, particleShapeSchema, seedSchema } from './schemas';
 import { SIMULATION_LIMITS } from '../montecarlo/simulate';
 import type { ScreenCell, SkippedPair } from '../montecarlo/screen';
 import type { SimulationRunSummary } from './simulation';
@@ -26,6 +26,7 @@ export const screenStartSchema = z.object({
   temperatureK: z
     .number({ error: 'must be a number (K)' })
     .gt(0, 'must be above 0 K')
+    .min(1, 'must be at least 1 K')
     .max(SIMULATION_LIMITS.maxTemperatureK, `must be at most ${SIMULATION_LIMITS.maxTemperatureK} K`),
   shape: particleShapeSchema.default('cuboctahedron'),
   sweeps: z
@@ -34,7 +35,7 @@ export const screenStartSchema = z.object({
     .min(100, 'must be at least 100')
     .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`)
     .default(3000),
-  seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
+  seed: seedSchema.default(1),
 });
 
 export interface ScreenRun {

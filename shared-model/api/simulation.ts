@@ -9,7 +9,7 @@
 import { z } from 'zod';
 import { DomainError } from './result';
 import { operation } from './operation';
-import { idSchema, particleShapeSchema } from './schemas';
+import { idSchema, particleShapeSchema, seedSchema } from './schemas';
 import { GUPTA_ELEMENTS, isGuptaElement, MIXING_RULE_DESCRIPTION } from '../montecarlo/gupta-parameters';
 import {
   planSimulation,
@@ -57,8 +57,11 @@ const specShape = {
     .number({ error: 'must be a whole number' })
     .int('must be a whole number')
     .min(1, 'must be at least 1')
+    // 60 shells of a cuboctahedron are ~720,000 atoms, far above the atom cap that planSimulation applies.
+    .max(60, 'must be at most 60 shells')
     .optional(),
-  diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').optional(),
+  // 30 nm of Au is ~830,000 atoms, above the atom cap (checked with the count by planSimulation).
+  diameterNm: positiveNumber('nm').gt(0, 'must be above 0 nm').max(30, 'must be at most 30 nm').optional(),
   temperatureK: positiveNumber('K')
     .gt(0, 'must be above 0 K')
     .min(1, 'must be at least 1 K')
@@ -81,11 +84,12 @@ const specShape = {
         .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
     })
     .nullish(),
-  seed: z.number({ error: 'must be a whole number' }).int('must be a whole number').default(1),
+  seed: seedSchema.default(1),
   progressEverySweeps: z
     .number({ error: 'must be a whole number' })
     .int('must be a whole number')
     .min(1, 'must be at least 1')
+    .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`)
     .optional(),
   /** Rigid lattice or relaxed (swap + displacement); omitted: by the size-mismatch rule. */
   relaxation: z.enum(RELAXATION_MODES, { error: `must be one of: ${RELAXATION_MODES.join(', ')}` }).optional(),
@@ -96,7 +100,8 @@ const specShape = {
       minSweeps: z
         .number({ error: 'must be a whole number' })
         .int('must be a whole number')
-        .min(10, 'must be at least 10'),
+        .min(10, 'must be at least 10')
+        .max(SIMULATION_LIMITS.maxSweeps, `must be at most ${SIMULATION_LIMITS.maxSweeps}`),
     })
     .nullish(),
 };

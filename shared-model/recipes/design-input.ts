@@ -3,6 +3,7 @@
  * and its TypeScript type. Units are in the field names.
  */
 import { z } from 'zod';
+import { idSchema } from '../api/schemas';
 import { isMetalSymbol } from '../elements/symbols';
 
 export const ROUTES = ['co-reduction', 'seed-mediated', 'polyol', 'organic'] as const;
@@ -26,11 +27,28 @@ export const DEFAULT_TEMPERATURE_C: Record<SynthesisRoute, number> = {
   organic: 200,
 };
 
-const positive = (what: string, unit: string) =>
-  z
+/**
+ * A positive quantity within its physical range (max inclusive): `what` and the range are in the message.
+ * z.number() refuses NaN and ±Infinity (zod 4); `least`, when given, is a floor above 0 (e.g. a 0.5 nm particle).
+ */
+const positive = (what: string, unit: string, range: { max: number; least?: number }) => {
+  const base = z
     .number({ error: `${what} must be a number (${unit})` })
-    .refine(Number.isFinite, { error: `${what} must be a finite number` })
-    .refine((v) => v > 0, { error: `${what} must be greater than 0 ${unit}` });
+    .gt(0, `${what} must be greater than 0 ${unit}`)
+    .max(range.max, `${what} must be at most ${range.max} ${unit}`);
+  return range.least === undefined ? base : base.min(range.least, `${what} must be at least ${range.least} ${unit}`);
+};
+
+// Physical ranges of a wet-chemistry batch (common practice): particles 0.5 nm–1 µm, amounts up to 10 mol,
+// stocks up to 20 M, volumes from 1 µL to 100 L, particle counts up to 1e21 per mL.
+const XB_RANGE =
+  'composition x_B must lie strictly between 0 and 1 (0 and 100 at.%): a bimetallic batch needs both metals';
+const DIAMETER_NM = { least: 0.5, max: 1000 };
+const SHELL_NM = { least: 0.01, max: 500 };
+const STOCK_MM = { least: 1e-6, max: 20_000 };
+const VOLUME_ML = { least: 1e-3, max: 100_000 };
+const AMOUNT_MMOL = { least: 1e-9, max: 10_000 };
+const PARTICLES_PER_ML = { least: 1, max: 1e21 };
 
 const metalSymbol = z
   .string({ error: 'must be an element symbol' })
@@ -44,22 +62,20 @@ export const sizeSchema = z.discriminatedUnion(
   [
     z.object({
       kind: z.literal('alloy'),
-      diameterNm: positive('diameter', 'nm'),
+      diameterNm: positive('diameter', 'nm', DIAMETER_NM),
       /** Composition: atomic fraction of element B (0–1), as in predictions and outcomes; views show at.%. */
       xB: z
         .number({ error: 'composition must be a number (atomic fraction of B, 0–1)' })
-        .refine((v) => Number.isFinite(v) && v > 0 && v < 1, {
-          error:
-            'composition x_B must lie strictly between 0 and 1 (0 and 100 at.%): a bimetallic batch needs both metals',
-        }),
+        .gt(0, XB_RANGE)
+        .lt(1, XB_RANGE),
     }),
     z
       .object({
         kind: z.literal('core-shell'),
         /** Core diameter; for seed-mediated growth it defaults to the seeds' diameter. */
-        coreDiameterNm: positive('core diameter', 'nm').optional(),
-        shellThicknessNm: positive('shell thickness', 'nm').optional(),
-        shellMonolayers: positive('shell', 'monolayers').optional(),
+        coreDiameterNm: positive('core diameter', 'nm', DIAMETER_NM).optional(),
+        shellThicknessNm: positive('shell thickness', 'nm', SHELL_NM).optional(),
+        shellMonolayers: positive('shell', 'monolayers', { least: 0.01, max: 1000 }).optional(),
       })
       .superRefine((value, ctx) => {
         const given = (value.shellThicknessNm !== undefined ? 1 : 0) + (value.shellMonolayers !== undefined ? 1 : 0);
@@ -74,13 +90,13 @@ export const sizeSchema = z.discriminatedUnion(
       /** One metal only: seeds for a later growth batch of the same pair. */
       kind: z.literal('single-metal'),
       element: metalSymbol,
-      diameterNm: positive('diameter', 'nm'),
+      diameterNm: positive('diameter', 'nm', DIAMETER_NM),
     }),
     z.object({
       kind: z.literal('core-shell-overall'),
       /** Overall particle diameter, core plus shell. */
-      diameterNm: positive('diameter', 'nm'),
-      shellThicknessNm: positive('shell thickness', 'nm'),
+      diameterNm: positive('diameter', 'nm', DIAMETER_NM),
+      shellThicknessNm: positive('shell thickness', 'nm', SHELL_NM),
     }),
   ],
   { error: 'size.kind must be "alloy", "core-shell", "core-shell-overall" or "single-metal"' },
@@ -90,10 +106,10 @@ export type SizeTarget = z.infer<typeof sizeSchema>;
 export const amountSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('total-metal'), totalMetalMmol: positive('total metal', 'mmol') }),
+    z.object({ kind: z.literal('total-metal'), totalMetalMmol: positive('total metal', 'mmol', AMOUNT_MMOL) }),
     z.object({
       kind: z.literal('particle-concentration'),
-      particlesPerMl: positive('particle concentration', 'particles/mL'),
+      particlesPerMl: positive('particle concentration', 'particles/mL', PARTICLES_PER_ML),
     }),
   ],
   { error: 'amount.kind must be "total-metal" or "particle-concentration"' },
@@ -104,14 +120,14 @@ export const seedsSchema = z
   .object({
     metal: metalSymbol,
     /** Seed diameter; filled from the seed batch when `seedBatchId` is given. */
-    diameterNm: positive('seed diameter', 'nm').optional(),
+    diameterNm: positive('seed diameter', 'nm', DIAMETER_NM).optional(),
     /** Seed concentration as particles per mL … */
-    particlesPerMl: positive('seed concentration', 'particles/mL').optional(),
+    particlesPerMl: positive('seed concentration', 'particles/mL', PARTICLES_PER_ML).optional(),
     /** … or as the metal-atom concentration of the seed dispersion (mM). */
-    metalMm: positive('seed metal concentration', 'mM').optional(),
-    volumeMl: positive('seed volume', 'mL'),
+    metalMm: positive('seed metal concentration', 'mM', STOCK_MM).optional(),
+    volumeMl: positive('seed volume', 'mL', VOLUME_ML),
     /** Batch the seeds come from (lineage); its measured size and concentration take precedence. */
-    seedBatchId: z.number().int().positive().optional(),
+    seedBatchId: idSchema.optional(),
   })
   .superRefine((value, ctx) => {
     if (value.seedBatchId !== undefined) return;
@@ -135,24 +151,24 @@ export const precursorChoiceSchema = z.object({
   element: metalSymbol,
   reagentKey,
   /** Stock solution concentration (mM of the reagent); gives the volume to pipette. */
-  stockMm: positive('stock concentration', 'mM').optional(),
+  stockMm: positive('stock concentration', 'mM', STOCK_MM).optional(),
 });
 
 export const reducerChoiceSchema = z.object({
   reagentKey,
   /** Multiple of the stoichiometric amount from the electron balance (chemist's choice). */
-  excess: positive('reducer excess', '×').default(1),
-  stockMm: positive('stock concentration', 'mM').optional(),
+  excess: positive('reducer excess', '×', { least: 0.01, max: 1000 }).default(1),
+  stockMm: positive('stock concentration', 'mM', STOCK_MM).optional(),
 });
 
 export const cappingChoiceSchema = z
   .object({
     reagentKey,
     /** Capping agent per metal, mol/mol (PVP: monomer units per metal atom) … */
-    molPerMolMetal: positive('capping ratio', 'mol/mol metal').optional(),
+    molPerMolMetal: positive('capping ratio', 'mol/mol metal', { least: 1e-6, max: 10_000 }).optional(),
     /** … or its final concentration in the batch (mM). */
-    concentrationMm: positive('capping concentration', 'mM').optional(),
-    stockMm: positive('stock concentration', 'mM').optional(),
+    concentrationMm: positive('capping concentration', 'mM', STOCK_MM).optional(),
+    stockMm: positive('stock concentration', 'mM', STOCK_MM).optional(),
   })
   .superRefine((value, ctx) => {
     const given = (value.molPerMolMetal !== undefined ? 1 : 0) + (value.concentrationMm !== undefined ? 1 : 0);
@@ -167,13 +183,13 @@ export const cappingChoiceSchema = z
 export const solventChoiceSchema = z.object({
   reagentKey,
   /** Volume of solvent (mL); omitted for water, which makes the batch up to its volume. */
-  volumeMl: positive('solvent volume', 'mL').optional(),
+  volumeMl: positive('solvent volume', 'mL', VOLUME_ML).optional(),
 });
 
 export const additiveChoiceSchema = z.object({
   reagentKey,
-  amountMmol: positive('additive amount', 'mmol'),
-  stockMm: positive('stock concentration', 'mM').optional(),
+  amountMmol: positive('additive amount', 'mmol', AMOUNT_MMOL),
+  stockMm: positive('stock concentration', 'mM', STOCK_MM).optional(),
 });
 
 export const stockRecordSchema = z.object({
@@ -181,7 +197,7 @@ export const stockRecordSchema = z.object({
   /** When the stock solution was made (ISO 8601 date-time). */
   preparedAt: z.iso.datetime({ error: 'must be an ISO date-time such as 2025-03-01T09:30:00Z', offset: true }),
   /** Override of the catalog's freshness limit (hours). */
-  freshnessHours: positive('freshness limit', 'h').optional(),
+  freshnessHours: positive('freshness limit', 'h', { least: 0.01, max: 100_000 }).optional(),
 });
 export type StockRecord = z.infer<typeof stockRecordSchema>;
 
@@ -194,7 +210,7 @@ export const batchDesignInputSchema = z.object({
   size: sizeSchema,
   /** Not used by seed-mediated growth (the seeds fix the particle count). */
   amount: amountSchema.optional(),
-  batchVolumeMl: positive('batch volume', 'mL'),
+  batchVolumeMl: positive('batch volume', 'mL', VOLUME_ML),
   seeds: seedsSchema.optional(),
   precursors: z
     .array(precursorChoiceSchema)
@@ -211,7 +227,7 @@ export const batchDesignInputSchema = z.object({
     .max(400, 'must be ≤ 400 °C')
     .optional(),
   /** Lattice constants (nm) by element symbol; the service fills them from the element table. */
-  latticeNm: z.record(z.string(), positive('lattice constant', 'nm')).default({}),
+  latticeNm: z.record(z.string(), positive('lattice constant', 'nm', { least: 0.1, max: 1 })).default({}),
   stocks: z.array(stockRecordSchema).default([]),
 });
 export type BatchDesignInput = z.output<typeof batchDesignInputSchema>;

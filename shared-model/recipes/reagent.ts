@@ -70,8 +70,12 @@ export interface Reagent extends ReagentInput {
   notes: string;
 }
 
-const finitePositive = (what: string) =>
-  z.number({ error: `${what} must be a number` }).positive(`${what} must be greater than 0`);
+/** Above 0 and at least `least` (a floor that keeps amounts computed from it finite); z.number() refuses ±Infinity. */
+const finitePositive = (what: string, least: number, unit: string) =>
+  z
+    .number({ error: `${what} must be a number` })
+    .positive(`${what} must be greater than 0`)
+    .min(least, `${what} must be at least ${least} ${unit}`);
 
 const keySchema = z
   .string({ error: 'must be text' })
@@ -104,10 +108,13 @@ export const reagentInputSchema = z
       .array(z.enum(REAGENT_ROLES, { error: `must be one of: ${REAGENT_ROLES.join(', ')}` }))
       .min(1, 'needs at least one role'),
     form: z.enum(REAGENT_FORMS, { error: `must be one of: ${REAGENT_FORMS.join(', ')}` }),
-    assayWtPct: finitePositive('assay').max(100, 'assay must be at most 100 %').default(100),
-    densityGPerMl: finitePositive('density').max(25, 'density must be below 25 g/mL').nullable().optional(),
+    assayWtPct: finitePositive('assay', 0.01, '%').max(100, 'assay must be at most 100 %').default(100),
+    densityGPerMl: finitePositive('density', 0.01, 'g/mL')
+      .max(25, 'density must be below 25 g/mL')
+      .nullable()
+      .optional(),
     metal: reagentMetalSchema.nullable().optional(),
-    metalContentWtPct: finitePositive('metal content')
+    metalContentWtPct: finitePositive('metal content', 0.01, '%')
       .max(100, 'metal content must be at most 100 %')
       .nullable()
       .optional(),
@@ -120,7 +127,10 @@ export const reagentInputSchema = z
     wasteStream: z.enum(Object.keys(WASTE_STREAMS) as [WasteStreamId, ...WasteStreamId[]], {
       error: `must be one of: ${Object.keys(WASTE_STREAMS).join(', ')}`,
     }),
-    stockFreshnessHours: finitePositive('freshness limit').nullable().optional(),
+    stockFreshnessHours: finitePositive('freshness limit', 0.01, 'h')
+      .max(100_000, 'freshness limit must be at most 100000 h')
+      .nullable()
+      .optional(),
     amountUnitNote: z.string().max(200).nullable().optional(),
     notes: z.string().max(2000, 'must be at most 2000 characters').default(''),
     source: z.string().max(500).default(CLASSIFICATION_SOURCE_NOTE),
