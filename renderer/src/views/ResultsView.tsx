@@ -1,6 +1,7 @@
 /**
  * Results: what characterization showed for each made batch (TEM sizes, composition, EDX line scans, the
- * observed architecture) and, per campaign, predictions against outcomes with a confusion matrix.
+ * observed architecture) and, per campaign, predictions against outcomes with a confusion matrix, and the
+ * import of a history table of past syntheses (Import history).
  */
 import { useCallback, useEffect, useState } from 'react';
 import { useQuery } from '../api/hooks';
@@ -8,6 +9,7 @@ import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
 import { CampaignResults } from './results/CampaignResults';
 import { CompositionPanel } from './results/CompositionPanel';
+import { HistoryImportPanel } from './results/HistoryImportPanel';
 import { LineScanPanel } from './results/LineScanPanel';
 import { ObservedPanel } from './results/ObservedPanel';
 import { SizesPanel } from './results/SizesPanel';
@@ -41,7 +43,7 @@ function BatchResults(props: { batchId: number; revision: number; onChanged: () 
 
 export function ResultsView() {
   const { campaignId, revision, bumpRevision } = useAppState();
-  const [mode, setMode] = useState<'batch' | 'campaign'>('batch');
+  const [mode, setMode] = useState<'batch' | 'campaign' | 'history'>('batch');
   const [batchId, setBatchId] = useState<number | null>(null);
   const batches = useQuery('batches.list', campaignId !== null ? { campaignId } : {}, `${campaignId}:${revision}`);
   const list = batches.data ?? [];
@@ -69,6 +71,14 @@ export function ResultsView() {
             disabled={campaignId === null}
           >
             Per campaign
+          </button>
+          <button
+            type="button"
+            aria-pressed={mode === 'history'}
+            onClick={() => setMode('history')}
+            disabled={campaignId === null}
+          >
+            Import history
           </button>
         </div>
       </header>
@@ -100,6 +110,8 @@ export function ResultsView() {
           ) : null}
           {batchId !== null ? <BatchResults batchId={batchId} revision={revision} onChanged={bumpRevision} /> : null}
         </>
+      ) : mode === 'history' && campaignId !== null ? (
+        <HistoryImportPanel campaignId={campaignId} revision={revision} onChanged={bumpRevision} />
       ) : campaignId !== null ? (
         <CampaignResults campaignId={campaignId} revision={revision} onOpenBatch={openBatch} />
       ) : (
