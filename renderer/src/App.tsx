@@ -16,13 +16,17 @@ function initialView(): string {
 
 function CampaignBadge() {
   const { campaignId, selectCampaign, revision } = useAppState();
-  const campaigns = useQuery('campaigns.list', { includeArchived: true }, `badge:${revision}`);
+  const key = `badge:${revision}`;
+  const campaigns = useQuery('campaigns.list', { includeArchived: true }, key);
   const current = campaigns.data?.find((campaign) => campaign.id === campaignId);
   // Whatever view opens first, work in the most recently used active campaign until the user picks another.
   const fallbackId = campaigns.data?.find((campaign) => !campaign.archived)?.id ?? null;
+  // Only a list loaded after the last change may overrule the choice: a campaign just created (selected and
+  // the revision bumped together) is not yet in the list loaded before it.
+  const fresh = campaigns.loadedKey === key;
   useEffect(() => {
-    if (campaigns.data && !current && fallbackId !== null) selectCampaign(fallbackId);
-  }, [campaigns.data, current, fallbackId, selectCampaign]);
+    if (fresh && campaigns.data && !current && fallbackId !== null) selectCampaign(fallbackId);
+  }, [fresh, campaigns.data, current, fallbackId, selectCampaign]);
   return (
     <div className="sidebar__campaign" data-testid="current-campaign">
       <span className="sidebar__caption">Campaign</span>

@@ -7,6 +7,8 @@ export interface QueryState<T> {
   data: T | null;
   error: ApiError | null;
   loading: boolean;
+  /** The `key` the shown data (or error) was loaded for: stale while it differs from the key passed now. */
+  loadedKey: string | null;
   reload: () => void;
 }
 
@@ -19,6 +21,7 @@ export function useQuery<Name extends OperationName>(
   const [data, setData] = useState<OperationOutput<Name> | null>(null);
   const [error, setError] = useState<ApiError | null>(null);
   const [loading, setLoading] = useState(false);
+  const [loadedKey, setLoadedKey] = useState<string | null>(null);
   const [tick, setTick] = useState(0);
   const inputRef = useRef(input);
   inputRef.current = input;
@@ -34,6 +37,7 @@ export function useQuery<Name extends OperationName>(
       (result) => {
         if (!live) return;
         setLoading(false);
+        setLoadedKey(key);
         if (result.ok) {
           setData(result.value);
           setError(null);
@@ -42,6 +46,7 @@ export function useQuery<Name extends OperationName>(
       (failure: unknown) => {
         if (!live) return;
         setLoading(false);
+        setLoadedKey(key);
         setError({ code: 'internal', message: String(failure) });
       },
     );
@@ -50,7 +55,7 @@ export function useQuery<Name extends OperationName>(
     };
   }, [name, key, tick]);
   const reload = useCallback(() => setTick((value) => value + 1), []);
-  return { data, error, loading, reload };
+  return { data, error, loading, loadedKey, reload };
 }
 
 /** Field-level errors from an API error: `errors.name` holds the message for the input named "name". */

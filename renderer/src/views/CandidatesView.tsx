@@ -1,15 +1,27 @@
 /**
  * Candidates: every pair of an element set scored for a target architecture, recomputed as the user
  * types (the model runs here, in the page; it is the same shared-model code the API runs). Sortable,
- * filterable table; ↑/↓ move through the rows, Enter opens the pair detail with its isotherms.
+ * filterable table; ↑/↓ move through the rows, Enter (or a click) opens the pair detail with its isotherms,
+ * scrolled into view. Starts from the current campaign's elements, its own pairs marked; every metal is one
+ * click away. A large set (all 30 metals: 435 pairs) is recomputed after a pause in typing, not on each key.
  */
-import { useMemo, useState, type KeyboardEvent } from 'react';
+import { useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { DomainError } from '../../../shared-model/api/result';
 import { METAL_SYMBOLS } from '../../../shared-model/elements/symbols';
 import type { Prediction } from '../../../shared-model/prediction/predict';
 import { describeRankTarget, rankPairs, splitByTarget, type RankTarget } from '../../../shared-model/prediction/rank';
+import { useQuery } from '../api/hooks';
+import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
+import {
+  ALL_METALS_TEXT,
+  campaignElementsText,
+  campaignPairNames,
+  DEFAULT_ELEMENTS_TEXT,
+  pairCountOf,
+  recomputeDelayMs,
+} from './candidates/candidates-scope';
 import { PairDetail } from './PairDetail';
 import { ConditionsBar, parseElementList, useConditions } from './prediction-conditions';
 
@@ -90,9 +102,43 @@ const CLOSEST = 3;
 
 const fmt = (x: number, digits = 2) => (x >= 0 ? '+' : '−') + Math.abs(x).toFixed(digits);
 
+/** `value`, held back until it has not changed for `delayMs` (at once when `delayMs` is 0). */
+function useSettled<T>(value: T, delayMs: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    if (delayMs === 0) {
+      setSettled(value);
+      return;
+    }
+    const timer = window.setTimeout(() => setSettled(value), delayMs);
+    return () => window.clearTimeout(timer);
+  }, [value, delayMs]);
+  return delayMs === 0 ? value : settled;
+}
+
 export function CandidatesView() {
   const conditionsState = useConditions();
-  const [elementsText, setElementsText] = useState('Pt, Pd, Au, Ag, Ni, Cu, Co');
+  const { campaignId, revision } = useAppState();
+  const campaign = useQuery(
+    'campaigns.list',
+    campaignId === null ? null : { includeArchived: true },
+    `c-${campaignId}-${revision}`,
+  );
+  const campaignName = (campaign.data ?? []).find((c) => c.id === campaignId)?.name ?? null;
+  const pairs = useQuery('pairs.list', campaignId === null ? null : { campaignId }, `p-${campaignId}-${revision}`);
+  const campaignPairs = campaignId === null ? [] : (pairs.data ?? []);
+  const ownElements = campaignElementsText(campaignPairs);
+  const ownPairs = useMemo(() => campaignPairNames(campaignPairs), [campaignPairs]);
+  const [elementsText, setElementsText] = useState(DEFAULT_ELEMENTS_TEXT);
+  // the campaign's elements become the set whenever the campaign (or its list of elements) changes
+  const started = useRef<string | null>(null);
+  useEffect(() => {
+    if (pairs.data === null && campaignId !== null) return;
+    const key = `${campaignId}:${ownElements}`;
+    if (started.current === key) return;
+    started.current = key;
+    if (ownElements.split(',').length >= 2) setElementsText(ownElements);
+  }, [campaignId, ownElements, pairs.data]);
   const [targetKind, setTargetKind] = useState<TargetKind>('alloy');
   const [shell, setShell] = useState('Pt');
   const [filter, setFilter] = useState('');
@@ -100,15 +146,29 @@ export function CandidatesView() {
   const [cursor, setCursor] = useState(0);
   const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
   const [showRest, setShowRest] = useState(false);
-  const conditions = conditionsState.conditions;
+  const detailRef = useRef<HTMLDivElement | null>(null);
+  // the question as typed, recomputed at once for a small set, after a pause in typing for a large one
+  const typed = useMemo(
+    () => ({ conditions: conditionsState.conditions, elementsText, targetKind, shell }),
+    [conditionsState.conditions, elementsText, targetKind, shell],
+  );
+  const typedElements = parseElementList(elementsText);
+  const settled = useSettled(typed, recomputeDelayMs(pairCountOf(typedElements)));
+  const conditions = settled.conditions;
+  const pending = settled !== typed;
+
+  useEffect(() => {
+    if (open) detailRef.current?.scrollIntoView({ block: 'start', behavior: 'auto' });
+  }, [open]);
 
   const ranking = useMemo((): Ranking => {
     const none: Ranking = { meeting: [], missing: [], errors: {}, target: '' };
     if (conditions === null) return none;
     try {
-      const target = toTarget(targetKind, shell);
+      const target = toTarget(settled.targetKind, settled.shell);
       // the question asked: only the pairs that meet the target (as the API answers); the rest on request
-      const { meeting, missing } = splitByTarget(rankPairs(parseElementList(elementsText), target, conditions), target);
+      const ranked = rankPairs(parseElementList(settled.elementsText), target, conditions);
+      const { meeting, missing } = splitByTarget(ranked, target);
       return {
         meeting: meeting.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction, miss: null })),
         missing: missing.map((r) => ({ rank: r.rank, score: r.score, p: r.prediction, miss: r.miss })),
@@ -120,7 +180,7 @@ export function CandidatesView() {
       const field = error.field === 'target' ? 'shell' : 'elements';
       return { ...none, errors: { [field]: error.message } };
     }
-  }, [conditions, elementsText, targetKind, shell]);
+  }, [conditions, settled]);
 
   const noneMeets = ranking.target !== '' && ranking.meeting.length === 0;
   const shown = useMemo(
@@ -171,9 +231,34 @@ export function CandidatesView() {
         <h1>Candidates</h1>
         <p className="muted">
           Which element goes to the surface of each pair, how much, and why — Miedema mixing, Wynblatt–Ku segregation
-          terms and a Langmuir–McLean surface/core balance for a particle of this size. Recomputed as you type.
+          terms and a Langmuir–McLean surface/core balance for a particle of this size. Recomputed as you type (for a
+          large set, after a short pause).
         </p>
       </div>
+      <p className="small" data-testid="candidates-scope">
+        {elementsText.trim().toLowerCase() === ALL_METALS_TEXT ? (
+          <>Every pair of all {METAL_SYMBOLS.length} metals. </>
+        ) : campaignName !== null && ownElements !== '' && elementsText === ownElements ? (
+          <>
+            The elements of <strong>{campaignName}</strong> ({campaignPairs.length}{' '}
+            {campaignPairs.length === 1 ? 'pair' : 'pairs'} of its own, marked “in campaign”).{' '}
+          </>
+        ) : campaignId === null ? (
+          <>No campaign chosen: a default set of seven metals. </>
+        ) : ownElements === '' ? (
+          <>This campaign has no pairs yet: a default set of seven metals. </>
+        ) : null}
+        {elementsText.trim().toLowerCase() !== ALL_METALS_TEXT ? (
+          <button type="button" className="button--quiet" onClick={() => setElementsText(ALL_METALS_TEXT)}>
+            All {METAL_SYMBOLS.length} metals
+          </button>
+        ) : null}
+        {ownElements !== '' && elementsText !== ownElements ? (
+          <button type="button" className="button--quiet" onClick={() => setElementsText(ownElements)}>
+            Back to the campaign&apos;s elements ({ownElements})
+          </button>
+        ) : null}
+      </p>
       <div className="card">
         <div className="form-grid" role="group" aria-label="Pairs and target">
           <Field
@@ -218,6 +303,12 @@ export function CandidatesView() {
             ({ranking.meeting.length} of {ranking.meeting.length + ranking.missing.length} pairs meet the target;{' '}
             {visible.length} shown; ↑/↓ to move, Enter to open)
           </span>
+          {pending ? (
+            <span className="muted small" data-testid="ranking-pending">
+              {' '}
+              recomputing when you pause…
+            </span>
+          ) : null}
         </h2>
         {noneMeets ? (
           <Banner tone="info">
@@ -288,6 +379,11 @@ export function CandidatesView() {
                   <td>{row.rank}</td>
                   <th scope="row" className="pair-symbol">
                     {row.p.pair}
+                    {ownPairs.has(row.p.pair) ? (
+                      <span className="tag" data-testid="in-campaign" style={{ marginLeft: 6 }}>
+                        in campaign
+                      </span>
+                    ) : null}
                   </th>
                   <td>{row.score.toFixed(3)}</td>
                   <td>{row.p.architecture}</td>
@@ -314,9 +410,11 @@ export function CandidatesView() {
           </table>
         </div>
       </div>
-      {open && conditions ? (
-        <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} />
-      ) : null}
+      <div ref={detailRef} style={{ scrollMarginTop: 8 }} data-testid="pair-detail-anchor">
+        {open && conditions ? (
+          <PairDetail elementA={open.a} elementB={open.b} conditions={conditions} onClose={() => setOpen(null)} />
+        ) : null}
+      </div>
     </div>
   );
 }
