@@ -3,23 +3,44 @@
  * this boundary so its wiring can be unit-tested with a stand-in (the Electron binary cannot be
  * downloaded on every machine); at run time the real 'electron' module is passed in.
  */
+/** The frame that sent an IPC message: `parent` is null for a window's main frame. */
+export interface SenderFrameLike {
+  url: string;
+  parent: unknown;
+}
+
 export interface IpcMainEventLike {
-  senderFrame: { url: string } | null;
+  senderFrame: SenderFrameLike | null;
   sender: { id: number };
   returnValue: unknown;
 }
 
 export interface IpcMainInvokeEventLike {
-  senderFrame: { url: string } | null;
+  senderFrame: SenderFrameLike | null;
   sender: { id: number };
 }
 
-export interface WebContentsLike {
+/** A navigation Electron asks about (will-navigate, will-redirect, will-frame-navigate): `url` is where it goes. */
+export interface NavigationEventLike {
+  url: string;
+  preventDefault(): void;
+}
+
+/** What every webContents (the window's and any other) offers for hardening (see hardenWebContents). */
+export interface GuardedContentsLike {
+  on(
+    event: 'will-navigate' | 'will-redirect' | 'will-frame-navigate',
+    listener: (event: NavigationEventLike) => void,
+  ): void;
+  on(event: 'will-attach-webview', listener: (event: { preventDefault(): void }) => void): void;
+  on(event: 'devtools-opened', listener: () => void): void;
+  setWindowOpenHandler(handler: (details: { url: string }) => { action: 'deny' | 'allow' }): void;
+  closeDevTools(): void;
+}
+
+export interface WebContentsLike extends GuardedContentsLike {
   id: number;
   mainFrame: { url: string };
-  on(event: 'will-navigate', listener: (event: { preventDefault(): void }, url: string) => void): void;
-  on(event: 'will-attach-webview', listener: (event: { preventDefault(): void }) => void): void;
-  setWindowOpenHandler(handler: (details: { url: string }) => { action: 'deny' | 'allow' }): void;
   printToPDF(options: { printBackground?: boolean; pageSize?: PaperSize }): Promise<Uint8Array>;
 }
 
@@ -28,7 +49,7 @@ export type PaperSize = 'A0' | 'A1' | 'A2' | 'A3' | 'A4' | 'A5' | 'A6' | 'Legal'
 
 export interface BrowserWindowLike {
   webContents: WebContentsLike;
-  loadFile(path: string): Promise<void>;
+  loadURL(url: string): Promise<void>;
   once(event: 'ready-to-show', listener: () => void): void;
   show(): void;
 }
@@ -51,6 +72,7 @@ export interface BrowserWindowOptions {
     allowRunningInsecureContent: boolean;
     webviewTag: boolean;
     spellcheck: boolean;
+    devTools: boolean;
   };
 }
 
@@ -90,11 +112,28 @@ export interface ElectronBoundary<W extends BrowserWindowLike = BrowserWindowLik
     whenReady(): Promise<void>;
     getPath(name: 'userData'): string;
     getVersion(): string;
-    on(event: 'window-all-closed' | 'activate' | 'web-contents-created', listener: (...args: never[]) => void): void;
+    on(event: 'window-all-closed' | 'activate', listener: () => void): void;
+    on(event: 'web-contents-created', listener: (event: unknown, contents: GuardedContentsLike) => void): void;
     quit(): void;
+    /** True in an installed build (electron-builder); DevTools are off there. */
+    isPackaged: boolean;
     setName?(name: string): void;
   };
   BrowserWindow: new (options: BrowserWindowOptions) => W;
+  protocol: {
+    registerSchemesAsPrivileged(
+      schemes: { scheme: string; privileges: { standard: boolean; secure: boolean; supportFetchAPI: boolean } }[],
+    ): void;
+    handle(scheme: string, handler: (request: Request) => Promise<Response>): void;
+  };
+  session: {
+    defaultSession: {
+      setPermissionRequestHandler(
+        handler: ((contents: unknown, permission: string, callback: (granted: boolean) => void) => void) | null,
+      ): void;
+      setPermissionCheckHandler(handler: ((contents: unknown, permission: string) => boolean) | null): void;
+    };
+  };
   ipcMain: {
     handle(channel: string, listener: (event: IpcMainInvokeEventLike, ...args: unknown[]) => Promise<unknown>): void;
     on(channel: string, listener: (event: IpcMainEventLike) => void): void;
@@ -113,6 +152,7 @@ export interface ElectronBoundary<W extends BrowserWindowLike = BrowserWindowLik
       options: { title: string; defaultPath: string; filters: { name: string; extensions: string[] }[] },
     ): Promise<{ canceled: boolean; filePath?: string }>;
     showMessageBox(options: { type: 'info'; title: string; message: string; detail: string }): Promise<unknown>;
+    showErrorBox(title: string, content: string): void;
   };
 }
 

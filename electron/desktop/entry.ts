@@ -8,7 +8,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { openWorkspace } from '../services/workspace';
 import type { ElectronBoundary } from './electron-boundary';
-import { wireDesktopApp } from './main';
+import { openStoreOrExplain, registerAppScheme, wireDesktopApp } from './main';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const electronModuleName = 'electron';
@@ -16,13 +16,18 @@ const electronModule = (await import(electronModuleName)) as { default?: Electro
 const electron: ElectronBoundary = electronModule.default ?? electronModule;
 
 const nativeBinding = join(here, 'native', 'better_sqlite3.node');
+registerAppScheme(electron);
 await electron.app.whenReady();
-const context = openWorkspace({
-  dataDir: electron.app.getPath('userData'),
-  migrationsDir: join(here, 'migrations'),
-  ...(existsSync(nativeBinding) ? { nativeBinding } : {}),
-});
-await wireDesktopApp(electron, context, {
-  rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'),
-  preload: join(here, 'preload.cjs'),
-});
+const context = openStoreOrExplain(electron, () =>
+  openWorkspace({
+    dataDir: electron.app.getPath('userData'),
+    migrationsDir: join(here, 'migrations'),
+    ...(existsSync(nativeBinding) ? { nativeBinding } : {}),
+  }),
+);
+if (context !== null) {
+  await wireDesktopApp(electron, context, {
+    rendererIndex: join(here, '..', 'dist', 'renderer', 'index.html'),
+    preload: join(here, 'preload.cjs'),
+  });
+}

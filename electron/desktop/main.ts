@@ -4,19 +4,20 @@
  * electron-boundary.ts) so tests can drive it without the Electron binary.
  */
 import { writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import { pathToFileURL } from 'node:url';
+import { dirname, join } from 'node:path';
 import { isOperationName, OPERATION_NAMES } from '../../shared-model/api/contract';
 import { fail } from '../../shared-model/api/result';
 import type { ServiceContext } from '../services/context';
 import { dispatch } from '../services/dispatch';
 import { shutdownServices } from '../services/lifecycle';
+import { APP_INDEX_URL, APP_SCHEME, APP_SCHEME_PRIVILEGES, appProtocolHandler, isAppUrl } from './app-protocol';
 import {
   CALL_CHANNEL,
   OPERATIONS_CHANNEL,
   PRINT_CHANNEL,
   type BrowserWindowLike,
   type ElectronBoundary,
+  type GuardedContentsLike,
   type IpcMainInvokeEventLike,
   type MenuItemTemplate,
 } from './electron-boundary';
@@ -47,20 +48,69 @@ export function isVettedExternalLink(url: string): boolean {
   }
 }
 
-/** The sender must be our window's main frame showing our own index.html. */
-export function isTrustedSender(
-  event: IpcMainInvokeEventLike,
-  window: BrowserWindowLike,
-  rendererIndex: string,
-): boolean {
+/** The sender must be our window's main frame (not a subframe) showing our own app:// page. */
+export function isTrustedSender(event: IpcMainInvokeEventLike, window: BrowserWindowLike): boolean {
   if (!event.senderFrame) return false;
+  if (event.senderFrame.parent !== null) return false;
   if (event.sender.id !== window.webContents.id) return false;
-  const expected = pathToFileURL(rendererIndex);
+  return isAppUrl(event.senderFrame.url);
+}
+
+/**
+ * Permissions the page may have: none. The app uses no camera, microphone, geolocation, notifications,
+ * clipboard reads, MIDI, HID, serial or USB; printing and file dialogs go through the main process.
+ */
+export function denyAllPermissions(electron: ElectronBoundary): void {
+  electron.session.defaultSession.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
+  electron.session.defaultSession.setPermissionCheckHandler(() => false);
+}
+
+const hardened = new WeakSet<GuardedContentsLike>();
+
+/**
+ * The same rules for every webContents the app ever creates (applied from app 'web-contents-created'):
+ * no navigation, redirect or frame navigation away from app://, no <webview>, no new windows (vetted https
+ * links go to the OS browser), and no DevTools in an installed build.
+ */
+export function hardenWebContents(electron: ElectronBoundary, contents: GuardedContentsLike): void {
+  if (hardened.has(contents)) return;
+  hardened.add(contents);
+  contents.on('will-navigate', (event) => event.preventDefault());
+  contents.on('will-redirect', (event) => {
+    if (!isAppUrl(event.url)) event.preventDefault();
+  });
+  contents.on('will-frame-navigate', (event) => {
+    if (!isAppUrl(event.url)) event.preventDefault();
+  });
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+  contents.setWindowOpenHandler(({ url }) => {
+    if (isVettedExternalLink(url)) {
+      electron.shell
+        .openExternal(url)
+        .catch((error: unknown) => console.error('[pairwright] could not open link:', error));
+    }
+    return { action: 'deny' };
+  });
+  if (electron.app.isPackaged) contents.on('devtools-opened', () => contents.closeDevTools());
+}
+
+/** Before the app is ready: app:// is a standard, secure scheme (so CSP 'self' and fetch work on it). */
+export function registerAppScheme(electron: ElectronBoundary): void {
+  electron.protocol.registerSchemesAsPrivileged([{ scheme: APP_SCHEME, privileges: { ...APP_SCHEME_PRIVILEGES } }]);
+}
+
+/**
+ * Opens the store, or tells the user in a dialog why it cannot be opened (newer version, damaged,
+ * read-only, …) — the message names the backups folder and the restore command — and quits.
+ */
+export function openStoreOrExplain<T>(electron: ElectronBoundary, open: () => T): T | null {
   try {
-    const actual = new URL(event.senderFrame.url);
-    return actual.protocol === 'file:' && actual.pathname === expected.pathname;
-  } catch {
-    return false;
+    return open();
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    electron.dialog.showErrorBox('Pairwright cannot open its store', `${message}\n\nNothing in the store was changed.`);
+    electron.app.quit();
+    return null;
   }
 }
 
@@ -95,7 +145,7 @@ export function applicationMenu(electron: ElectronBoundary, actions: MenuActions
       label: 'View',
       submenu: [
         { role: 'reload' },
-        { role: 'toggleDevTools' },
+        ...(electron.app.isPackaged ? [] : [{ role: 'toggleDevTools' } as const]),
         { type: 'separator' },
         { role: 'resetZoom' },
         { role: 'zoomIn' },
@@ -138,8 +188,11 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(
   context: ServiceContext,
   paths: DesktopPaths,
 ): Promise<DesktopApp> {
-  const { app, BrowserWindow, ipcMain, Menu, shell, dialog } = electron;
+  const { app, BrowserWindow, ipcMain, Menu, shell, dialog, protocol } = electron;
   await app.whenReady();
+  denyAllPermissions(electron);
+  app.on('web-contents-created', (_event, contents) => hardenWebContents(electron, contents));
+  protocol.handle(APP_SCHEME, appProtocolHandler(dirname(paths.rendererIndex)));
   const window = new BrowserWindow({
     width: 1400,
     height: 900,
@@ -158,33 +211,24 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(
       allowRunningInsecureContent: false,
       webviewTag: false,
       spellcheck: true,
+      devTools: !app.isPackaged,
     },
   });
-
-  window.webContents.on('will-navigate', (event) => event.preventDefault());
-  window.webContents.on('will-attach-webview', (event) => event.preventDefault());
-  window.webContents.setWindowOpenHandler(({ url }) => {
-    if (isVettedExternalLink(url)) {
-      shell.openExternal(url).catch((error: unknown) => console.error('[pairwright] could not open link:', error));
-    }
-    return { action: 'deny' };
-  });
+  hardenWebContents(electron, window.webContents);
 
   ipcMain.on(OPERATIONS_CHANNEL, (event) => {
-    event.returnValue = isTrustedSender(event, window, paths.rendererIndex) ? [...OPERATION_NAMES] : [];
+    event.returnValue = isTrustedSender(event, window) ? [...OPERATION_NAMES] : [];
   });
 
   ipcMain.handle(CALL_CHANNEL, async (event, name, input) => {
-    if (!isTrustedSender(event, window, paths.rendererIndex))
-      return fail('forbidden', 'call from an untrusted frame refused');
+    if (!isTrustedSender(event, window)) return fail('forbidden', 'call from an untrusted frame refused');
     if (typeof name !== 'string' || !isOperationName(name))
       return fail('unknown_operation', `unknown operation "${String(name)}"`);
     return dispatch(context, name, input);
   });
 
   ipcMain.handle(PRINT_CHANNEL, async (event, suggestedName) => {
-    if (!isTrustedSender(event, window, paths.rendererIndex))
-      return fail('forbidden', 'call from an untrusted frame refused');
+    if (!isTrustedSender(event, window)) return fail('forbidden', 'call from an untrusted frame refused');
     const defaultName =
       typeof suggestedName === 'string' && /^[\w .-]{1,80}$/.test(suggestedName) ? suggestedName : 'pairwright.pdf';
     const choice = await dialog.showSaveDialog(window, {
@@ -231,6 +275,6 @@ export async function wireDesktopApp<W extends BrowserWindowLike>(
       .finally(() => app.quit());
   });
   window.once('ready-to-show', () => window.show());
-  await window.loadFile(paths.rendererIndex);
+  await window.loadURL(APP_INDEX_URL);
   return { window };
 }

@@ -37,6 +37,23 @@ describe('desktop packaging configuration', () => {
     expect(config.extraMetadata.main).toBe(packageJson.main);
   });
 
+  it('flips the Electron fuses that lock the installed app down', async () => {
+    // Electron's fuses (https://www.electronjs.org/docs/latest/tutorial/fuses), applied by electron-builder.
+    const config = await getConfig(root, join(root, 'electron-builder.yml'), null);
+    expect(config.electronFuses).toEqual({
+      runAsNode: false,
+      enableCookieEncryption: true,
+      enableNodeOptionsEnvironmentVariable: false,
+      enableNodeCliInspectArguments: false,
+      enableEmbeddedAsarIntegrityValidation: true,
+      onlyLoadAppFromAsar: true,
+      grantFileProtocolExtraPrivileges: false,
+    });
+    await expect(
+      validateConfiguration({ ...config, electronFuses: { runAsNode: 'no' } } as BuilderConfig, new DebugLogger(false)),
+    ).rejects.toThrow(/runAsNode/);
+  });
+
   it('the schema check bites on an unknown key', async () => {
     const config = await getConfig(root, join(root, 'electron-builder.yml'), null);
     await expect(
