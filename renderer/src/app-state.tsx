@@ -1,10 +1,11 @@
 /**
  * App-wide selection: the campaign the user is working in (remembered between sessions), a revision
  * counter other views reload on, and hand-offs between views (a simulation requested from a pair's
- * detail, consumed once by the Simulation view).
+ * detail, consumed once by the Simulation view; a batch planned from Next batches, consumed once by Batch design).
  */
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
 import type { ParticleShape } from '../../shared-model/geometry/shapes';
+import type { SynthesisRoute } from '../../shared-model/recipes/design-input';
 
 /** A lattice Monte Carlo run asked for from another view: the Simulation form opens with these values. */
 export interface SimulationRequest {
@@ -16,6 +17,22 @@ export interface SimulationRequest {
   shape: ParticleShape;
   temperatureK: number;
   /** Where the request came from, in words ("pair detail of Pt-Ni"). */
+  source: string;
+}
+
+/** A batch asked for from another view (Next batches → Plan this): Batch design opens with these values. */
+export interface BatchPlanRequest {
+  elementA: string;
+  elementB: string;
+  /** Atomic fraction of elementB. */
+  xB: number;
+  diameterNm: number;
+  temperatureK: number;
+  route: SynthesisRoute;
+  /** The architecture aimed at, as Batch design's target ("alloy", "Ni@Pt"). */
+  targetLabel: string;
+  totalMetalMmol: number;
+  /** Where the request came from, in words. */
   source: string;
 }
 
@@ -33,6 +50,12 @@ interface AppState {
   requestSimulation: (request: SimulationRequest) => void;
   /** Called by the Simulation view once it has copied the request into its form. */
   clearPendingSimulation: () => void;
+  /** A batch asked for by another view, waiting for Batch design to take it. */
+  pendingBatchPlan: BatchPlanRequest | null;
+  /** Stores the request and opens Batch design. */
+  requestBatchPlan: (request: BatchPlanRequest) => void;
+  /** Called by Batch design once it has copied the request into its form. */
+  clearPendingBatchPlan: () => void;
 }
 
 const AppStateContext = createContext<AppState | null>(null);
@@ -48,6 +71,7 @@ export function AppStateProvider(props: { children: ReactNode }) {
   const [campaignId, setCampaignId] = useState<number | null>(rememberedCampaign);
   const [revision, setRevision] = useState(0);
   const [pendingSimulation, setPendingSimulation] = useState<SimulationRequest | null>(null);
+  const [pendingBatchPlan, setPendingBatchPlan] = useState<BatchPlanRequest | null>(null);
   const selectCampaign = useCallback((id: number | null) => {
     setCampaignId(id);
     if (id === null) window.localStorage.removeItem(STORAGE_KEY);
@@ -66,6 +90,14 @@ export function AppStateProvider(props: { children: ReactNode }) {
     [navigate],
   );
   const clearPendingSimulation = useCallback(() => setPendingSimulation(null), []);
+  const requestBatchPlan = useCallback(
+    (request: BatchPlanRequest) => {
+      setPendingBatchPlan(request);
+      navigate('batch-design');
+    },
+    [navigate],
+  );
+  const clearPendingBatchPlan = useCallback(() => setPendingBatchPlan(null), []);
   const value = useMemo(
     () => ({
       campaignId,
@@ -76,6 +108,9 @@ export function AppStateProvider(props: { children: ReactNode }) {
       pendingSimulation,
       requestSimulation,
       clearPendingSimulation,
+      pendingBatchPlan,
+      requestBatchPlan,
+      clearPendingBatchPlan,
     }),
     [
       campaignId,
@@ -86,6 +121,9 @@ export function AppStateProvider(props: { children: ReactNode }) {
       pendingSimulation,
       requestSimulation,
       clearPendingSimulation,
+      pendingBatchPlan,
+      requestBatchPlan,
+      clearPendingBatchPlan,
     ],
   );
   return <AppStateContext.Provider value={value}>{props.children}</AppStateContext.Provider>;

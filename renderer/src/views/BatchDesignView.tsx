@@ -3,7 +3,7 @@
  * save as a planned batch; move saved batches planned → made → characterized; use a batch as seeds.
  * The form's model is renderer/src/views/batch-design/batch-form.ts; its parts live beside it.
  */
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import type { BatchSummary, SavedBatch } from '../../../shared-model/api/batches';
 import type { BatchDesign } from '../../../shared-model/recipes/design';
 import { call } from '../api/client';
@@ -21,6 +21,7 @@ import {
   type BatchFormState,
 } from './batch-design/batch-form';
 import { OpenedBatchBanner } from './batch-design/OpenedBatchBanner';
+import { describePlan, formFromPlan } from './batch-design/plan-request';
 import { SavedBatches } from './batch-design/SavedBatches';
 import { BatchResult } from './BatchResult';
 import './batches.css';
@@ -43,6 +44,18 @@ export function BatchDesignView() {
   const [saved, setSaved] = useState<string | null>(null);
   const { errors, general, show, clear } = useFieldErrors();
   const catalog = useMemo(() => catalogQuery.data ?? [], [catalogQuery.data]);
+  // A batch planned from Next batches is taken once the catalog is read (for each metal's precursor).
+  const { pendingBatchPlan, clearPendingBatchPlan } = useAppState();
+  const [prefilled, setPrefilled] = useState<string | null>(null);
+  useEffect(() => {
+    if (pendingBatchPlan === null || !catalogQuery.data) return;
+    const plan = pendingBatchPlan;
+    setForm((current) => formFromPlan(current, plan, catalogQuery.data ?? []));
+    setPrefilled(describePlan(plan));
+    setDesign(null);
+    setOpened(null);
+    clearPendingBatchPlan();
+  }, [pendingBatchPlan, catalogQuery.data, clearPendingBatchPlan]);
 
   /** The request, or null after showing the input whose text is not a number. */
   const request = () => {
@@ -111,6 +124,11 @@ export function BatchDesignView() {
         <h1 id="batch-design-title">Batch design</h1>
         <span className="muted">Target particle → reagent amounts, kinetic checks and hazard cautions</span>
       </header>
+      {prefilled ? (
+        <Banner tone="info" testId="batch-prefilled">
+          {prefilled}
+        </Banner>
+      ) : null}
       <div className="split split--wide">
         <BatchForm
           form={form}
