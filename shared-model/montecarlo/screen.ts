@@ -11,7 +11,7 @@
 import { invalid } from '../api/result';
 import type { ParticleShape } from '../geometry/shapes';
 import { GUPTA_ELEMENTS, isGuptaElement } from './gupta-parameters';
-import { defaultRelaxation, planSimulation, type SimulationSpec } from './simulate';
+import { DEFAULT_STOPPING, defaultRelaxation, planSimulation, type SimulationSpec } from './simulate';
 
 export interface ScreenRequest {
   elements: readonly string[];
@@ -80,6 +80,8 @@ export function planScreen(request: ScreenRequest): ScreenPlan {
             sweeps: request.sweeps,
             seed: request.seed,
             relaxation: defaultRelaxation(a, b).mode,
+            // Each run stops at the answer (SE of the surface fraction below the target); sweeps is the cap.
+            stopping: DEFAULT_STOPPING,
           };
           planSimulation(spec);
           runs.push({ elementA: a, elementB: b, xB, diameterNm, spec });
