@@ -2,7 +2,7 @@ import { defineConfig } from 'vitest/config';
 import { TIMEOUTS } from './test/support/timeouts.ts';
 
 // Tiers (DEVELOPERS.md "Tests"): `npm run test:unit` runs the unit project only (model, db, services, renderer form models: no
-// browser, no child processes); `npm test` runs all three.
+// browser, no child processes, no long Monte Carlo validation runs); `npm test` runs every project.
 const UNIT = [
   'test/shared-model/**/*.test.ts',
   'test/db/**/*.test.ts',
@@ -11,7 +11,15 @@ const UNIT = [
   'test/renderer/**/*.test.ts',
 ];
 // Lints and compiles fixtures in child processes: tooling, not the model.
-const UNIT_EXCLUDE = ['test/shared-model/layer-rules.test.ts'];
+const TOOLING = ['test/shared-model/layer-rules.test.ts'];
+// Whole Monte Carlo runs checked against published results (surface enrichment, demixing, detailed balance,
+// the stopping rule): minutes of CPU, so they run in `npm test` (the physics project), not in the fast tier.
+const PHYSICS = [
+  'test/shared-model/montecarlo/simulate.test.ts',
+  'test/shared-model/montecarlo/relaxed-simulation.test.ts',
+  'test/shared-model/montecarlo/swap-engine.test.ts',
+];
+const UNIT_EXCLUDE = [...TOOLING, ...PHYSICS];
 
 export default defineConfig({
   test: {
@@ -30,14 +38,10 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'integration',
-          include: [
-            'test/electron/**/*.test.ts',
-            'test/reference/**/*.test.ts',
-            'test/types/**/*.test.ts',
-            ...UNIT_EXCLUDE,
-          ],
+          include: ['test/electron/**/*.test.ts', 'test/reference/**/*.test.ts', 'test/types/**/*.test.ts', ...TOOLING],
         },
       },
+      { extends: true, test: { name: 'physics', include: PHYSICS } },
       // Attacks, crashes, fuzzing (`npm run test:trust`; .ci/run runs them through `npm test`).
       { extends: true, test: { name: 'trust', include: ['test/trust/**/*.test.ts'] } },
       {
