@@ -2,8 +2,8 @@
  * Backups on request and the kept-backups setting. Automatic backups (before migrations, daily on first open)
  * are taken by the store itself (db/store.ts); restore runs with the store closed (services/workspace.ts).
  */
-import { existsSync } from 'node:fs';
-import { isAbsolute, join, resolve } from 'node:path';
+import { existsSync, statSync } from 'node:fs';
+import { dirname, isAbsolute, join, resolve } from 'node:path';
 import { backupFileName, backupToFile, ensureBackupsDir, listBackups, pruneBackups } from '../../db/backup';
 import { backupsDirOf } from '../../db/integrity';
 import { backupsKept, BACKUPS_KEPT_KEY, writeSetting } from '../../db/repositories/settings';
@@ -22,7 +22,17 @@ export const backupHandlers: HandlerMap<'backups.list' | 'backups.create' | 'bac
       const target = resolve(to);
       if (target === store.path) throw invalid('to', 'that is the store itself; choose another file');
       if (existsSync(target)) throw invalid('to', `${target} already exists; choose a new file name`);
-      return { path: target, bytes: await backupToFile(store.db, target) };
+      const folder = dirname(target);
+      if (!existsSync(folder) || !statSync(folder).isDirectory())
+        throw invalid('to', `the folder ${folder} does not exist; create it first or choose another`);
+      try {
+        return { path: target, bytes: await backupToFile(store.db, target) };
+      } catch (error) {
+        const code = (error as NodeJS.ErrnoException).code;
+        if (code === 'EACCES' || code === 'EPERM' || code === 'EROFS' || code === 'ENAMETOOLONG' || code === 'ENOSPC')
+          throw invalid('to', `cannot write the backup to ${target} (${code}); choose another file`);
+        throw error;
+      }
     }
     const version = store.db.pragma('user_version', { simple: true }) as number;
     const target = join(ensureBackupsDir(store.dataDir), backupFileName(version, 'manual'));

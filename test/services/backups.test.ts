@@ -10,6 +10,7 @@ import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openStore, STORE_FILE_NAME, type Store } from '../../db/store';
 import { runCli } from '../../electron/cli/main';
+import { dispatch } from '../../electron/services/dispatch';
 import { restoreWorkspace } from '../../electron/services/workspace';
 import { dispatchValue } from '../support/dispatch';
 import { dumpTables } from '../support/table-dump';
@@ -142,5 +143,19 @@ describe('backup and restore', () => {
     await expect(dispatchValue(context, 'backups.create', { to: taken })).rejects.toThrow(/already exists/);
     await expect(dispatchValue(context, 'backups.create', { to: 'relative.sqlite' })).rejects.toThrow(/absolute path/);
     await expect(dispatchValue(context, 'backups.setKeep', { keep: 0 })).rejects.toThrow(/at least 1/);
+  });
+
+  it('refuses a backup into a folder that does not exist as a field error, not an internal one', async () => {
+    const context = { store: open() };
+    const folder = join(outside, 'no-such-folder');
+    const answer = await dispatch(context, 'backups.create', { to: join(folder, 'b.sqlite') });
+    expect(answer).toEqual({
+      ok: false,
+      error: {
+        code: 'invalid_input',
+        field: 'to',
+        message: `the folder ${folder} does not exist; create it first or choose another`,
+      },
+    });
   });
 });

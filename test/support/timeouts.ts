@@ -14,4 +14,6 @@ export const TIMEOUTS = {
   pageActionMs: 15_000,
   /** A wait for background work seen through the page: a Monte Carlo run, a demo build, line-scan fits. */
   longWaitMs: 60_000,
+  /** One operation's fuzz run in the trust suite (1,000 generated inputs in CI, each within its own 2 s budget). */
+  fuzzOperationMs: 180_000,
 } as const;
