@@ -65,9 +65,15 @@ export const pairTextSchema = z.string({ error: 'must be a pair like "Pt-Ni"' })
     return z.NEVER;
   }
   const [a, b] = parts;
-  for (const symbol of parts) {
+  // an unknown element is the fault of that element (field pair.elementA / pair.elementB), not of the pair
+  for (const [index, symbol] of parts.entries()) {
     if (!isMetalSymbol(symbol)) {
-      ctx.addIssue({ code: 'custom', message: `unknown element "${symbol}" in pair "${text}"` });
+      const which = index === 0 ? 'first' : 'second';
+      ctx.addIssue({
+        code: 'custom',
+        path: [index === 0 ? 'elementA' : 'elementB'],
+        message: `The ${which} element of "${text}" is not one of Pairwright's metals: unknown element "${symbol}"; known metals: ${METAL_SYMBOLS.join(' ')}`,
+      });
       return z.NEVER;
     }
   }

@@ -15,6 +15,7 @@ import {
 } from '../hazards/ghs';
 import { HAZARD_TAGS, type HazardTag } from '../hazards/incompatibilities';
 import { WASTE_STREAMS, type WasteStreamId } from '../hazards/waste';
+import { fieldWords, userMessage } from '../api/issue-message';
 import { DomainError, invalid } from '../api/result';
 import { parseFormula } from './formula';
 import { REDUCTION_COUPLES } from './potentials';
@@ -241,7 +242,8 @@ export function prepareReagent(input: unknown): Reagent {
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
     const field = issue ? issue.path.map(String).join('.') : 'reagent';
-    throw invalid(field || 'reagent', `${field ? `${field}: ` : ''}${issue?.message ?? 'invalid reagent'}`);
+    const words = issue ? fieldWords(issue.path) : '';
+    throw invalid(field || 'reagent', userMessage(words, issue?.message ?? 'the reagent was refused', 'reagent'));
   }
   const value = parsed.data;
   const formula = parseFormula(value.formula, 'formula');

@@ -42,7 +42,8 @@ describe.skipIf(!available)('campaigns in the browser host', () => {
     await openApp(page, host);
     await page.getByRole('button', { name: 'Create campaign' }).click();
     const error = page.locator('[data-error-for="name"]');
-    await expect.poll(() => error.textContent()).toMatch(/must not be empty/);
+    // the message speaks to the user, no code path in front ("name: must not be empty")
+    await expect.poll(() => error.textContent()).toBe('Give the campaign a name');
     expect(host.count('campaigns')).toBe(0);
   });
 
@@ -66,10 +67,22 @@ describe.skipIf(!available)('campaigns in the browser host', () => {
     const campaign = await campaignWithTwoPairs(host);
     await openApp(page, host, { campaignId: campaign.id });
     await expect.poll(() => pairRows(page).count()).toBe(2);
+    // the unknown second element: its message under the second element, none under the first
     await addPair(page, 'Pt', 'Xx');
-    await expect.poll(() => page.locator('[data-error-for="pair"]').textContent()).toMatch(/unknown element "Xx"/);
+    await expect
+      .poll(() => page.locator('[data-error-for="elementB"]').textContent())
+      .toMatch(/^The second element of "Pt-Xx" is not one of Pairwright's metals: unknown element "Xx"/);
+    expect(await page.locator('[data-error-for="elementA"]').count()).toBe(0);
+    await addPair(page, 'Xx', 'Pt');
+    await expect.poll(() => page.locator('[data-error-for="elementA"]').textContent()).toMatch(/^The first element/);
+    expect(await page.locator('[data-error-for="elementB"]').count()).toBe(0);
+    // a missing element is asked for under its own field
+    await addPair(page, 'Pt', '');
+    await expect
+      .poll(() => page.locator('[data-error-for="elementB"]').textContent())
+      .toBe('Choose the second element of the pair');
     await addPair(page, 'Ni', 'Pt');
-    await expect.poll(() => page.locator('[data-error-for="pair"]').textContent()).toMatch(/already in/);
+    await expect.poll(() => page.locator('[data-error-for="elementA"]').textContent()).toMatch(/already in/);
     expect(host.count('pairs')).toBe(2);
     await page.screenshot({ path: screenshotPath('campaigns-pair-error'), fullPage: true });
   });

@@ -59,13 +59,13 @@ describe('prediction conditions form', () => {
       atPercentB: 'composition must lie strictly between 0 and 100 at.%',
     });
     expect(readConditions(withText('diameterNm', '-2')).errors).toEqual({
-      diameterNm: 'diameter, nm: must be a positive diameter in nm',
+      diameterNm: 'The diameter (nm) must be a positive diameter in nm',
     });
     expect(readConditions(withText('temperatureK', '6000')).errors).toEqual({
-      temperatureK: 'temperature, K: must be at most 5000 K',
+      temperatureK: 'The temperature (K) must be at most 5000 K',
     });
     expect(readConditions(withText('timeH', '0')).errors).toEqual({
-      timeH: 'time, h: must be a positive time in hours',
+      timeH: 'The time (h) must be a positive time in hours',
     });
   });
 

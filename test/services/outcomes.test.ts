@@ -141,7 +141,7 @@ describe('TEM sizes on a batch', () => {
     });
     expect(await recordFailure(batch.id, {})).toMatchObject({
       code: 'invalid_input',
-      message: expect.stringMatching(/^nothing to record/),
+      message: expect.stringMatching(/^Nothing to record/),
     });
   });
 });

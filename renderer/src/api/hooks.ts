@@ -58,6 +58,19 @@ export function useQuery<Name extends OperationName>(
   return { data, error, loading, loadedKey, reload };
 }
 
+/**
+ * The input an error's dotted field belongs to: an alias for the whole path, else for its longest aliased
+ * prefix ("pair.elementB" → alias of "pair" when only that is given), else the path itself.
+ */
+export function inputForField(field: string, fieldAliases: Record<string, string> = {}): string {
+  const parts = field.split('.');
+  for (let n = parts.length; n > 0; n--) {
+    const alias = fieldAliases[parts.slice(0, n).join('.')];
+    if (alias !== undefined) return alias;
+  }
+  return field;
+}
+
 /** Field-level errors from an API error: `errors.name` holds the message for the input named "name". */
 export function useFieldErrors(): {
   errors: Record<string, string>;
@@ -68,7 +81,7 @@ export function useFieldErrors(): {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [general, setGeneral] = useState<string | null>(null);
   const show = useCallback((error: ApiError, fieldAliases: Record<string, string> = {}) => {
-    const field = error.field ? (fieldAliases[error.field] ?? error.field) : null;
+    const field = error.field ? inputForField(error.field, fieldAliases) : null;
     if (field) {
       setErrors({ [field]: error.message });
       setGeneral(null);

@@ -15,6 +15,9 @@ export function targetChoices(a: string, b: string): string[] {
   return [...base, ...shells, 'Janus', 'intermetallic'];
 }
 
+/** Where a `pairs.add` error is shown: the element at fault, or the first element for the pair as a whole. */
+const PAIR_FIELD_INPUTS = { 'pair.elementA': 'elementA', 'pair.elementB': 'elementB', pair: 'elementA' };
+
 function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
   const elements = useQuery('elements.list', {}, 'elements');
   const [elementA, setElementA] = useState('');
@@ -27,7 +30,9 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
   const submit = async (event: FormEvent) => {
     event.preventDefault();
     if (!elementA || !elementB) {
-      show({ code: 'invalid_input', message: 'choose both elements of the pair', field: 'pair' });
+      const missing = !elementA ? 'elementA' : 'elementB';
+      const which = !elementA ? 'first' : 'second';
+      show({ code: 'invalid_input', message: `Choose the ${which} element of the pair`, field: missing });
       return;
     }
     const result = await call('pairs.add', {
@@ -37,7 +42,8 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
       notes,
     });
     if (!result.ok) {
-      show(result.error);
+      // an unknown element is shown under that element; a fault of the pair as a whole under the first
+      show(result.error, PAIR_FIELD_INPUTS);
       return;
     }
     clear();
@@ -58,7 +64,7 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
           </option>
         ))}
       </datalist>
-      <Field label="Element A" name="pair" error={errors.pair} hint="symbol, e.g. Pt">
+      <Field label="Element A" name="elementA" error={errors.elementA} hint="symbol, e.g. Pt">
         <input
           name="elementA"
           list="element-symbols"
@@ -67,7 +73,7 @@ function AddPairForm(props: { campaign: Campaign; onAdded: () => void }) {
           autoComplete="off"
         />
       </Field>
-      <Field label="Element B" name="elementB" hint="symbol, e.g. Ni">
+      <Field label="Element B" name="elementB" error={errors.elementB} hint="symbol, e.g. Ni">
         <input
           name="elementB"
           list="element-symbols"

@@ -4,6 +4,7 @@
  * ranges by the contract's zod schema, so the bar and the API say the same — and the copy kept for the
  * browser tab.
  */
+import { keyWords, userMessage } from '../../../shared-model/api/issue-message';
 import { conditionsSchema } from '../../../shared-model/api/prediction';
 import { isParticleShape, normaliseShapeName, type ParticleShape } from '../../../shared-model/geometry/shapes';
 import { PREDICTION_DEFAULTS, type ResolvedConditions } from '../../../shared-model/prediction/conditions';
@@ -85,9 +86,10 @@ export function readConditions(form: ConditionsForm): ConditionsReading {
   const issue = parsed.error.issues[0];
   const path = String(issue?.path[0] ?? 'xB');
   const input = CONDITION_FIELD_ALIASES[path] ?? 'atPercentB';
-  const label = LABELS[input as ConditionsTextField] ?? input;
   const message =
-    path === 'xB' ? 'composition must lie strictly between 0 and 100 at.%' : `${label}: ${issue?.message ?? 'invalid'}`;
+    path === 'xB'
+      ? 'composition must lie strictly between 0 and 100 at.%'
+      : userMessage(keyWords(path), issue?.message ?? 'was refused');
   return { conditions: null, errors: { [input]: message } };
 }
 

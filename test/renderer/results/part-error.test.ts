@@ -14,15 +14,15 @@ describe('partError', () => {
       message: 'line 3: "1O.9" in column 1 is not a number',
       field: 'csvText',
     });
-    // A zod refusal names the dotted field in front of its message.
+    // A zod refusal names the field in words (shared-model/api/issue-message.ts); the message is kept.
     const zod = {
       code: 'invalid_input' as const,
-      message: 'lineScan.probeSigmaNm: must be greater than 0',
+      message: 'The probe width σ (nm) must be greater than 0',
       field: 'lineScan.probeSigmaNm',
     };
     expect(partError(zod, 'lineScan')).toEqual({
       code: 'invalid_input',
-      message: 'probeSigmaNm: must be greater than 0',
+      message: 'The probe width σ (nm) must be greater than 0',
       field: 'probeSigmaNm',
     });
     const nested = {

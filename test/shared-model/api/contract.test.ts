@@ -26,7 +26,8 @@ describe('API contract', () => {
     expect(splitPair('pt–ni')).toEqual(['Pt', 'Ni']);
     expect(splitPair('PtNi')).toEqual(['Pt', 'Ni']);
     const unknown = validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Xx' });
-    expect(unknown).toMatchObject({ ok: false, error: { field: 'pair' } });
+    // the element at fault is named as the field (the form shows the message under that element)
+    expect(unknown).toMatchObject({ ok: false, error: { field: 'pair.elementB' } });
     if (!unknown.ok) expect(unknown.error.message).toContain('Xx');
     expect(validateInput('pairs.add', { campaignId: 1, pair: 'Pt-Pt' })).toMatchObject({
       ok: false,

@@ -176,7 +176,7 @@ describe('number bounds of every operation input', () => {
           seed: 2 ** 40,
         },
         'seed',
-        /^seed: must be a seed from 0 to 4294967295$/,
+        /^The seed must be a seed from 0 to 4294967295$/,
       ],
       [
         'batches.design',
@@ -191,13 +191,13 @@ describe('number bounds of every operation input', () => {
           precursors: [{ element: 'Au', reagentKey: 'haucl4-3h2o' }],
         },
         'batchVolumeMl',
-        /^batchVolumeMl: batch volume must be at most 100000 mL$/,
+        /^batch volume must be at most 100000 mL$/,
       ],
       [
         'prediction.predict',
         { pair: 'Au-Pd', conditions: { xB: 0.5, diameterNm: 5, temperatureK: 600, pressureBar: 1e-300 } },
         'conditions.pressureBar',
-        /^conditions\.pressureBar: must be at least 1e-15 bar$/,
+        /^The pressure \(bar\) must be at least 1e-15 bar$/,
       ],
     ];
     for (const [name, input, field, message] of cases) {
