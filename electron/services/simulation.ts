@@ -10,7 +10,7 @@ import { PARTICLE_SHAPES } from '../../shared-model/geometry/shapes';
 import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
 import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
-import { FIRE_DESCRIPTION, relaxStructure } from '../../shared-model/montecarlo/minimise';
+import { FIRE_DESCRIPTION, RELAX_WALL_BUDGET_MS, relaxStructure } from '../../shared-model/montecarlo/minimise';
 import {
   DEFAULT_STOPPING,
   ENGINE_VERSION,
@@ -107,7 +107,11 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
   },
 
   'simulation.relax': ({ xyz, forceToleranceEvPerAngstrom, maxIterations }) => {
-    const relaxed = relaxStructure(readExtendedXyz(xyz), { forceToleranceEvPerAngstrom, maxIterations });
+    const relaxed = relaxStructure(readExtendedXyz(xyz), {
+      forceToleranceEvPerAngstrom,
+      maxIterations,
+      maxWallMs: RELAX_WALL_BUDGET_MS,
+    });
     const content = writeExtendedXyz(
       { symbols: relaxed.symbols, positions: relaxed.positions },
       {

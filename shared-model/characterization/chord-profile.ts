@@ -19,7 +19,7 @@
 import { erfc } from './distributions';
 
 /** The probe kernel is cut at ±4.5σ (mass outside: 7e-6) and renormalised. */
-const KERNEL_HALF_WIDTH_SIGMAS = 4.5;
+export const KERNEL_HALF_WIDTH_SIGMAS = 4.5;
 
 /** Chord length 2√(r² − u²) through a sphere of radius r at distance u from its centre (0 outside). */
 export function sphereChordNm(uNm: number, radiusNm: number): number {

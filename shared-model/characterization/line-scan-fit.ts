@@ -21,10 +21,17 @@ import { Matrix, inverse } from 'ml-matrix';
 import { coreShellLabel, type ArchitectureLabel } from '../architecture/labels';
 import { invalid } from '../api/result';
 import { monolayerThicknessNm } from '../geometry/fcc';
-import { BlurredChordGrid, LINE_SCAN_MODELS, type LineScanModelKind, type ProfileGeometry } from './chord-profile';
+import {
+  BlurredChordGrid,
+  KERNEL_HALF_WIDTH_SIGMAS,
+  LINE_SCAN_MODELS,
+  type LineScanModelKind,
+  type ProfileGeometry,
+} from './chord-profile';
 import { MIN_LINE_SCAN_POINTS, type LineScanData } from './csv-import';
 import { median } from './size-statistics';
 import { ANALYSIS_VERSION } from './version';
+import { BudgetExceeded, BudgetMeter, type Clock, type ComputeBudget } from '../compute-budget';
 
 export interface LineScanFitOptions {
   elementA: string;
@@ -36,7 +43,21 @@ export interface LineScanFitOptions {
   latticeBNm?: number | null;
   /** Levenberg–Marquardt iterations per start (default 60). */
   maxIterations?: number;
+  /** Model evaluations and wall time of the whole fit, every model and start (default LINE_SCAN_FIT_BUDGET). */
+  budget?: ComputeBudget;
+  /** The budget's clock (tests pass their own). */
+  clock?: Clock;
 }
+
+/**
+ * A whole fit (four models, up to three starts each, 60 Levenberg–Marquardt steps of 2·p + 1 evaluations) takes
+ * at most ~3,500 model evaluations; 20,000 leaves room for the covariances. 30 s is far above the ~0.1 s a
+ * scan of a few hundred points takes (npm run bench), and keeps a pathological scan from holding a core.
+ */
+/** Model grid plus blur kernel cells: 4 million (~100 MB of work arrays) is ~20 cells per point of 200,000 points. */
+export const MAX_GRID_CELLS = 4_000_000;
+
+export const LINE_SCAN_FIT_BUDGET: ComputeBudget = Object.freeze({ maxIterations: 20_000, maxWallMs: 30_000 });
 
 export interface Estimate {
   value: number;
@@ -230,6 +251,8 @@ interface Problem {
   // work buffers
   phiA: Float64Array;
   phiB: Float64Array;
+  /** Counts every model evaluation against the fit's budget. */
+  meter: BudgetMeter;
 }
 
 interface LinearSolution {
@@ -340,6 +363,7 @@ function bounds(setup: ModelSetup, problem: Problem): { min: number[]; max: numb
 }
 
 function evaluateModel(problem: Problem, setup: ModelSetup, p: ArrayLike<number>): LinearSolution {
+  problem.meter.spend(1);
   const { geometry, sigmaNm } = decode(setup, p, problem.scaleNm);
   problem.grid.evaluate(geometry, sigmaNm, problem.phiA, problem.phiB);
   return solveLinear(problem);
@@ -418,6 +442,7 @@ function covariance(problem: Problem, fit: RawFit): { cov: Matrix | null; names:
   const J = new Matrix(2 * n, p);
   const plus = new Float64Array(2 * n);
   const weightedModel = (q: number[], out: Float64Array) => {
+    problem.meter.spend(1);
     const { geometry, sigmaNm } = decode(setup, q, L);
     problem.grid.evaluate(geometry, sigmaNm, problem.phiA, problem.phiB);
     for (let i = 0; i < n; i++) {
@@ -471,6 +496,18 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
   checkScan(scan, options);
   const notes: string[] = [];
   const n = scan.positionsNm.length;
+  const meter = new BudgetMeter(
+    options.budget ?? LINE_SCAN_FIT_BUDGET,
+    {
+      what: `the line-scan fit of ${n} points`,
+      unit: 'model evaluations',
+      advice:
+        options.probeSigmaNm === null || options.probeSigmaNm === undefined
+          ? 'bin the scan to fewer points, or give the probe σ so it is not fitted'
+          : 'bin the scan to fewer points, or check the probe σ and the position unit (nm)',
+    },
+    options.clock,
+  );
   const x = Float64Array.from(scan.positionsNm);
   const yA = Float64Array.from(scan.signalA);
   const yB = Float64Array.from(scan.signalB);
@@ -559,6 +596,21 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
       Math.ceil(stepNm / Math.min(r0 / 25, fixedSigma !== null && fixedSigma > 0 ? fixedSigma / 2 : Infinity)),
     );
   const sigmaMaxNm = Math.max(r0, 2 * stepNm);
+  // The grid and the blur kernel are sized by the cell; every model evaluation walks them. Refuse before sizing
+  // arrays when they would pass MAX_GRID_CELLS (a probe σ of 1e-6 nm once asked for 10⁸ cells and ~1 GB).
+  const padNm = rangeNm / 2 + stepNm;
+  const kernelSigmaNm = Math.max(sigmaMaxNm, fixedSigma ?? 0);
+  const gridCells = (rangeNm + 2 * padNm) / cellNm + (2 * KERNEL_HALF_WIDTH_SIGMAS * kernelSigmaNm) / cellNm;
+  if (!(gridCells <= MAX_GRID_CELLS)) {
+    throw new BudgetExceeded(
+      `the line-scan fit would need a model grid of ${gridCells.toExponential(1)} cells (at most ` +
+        `${MAX_GRID_CELLS.toLocaleString('en-GB')}): ${fixedSigma !== null ? `a probe σ of ${fixedSigma} nm over` : 'a particle this narrow in'} ` +
+        `a scan of ${rangeNm.toPrecision(3)} nm at ${stepNm.toPrecision(3)} nm steps; ` +
+        'check the probe σ and the position unit (nm), or bin the scan',
+      fixedSigma !== null ? 'probeSigmaNm' : 'positionsNm',
+      { iterations: 0, elapsedMs: meter.elapsedMs() },
+    );
+  }
   const problem: Problem = {
     n,
     x,
@@ -566,7 +618,7 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     yB,
     sA,
     sB,
-    grid: new BlurredChordGrid(x, cellNm, rangeNm / 2 + stepNm, Math.max(sigmaMaxNm, fixedSigma ?? 0)),
+    grid: new BlurredChordGrid(x, cellNm, padNm, kernelSigmaNm),
     stepNm,
     sigmaMinNm: Math.max(cellNm / 2, 0.01),
     sigmaMaxNm,
@@ -577,6 +629,7 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
     scaleNm: r0,
     phiA: new Float64Array(n),
     phiB: new Float64Array(n),
+    meter,
   };
   const sigma0 = Math.min(Math.max(0.08 * r0, problem.sigmaMinNm * 2, stepNm / 2), sigmaMaxNm);
   const maxIterations = options.maxIterations ?? 60;
@@ -610,6 +663,7 @@ export function fitLineScan(scan: LineScanData, options: LineScanFitOptions): Li
 
   const N = 2 * n;
   const fits = LINE_SCAN_MODELS.map((kind) => {
+    meter.stage = `model ${modelLabel(kind, options.elementA, options.elementB)}`;
     const raw = fitModel(kind);
     const { cov, names, parameterCount } = covariance(problem, raw);
     const k = raw.params.length + 4 + 1;

@@ -35,8 +35,16 @@ export interface PairsWithin {
   count: number;
 }
 
-/** All pairs i < j closer than `cutoffAngstrom` (strictly), found with a cell list. */
-export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): PairsWithin {
+/**
+ * All pairs i < j closer than `cutoffAngstrom` (strictly), found with a cell list. `check`, when given, is called
+ * with the pairs found so far after each cell and before the pair arrays grow; it may throw to stop the search
+ * (a compute budget).
+ */
+export function pairsWithin(
+  positions: Float64Array,
+  cutoffAngstrom: number,
+  check?: (pairsSoFar: number) => void,
+): PairsWithin {
   if (!Number.isFinite(cutoffAngstrom) || cutoffAngstrom <= 0)
     throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoffAngstrom}`);
   if (positions.length % 3 !== 0) throw invalid('positions', 'positions must hold x, y, z for every atom');
@@ -93,6 +101,7 @@ export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): Pa
     for (let cy = 0; cy < ny; cy++) {
       for (let cz = 0; cz < nz; cz++) {
         const c = (cx * ny + cy) * nz + cz;
+        if (check && (c & 255) === 0) check(count);
         for (let dx = -1; dx <= 1; dx++) {
           const ox = cx + dx;
           if (ox < 0 || ox >= nx) continue;
@@ -117,6 +126,7 @@ export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): Pa
                   const d2 = rx * rx + ry * ry + rz * rz;
                   if (d2 >= cutSq) continue;
                   if (count === capacity) {
+                    check?.(count);
                     capacity *= 2;
                     const f = new Int32Array(capacity);
                     f.set(first);
@@ -140,6 +150,7 @@ export function pairsWithin(positions: Float64Array, cutoffAngstrom: number): Pa
       }
     }
   }
+  check?.(count);
   return { first, second, distanceAngstrom: distance, count };
 }
 

@@ -8,6 +8,7 @@
  * `structureNearestNeighbourAngstrom` for how that distance is read from a structure.
  */
 import { invalid } from '../api/result';
+import { BudgetMeter, type Clock, type ComputeBudget } from '../compute-budget';
 import { FIRST_SHELL_FACTOR, FIVE_SHELL_CUTOFF_FACTOR, pairsWithin } from '../clusters/neighbours';
 import {
   guptaElement,
@@ -62,12 +63,12 @@ export function bulkEnergyPerAtomEv(symbol: string, latticeAngstrom?: number): n
  * distance. For an fcc lattice this is the lattice's nearest-neighbour distance; for a Mackay
  * icosahedron it is the mean bond the builder scales to. Atoms with no neighbour within 4.5 Å are ignored.
  */
-export function structureNearestNeighbourAngstrom(positions: Float64Array): number {
+export function structureNearestNeighbourAngstrom(positions: Float64Array, meter?: BudgetMeter): number {
   const atoms = positions.length / 3;
   if (atoms < 2)
     throw invalid('structure', 'a structure needs at least two atoms to define a nearest-neighbour distance');
   const search = 4.5;
-  const pairs = pairsWithin(positions, search);
+  const pairs = pairsWithin(positions, search, meter && ((found) => meter.reach(found)));
   const nearest = new Float64Array(atoms).fill(Infinity);
   for (let k = 0; k < pairs.count; k++) {
     const d = pairs.distanceAngstrom[k]!;
@@ -136,10 +137,23 @@ function speciesIndices(symbols: readonly string[]): { elements: string[]; index
 }
 
 /**
+ * Pair terms and wall time of one energy: 12 million pairs (~200 MB of pair list) is a 500,000-atom cluster at the
+ * five-shell cutoff, or 16,000 atoms at 15 Å (6.7 million); 30 s is far above the ~1 s such a sum takes.
+ */
+export const ENERGY_BUDGET: ComputeBudget = Object.freeze({ maxIterations: 12_000_000, maxWallMs: 30_000 });
+
+export interface TotalEnergyOptions {
+  cutoffAngstrom?: number;
+  /** Pair terms (pairs within the cutoff) and wall time; default ENERGY_BUDGET. */
+  budget?: ComputeBudget;
+  clock?: Clock;
+}
+
+/**
  * Total Gupta energy of any configuration of supported metals (a cluster; no periodic images).
  * Cutoff: `cutoffAngstrom` if given, else 2.35 × `structureNearestNeighbourAngstrom`.
  */
-export function totalEnergy(structure: AtomicStructure, options: { cutoffAngstrom?: number } = {}): StructureEnergy {
+export function totalEnergy(structure: AtomicStructure, options: TotalEnergyOptions = {}): StructureEnergy {
   const atoms = structure.symbols.length;
   if (atoms === 0) throw invalid('structure', 'the structure holds no atoms');
   if (structure.positions.length !== 3 * atoms)
@@ -148,7 +162,18 @@ export function totalEnergy(structure: AtomicStructure, options: { cutoffAngstro
       `expected ${3 * atoms} coordinates for ${atoms} atoms, got ${structure.positions.length}`,
     );
   const { elements, index } = speciesIndices(structure.symbols);
-  const nn = atoms >= 2 ? structureNearestNeighbourAngstrom(structure.positions) : 1;
+  const meter = new BudgetMeter(
+    options.budget ?? ENERGY_BUDGET,
+    {
+      what: `the energy of ${atoms} atoms`,
+      unit: 'pair terms',
+      advice: 'use a smaller cut-off (the default five-shell one), or a smaller structure',
+      field: options.cutoffAngstrom === undefined ? 'xyz' : 'cutoffAngstrom',
+    },
+    options.clock,
+  );
+  meter.stage = 'the nearest-neighbour search';
+  const nn = atoms >= 2 ? structureNearestNeighbourAngstrom(structure.positions, meter) : 1;
   const cutoff = options.cutoffAngstrom ?? FIVE_SHELL_CUTOFF_FACTOR * nn;
   if (!Number.isFinite(cutoff) || cutoff <= 0)
     throw invalid('cutoffAngstrom', `cutoff must be a positive number of Å, got ${cutoff}`);
@@ -157,11 +182,14 @@ export function totalEnergy(structure: AtomicStructure, options: { cutoffAngstro
   const density = new Float64Array(atoms);
   let repulsion = 0;
   let closest = Infinity;
+  meter.stage = `the pair search within ${cutoff.toFixed(2)} Å`;
   const pairs =
     atoms >= 2
-      ? pairsWithin(structure.positions, cutoff)
+      ? pairsWithin(structure.positions, cutoff, (found) => meter.reach(found))
       : { first: new Int32Array(0), second: new Int32Array(0), distanceAngstrom: new Float64Array(0), count: 0 };
+  meter.stage = 'the pair sum';
   for (let k = 0; k < pairs.count; k++) {
+    if ((k & 0xffff) === 0) meter.check();
     const i = pairs.first[k]!;
     const j = pairs.second[k]!;
     const r = pairs.distanceAngstrom[k]!;

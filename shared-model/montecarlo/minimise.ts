@@ -9,6 +9,7 @@
  * energy below any metal's cohesion, stops the minimisation with a message naming the atoms.
  */
 import { invalid } from '../api/result';
+import { BudgetMeter, type Clock } from '../compute-budget';
 import type { AtomicStructure } from './gupta-energy';
 import {
   assertNoOverlap,
@@ -26,7 +27,16 @@ export interface MinimiseOptions {
   maxIterations?: number;
   /** Largest step of any atom per iteration (Å); default 0.1. */
   maxStepAngstrom?: number;
+  /**
+   * Wall-time budget (ms) of the whole minimisation; none when omitted (the Monte Carlo's own quenches). The
+   * iteration budget is maxIterations: reaching it ends the run unconverged, and the result says so.
+   */
+  maxWallMs?: number;
+  clock?: Clock;
 }
+
+/** `simulation.relax`: 2 minutes of FIRE steps (~20,000 steps of a 1,000-atom cluster take a few seconds). */
+export const RELAX_WALL_BUDGET_MS = 120_000;
 
 export interface MinimiseResult {
   initialEnergyEv: number;
@@ -84,7 +94,21 @@ export function minimiseInPlace(
   let alpha: number = FIRE.alphaStart;
   let sincePowerNegative = 0;
   let iterations = 0;
+  const meter =
+    options.maxWallMs === undefined
+      ? null
+      : new BudgetMeter(
+          { maxIterations: Number.MAX_SAFE_INTEGER, maxWallMs: options.maxWallMs },
+          {
+            what: `the relaxation of ${atoms} atoms`,
+            unit: 'FIRE steps',
+            advice: 'relax a smaller cluster, or loosen the force tolerance (forceToleranceEvPerAngstrom)',
+            field: 'xyz',
+          },
+          options.clock,
+        );
   while (maxForce > tolerance && iterations < maxIterations) {
+    meter?.spend(1);
     let power = 0;
     let vv = 0;
     let ff = 0;
