@@ -69,6 +69,12 @@ export async function buildDesktop() {
     outfile: join(out, 'learn-worker.mjs'),
     format: 'esm',
   });
+  await build({
+    ...common,
+    entryPoints: [join(root, 'electron', 'workers', 'compute-worker.ts')],
+    outfile: join(out, 'compute-worker.mjs'),
+    format: 'esm',
+  });
   rmSync(join(out, 'migrations'), { recursive: true, force: true });
   cpSync(join(root, 'db', 'migrations'), join(out, 'migrations'), { recursive: true });
 }

@@ -15,6 +15,7 @@ import { setObservation, setOutcomeNotes } from '../../db/repositories/outcome-o
 import { insertSizeImport } from '../../db/repositories/outcome-sizes';
 import type { SqliteDatabase } from '../../db/store';
 import {
+  type LineScanPreview,
   OUTCOME_PART_NAMES,
   type OutcomePart,
   type OutcomeRecordInput,
@@ -86,8 +87,24 @@ function storeComposition(db: SqliteDatabase, batch: BatchForOutcome, compositio
   });
 }
 
-function storeLineScan(db: SqliteDatabase, batch: BatchForOutcome, scan: Part<'lineScan'>): void {
-  const preview = analyseLineScanCsv(scan, batch.elementA, batch.elementB);
+/** A line-scan fit computed before the transaction (in the compute pool), for the elements it was fitted with. */
+export interface ComputedLineScan {
+  elementA: string;
+  elementB: string;
+  preview?: LineScanPreview;
+  error?: unknown;
+}
+
+function storeLineScan(
+  db: SqliteDatabase,
+  batch: BatchForOutcome,
+  scan: Part<'lineScan'>,
+  computed: ComputedLineScan | undefined,
+): void {
+  const current = computed && computed.elementA === batch.elementA && computed.elementB === batch.elementB;
+  if (current && computed.error !== undefined) throw computed.error;
+  const preview =
+    current && computed.preview ? computed.preview : analyseLineScanCsv(scan, batch.elementA, batch.elementB);
   insertLineScan(db, {
     batchId: batch.id,
     name: scan.name,
@@ -146,7 +163,11 @@ function storeFiles(db: SqliteDatabase, batch: BatchForOutcome, files: Part<'fil
 }
 
 /** Stores every part given, in one transaction; answers which parts were stored and the batch's outcome. */
-export function recordOutcome(db: SqliteDatabase, input: OutcomeRecordInput): RecordedOutcome {
+export function recordOutcome(
+  db: SqliteDatabase,
+  input: OutcomeRecordInput,
+  computed: { lineScan?: ComputedLineScan } = {},
+): RecordedOutcome {
   return db.transaction((): RecordedOutcome => {
     const batch = getBatchForOutcome(db, input.batchId);
     const recorded: OutcomePart[] = [];
@@ -158,7 +179,7 @@ export function recordOutcome(db: SqliteDatabase, input: OutcomeRecordInput): Re
     };
     store('sizes', (sizes) => storeSizes(db, batch, sizes));
     store('composition', (composition) => storeComposition(db, batch, composition));
-    store('lineScan', (scan) => storeLineScan(db, batch, scan));
+    store('lineScan', (scan) => storeLineScan(db, batch, scan, computed.lineScan));
     store('observed', (observed) => storeObserved(db, batch, observed));
     store('notes', (notes) => setOutcomeNotes(db, batch.id, notes));
     store('files', (files) => storeFiles(db, batch, files));

@@ -7,10 +7,9 @@ import { getRun, listRuns } from '../../db/repositories/simulation';
 import { DomainError } from '../../shared-model/api/result';
 import { MIXING_RULE_DESCRIPTION, type simulationOperations } from '../../shared-model/api/simulation';
 import { PARTICLE_SHAPES } from '../../shared-model/geometry/shapes';
-import { readExtendedXyz, writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
-import { totalEnergy } from '../../shared-model/montecarlo/gupta-energy';
+import { writeExtendedXyz } from '../../shared-model/montecarlo/extended-xyz';
+import { computePool } from '../workers/compute-pool';
 import { GUPTA_ELEMENTS } from '../../shared-model/montecarlo/gupta-parameters';
-import { FIRE_DESCRIPTION, RELAX_WALL_BUDGET_MS, relaxStructure } from '../../shared-model/montecarlo/minimise';
 import {
   DEFAULT_STOPPING,
   ENGINE_VERSION,
@@ -106,37 +105,9 @@ export const simulationHandlers: HandlerMap<keyof typeof simulationOperations> =
     return { fileName: `pairwright-run-${id}-${result.elementA}${result.elementB}.xyz`, content };
   },
 
-  'simulation.relax': ({ xyz, forceToleranceEvPerAngstrom, maxIterations }) => {
-    const relaxed = relaxStructure(readExtendedXyz(xyz), {
-      forceToleranceEvPerAngstrom,
-      maxIterations,
-      maxWallMs: RELAX_WALL_BUDGET_MS,
-    });
-    const content = writeExtendedXyz(
-      { symbols: relaxed.symbols, positions: relaxed.positions },
-      {
-        energy: relaxed.energyEv,
-        initialEnergy: relaxed.initialEnergyEv,
-        maxForce: relaxed.maxForceEvPerAngstrom,
-        iterations: relaxed.iterations,
-        method: 'FIRE',
-      },
-    );
-    return {
-      atoms: relaxed.atoms,
-      composition: relaxed.composition,
-      initialEnergyEv: relaxed.initialEnergyEv,
-      relaxedEnergyEv: relaxed.energyEv,
-      relaxedEnergyPerAtomEv: relaxed.energyEv / relaxed.atoms,
-      maxForceEvPerAngstrom: relaxed.maxForceEvPerAngstrom,
-      iterations: relaxed.iterations,
-      converged: relaxed.converged,
-      forceToleranceEvPerAngstrom,
-      method: FIRE_DESCRIPTION,
-      xyz: content,
-    };
-  },
+  // Relaxations and energies run in the compute pool, so the host answers other calls meanwhile.
+  'simulation.relax': ({ xyz, forceToleranceEvPerAngstrom, maxIterations }) =>
+    computePool().run('relax', { xyz, forceToleranceEvPerAngstrom, maxIterations }),
 
-  'simulation.energy': ({ xyz, cutoffAngstrom }) =>
-    totalEnergy(readExtendedXyz(xyz), cutoffAngstrom === undefined ? {} : { cutoffAngstrom }),
+  'simulation.energy': ({ xyz, cutoffAngstrom }) => computePool().run('energy', { xyz, cutoffAngstrom }),
 };
