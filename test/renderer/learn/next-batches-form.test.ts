@@ -95,6 +95,7 @@ describe('next batches form', () => {
     expect(probabilityText(proposal)).toBe('0.62 ± 0.15');
     expect(costText(proposal)).toBe('1.23 EUR');
     expect(costText({ costPerBatch: 0.04321, currency: 'EUR' })).toBe('0.043 EUR');
+    expect(costText({ costPerBatch: 0.000678, currency: 'EUR' })).toBe('0.00068 EUR');
     expect(costText({ costPerBatch: null, currency: null })).toBe('– (no price)');
   });
 

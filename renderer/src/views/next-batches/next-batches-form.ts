@@ -109,8 +109,10 @@ export function probabilityText(p: Pick<Proposal, 'probability' | 'probabilitySd
 /** Cost of one batch's metal, or a dash naming why there is none. */
 export function costText(p: Pick<Proposal, 'costPerBatch' | 'currency'>): string {
   if (p.costPerBatch === null) return '– (no price)';
-  const digits = p.costPerBatch >= 100 ? 0 : p.costPerBatch >= 1 ? 2 : 3;
-  return `${p.costPerBatch.toFixed(digits)} ${p.currency ?? ''}`.trim();
+  const c = p.costPerBatch;
+  const number =
+    c >= 100 ? c.toFixed(0) : c >= 1 ? c.toFixed(2) : c >= 0.01 ? c.toFixed(3) : String(Number(c.toPrecision(2)));
+  return `${number} ${p.currency ?? ''}`.trim();
 }
 
 /** A proposal as the request Batch design opens with (target: the first label the target means here). */

@@ -30,6 +30,8 @@ export function HistoryImportPanel(props: { campaignId: number; revision: number
   const [done, setDone] = useState<string | null>(null);
   const [duplicate, setDuplicate] = useState<string | null>(null);
   const [removing, setRemoving] = useState<ImportedTableRow | null>(null);
+  // Bumped after an import so the file input is new and picking the same file again reads it again.
+  const [imports, setImports] = useState(0);
   const history = useQuery('learn.history', { campaignId: props.campaignId }, `${props.campaignId}:${props.revision}`);
   const tables = history.data ? importedTables(history.data.imports, history.data.outcomes) : [];
 
@@ -53,6 +55,7 @@ export function HistoryImportPanel(props: { campaignId: number; revision: number
     setError(null);
     setDone(importDoneText(result.value));
     setForm(EMPTY_HISTORY_IMPORT);
+    setImports((n) => n + 1);
     props.onChanged();
   };
 
@@ -94,7 +97,11 @@ export function HistoryImportPanel(props: { campaignId: number; revision: number
             spellCheck={false}
           />
         </Field>
-        <CsvFileField name="historyFile" onPicked={(file) => setForm({ csvText: file.text, fileName: file.name })} />
+        <CsvFileField
+          key={imports}
+          name="historyFile"
+          onPicked={(file) => setForm({ csvText: file.text, fileName: file.name })}
+        />
         <div className="form-actions field--wide">
           <button type="submit" className="button--primary">
             Import history
