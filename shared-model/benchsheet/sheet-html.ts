@@ -4,18 +4,15 @@
  * renders the same document to PDF, so every printout of a batch is the same sheet.
  */
 import { pictogramSvg } from '../hazards/pictogram-svg';
+import { formatFixed } from '../text/number-format';
 import type { BenchSheet } from './sheet';
 
 /** Escapes text for element content (the sheet puts user text only between tags, never in attributes). */
 const escapeHtml = (text: string): string =>
   text.replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c] ?? c);
 
-/** Fixed digits for amounts; "—" where a quantity does not apply. */
-export function sheetNumber(value: number | null, digits: number): string {
-  if (value === null || !Number.isFinite(value)) return '—';
-  if (value !== 0 && Math.abs(value) < 10 ** -digits) return value.toExponential(2);
-  return value.toFixed(digits);
-}
+/** Fixed digits for amounts (tiny ones as 1.65 × 10⁻⁵); "—" where a quantity does not apply. */
+export const sheetNumber = formatFixed;
 
 export const BENCH_SHEET_CSS = `
   .bench-sheet { font-family: "DejaVu Sans", Arial, sans-serif; color: #111; font-size: 10.5pt; line-height: 1.35; }

@@ -45,8 +45,11 @@ export function stockAges(stocks: readonly StockAgeInput[], now: string): StockA
   });
 }
 
+/** An age or a limit as people say it: minutes under an hour, hours under a day, then days ("1 day", "12.5 days"). */
 export function formatHours(hours: number): string {
   if (hours < 1) return `${Math.round(hours * 60)} min`;
-  if (hours < 48) return `${hours.toFixed(1)} h`;
-  return `${(hours / 24).toFixed(1)} days`;
+  if (hours < 24) return `${hours.toFixed(1)} h`;
+  const days = hours / 24;
+  const text = days < 10 ? days.toFixed(1) : days.toFixed(0);
+  return `${text.replace(/\.0$/, '')} ${text === '1.0' || text === '1' ? 'day' : 'days'}`;
 }

@@ -1,17 +1,9 @@
 /** A computed batch: particle numbers, reagent amounts, kinetic checks and the hazard block. */
 import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { BatchDesign } from '../../../shared-model/recipes/design';
+import { formatNumber } from '../../../shared-model/text/number-format';
 import { HazardBlock } from './HazardBlock';
 
-export function formatNumber(value: number | null | undefined, digits = 4): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  const abs = Math.abs(value);
-  if (abs !== 0 && (abs >= 1e6 || abs < 1e-3)) {
-    const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
-    return `${mantissa} × 10^${Number(exponent)}`;
-  }
-  return Number(value.toPrecision(digits)).toLocaleString('en-US', { maximumFractionDigits: 6 });
-}
 
 function Stat(props: { label: string; value: string; testId?: string }) {
   return (

@@ -1,15 +1,10 @@
 /** Helpers every design stage uses: number and potential formatting for check messages, catalog look-up. */
 import { invalid } from '../../api/result';
+import { formatInText } from '../../text/number-format';
 import type { Reagent } from '../reagent';
 
-/** Three significant digits, exponent form for very large or small values (check and note texts). */
-export function fmt(value: number, digits = 3): string {
-  if (!Number.isFinite(value)) return String(value);
-  const abs = Math.abs(value);
-  if (abs !== 0 && (abs >= 1e5 || abs < 1e-3)) return value.toExponential(digits - 1);
-  if (abs >= 10 ** digits) return value.toFixed(0);
-  return value.toPrecision(digits);
-}
+/** Three significant digits, scientific notation (1.65 × 10¹³) for very large or small values (check and note texts). */
+export const fmt = formatInText;
 
 /** An electrode potential with its sign, e.g. "+1.002 V", "−0.257 V". */
 export function signedV(value: number): string {

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import {
   localDateTimeText,
   readMeasured,
+  stockAgeText,
   stocksFromDates,
 } from '../../../renderer/src/views/batch-design/records-form';
 
@@ -34,5 +35,25 @@ describe('measured values', () => {
     expect(readMeasured('13 nm', '')).toEqual(diameter);
     const concentration = readMeasured('', '2.100.000');
     expect(concentration).toMatchObject({ ok: false, message: expect.stringMatching(/^measured particles per mL:/) });
+  });
+});
+
+describe('stock ages', () => {
+  const age = (ageHours: number, freshnessHours: number | null, stale: boolean) => ({
+    reagentKey: 'nabh4',
+    name: 'Sodium borohydride',
+    preparedAt: '2025-03-01T09:30:00.000Z',
+    ageHours,
+    freshnessHours,
+    stale,
+  });
+  it('are shown in days once a day old, hours and minutes below, with the limit', () => {
+    expect(stockAgeText(age(0.25, 0.5, false))).toBe('15 min (limit 30 min)');
+    expect(stockAgeText(age(5, null, false))).toBe('5.0 h');
+    expect(stockAgeText(age(24, null, false))).toBe('1 day');
+    // 30 days old against a 7-day limit (a typical limit for a metal-salt stock: common practice)
+    expect(stockAgeText(age(720, 168, true))).toBe('30 days (limit 7 days) — make it fresh');
+    expect(stockAgeText(age(36, 0.5, true))).toBe('1.5 days (limit 30 min) — make it fresh');
+    expect(stockAgeText(undefined)).toBe('');
   });
 });

@@ -4,14 +4,7 @@ import type { SavedBatch } from '../../../../shared-model/api/batches';
 import type { ApiError } from '../../../../shared-model/api/result';
 import { call } from '../../api/client';
 import { Banner } from '../../components/Banner';
-import { formatNumber } from '../BatchResult';
-import { localDateTimeText, stocksFromDates } from './records-form';
-
-function ageText(age: SavedBatch['stockAges'][number] | undefined): string {
-  if (!age) return '';
-  const limit = age.freshnessHours !== null ? ` (limit ${formatNumber(age.freshnessHours, 3)} h)` : '';
-  return `${formatNumber(age.ageHours, 3)} h${limit}${age.stale ? ' — make it fresh' : ''}`;
-}
+import { localDateTimeText, stockAgeText, stocksFromDates } from './records-form';
 
 export function BatchRecords(props: { batch: SavedBatch; onSaved: (batch: SavedBatch) => void }) {
   const { batch } = props;
@@ -70,7 +63,7 @@ export function BatchRecords(props: { batch: SavedBatch; onSaved: (batch: SavedB
                     onChange={(e) => setDates((s) => ({ ...s, [r.key]: e.target.value }))}
                   />
                 </td>
-                <td className={age?.stale ? 'stale' : undefined}>{ageText(age)}</td>
+                <td className={age?.stale ? 'stale' : undefined}>{stockAgeText(age)}</td>
               </tr>
             );
           })}

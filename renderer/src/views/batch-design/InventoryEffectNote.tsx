@@ -1,7 +1,7 @@
 /** What a status move did to the inventory: what was taken or given back, stocks below zero, unmatched reagents. */
 import type { StatusChange } from '../../../../shared-model/api/batches';
 import { Banner } from '../../components/Banner';
-import { formatNumber } from '../BatchResult';
+import { formatNumber } from '../../../../shared-model/text/number-format';
 
 export function InventoryEffectNote({ change }: { change: StatusChange }) {
   const effect = change.inventoryEffect;

@@ -1,7 +1,7 @@
 /** What an opened saved batch was computed with: catalog changes since, stale stocks, lots. */
 import type { SavedBatch } from '../../../../shared-model/api/batches';
 import { Banner } from '../../components/Banner';
-import { formatNumber } from '../BatchResult';
+import { formatHours } from '../../../../shared-model/recipes/stocks';
 
 export function OpenedBatchBanner({ batch }: { batch: SavedBatch }) {
   const changes = batch.catalogChanges;
@@ -18,7 +18,7 @@ export function OpenedBatchBanner({ batch }: { batch: SavedBatch }) {
         : ''}
       {batch.stockAges
         .filter((s) => s.stale)
-        .map((s) => ` The ${s.name} stock is ${formatNumber(s.ageHours, 3)} h old, beyond its limit.`)}
+        .map((s) => ` The ${s.name} stock is ${formatHours(s.ageHours)} old, beyond its limit.`)}
       {batch.lots.length > 0 ? ` Lots: ${batch.lots.map((l) => `${l.reagentKey} ${l.lot}`).join(', ')}.` : ''}
       {batch.history.length > 0 ? (
         <ol className="small" aria-label="Batch history">

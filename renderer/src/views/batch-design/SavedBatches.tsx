@@ -6,7 +6,7 @@ import { useState } from 'react';
 import type { BatchSummary, StatusChange } from '../../../../shared-model/api/batches';
 import { call } from '../../api/client';
 import { Banner } from '../../components/Banner';
-import { formatNumber } from '../BatchResult';
+import { formatNumber } from '../../../../shared-model/text/number-format';
 import { InventoryEffectNote } from './InventoryEffectNote';
 import { readMeasured } from './records-form';
 

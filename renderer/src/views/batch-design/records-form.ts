@@ -3,7 +3,16 @@
  * `datetime-local` text and ISO instants, and the measured size and concentration typed when a batch is
  * marked characterized (typed numbers through the one reader).
  */
+import type { SavedBatch } from '../../../../shared-model/api/batches';
+import { formatHours } from '../../../../shared-model/recipes/stocks';
 import { readOptionalUserNumber } from '../../../../shared-model/text/user-number';
+
+/** A stock's age as the table shows it: days once it is a day old, with its limit and a reminder when stale. */
+export function stockAgeText(age: SavedBatch['stockAges'][number] | undefined): string {
+  if (!age) return '';
+  const limit = age.freshnessHours !== null ? ` (limit ${formatHours(age.freshnessHours)})` : '';
+  return `${formatHours(age.ageHours)}${limit}${age.stale ? ' — make it fresh' : ''}`;
+}
 
 /** An ISO instant as `datetime-local` text in the time zone `offsetMinutes` (Date#getTimezoneOffset) says. */
 export function localDateTimeText(iso: string, offsetMinutes = new Date(iso).getTimezoneOffset()): string {

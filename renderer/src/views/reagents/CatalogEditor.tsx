@@ -13,7 +13,7 @@ import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
-import { formatNumber } from '../BatchResult';
+import { formatNumber } from '../../../../shared-model/text/number-format';
 import {
   EMPTY_REAGENT,
   fromCatalog,

@@ -3,7 +3,7 @@
  * mL" is the stock-solution volume to pipette (uses given as a stock); a neat liquid's volume is shown under it.
  */
 import type { ReagentList } from '../../../../shared-model/recipes/reagent-list';
-import { formatNumber } from '../BatchResult';
+import { formatNumber } from '../../../../shared-model/text/number-format';
 
 export function ReagentTotals(props: { list: ReagentList }) {
   return (
