@@ -156,8 +156,11 @@ export const precursorChoiceSchema = z.object({
 
 export const reducerChoiceSchema = z.object({
   reagentKey,
-  /** Multiple of the stoichiometric amount from the electron balance (chemist's choice). */
-  excess: positive('reducer excess', '×', { least: 0.01, max: 1000 }).default(1),
+  /**
+   * Multiple of the stoichiometric amount from the electron balance (chemist's choice); when omitted, the
+   * reducer's common-practice default (recipes/reducers.ts `defaultReducerExcess`), stated in the design.
+   */
+  excess: positive('reducer excess', '×', { least: 0.01, max: 1000 }).optional(),
   stockMm: positive('stock concentration', 'mM', STOCK_MM).optional(),
 });
 

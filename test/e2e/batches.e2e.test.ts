@@ -75,6 +75,44 @@ describe.skipIf(!available)('batch design and reagents in the browser host', () 
     expect(host.count('batches')).toBe(0);
   });
 
+  it('switching the pair resets the precursors; a failed compute says so in the result pane', async ({
+    page,
+    host,
+  }) => {
+    await openDesign(page, host);
+    await form(page).getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.getByTestId('atoms-per-particle').textContent()).toContain('2,397');
+    // particles per mL as printed: "… × 10¹³"-style, never "e+13" or "10^13"
+    const particles = await page.getByTestId('batch-result').textContent();
+    expect(particles).toMatch(/\d × 10[⁰¹²³⁴⁵⁶⁷⁸⁹]+/);
+    expect(particles).not.toMatch(/\de\+\d|10\^/);
+    await form(page).locator('input[name="elementA"]').fill('Au');
+    await form(page).locator('input[name="elementB"]').fill('Pd');
+    await expect.poll(() => form(page).locator('select[name="precursorA"]').inputValue()).toBe('haucl4-3h2o');
+    await expect.poll(() => form(page).locator('select[name="precursorB"]').inputValue()).toBe('na2pdcl4');
+    // the Pt–Ni result is no longer for these inputs, and says so
+    await expect.poll(() => page.getByTestId('result-stale').count()).toBe(1);
+    // a reducer chosen anew: its common-practice excess is assumed and stated
+    await form(page).locator('select[name="reducer"]').selectOption('ascorbic-acid');
+    await expect.poll(() => form(page).locator('input[name="reducer.excess"]').inputValue()).toBe('');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.getByTestId('reducer-excess-assumed').textContent()).toMatch(/common practice/);
+    expect(await page.getByTestId('result-stale').count()).toBe(0);
+    // capping as final mM: the field the message names is on the form
+    await form(page).locator('select[name="capping"]').selectOption('ctab');
+    await form(page).locator('select[name="capping.amountKind"]').selectOption('final-mM');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
+    await expect
+      .poll(() => page.getByTestId('compute-failure').textContent())
+      .toMatch(/^Not computed: capping final concentration \(mM\): .*marked in the form/);
+    expect(await page.getByTestId('batch-result').count()).toBe(0);
+    await form(page).locator('input[name="capping.molPerMolMetal"]').fill('0,5');
+    await form(page).getByRole('button', { name: 'Compute' }).click();
+    await expect.poll(() => page.locator('tr[data-reagent="ctab"]').count()).toBe(1);
+    expect(await page.getByTestId('compute-failure').count()).toBe(0);
+    await page.screenshot({ path: screenshotPath('batch-design-pair-switch'), fullPage: true });
+  });
+
   it('saves two batches and lists them', async ({ page, host }) => {
     await openDesign(page, host);
     await saveTwoPtNiBatches(page);

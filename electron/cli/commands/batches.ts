@@ -46,7 +46,11 @@ const RECIPE_OPTIONS: Record<string, OptionSpec> = {
     description: 'EL=reagent-key[@stock mM], once per metal, e.g. Pt=h2ptcl6-6h2o@20',
   },
   reducer: { type: 'string', description: 'reducer reagent key, e.g. nabh4' },
-  excess: { type: 'string', description: 'reducer excess over the electron balance (default 1)' },
+  excess: {
+    type: 'string',
+    description:
+      'reducer excess over the electron balance (default: common practice per reducer, e.g. 5 for NaBH4; stated in the design)',
+  },
   'reducer-stock': { type: 'string', description: 'reducer stock concentration, mM' },
   capping: { type: 'string', description: 'capping agent reagent key, e.g. pvp' },
   'capping-ratio': { type: 'string', description: 'capping agent, mol per mol metal' },

@@ -12,12 +12,15 @@ import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
 import { BatchForm } from './batch-design/BatchForm';
 import { BatchRecords } from './batch-design/BatchRecords';
+import type { ApiError } from '../../../shared-model/api/result';
 import {
   EXAMPLE_BATCH_FORM,
+  computeFailureText,
   growOnSeeds,
   placeError,
   readBatchForm,
   readingError,
+  withPair,
   type BatchFormState,
 } from './batch-design/batch-form';
 import { OpenedBatchBanner } from './batch-design/OpenedBatchBanner';
@@ -39,6 +42,9 @@ export function BatchDesignView() {
   const pairsQuery = useQuery('pairs.list', campaignId ? { campaignId } : null, `pairs:${campaignId}:${revision}`);
   const [form, setForm] = useState<BatchFormState>(EXAMPLE_BATCH_FORM);
   const [design, setDesign] = useState<BatchDesign | null>(null);
+  // The form a shown design was computed from (null for an opened saved batch), and the last Compute's failure.
+  const [computedFrom, setComputedFrom] = useState<BatchFormState | null>(null);
+  const [failure, setFailure] = useState<ApiError | null>(null);
   const [opened, setOpened] = useState<SavedBatch | null>(null);
   const [name, setName] = useState('');
   const [saved, setSaved] = useState<string | null>(null);
@@ -57,42 +63,57 @@ export function BatchDesignView() {
     clearPendingBatchPlan();
   }, [pendingBatchPlan, catalogQuery.data, clearPendingBatchPlan]);
 
-  /** The request, or null after showing the input whose text is not a number. */
+  /** The request, or the error shown beside the input whose text is not a number. */
   const request = () => {
     const reading = readBatchForm(form);
-    if (reading.ok) return reading.request;
-    show(readingError(reading));
-    return null;
+    if (reading.ok) return { ok: true as const, request: reading.request };
+    const error = readingError(reading);
+    show(error);
+    return { ok: false as const, error };
+  };
+
+  /** A failed Compute: no design is left on show, and the result pane says why. */
+  const failed = (error: ApiError) => {
+    setDesign(null);
+    setComputedFrom(null);
+    setFailure(error);
   };
 
   const compute = async () => {
     setSaved(null);
     setOpened(null);
-    const design = request();
-    if (!design) {
-      setDesign(null);
+    const asked = form;
+    const reading = request();
+    if (!reading.ok) {
+      failed(reading.error);
       return;
     }
-    const result = await call('batches.design', design);
+    const result = await call('batches.design', reading.request);
     if (!result.ok) {
-      show(placeError(result.error, form));
-      setDesign(null);
+      const placed = placeError(result.error, form);
+      show(placed);
+      failed(placed);
       return;
     }
     clear();
+    setFailure(null);
     setDesign(result.value);
+    setComputedFrom(asked);
   };
 
   const save = async () => {
-    const design = request();
-    if (!design) return;
+    const reading = request();
+    if (!reading.ok) return;
+    const design = reading.request;
     const result = await call('batches.save', { name, campaignId: campaignId ?? null, design });
     if (!result.ok) {
       show(placeError(result.error, form));
       return;
     }
     clear();
+    setFailure(null);
     setDesign(result.value.design);
+    setComputedFrom(form);
     setSaved(`Saved as batch #${result.value.id} “${result.value.name}” (planned).`);
     setName('');
     bumpRevision();
@@ -105,6 +126,8 @@ export function BatchDesignView() {
       return;
     }
     setOpened(result.value);
+    setFailure(null);
+    setComputedFrom(null);
     setDesign(result.value.design);
   };
 
@@ -115,7 +138,7 @@ export function BatchDesignView() {
       return;
     }
     const seedMetal = result.value.design.coreElement ?? batch.elementA;
-    setForm((f) => growOnSeeds(f, batch, seedMetal));
+    setForm((f) => withPair(growOnSeeds(f, batch, seedMetal), {}, catalog));
   };
 
   return (
@@ -147,9 +170,19 @@ export function BatchDesignView() {
         <div className="stack">
           {opened ? <OpenedBatchBanner batch={opened} /> : null}
           {opened ? <BatchRecords key={`${opened.id}:${opened.updatedAt}`} batch={opened} onSaved={setOpened} /> : null}
+          {failure ? (
+            <div className="card" data-testid="compute-failure">
+              <Banner tone="error">{computeFailureText(failure)}</Banner>
+            </div>
+          ) : null}
+          {design && computedFrom !== null && computedFrom !== form ? (
+            <Banner tone="caution" testId="result-stale">
+              The inputs changed since this result was computed: Compute again to see the amounts for them.
+            </Banner>
+          ) : null}
           {design ? (
             <BatchResult design={design} />
-          ) : (
+          ) : failure ? null : (
             <p className="card muted">Compute a batch to see atoms, particles, reagent amounts, checks and hazards.</p>
           )}
           <section className="card" aria-label="Saved batches">

@@ -4,7 +4,6 @@ import type { BatchDesign } from '../../../shared-model/recipes/design';
 import { formatNumber } from '../../../shared-model/text/number-format';
 import { HazardBlock } from './HazardBlock';
 
-
 function Stat(props: { label: string; value: string; testId?: string }) {
   return (
     <div className="stat" data-testid={props.testId}>
@@ -92,7 +91,11 @@ export function BatchResult(props: { design: BatchDesign }) {
         {d.reducer ? (
           <p className="muted small">
             Reducer: {d.reducer.halfReaction} ({d.reducer.electronsPerUnit} e⁻ per formula unit), stoichiometric{' '}
-            {formatNumber(d.reducer.stoichiometricMmol)} mmol × {formatNumber(d.reducer.excess, 3)}.
+            {formatNumber(d.reducer.stoichiometricMmol)} mmol × {formatNumber(d.reducer.excess, 3)}
+            {d.reducer.excessAssumed ? (
+              <span data-testid="reducer-excess-assumed"> (excess assumed, none given: {d.reducer.excessBasis})</span>
+            ) : null}
+            .
           </p>
         ) : null}
       </section>

@@ -9,7 +9,7 @@ import { invalid } from '../../api/result';
 import { AQUEOUS_ROUTES, DEFAULT_TEMPERATURE_C, type BatchDesignInput } from '../design-input';
 import { parseFormula } from '../formula';
 import { electronsDonated, hasRole, type Reagent, type ReagentMetal } from '../reagent';
-import { REDUCER_HALF_REACTIONS } from '../reducers';
+import { defaultReducerExcess, REDUCER_HALF_REACTIONS } from '../reducers';
 import { fmt, type CatalogIndex } from './common';
 import { planParticles, type ParticlePlan } from './particles';
 import type { DesignCheck, MetalAmount, ReducerBalance } from './types';
@@ -124,7 +124,10 @@ function reducerAmount(
   }
   const stockMm = input.reducer?.stockMm;
   if (!(electronsMmol > 0)) return { reagent, balance: null, amountMmol: null, stockMm };
-  const excess = input.reducer?.excess ?? 1;
+  const given = input.reducer?.excess;
+  const assumed = defaultReducerExcess(reagent.reducerHalfReactionId, reagent.name);
+  const excess = given ?? assumed.excess;
+  const excessBasis = given !== undefined ? 'given' : assumed.practice;
   const electronsPerUnit = electronsDonated(reagent);
   const halfReaction = REDUCER_HALF_REACTIONS[reagent.reducerHalfReactionId ?? '']?.halfReaction ?? '';
   const stoichiometricMmol = electronsMmol / electronsPerUnit;
@@ -138,9 +141,24 @@ function reducerAmount(
     });
   }
   const solventReduces = solvent !== null && reagent.key === solvent.key;
+  if (given === undefined && !solventReduces) {
+    checks.push({
+      kind: 'reducer',
+      severity: 'info',
+      message: `${reagent.name}: ${fmt(excess)}× the electron balance assumed, as no excess was given — ${assumed.practice}.`,
+    });
+  }
   return {
     reagent,
-    balance: { key: reagent.key, electronsPerUnit, halfReaction, stoichiometricMmol, excess },
+    balance: {
+      key: reagent.key,
+      electronsPerUnit,
+      halfReaction,
+      stoichiometricMmol,
+      excess,
+      excessAssumed: given === undefined,
+      excessBasis,
+    },
     amountMmol: solventReduces ? null : stoichiometricMmol * excess,
     stockMm,
   };

@@ -107,7 +107,10 @@ function latticeReader(input: BatchDesignInput, source: LatticeSource): (symbol:
   return (symbol) => {
     const value = input.latticeNm[symbol] ?? source?.(symbol) ?? latticeConstantNm(symbol);
     if (value === undefined || !Number.isFinite(value) || value <= 0) {
-      throw invalid(`latticeNm.${symbol}`, `no lattice constant for ${symbol}; give latticeNm.${symbol} in nm`);
+      throw invalid(
+        `latticeNm.${symbol}`,
+        `no lattice constant is known for ${symbol}, so the atoms of the particle cannot be counted`,
+      );
     }
     return value;
   };
@@ -152,8 +155,8 @@ function seededParticles(
   if (size.kind !== 'core-shell') {
     throw invalid(
       'size.kind',
-      'seed-mediated growth puts a shell on the seeds: give the size as "core-shell" with the shell thickness or ' +
-        'monolayers',
+      'seed-mediated growth puts a shell on the seeds: give the size as core + shell, with the shell thickness ' +
+        'or monolayers',
     );
   }
   if (
@@ -163,7 +166,7 @@ function seededParticles(
   ) {
     throw invalid(
       'size.coreDiameterNm',
-      `the core is the seed (${seeds.diameterNm} nm); change seeds.diameterNm instead of the core diameter`,
+      `the core is the seed (${seeds.diameterNm} nm); change the seed diameter instead of the core diameter`,
     );
   }
   if (seeds.diameterNm === undefined) {

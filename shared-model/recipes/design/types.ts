@@ -86,6 +86,10 @@ export interface ReducerBalance {
   halfReaction: string;
   stoichiometricMmol: number;
   excess: number;
+  /** True when the user gave no excess and the reducer's common-practice default was used (absent in older designs). */
+  excessAssumed?: boolean;
+  /** Why that excess: the common practice behind the default, or that the user gave it. */
+  excessBasis?: string;
 }
 
 export interface BatchDesign {

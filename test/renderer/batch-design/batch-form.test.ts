@@ -7,13 +7,19 @@ import { describe, expect, it } from 'vitest';
 import { validateInput } from '../../../shared-model/api/validate';
 import {
   EXAMPLE_BATCH_FORM,
+  computeFailureText,
   growOnSeeds,
   inputForField,
   placeError,
+  precursorFor,
   readBatchForm,
+  reducerExcessHint,
+  withPair,
+  withReducer,
   withRoute,
   type BatchFormState,
 } from '../../../renderer/src/views/batch-design/batch-form';
+import { seededCatalog } from '../../support/design-stages';
 import { ptNi } from '../../support/sample-batches';
 
 const read = (change: Partial<BatchFormState> = {}) => readBatchForm({ ...EXAMPLE_BATCH_FORM, ...change });
@@ -140,5 +146,107 @@ describe('placing errors', () => {
     const error = { code: 'invalid_input', message: 'no lattice constant for Fe', field: 'latticeNm.Fe' } as const;
     const placed = placeError(error, EXAMPLE_BATCH_FORM);
     expect(placed).toEqual({ code: 'invalid_input', message: 'no lattice constant for Fe' });
+  });
+});
+
+describe('switching the pair', () => {
+  const precursorsOf = (form: BatchFormState) =>
+    [form.precursorA, form.precursorB].map((key) => seededCatalog.find((r) => r.key === key)?.metal?.symbol);
+
+  it('the precursors become precursors of the new metals (Pt–Ni → Au–Pd)', () => {
+    const form = withPair(EXAMPLE_BATCH_FORM, { elementA: 'Au', elementB: 'Pd' }, seededCatalog);
+    expect(form).toMatchObject({ elementA: 'Au', elementB: 'Pd' });
+    expect(precursorsOf(form)).toEqual(['Au', 'Pd']);
+    // the request is valid for the new pair as it stands
+    const reading = readBatchForm(form);
+    expect(reading.ok).toBe(true);
+    if (!reading.ok) return;
+    expect(reading.request.precursors.map((p) => p.element)).toEqual(['Au', 'Pd']);
+  });
+
+  it('a precursor of a metal kept stays as chosen; a metal without one in the catalog gets none', () => {
+    const keptA = withPair(EXAMPLE_BATCH_FORM, { elementB: 'Au' }, seededCatalog);
+    expect(keptA.precursorA).toBe('h2ptcl6-6h2o');
+    expect(precursorsOf(keptA)).toEqual(['Pt', 'Au']);
+    expect(precursorFor('Pt', 'nicl2-6h2o', seededCatalog)).not.toBe('nicl2-6h2o');
+    expect(precursorFor('Xx', 'nicl2-6h2o', seededCatalog)).toBe('');
+  });
+
+  it('a new precursor suits the route: a water-soluble salt in water, an acetylacetonate in organic solvent', () => {
+    // the catalog lists Pd(acac)2 before Na2PdCl4 (shared-model/recipes/reagent-seed.ts); acac salts do not
+    // dissolve in water (common practice)
+    expect(precursorFor('Pd', '', seededCatalog, 'co-reduction')).toBe('na2pdcl4');
+    expect(precursorFor('Pd', '', seededCatalog, 'organic')).toBe('pd-acac2');
+    const organic = withPair({ ...EXAMPLE_BATCH_FORM, route: 'organic' }, { elementB: 'Pd' }, seededCatalog);
+    expect(organic.precursorB).toBe('pd-acac2');
+  });
+
+  it('a core@shell target, single metal or seed metal of the old pair falls back to the new pair', () => {
+    const old = { ...EXAMPLE_BATCH_FORM, target: 'Pt@Ni', singleElement: 'Ni', seedMetal: 'Ni' };
+    const form = withPair(old, { elementA: 'Au', elementB: 'Pd' }, seededCatalog);
+    expect(form).toMatchObject({ target: 'alloy', singleElement: 'Au', seedMetal: '' });
+    // a campaign pair brings its own target
+    expect(withPair(old, { elementA: 'Au', elementB: 'Pt', target: 'Au@Pt' }, seededCatalog).target).toBe('Au@Pt');
+    expect(withPair({ ...old, target: 'Janus' }, { elementB: 'Au' }, seededCatalog).target).toBe('Janus');
+  });
+
+  it('growing on a saved Au–Pt batch offers a Pt precursor for the shell, not the example’s Ni salt', () => {
+    const grown = withPair(
+      growOnSeeds(EXAMPLE_BATCH_FORM, { id: 3, elementA: 'Au', elementB: 'Pt' }, 'Au'),
+      {},
+      seededCatalog,
+    );
+    const reading = readBatchForm(grown);
+    expect(reading.ok).toBe(true);
+    if (!reading.ok) return;
+    const [shell] = reading.request.precursors;
+    expect(shell?.element).toBe('Pt');
+    expect(seededCatalog.find((r) => r.key === shell?.reagentKey)?.metal?.symbol).toBe('Pt');
+  });
+});
+
+describe('capping amount as final mM', () => {
+  it('the form offers both ways the contract takes: per mol of metal, or final concentration (mM)', () => {
+    const perMetal = requestOf({ cappingKey: 'pvp', cappingRatio: '10', cappingStock: '100' });
+    expect(perMetal.capping).toEqual({ reagentKey: 'pvp', molPerMolMetal: 10, stockMm: 100 });
+    const finalMm = requestOf({ cappingKey: 'ctab', cappingAmountKind: 'final-mM', cappingRatio: '0,5' });
+    expect(finalMm.capping).toEqual({ reagentKey: 'ctab', concentrationMm: 0.5 });
+    expect(validateInput('batches.design', finalMm).ok).toBe(true);
+    const empty = read({ cappingKey: 'ctab', cappingAmountKind: 'final-mM' });
+    expect(empty).toMatchObject({ ok: false, field: 'capping.molPerMolMetal' });
+    expect(empty.ok ? '' : empty.message).toContain('capping final concentration (mM)');
+  });
+});
+
+describe('the reducer excess', () => {
+  const nabh4 = seededCatalog.find((r) => r.key === 'nabh4');
+  it('the field says what is assumed when left empty (NaBH4: several-fold, common practice)', () => {
+    expect(reducerExcessHint(nabh4)).toMatch(/^empty: 5× assumed — borohydride hydrolyses in water/);
+    expect(reducerExcessHint(nabh4)).toContain('common practice');
+    expect(reducerExcessHint({ name: 'My reducer', reducerHalfReactionId: null })).toMatch(
+      /^empty: 1× assumed — no common-practice excess is known for My reducer/,
+    );
+    expect(reducerExcessHint(undefined)).toBeNull();
+  });
+  it('a new reducer clears the excess typed for the old one; the same reducer keeps it', () => {
+    expect(withReducer(EXAMPLE_BATCH_FORM, 'ascorbic-acid')).toMatchObject({
+      reducerKey: 'ascorbic-acid',
+      reducerExcess: '',
+    });
+    expect(withReducer(EXAMPLE_BATCH_FORM, 'nabh4')).toBe(EXAMPLE_BATCH_FORM);
+    const request = requestOf({ reducerExcess: '' });
+    expect(request.reducer).toEqual({ reagentKey: 'nabh4', stockMm: 100 });
+  });
+});
+
+describe('a failed compute', () => {
+  it('says so in the result pane, with where the input at fault is', () => {
+    const error = { code: 'invalid_input', message: 'choose a Pd precursor', field: 'precursorB' } as const;
+    expect(computeFailureText(error)).toBe(
+      'Not computed: choose a Pd precursor. The input at fault is marked in the form.',
+    );
+    expect(computeFailureText({ code: 'internal', message: 'the store is closed' })).toBe(
+      'Not computed: the store is closed.',
+    );
   });
 });

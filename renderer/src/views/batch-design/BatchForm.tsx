@@ -5,7 +5,7 @@ import type { CandidatePair } from '../../../../shared-model/api/pairs';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
 import { AmountSection } from './AmountSection';
-import { EXAMPLE_BATCH_FORM, withRoute, type BatchFormState } from './batch-form';
+import { EXAMPLE_BATCH_FORM, withPair, withReducer, withRoute, type BatchFormState } from './batch-form';
 import type { SetField } from './form-parts';
 import { PairTargetSection } from './PairTargetSection';
 import { ParticleSection } from './ParticleSection';
@@ -37,7 +37,9 @@ export function BatchForm(props: BatchFormProps) {
   };
   const fillFromPair = (id: string) => {
     const pair = props.pairs.find((p) => String(p.id) === id);
-    if (pair) onForm((f) => ({ ...f, elementA: pair.elementA, elementB: pair.elementB, target: pair.target }));
+    if (!pair) return;
+    const { elementA, elementB, target } = pair;
+    onForm((f) => withPair(f, { elementA, elementB, target }, props.catalog));
   };
   return (
     <form className="card batch-form" onSubmit={submit} aria-label="Batch design" noValidate>
@@ -54,11 +56,15 @@ export function BatchForm(props: BatchFormProps) {
           </select>
         </label>
       ) : null}
-      <PairTargetSection {...section} onRoute={(route) => onForm((f) => withRoute(f, route))} />
+      <PairTargetSection
+        {...section}
+        onRoute={(route) => onForm((f) => withRoute(f, route))}
+        onPair={(change) => onForm((f) => withPair(f, change, props.catalog))}
+      />
       <ParticleSection {...section} />
       {form.route === 'seed-mediated' ? <SeedsSection {...section} batches={props.batches} /> : null}
       <AmountSection {...section} />
-      <ReagentsSection {...section} catalog={props.catalog} />
+      <ReagentsSection {...section} catalog={props.catalog} onReducer={(key) => onForm((f) => withReducer(f, key))} />
       <div className="form-actions">
         <button type="submit" className="button--primary">
           Compute

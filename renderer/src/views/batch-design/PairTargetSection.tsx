@@ -4,16 +4,30 @@ import { Field } from '../../components/Field';
 import { targetChoices } from '../PairsPanel';
 import { Section, type SectionProps } from './form-parts';
 
-export function PairTargetSection(props: SectionProps & { onRoute: (route: SynthesisRoute) => void }) {
+export function PairTargetSection(
+  props: SectionProps & {
+    onRoute: (route: SynthesisRoute) => void;
+    /** A new element A or B (the precursors follow the pair). */
+    onPair: (change: { elementA?: string; elementB?: string }) => void;
+  },
+) {
   const { form, set, errors } = props;
   const targets = targetChoices(form.elementA, form.elementB);
   return (
     <Section title="Pair and target">
       <Field label="Element A" name="elementA" error={errors.elementA}>
-        <input name="elementA" value={form.elementA} onChange={(e) => set('elementA')(e.target.value.trim())} />
+        <input
+          name="elementA"
+          value={form.elementA}
+          onChange={(e) => props.onPair({ elementA: e.target.value.trim() })}
+        />
       </Field>
       <Field label="Element B" name="elementB" error={errors.elementB}>
-        <input name="elementB" value={form.elementB} onChange={(e) => set('elementB')(e.target.value.trim())} />
+        <input
+          name="elementB"
+          value={form.elementB}
+          onChange={(e) => props.onPair({ elementB: e.target.value.trim() })}
+        />
       </Field>
       <Field label="Target" name="target" error={errors.target}>
         <select name="target" value={form.target} onChange={(e) => set('target')(e.target.value)}>

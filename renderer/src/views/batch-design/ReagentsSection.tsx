@@ -1,9 +1,14 @@
 /** Catalog reagents of the batch: a precursor (and stock) per metal, reducer, capping agent, solvent. */
 import type { CatalogReagent } from '../../../../shared-model/api/batches';
+import type { BatchFormState } from './batch-form';
 import { Field } from '../../components/Field';
+import { reducerExcessHint } from './batch-form';
 import { DecimalInput, ReagentSelect, Section, type SectionProps } from './form-parts';
 
-export function ReagentsSection({ form, set, errors, catalog }: SectionProps & { catalog: CatalogReagent[] }) {
+export function ReagentsSection(
+  props: SectionProps & { catalog: CatalogReagent[]; onReducer: (reagentKey: string) => void },
+) {
+  const { form, set, errors, catalog } = props;
   const precursorsOf = (element: string) => catalog.filter((r) => r.metal?.symbol === element);
   const reducers = catalog.filter((r) => r.roles.includes('reducer'));
   const cappings = catalog.filter((r) => r.roles.includes('capping-agent'));
@@ -42,12 +47,18 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
         <ReagentSelect
           name="reducer"
           value={form.reducerKey}
-          onChange={set('reducerKey')}
+          onChange={props.onReducer}
           options={reducers}
           allowNone="none"
         />
       </Field>
-      <Field label="Excess (× electron balance)" name="reducer.excess" error={errors['reducer.excess']}>
+      <Field
+        label="Excess (× electron balance)"
+        name="reducer.excess"
+        error={errors['reducer.excess']}
+        hint={reducerExcessHint(catalog.find((r) => r.key === form.reducerKey)) ?? undefined}
+        wide
+      >
         <DecimalInput name={'reducer.excess'} value={form.reducerExcess} onChange={set('reducerExcess')} />
       </Field>
       <Field label="Reducer stock (mM)" name="reducer.stockMm" error={errors['reducer.stockMm']}>
@@ -63,13 +74,28 @@ export function ReagentsSection({ form, set, errors, catalog }: SectionProps & {
         />
       </Field>
       {form.cappingKey ? (
-        <Field
-          label="Capping (mol per mol metal)"
-          name="capping.molPerMolMetal"
-          error={errors['capping.molPerMolMetal']}
-        >
-          <DecimalInput name={'capping.molPerMolMetal'} value={form.cappingRatio} onChange={set('cappingRatio')} />
-        </Field>
+        <>
+          <Field label="Capping amount given as" name="capping.amountKind">
+            <select
+              name="capping.amountKind"
+              value={form.cappingAmountKind}
+              onChange={(e) => set('cappingAmountKind')(e.target.value as BatchFormState['cappingAmountKind'])}
+            >
+              <option value="mol-per-mol-metal">mol per mol metal</option>
+              <option value="final-mM">final mM in the batch</option>
+            </select>
+          </Field>
+          <Field
+            label={form.cappingAmountKind === 'final-mM' ? 'Capping final (mM)' : 'Capping (mol per mol metal)'}
+            name="capping.molPerMolMetal"
+            error={errors['capping.molPerMolMetal']}
+          >
+            <DecimalInput name={'capping.molPerMolMetal'} value={form.cappingRatio} onChange={set('cappingRatio')} />
+          </Field>
+          <Field label="Capping stock (mM)" name="capping.stockMm" error={errors['capping.stockMm']}>
+            <DecimalInput name={'capping.stockMm'} value={form.cappingStock} onChange={set('cappingStock')} />
+          </Field>
+        </>
       ) : null}
       <Field label="Solvent" name="solvent" error={errors.solvent} hint="water makes up the volume if none">
         <ReagentSelect

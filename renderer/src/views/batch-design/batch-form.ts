@@ -6,7 +6,12 @@
  * Ranges are left to the contract (zod), so the form and the API say the same.
  */
 import type { ApiError } from '../../../../shared-model/api/result';
-import type { BatchDesignRequest, SynthesisRoute } from '../../../../shared-model/recipes/design-input';
+import {
+  AQUEOUS_ROUTES,
+  type BatchDesignRequest,
+  type SynthesisRoute,
+} from '../../../../shared-model/recipes/design-input';
+import { defaultReducerExcess } from '../../../../shared-model/recipes/reducers';
 import { readOptionalUserNumber, readUserNumber } from '../../../../shared-model/text/user-number';
 
 export type SizeKind = 'alloy' | 'core-shell' | 'core-shell-overall' | 'single-metal';
@@ -41,6 +46,8 @@ export interface BatchFormState {
   reducerExcess: string;
   reducerStock: string;
   cappingKey: string;
+  /** How the capping amount is typed: per mol of metal reduced, or as its final concentration in the batch. */
+  cappingAmountKind: 'mol-per-mol-metal' | 'final-mM';
   cappingRatio: string;
   cappingStock: string;
   solventKey: string;
@@ -78,6 +85,7 @@ export const EXAMPLE_BATCH_FORM: BatchFormState = {
   reducerExcess: '5',
   reducerStock: '100',
   cappingKey: '',
+  cappingAmountKind: 'mol-per-mol-metal',
   cappingRatio: '',
   cappingStock: '',
   solventKey: '',
@@ -189,11 +197,13 @@ function readReagents(form: BatchFormState): Pick<BatchDesignRequest, 'reducer' 
     };
   }
   if (form.cappingKey) {
-    const ratio = required(form.cappingRatio, 'capping.molPerMolMetal', 'capping (mol per mol metal)');
+    const perMetal = form.cappingAmountKind === 'mol-per-mol-metal';
+    const label = perMetal ? 'capping (mol per mol metal)' : 'capping final concentration (mM)';
+    const value = required(form.cappingRatio, 'capping.molPerMolMetal', label);
     const stockMm = optional(form.cappingStock, 'capping.stockMm', 'capping stock (mM)');
     reagents.capping = {
       reagentKey: form.cappingKey,
-      molPerMolMetal: ratio,
+      ...(perMetal ? { molPerMolMetal: value } : { concentrationMm: value }),
       ...(stockMm !== undefined ? { stockMm } : {}),
     };
   }
@@ -238,7 +248,11 @@ export function readBatchForm(form: BatchFormState): BatchFormReading {
   }
 }
 
-/** Every input (by name) that can show an error of its own. */
+/**
+ * Every input (by name) that can show an error of its own; each is rendered by a section of the form
+ * (test/renderer/batch-design/form-inputs.test.ts reads the sections and checks). An error on any other field
+ * is shown above the form's actions, without a field.
+ */
 export const BATCH_FORM_INPUTS: ReadonlySet<string> = new Set([
   'elementA',
   'elementB',
@@ -252,7 +266,6 @@ export const BATCH_FORM_INPUTS: ReadonlySet<string> = new Set([
   'size.element',
   'amount',
   'batchVolumeMl',
-  'seeds',
   'seeds.metal',
   'seeds.diameterNm',
   'seeds.particlesPerMl',
@@ -273,8 +286,6 @@ export const BATCH_FORM_INPUTS: ReadonlySet<string> = new Set([
   'solvent.volumeMl',
   'temperatureC',
   'name',
-  'pairId',
-  'campaignId',
 ]);
 
 /** The input that shows an error on `field` (an API path such as `design.precursors.1.reagentKey`). */
@@ -327,6 +338,88 @@ export function growOnSeeds(
     shellValue: form.shellValue || '2',
     seedVolumeMl: form.seedVolumeMl || '5',
   };
+}
+
+/** What the form needs of a catalog reagent to offer it as a metal's precursor. */
+export interface PrecursorOption {
+  key: string;
+  formula: string;
+  metal?: { symbol: string; oxidationState: number } | null;
+}
+
+/**
+ * A precursor for organic solvents: acetylacetonates and zero-valent carbonyls, which do not dissolve in water
+ * (common practice: metal chlorides and nitrates for aqueous routes, acac and carbonyls for organic ones).
+ */
+function organicPhase(reagent: PrecursorOption): boolean {
+  return /C5H7O2|\(CO\)/.test(reagent.formula) || reagent.metal?.oxidationState === 0;
+}
+
+/**
+ * The current precursor when it is one of `element`, else the catalog's first precursor of it that suits the
+ * route (a water-soluble salt for aqueous routes, an acac or carbonyl for the organic route), else any ('' if none).
+ */
+export function precursorFor(
+  element: string,
+  current: string,
+  catalog: readonly PrecursorOption[],
+  route: SynthesisRoute = 'co-reduction',
+): string {
+  const ofElement = catalog.filter((r) => r.metal?.symbol === element);
+  if (ofElement.some((r) => r.key === current)) return current;
+  const suits = (r: PrecursorOption) =>
+    route === 'organic' ? organicPhase(r) : AQUEOUS_ROUTES.includes(route) ? !organicPhase(r) : true;
+  return (ofElement.find(suits) ?? ofElement[0])?.key ?? '';
+}
+
+/**
+ * The form after the pair changes (typed, chosen from the campaign's pairs, or taken from a seed batch): the
+ * precursors become precursors of the new metals, and choices naming a metal no longer in the pair (the
+ * single metal, the seed metal, a core@shell target) fall back to ones of the new pair.
+ */
+export function withPair(
+  form: BatchFormState,
+  change: { elementA?: string; elementB?: string; target?: string },
+  catalog: readonly PrecursorOption[],
+): BatchFormState {
+  const next = { ...form, ...change };
+  const pair = [next.elementA, next.elementB];
+  const target = change.target ?? (targetNamesOnly(next.target, pair) ? next.target : 'alloy');
+  return {
+    ...next,
+    target,
+    precursorA: precursorFor(next.elementA, form.precursorA, catalog, next.route),
+    precursorB: precursorFor(next.elementB, form.precursorB, catalog, next.route),
+    singleElement: pair.includes(form.singleElement) ? form.singleElement : next.elementA,
+    seedMetal: form.seedMetal !== '' && !pair.includes(form.seedMetal) ? '' : form.seedMetal,
+  };
+}
+
+/** Whether a target names no metal outside the pair (alloy, Janus, … or A@B of the pair's metals). */
+function targetNamesOnly(target: string, pair: string[]): boolean {
+  if (!target.includes('@')) return true;
+  return target.split('@').every((part) => pair.includes(part.trim()));
+}
+
+/** What the result pane says when Compute failed: the message, and where the input at fault is. */
+export function computeFailureText(error: ApiError): string {
+  const where = error.field ? ' The input at fault is marked in the form.' : '';
+  const sentence = /[.!?]$/.test(error.message) ? error.message : `${error.message}.`;
+  return `Not computed: ${sentence}${where}`;
+}
+
+/** The reducer excess the contract assumes when the field is left empty, as the field's hint shows it. */
+export function reducerExcessHint(
+  reducer: { name: string; reducerHalfReactionId?: string | null } | undefined,
+): string | null {
+  if (!reducer) return null;
+  const assumed = defaultReducerExcess(reducer.reducerHalfReactionId, reducer.name);
+  return `empty: ${assumed.excess}× assumed — ${assumed.practice}`;
+}
+
+/** A new reducer: the excess typed for the previous one is cleared, so the new one's common-practice default applies. */
+export function withReducer(form: BatchFormState, reducerKey: string): BatchFormState {
+  return reducerKey === form.reducerKey ? form : { ...form, reducerKey, reducerExcess: '' };
 }
 
 /** A new route; seed-mediated growth always grows a core-shell particle. */

@@ -91,3 +91,41 @@ describe('bad input names the field', () => {
     expect(error.message).toMatch(message);
   });
 });
+
+describe('reducer excess when none is given (common practice per reducer, stated)', () => {
+  const { excess: _given, ...nabh4 } = ptNi.reducer ?? { reagentKey: 'nabh4' };
+  it('borohydride in water: 5× the electron balance, said so in a check and in the balance', () => {
+    const a = amounts({ ...ptNi, reducer: nabh4 });
+    // 0.04375 mmol stoichiometric (above) × 5 = 0.21875 mmol, the same as the example's typed 5×
+    expect(a.reducer?.amountMmol).toBeCloseTo(0.21875, 12);
+    expect(a.reducer?.balance).toMatchObject({ excess: 5, excessAssumed: true });
+    expect(a.reducer?.balance?.excessBasis).toMatch(/hydrolyses in water.*several-fold.*common practice/);
+    const said = a.checks.filter((c) => c.kind === 'reducer');
+    expect(said).toHaveLength(1);
+    expect(said[0]?.severity).toBe('info');
+    expect(said[0]?.message).toMatch(
+      /^Sodium borohydride: 5\.00× the electron balance assumed, as no excess was given/,
+    );
+  });
+  it('a typed excess is used as typed and earns no assumption note', () => {
+    const a = amounts(ptNi);
+    expect(a.reducer?.balance).toMatchObject({ excess: 5, excessAssumed: false, excessBasis: 'given' });
+    expect(a.checks.filter((c) => c.kind === 'reducer')).toEqual([]);
+  });
+  it.each<[string, number]>([
+    // common practice (reducers.ts states each reason); citrate after Turkevich/Frens ≈ 3.5 citrate per Au(III)
+    ['ascorbic-acid', 1.5],
+    ['trisodium-citrate-2h2o', 2.5],
+    ['hydrazine-hydrate', 3],
+  ])('%s: %s× assumed, never a silent 1×', (reagentKey, excess) => {
+    const a = amounts({ ...ptNi, reducer: { reagentKey } });
+    expect(a.reducer?.balance?.excess).toBe(excess);
+    expect(a.reducer?.balance?.excessAssumed).toBe(true);
+    expect(a.checks.some((c) => c.kind === 'reducer' && c.message.includes('common practice'))).toBe(true);
+  });
+  it('polyol: the glycol is the solvent, in large excess; no amount is dosed, so no assumption note', () => {
+    const a = amounts(ptNiPolyol);
+    expect(a.reducer?.amountMmol).toBeNull();
+    expect(a.checks.filter((c) => c.kind === 'reducer')).toEqual([]);
+  });
+});
