@@ -11,6 +11,7 @@ interface RecipeJson {
   atomsPerParticle: number;
   coreAtoms: number;
   shellAtoms: number;
+  design: { xB: number };
   particles: number;
   reagents: {
     name: string;
@@ -59,6 +60,9 @@ describe('pairwright recipe / reagents / catalog', () => {
     expect(recipe.atomsPerParticle).toBeCloseTo(2396.8, 0);
     expect(recipe.coreAtoms).toBe(recipe.atomsPerParticle);
     expect(recipe.shellAtoms).toBe(0);
+    // the composition as the fraction x_B, as predictions and outcomes state it (25 at.% Ni typed)
+    expect(recipe.design.xB).toBe(0.25);
+    expect(recipe.design).not.toHaveProperty('xBPct');
     expect(recipe.particles / 2.51256e16).toBeCloseTo(1, 4);
     const nabh4 = recipe.reagents.find((r) => r.formula === 'NaBH4');
     expect(nabh4).toMatchObject({ role: 'reducer', name: 'Sodium borohydride' });
@@ -75,6 +79,8 @@ describe('pairwright recipe / reagents / catalog', () => {
     const run = runPairwright([...PT_NI, '--data', tempDataDir()]);
     expect(run.status).toBe(0);
     expect(run.stdout).toMatch(/Sodium borohydride\s+reducer/);
+    // the text recipe still speaks at.%
+    expect(run.stdout).toMatch(/25 at\.% Ni/);
     expect(run.stdout).toContain('H334 May cause allergy or asthma symptoms or breathing difficulties if inhaled');
     expect(run.stdout).toContain("never replace, the supplier's safety data sheet");
   });
