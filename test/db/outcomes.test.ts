@@ -84,7 +84,8 @@ describe('outcome imports are one transaction', () => {
     expect(stored.points).toEqual(points);
     expect(stored.analysis.chosenModel).toBe(analysis.chosenModel);
     const broken = [...points, { positionNm: 21, a: Number.NaN, b: 1 }];
-    expect(() => insertLineScan(store.db, { ...base, points: broken })).toThrow();
+    // SQLite stores NaN as NULL, so the NOT NULL column refuses the point and the transaction rolls back.
+    expect(() => insertLineScan(store.db, { ...base, points: broken })).toThrow(/NOT NULL constraint failed/);
     expect(count('outcome_line_scans')).toBe(1);
     expect(count('outcome_line_scan_points')).toBe(points.length);
   });
