@@ -20,6 +20,7 @@
  *   within half the diameter.
  */
 import { invalid } from '../api/result';
+import { nearestClosedShell } from '../geometry/closed-shells';
 import { magicClusterAtoms, truncatedOctahedronAtoms } from '../geometry/magic-numbers';
 import { isParticleShape, PARTICLE_SHAPES, type ParticleShape } from '../geometry/shapes';
 import { pairsWithin } from './neighbours';
@@ -232,7 +233,10 @@ export function sphereAtomEstimate(diameterNm: number, nnAngstrom: number): numb
   return (Math.PI / 6) * diameterNm ** 3 * (4 / latticeNm ** 3);
 }
 
-/** The shell count of `shape` whose volume-equivalent diameter is nearest to `diameterNm`. */
+/**
+ * The shell count of `shape` whose volume-equivalent diameter is nearest to `diameterNm`: the one rule of
+ * geometry/closed-shells.ts, which the prediction's site counts use too (lattice a = √2 · nearest-neighbour).
+ */
 export function shellsForDiameter(
   shape: Exclude<ParticleShape, 'sphere'>,
   diameterNm: number,
@@ -241,18 +245,7 @@ export function shellsForDiameter(
   if (!Number.isFinite(diameterNm) || diameterNm <= 0)
     throw invalid('diameterNm', `diameter must be a positive number of nm, got ${diameterNm}`);
   requireNearestNeighbour(nnAngstrom);
-  let best = 1;
-  let bestGap = Infinity;
-  for (let n = 1; n < 10_000; n++) {
-    const d = equivalentDiameterNm(shapeAtomCount(shape, n), nnAngstrom);
-    const gap = Math.abs(d - diameterNm);
-    if (gap < bestGap) {
-      best = n;
-      bestGap = gap;
-    }
-    if (d > diameterNm) break;
-  }
-  return best;
+  return nearestClosedShell(shape, diameterNm, (nnAngstrom * Math.SQRT2) / 10).shells;
 }
 
 export type ClusterSize = { shells: number } | { diameterNm: number };

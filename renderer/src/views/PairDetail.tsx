@@ -17,10 +17,16 @@ import {
   YAxis,
 } from 'recharts';
 import { describeArchitecture } from '../../../shared-model/architecture/labels';
+import {
+  CLOSED_SHELL_RULE,
+  describeClosedShell,
+  nearestClosedShell,
+} from '../../../shared-model/geometry/closed-shells';
 import { GUPTA_ELEMENTS, isGuptaElement } from '../../../shared-model/montecarlo/gupta-parameters';
 import { computeIsotherm, type IsothermSweep } from '../../../shared-model/prediction/isotherm';
 import { predictPair, type PredictionConditions } from '../../../shared-model/prediction/predict';
 import { call } from '../api/client';
+import { logTicks, niceTicks } from '../charts/chart-numbers';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
@@ -53,6 +59,11 @@ function IsothermChart(props: {
       })),
     [elementA, elementB, conditions, sweep],
   );
+  // round ticks: composition 0/25/50/75/100 at.%, temperature in round steps, diameter 1-2-5 on the log axis
+  const xs = data.map((d) => d.x);
+  const lo = Math.min(...xs);
+  const hi = Math.max(...xs);
+  const ticks = sweep === 'xB' ? [0, 25, 50, 75, 100] : sweep === 'diameter' ? logTicks(lo, hi) : niceTicks(lo, hi, 6);
   const xLabel = sweep === 'xB' ? `overall at.% ${elementB}` : sweep === 'diameter' ? 'diameter, nm' : 'temperature, K';
   const marker =
     sweep === 'xB' ? 100 * conditions.xB : sweep === 'diameter' ? conditions.diameterNm : conditions.temperatureK;
@@ -72,11 +83,16 @@ function IsothermChart(props: {
             dataKey="x"
             type="number"
             scale={sweep === 'diameter' ? 'log' : 'linear'}
-            domain={['dataMin', 'dataMax']}
+            domain={
+              sweep !== 'diameter' && ticks.length > 1
+                ? [ticks[0] as number, ticks[ticks.length - 1] as number]
+                : ['dataMin', 'dataMax']
+            }
+            ticks={ticks}
             tickFormatter={(v: number) => (sweep === 'diameter' ? String(Number(v.toPrecision(2))) : v.toFixed(0))}
             label={{ value: xLabel, position: 'insideBottom', offset: -8 }}
           />
-          <YAxis domain={[0, 100]} unit="%" width={48} />
+          <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit="%" width={48} />
           <Tooltip
             formatter={(value) => `${Number(value).toFixed(1)} %`}
             labelFormatter={(v) => `${xLabel} ${Number(v).toPrecision(3)}`}
@@ -199,6 +215,11 @@ export function PairDetail(props: {
           <>No surface enrichment.</>
         )}{' '}
         Confidence {p.confidence.toFixed(2)}.
+      </p>
+      <p className="small muted" data-testid="detail-size-rule">
+        {p.shape === 'sphere'
+          ? `${p.atoms} atoms: a ${p.diameterNm} nm sphere at bulk fcc density (lattice ${p.latticeNm.toFixed(4)} nm).`
+          : `${describeClosedShell(nearestClosedShell(p.shape, p.diameterNm, p.latticeNm))}: for ${p.diameterNm} nm, ${CLOSED_SHELL_RULE}, with the lattice constant ${p.latticeNm.toFixed(4)} nm (the same rule as the Simulation view's cluster).`}
       </p>
       <FlaskVerdicts prediction={p} />
       <p className="muted">{p.reason}</p>

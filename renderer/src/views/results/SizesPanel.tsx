@@ -11,8 +11,9 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { BatchOutcome, SizeRecord } from '../../../../shared-model/api/outcomes';
+import type { BatchOutcome, SizeRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
+import { plusMinus } from '../../charts/chart-numbers';
 import { useFieldErrors } from '../../api/hooks';
 import { fieldNumber, optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import { Banner } from '../../components/Banner';
@@ -103,9 +104,7 @@ function SizeSummary(props: { record: SizeRecord; onRemove: () => void }) {
         <dt>particles</dt>
         <dd data-stat="n">{s.n}</dd>
         <dt>mean ± SD</dt>
-        <dd data-stat="mean">
-          {fixed(s.meanNm)} ± {fixed(s.sdNm)} nm
-        </dd>
+        <dd data-stat="mean">{plusMinus(s.meanNm, s.sdNm)} nm</dd>
         <dt>SEM · 95 % CI of mean</dt>
         <dd>
           {fixed(s.semNm, 3)} nm · [{fixed(s.meanInterval[0])}, {fixed(s.meanInterval[1])}] nm
@@ -155,7 +154,7 @@ function SizeSummary(props: { record: SizeRecord; onRemove: () => void }) {
   );
 }
 
-export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void }) {
+export function SizesPanel(props: { outcome: BatchOutcome; onChanged: (recorded?: RecordedOutcome) => void }) {
   const [csvText, setCsvText] = useState('');
   const [sourceFile, setSourceFile] = useState<string | null>(null);
   const [column, setColumn] = useState('');
@@ -194,7 +193,7 @@ export function SizesPanel(props: { outcome: BatchOutcome; onChanged: () => void
     clear();
     setCsvText('');
     setSourceFile(null);
-    props.onChanged();
+    props.onChanged(result.value);
   };
 
   const latest = props.outcome.sizes[props.outcome.sizes.length - 1];

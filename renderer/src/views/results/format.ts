@@ -1,4 +1,5 @@
 /** Number formatting for the Results view. */
+import { plusMinus } from '../../charts/chart-numbers';
 import type { Estimate } from '../../../../shared-model/characterization/line-scan-fit';
 
 export function num(value: number | null | undefined, digits = 3): string {
@@ -15,9 +16,8 @@ export function fixed(value: number | null | undefined, decimals = 2): string {
 
 export function estimate(value: Estimate | null | undefined, decimals = 2): string {
   if (!value) return '–';
-  return value.sd === null
-    ? fixed(value.value, decimals)
-    : `${fixed(value.value, decimals)} ± ${fixed(value.sd, decimals)}`;
+  // the uncertainty to its second significant digit, the value to the same place (never "± 0.00")
+  return value.sd === null ? fixed(value.value, decimals) : plusMinus(value.value, value.sd, decimals);
 }
 
 export const atPct = (fraction: number | null | undefined, decimals = 1): string =>

@@ -2,7 +2,10 @@
 import { useState } from 'react';
 import type { SimulationRun } from '../../../../shared-model/api/simulation';
 import type { SimulationResult } from '../../../../shared-model/montecarlo/simulate';
+import { CLOSED_SHELL_RULE } from '../../../../shared-model/geometry/closed-shells';
+import { shapeLabel } from '../../../../shared-model/geometry/shapes';
 import { call } from '../../api/client';
+import { plusMinus } from '../../charts/chart-numbers';
 import { Banner } from '../../components/Banner';
 import { num, pct } from './format';
 import { ParticlePicture } from './ParticlePicture';
@@ -10,6 +13,18 @@ import { PredictionBeside } from './PredictionBeside';
 import { RadialProfile } from './RadialProfile';
 import { Traces } from './Traces';
 import { resultPoints } from './traces';
+
+/** How the cluster's size was chosen, in words: the one closed-shell rule when a diameter was asked. */
+function sizeRuleText(diameterNm: number | null, geometry: SimulationResult['geometry']): string {
+  const shells =
+    geometry.shape === 'truncated-octahedron' ? `${geometry.shells + 1} atoms per edge` : `${geometry.shells} shells`;
+  const built = `${geometry.atoms} atoms: ${shapeLabel(geometry.shape)}, ${shells}, volume-equivalent diameter ${geometry.equivalentDiameterNm.toFixed(2)} nm`;
+  if (geometry.shape === 'sphere')
+    return `${geometry.atoms} atoms: the fcc sites within half the diameter of a central atom.`;
+  return diameterNm === null
+    ? `${built} (size given as shells).`
+    : `${built}: for ${diameterNm} nm, ${CLOSED_SHELL_RULE} (the same rule as the prediction's atom count).`;
+}
 
 function Stat(props: { label: string; value: string; testId?: string }) {
   return (
@@ -43,7 +58,8 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
   const { run, result } = props;
   const [error, setError] = useState<string | null>(null);
   const eq = result.equilibration;
-  const surfaceB = `${pct(result.surfaceXB)} ± ${(100 * result.surfaceXBStandardError).toFixed(1)}`;
+  // the standard error to its second significant digit (a 0.0004 error is not "± 0.0")
+  const surfaceB = `${plusMinus(100 * result.surfaceXB, 100 * result.surfaceXBStandardError, 1)} %`;
   // Runs stored before relaxation and separation were added carry neither.
   const stored = result as Partial<SimulationResult>;
   const relaxation = stored.relaxation;
@@ -62,7 +78,7 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
         <Stat label="Warren–Cowley order, 1st shell" value={num(result.warrenCowley, 3)} testId="sim-warren-cowley" />
         <Stat label="energy per atom" value={`${result.energyPerAtomEv.toFixed(4)} eV`} />
         <Stat label="mixing energy" value={`${(1000 * result.mixingEnergyPerAtomEv).toFixed(1)} meV/atom`} />
-        <Stat label="atoms / surface sites" value={`${result.atoms} / ${result.surfaceSites}`} />
+        <Stat label="atoms / surface sites" value={`${result.atoms} / ${result.surfaceSites}`} testId="sim-atoms" />
         <Stat label="acceptance" value={pct(result.acceptance)} />
         <Stat label="speed" value={`${Math.round(result.attemptsPerSecond).toLocaleString('en-US')} /s`} />
         {stopping ? (
@@ -104,6 +120,9 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
           ; swap acceptance {pct(relaxation.swapAcceptance)}.
         </p>
       ) : null}
+      <p className="small muted" data-testid="sim-size-rule">
+        {sizeRuleText(run.spec.diameterNm ?? null, result.geometry)}
+      </p>
       <p className="small muted" data-testid="sim-kinetic-note">
         {result.kineticNote ?? ''}
       </p>
