@@ -4,6 +4,7 @@
  * import of a history table of past syntheses (Import history).
  */
 import { useCallback, useEffect, useState } from 'react';
+import type { RecordedOutcome } from '../../../shared-model/api/outcomes';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
@@ -13,30 +14,45 @@ import { HistoryImportPanel } from './results/HistoryImportPanel';
 import { LineScanPanel } from './results/LineScanPanel';
 import { ObservedPanel } from './results/ObservedPanel';
 import { SizesPanel } from './results/SizesPanel';
+import { statusChangeText } from './results/status-change';
 import './results/results.css';
 
 function BatchResults(props: { batchId: number; revision: number; onChanged: () => void }) {
   const outcome = useQuery('outcomes.get', { batchId: props.batchId }, `${props.batchId}:${props.revision}`);
-  if (outcome.error) return <Banner tone="error">{outcome.error.message}</Banner>;
+  // what the last record moved (batch and campaign pair to characterized), shown until another batch opens
+  const [moved, setMoved] = useState<{ batchId: number; text: string } | null>(null);
   const o = outcome.data;
+  const recorded = useCallback(
+    (value?: RecordedOutcome) => {
+      if (value && o) {
+        const text = statusChangeText(value.statusChanges, o.batchName, `${o.elementA}–${o.elementB}`);
+        if (text !== null) setMoved({ batchId: o.batchId, text });
+      }
+      props.onChanged();
+    },
+    [o, props],
+  );
+  if (outcome.error) return <Banner tone="error">{outcome.error.message}</Banner>;
   if (!o || o.batchId !== props.batchId) return <p className="muted">Loading…</p>;
+  const onChanged = recorded;
   return (
     <>
+      {moved && moved.batchId === o.batchId ? (
+        <div data-testid="status-moves">
+          <Banner tone="info">{moved.text}</Banner>
+        </div>
+      ) : null}
       <p className="muted" data-testid="batch-heading">
         {o.batchName}: {o.elementA}–{o.elementB}, target {o.targetLabel ?? '–'}
         {o.targetDiameterNm !== null ? `, ${o.targetDiameterNm} nm` : ''}
         {o.nominalXB !== null ? `, ${(o.nominalXB * 100).toFixed(1)} at.% ${o.elementB} in the feed` : ''}
       </p>
       <div className="results-grid">
-        <SizesPanel key={`sizes:${o.batchId}`} outcome={o} onChanged={props.onChanged} />
-        <CompositionPanel key={`composition:${o.batchId}`} outcome={o} onChanged={props.onChanged} />
+        <SizesPanel key={`sizes:${o.batchId}`} outcome={o} onChanged={onChanged} />
+        <CompositionPanel key={`composition:${o.batchId}`} outcome={o} onChanged={onChanged} />
       </div>
-      <LineScanPanel key={`scans:${o.batchId}`} outcome={o} onChanged={props.onChanged} />
-      <ObservedPanel
-        key={`observed:${o.batchId}:${o.observed?.updatedAt ?? ''}`}
-        outcome={o}
-        onChanged={props.onChanged}
-      />
+      <LineScanPanel key={`scans:${o.batchId}`} outcome={o} onChanged={onChanged} />
+      <ObservedPanel key={`observed:${o.batchId}:${o.observed?.updatedAt ?? ''}`} outcome={o} onChanged={onChanged} />
     </>
   );
 }

@@ -1,6 +1,6 @@
 /** Composition of a batch: nominal (feed), bulk (ICP) and EDX values kept apart, deviations flagged, EDX warnings. */
 import { useState, type FormEvent } from 'react';
-import type { BatchOutcome, CompositionRecord } from '../../../../shared-model/api/outcomes';
+import type { BatchOutcome, CompositionRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { COMPOSITION_METHODS, type CompositionMethod } from '../../../../shared-model/characterization/composition';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
@@ -73,7 +73,7 @@ function CompositionTable(props: { record: CompositionRecord; elementB: string }
   );
 }
 
-export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () => void }) {
+export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: (recorded?: RecordedOutcome) => void }) {
   const { outcome } = props;
   const [nominal, setNominal] = useState(outcome.nominalXB !== null ? (outcome.nominalXB * 100).toFixed(1) : '');
   const [grid, setGrid] = useState('');
@@ -102,7 +102,7 @@ export function CompositionPanel(props: { outcome: BatchOutcome; onChanged: () =
       return;
     }
     clear();
-    props.onChanged();
+    props.onChanged(result.value);
   };
 
   const latest = outcome.compositions[outcome.compositions.length - 1];

@@ -1,7 +1,7 @@
 /** EDX line scans of a batch: import, the four model fits over the data, the chosen model with radius, core and shell. */
 import { useState, type FormEvent } from 'react';
 import { CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import type { BatchOutcome, LineScanRecord } from '../../../../shared-model/api/outcomes';
+import type { BatchOutcome, LineScanRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
 import { optionalFieldNumber, readForm } from '../../forms/typed-numbers';
@@ -206,7 +206,7 @@ function LineScanResult(props: { scan: LineScanRecord; onChanged: () => void; on
   );
 }
 
-export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => void }) {
+export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: (recorded?: RecordedOutcome) => void }) {
   const { outcome } = props;
   const [csvText, setCsvText] = useState('');
   const [sourceFile, setSourceFile] = useState<string | null>(null);
@@ -234,7 +234,7 @@ export function LineScanPanel(props: { outcome: BatchOutcome; onChanged: () => v
     setCsvText('');
     setSourceFile(null);
     setName('');
-    props.onChanged();
+    props.onChanged(result.value);
   };
   return (
     <section className="card" aria-label="EDX line scans">

@@ -1,6 +1,11 @@
 /** Observed architecture (confirm the suggestion or override it), prediction vs outcome, notes and file paths. */
 import { useState, type FormEvent } from 'react';
-import { OUTCOME_FILE_KINDS, type BatchOutcome, type OutcomeFileKind } from '../../../../shared-model/api/outcomes';
+import {
+  OUTCOME_FILE_KINDS,
+  type BatchOutcome,
+  type OutcomeFileKind,
+  type RecordedOutcome,
+} from '../../../../shared-model/api/outcomes';
 import { describeArchitecture } from '../../../../shared-model/architecture/labels';
 import { labelAgreement } from '../../../../shared-model/characterization/confusion';
 import { call } from '../../api/client';
@@ -29,7 +34,7 @@ const AGREEMENT_TEXT = {
   disagree: 'differs',
 } as const;
 
-export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => void }) {
+export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: (recorded?: RecordedOutcome) => void }) {
   const { outcome } = props;
   const choices = observedChoices(outcome.elementA, outcome.elementB);
   const [override, setOverride] = useState(outcome.observed?.label ?? outcome.suggestion?.label ?? 'alloy');
@@ -50,7 +55,7 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
     }
     observedErrors.clear();
     setReason('');
-    props.onChanged();
+    props.onChanged(result.value);
   };
   const saveNotes = async (event: FormEvent) => {
     event.preventDefault();
@@ -58,7 +63,7 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
     if (!result.ok) notesErrors.show(result.error);
     else {
       notesErrors.clear();
-      props.onChanged();
+      props.onChanged(result.value);
     }
   };
   const addFile = async (event: FormEvent) => {
@@ -72,7 +77,7 @@ export function ObservedPanel(props: { outcome: BatchOutcome; onChanged: () => v
     fileErrors.clear();
     setPath('');
     setFileNote('');
-    props.onChanged();
+    props.onChanged(result.value);
   };
 
   const observed = outcome.observed;
