@@ -8,6 +8,7 @@ import { BatchDesignView } from './views/BatchDesignView';
 import { BenchSheetView } from './views/BenchSheetView';
 import { CampaignsView } from './views/CampaignsView';
 import { ResultsView } from './views/ResultsView';
+import { ModelReviewView } from './views/ModelReviewView';
 import { NextBatchesView } from './views/NextBatchesView';
 import { ReagentsView } from './views/ReagentsView';
 import { CandidatesView } from './views/CandidatesView';
@@ -37,5 +38,6 @@ export const VIEWS: ViewEntry[] = [
   { id: 'reagents', label: 'Reagents', group: 'Plan', component: ReagentsView, ready: true },
   { id: 'bench-sheet', label: 'Bench sheet', group: 'Plan', component: BenchSheetView, ready: true },
   { id: 'results', label: 'Results', group: 'Learn', component: ResultsView, ready: true },
+  { id: 'model-review', label: 'Model review', group: 'Learn', component: ModelReviewView, ready: true },
   { id: 'next-batches', label: 'Next batches', group: 'Learn', component: NextBatchesView, ready: true },
 ];

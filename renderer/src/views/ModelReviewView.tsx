@@ -1,0 +1,388 @@
+/**
+ * Model review: how well the campaign's learned model predicts pairs it has not seen, beside physics alone
+ * and the "always the most common class" baseline. Headline validation is leave-one-pair-out (every outcome
+ * of a pair held out together); plain leave-one-out appears only as "known pairs, new conditions". Retrain
+ * runs as a job (progress, cancel). With too few outcomes the view says what to log next and shows physics
+ * only. The derivations are model-review/model-review-model.ts.
+ */
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  Tooltip,
+  XAxis,
+  YAxis,
+  ZAxis,
+} from 'recharts';
+import type { ReviewView } from '../../../shared-model/api/learn';
+import { useQuery } from '../api/hooks';
+import { useAppState } from '../app-state';
+import { Banner } from '../components/Banner';
+import { ModelStatus } from './next-batches/ModelStatus';
+import {
+  figureText,
+  headlineRows,
+  knownPairsText,
+  ldaAxisLabels,
+  ldaGroups,
+  loadingBars,
+  percentText,
+  PREDICTOR_COLOURS,
+  PREDICTOR_LABELS,
+  priorWeightText,
+  recallRows,
+  reliabilityPoints,
+  roundTicks,
+  timelineRows,
+  verdictText,
+} from './model-review/model-review-model';
+
+type Ready = Extract<ReviewView, { status: 'ready' }>;
+type TooFew = Extract<ReviewView, { status: 'too-few' }>;
+
+const UNIT_TICKS = roundTicks(0, 1, 0.2);
+const pctTick = (v: number) => `${Math.round(v * 100)} %`;
+
+function HeadlineTable(props: { review: Ready }) {
+  return (
+    <table className="data-table" aria-label="Validation figures" data-testid="headline-table">
+      <thead>
+        <tr>
+          <th>Predictor</th>
+          <th>Accuracy</th>
+          <th>Errors</th>
+          <th>Balanced accuracy</th>
+          <th title={`uniform guess: ln K = ${figureText(props.review.model.uniformLogLoss)}`}>Log-loss</th>
+          <th title="multiclass: mean of Σ (p − observed)², 0 best, 2 worst">Brier score</th>
+        </tr>
+      </thead>
+      <tbody>
+        {headlineRows(props.review).map((r) => (
+          <tr key={r.key} data-predictor={r.key}>
+            <td>{r.label}</td>
+            <td data-cell="accuracy">{r.accuracy}</td>
+            <td data-cell="errors">{r.errors}</td>
+            <td data-cell="balanced">{r.balancedAccuracy}</td>
+            <td data-cell="logloss">{r.logLoss}</td>
+            <td data-cell="brier">{r.brier}</td>
+          </tr>
+        ))}
+        <tr className="muted">
+          <td>Uniform guess (ln {props.review.classes.length})</td>
+          <td />
+          <td />
+          <td />
+          <td data-cell="uniform">{figureText(props.review.model.uniformLogLoss)}</td>
+          <td />
+        </tr>
+      </tbody>
+    </table>
+  );
+}
+
+function RecallTable(props: { review: Ready }) {
+  return (
+    <table className="data-table" aria-label="Per-class recall">
+      <thead>
+        <tr>
+          <th>Observed architecture</th>
+          <th>Outcomes</th>
+          <th>{PREDICTOR_LABELS.model}</th>
+          <th>{PREDICTOR_LABELS.physics}</th>
+          <th>{PREDICTOR_LABELS.majority}</th>
+        </tr>
+      </thead>
+      <tbody>
+        {recallRows(props.review).map((r) => (
+          <tr key={r.label}>
+            <td>{r.description}</td>
+            <td>{r.support}</td>
+            <td>{r.model}</td>
+            <td>{r.physics}</td>
+            <td>{r.majority}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+function ReliabilityChart(props: { review: Ready }) {
+  const model = reliabilityPoints(props.review.model);
+  const physics = reliabilityPoints(props.review.physics);
+  return (
+    <div className="chart-box" data-testid="reliability-chart">
+      <ResponsiveContainer width="100%" height="100%">
+        <ScatterChart margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+          <CartesianGrid strokeDasharray="3 3" />
+          <XAxis
+            dataKey="confidence"
+            type="number"
+            domain={[0, 1]}
+            ticks={UNIT_TICKS}
+            tickFormatter={pctTick}
+            name="stated probability"
+            label={{ value: 'probability given to the top class', position: 'insideBottom', offset: -14 }}
+          />
+          <YAxis
+            dataKey="observed"
+            type="number"
+            domain={[0, 1]}
+            ticks={UNIT_TICKS}
+            tickFormatter={pctTick}
+            name="observed"
+            label={{ value: 'right (fraction)', angle: -90, position: 'insideLeft' }}
+          />
+          <ZAxis dataKey="count" range={[30, 200]} name="outcomes" />
+          <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
+          <Legend verticalAlign="top" />
+          <ReferenceLine
+            segment={[
+              { x: 0, y: 0 },
+              { x: 1, y: 1 },
+            ]}
+            stroke="#9ca3af"
+            strokeDasharray="4 4"
+          />
+          <Scatter
+            name={PREDICTOR_LABELS.model}
+            data={model}
+            fill={PREDICTOR_COLOURS.model}
+            line
+            isAnimationActive={false}
+          />
+          <Scatter
+            name={PREDICTOR_LABELS.physics}
+            data={physics}
+            fill={PREDICTOR_COLOURS.physics}
+            line
+            isAnimationActive={false}
+          />
+        </ScatterChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}
+
+function TimelineChart(props: { review: Ready }) {
+  const rows = timelineRows(props.review);
+  if (rows.length === 0)
+    return <p className="muted small">No outcome has a date (made_on): the weekly timeline needs dated outcomes.</p>;
+  return (
+    <div className="chart-box" data-testid="timeline-chart">
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={rows} margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+          <CartesianGrid strokeDasharray="3 3" />
+          <XAxis
+            dataKey="week"
+            label={{ value: 'outcomes up to the week of', position: 'insideBottom', offset: -14 }}
+          />
+          <YAxis
+            domain={[0, 1]}
+            ticks={UNIT_TICKS}
+            tickFormatter={pctTick}
+            label={{ value: 'accuracy (new pairs)', angle: -90, position: 'insideLeft' }}
+          />
+          <Tooltip
+            formatter={(v) => (typeof v === 'number' ? percentText(v) : String(v))}
+            labelFormatter={(w) => {
+              const r = rows.find((x) => x.week === w);
+              return `week of ${String(w)}${r ? ` (${r.outcomes} outcomes)` : ''}`;
+            }}
+          />
+          <Legend verticalAlign="top" />
+          <Line
+            dataKey="modelAccuracy"
+            name={PREDICTOR_LABELS.model}
+            stroke={PREDICTOR_COLOURS.model}
+            strokeWidth={2}
+            connectNulls={false}
+            isAnimationActive={false}
+          />
+          <Line
+            dataKey="physicsAccuracy"
+            name={PREDICTOR_LABELS.physics}
+            stroke={PREDICTOR_COLOURS.physics}
+            strokeWidth={2}
+            isAnimationActive={false}
+          />
+        </LineChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}
+
+function LdaPanel(props: { review: Ready }) {
+  const { review } = props;
+  if (!review.lda) return <p className="muted">{review.ldaNote ?? 'No discriminant view for these outcomes.'}</p>;
+  const groups = ldaGroups(review);
+  const axes = ldaAxisLabels(review);
+  const bars = loadingBars(review);
+  return (
+    <>
+      <div className="chart-box" data-testid="lda-scatter">
+        <ResponsiveContainer width="100%" height="100%">
+          <ScatterChart margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis
+              dataKey="x"
+              type="number"
+              name={axes.x}
+              tickFormatter={(v: number) => String(Number(v.toFixed(1)))}
+              label={{ value: axes.x, position: 'insideBottom', offset: -14 }}
+            />
+            <YAxis
+              dataKey="y"
+              type="number"
+              name={axes.y}
+              tickFormatter={(v: number) => String(Number(v.toFixed(1)))}
+              label={{ value: axes.y, angle: -90, position: 'insideLeft' }}
+            />
+            <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(2)) : String(v))} />
+            <Legend verticalAlign="top" />
+            {groups.map((g) => (
+              <Scatter key={g.classKey} name={g.name} data={g.points} fill={g.colour} isAnimationActive={false} />
+            ))}
+          </ScatterChart>
+        </ResponsiveContainer>
+      </div>
+      <h3>Which descriptors separate the architectures</h3>
+      <p className="muted small">
+        Correlation of each standardised descriptor with the discriminant scores (structure correlations, −1 to 1),
+        strongest first.
+      </p>
+      <div className="chart-box" data-testid="loadings-chart" style={{ height: Math.max(220, bars.length * 28 + 60) }}>
+        <ResponsiveContainer width="100%" height="100%">
+          <BarChart data={bars} layout="vertical" margin={{ top: 10, right: 20, bottom: 10, left: 10 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis type="number" domain={[-1, 1]} ticks={roundTicks(-1, 1, 0.5)} />
+            <YAxis type="category" dataKey="label" width={220} />
+            <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
+            <Legend verticalAlign="top" />
+            <ReferenceLine x={0} stroke="#6b7280" />
+            <Bar dataKey="axis1" name="axis 1" fill="#2563eb" isAnimationActive={false} />
+            {review.lda.axes > 1 ? (
+              <Bar dataKey="axis2" name="axis 2" fill="#93c5fd" isAnimationActive={false} />
+            ) : null}
+          </BarChart>
+        </ResponsiveContainer>
+      </div>
+    </>
+  );
+}
+
+function ReadyReview(props: { review: Ready }) {
+  const { review } = props;
+  return (
+    <>
+      <section className="card" aria-label="Validation on new pairs">
+        <h2 className="card__title">
+          Validation on new pairs (leave-one-pair-out: {review.outcomes} outcomes, {review.pairs} pairs,{' '}
+          {review.classes.length} classes)
+        </h2>
+        <p data-testid="verdict">{verdictText(review)}</p>
+        <HeadlineTable review={review} />
+        <p className="muted small" data-testid="prior-weight">
+          {priorWeightText(review)}
+        </p>
+        <p className="muted small" data-testid="known-pairs">
+          {knownPairsText(review)}
+        </p>
+        {review.failed > 0 ? (
+          <p className="muted small">
+            {review.failed} failed syntheses train the success model, not the architecture model.
+          </p>
+        ) : null}
+        {review.left.length > 0 ? (
+          <p className="muted small">
+            {review.left.length} outcome{review.left.length === 1 ? '' : 's'} left out:{' '}
+            {review.left
+              .slice(0, 3)
+              .map((l) => l.reason)
+              .join('; ')}
+            {review.left.length > 3 ? '; …' : ''}
+          </p>
+        ) : null}
+      </section>
+      <section className="card" aria-label="Per-class recall">
+        <h2 className="card__title">Per-class recall (leave-one-pair-out)</h2>
+        <RecallTable review={review} />
+      </section>
+      <section className="card" aria-label="Reliability">
+        <h2 className="card__title">Are the probabilities honest? (10 bins, pooled over the folds)</h2>
+        <ReliabilityChart review={review} />
+        <p className="muted small">Points on the dashed diagonal: a stated 70 % is right 70 % of the time.</p>
+      </section>
+      <section className="card" aria-label="Timeline">
+        <h2 className="card__title">Week by week: accuracy on new pairs with the outcomes up to each week</h2>
+        <TimelineChart review={review} />
+      </section>
+      <section className="card" aria-label="Discriminant view">
+        <h2 className="card__title">The outcomes on the first two discriminant axes</h2>
+        <LdaPanel review={review} />
+      </section>
+    </>
+  );
+}
+
+function TooFewReview(props: { review: TooFew }) {
+  const { review } = props;
+  return (
+    <section className="card" aria-label="Too few outcomes">
+      <Banner tone="caution" testId="too-few">
+        Not enough to learn from yet: {review.message} The learned model needs at least {review.minOutcomes} labelled
+        outcomes of at least two architectures; until then predictions are physics alone.
+      </Banner>
+      {review.physics ? (
+        <p data-testid="physics-only">
+          Physics alone on the {review.outcomes} outcomes so far: {percentText(review.physics.accuracy)} right (
+          {review.physics.errors} errors), log-loss {figureText(review.physics.logLoss)} (uniform guess{' '}
+          {figureText(review.physics.uniformLogLoss)}).
+        </p>
+      ) : (
+        <p className="muted" data-testid="physics-only">
+          Physics predictions for each pair are in Candidates; no outcome can score them yet.
+        </p>
+      )}
+      {review.classes.length > 0 ? (
+        <p className="muted small">
+          Seen so far: {review.classes.map((c) => `${c.description} ×${c.count}`).join(', ')}.
+        </p>
+      ) : null}
+    </section>
+  );
+}
+
+export function ModelReviewView() {
+  const { campaignId, revision, bumpRevision } = useAppState();
+  const review = useQuery('learn.review', campaignId ? { campaignId } : null, `review:${campaignId}:${revision}`);
+  const stored = review.data?.stored ?? null;
+  return (
+    <section className="view" aria-labelledby="model-review-title">
+      <header className="view__header">
+        <h1 id="model-review-title">Model review</h1>
+        <span className="muted">How well the learned model predicts pairs it has not seen, beside physics</span>
+      </header>
+      {campaignId === null ? (
+        <p className="muted">Choose a campaign first; the model learns from its outcomes.</p>
+      ) : (
+        <div className="stack">
+          <ModelStatus campaignId={campaignId} revision={revision} onTrained={bumpRevision} />
+          {review.error ? <Banner tone="error">{review.error.message}</Banner> : null}
+          {stored === null ? null : stored.review.status === 'ready' ? (
+            <ReadyReview review={stored.review} />
+          ) : (
+            <TooFewReview review={stored.review} />
+          )}
+        </div>
+      )}
+    </section>
+  );
+}
