@@ -12,6 +12,7 @@ import { dispatchKnown } from '../services/dispatch';
 import type { ServiceContext } from '../services/context';
 import { checkWorkspace, closeWorkspace, isStoreRefusal, openWorkspace, restoreWorkspace } from '../services/workspace';
 import { CliError, type CliCommand, type CliContext, type OptionSpec } from './command';
+import { optionForField } from './field-option';
 import { commands } from './commands/index';
 
 const GLOBAL_OPTIONS: Record<string, OptionSpec> = {
@@ -115,7 +116,10 @@ export async function runCli(argv: readonly string[], env: NodeJS.ProcessEnv = p
       ): Promise<OperationOutput<Name>> => {
         workspace ??= openWorkspace({ dataDir });
         const result = await dispatchKnown(workspace, name, input);
-        if (!result.ok) throw new CliError(result.error.message);
+        if (!result.ok)
+          throw new CliError(
+            `${result.error.message}${optionForField(result.error.field, Object.keys(command.options ?? {}))}`,
+          );
         return result.value;
       },
       readTextFile: (path) => {

@@ -172,7 +172,7 @@ describe('pairwright recipe / reagents / catalog', () => {
             '--reducer',
             'nabh4',
           ],
-          /size\.xB\b.*0 and 100 at\.%/,
+          /0 and 100 at\.%.*\(input field size\.xB\)/,
         ],
         [
           [

@@ -145,13 +145,13 @@ describe('pairwright prediction commands', () => {
   });
 
   it.each([
-    [['predict', 'Ag-Pd', '--environment', 'N2'], /conditions\.environment/],
-    [['predict', 'Ag-Pd', '--time-h', '0'], /conditions\.timeH/],
-    [['predict', 'Ag-Pd', '--xB', '1.5'], /conditions\.xB/],
+    [['predict', 'Ag-Pd', '--environment', 'N2'], /environment must be .*\(option --environment\)/],
+    [['predict', 'Ag-Pd', '--time-h', '0'], /time \(h\) must be .*\(option --time-h\)/],
+    [['predict', 'Ag-Pd', '--xB', '1.5'], /composition must lie .*\(option --xB\)/],
     [['predict', 'Ag-Ag'], /two different elements/],
     [['predict', 'Ag-Xx'], /unknown element "Xx"/],
     [['predict', 'Ag-Pd', '--diameter-nm', 'abc'], /--diameter-nm must be a number/],
-    [['predict', 'Ag-Pd', '--temperature-k=-3'], /conditions\.temperatureK/],
+    [['predict', 'Ag-Pd', '--temperature-k=-3'], /temperature \(K\) must .*\(option --temperature-k\)/],
     [['rank', '--elements', 'Pt,Qq'], /unknown element "Qq"/],
     [['rank', '--target', 'hollow'], /target/],
   ])('bad input %j → one line, exit code 2', (args, message) => {

@@ -107,13 +107,16 @@ describe('pairwright simulate', () => {
     };
     bad(
       ['simulate', 'Fe-Pt', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10'],
-      /elementA.*Fe has no tight-binding parameters/,
+      /Fe has no tight-binding parameters.*\(input field elementA\)/,
     );
-    bad(['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '0', '--sweeps', '10'], /temperatureK/);
+    bad(
+      ['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '0', '--sweeps', '10'],
+      /temperature \(K\) must .*\(option --temperature-k\)/,
+    );
     bad(['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '0'], /sweeps/);
     bad(
       ['simulate', 'Ag-Pd', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10', '--shells', '45'],
-      /shells.*limit is 50000 atoms/,
+      /limit is 50000 atoms.*\(option --shells\)/,
     );
     bad(['simulate', 'Ag-Pd', '--temperature-k', '600', '--sweeps', '10'], /--xB is required/);
     bad(['simulate', 'AgPdX', '--xB', '0.5', '--temperature-k', '600', '--sweeps', '10'], /not a pair/);
