@@ -30,6 +30,7 @@ interface BatchRow {
   notes: string;
   created_at: string;
   updated_at: string;
+  history_outcome_id: number | null;
 }
 
 export interface StoredBatch {
@@ -49,6 +50,8 @@ export interface StoredBatch {
   notes: string;
   createdAt: string;
   updatedAt: string;
+  /** A row of an imported history table (migration 0012): no design of ours, its outcome observed. */
+  importedHistory: boolean;
 }
 
 function toStoredBatch(db: SqliteDatabase, row: BatchRow): StoredBatch {
@@ -89,6 +92,7 @@ function toStoredBatch(db: SqliteDatabase, row: BatchRow): StoredBatch {
     notes: row.notes,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
+    importedHistory: row.history_outcome_id !== null,
   };
 }
 
@@ -129,7 +133,7 @@ export function listBatchSummaries(
   const rows = db
     .prepare(
       `SELECT id, name, campaign_id, element_a, element_b, target, route, status, seed_batch_id, catalog_revisions,
-         json_extract(computed, '$.diameterNm') AS diameter_nm, created_at
+         json_extract(computed, '$.diameterNm') AS diameter_nm, created_at, history_outcome_id
        FROM batches ${where.length ? `WHERE ${where.join(' AND ')}` : ''} ORDER BY id DESC`,
     )
     .all(...params) as (Pick<
@@ -145,6 +149,7 @@ export function listBatchSummaries(
     | 'seed_batch_id'
     | 'catalog_revisions'
     | 'created_at'
+    | 'history_outcome_id'
   > & { diameter_nm: number })[];
   const revisions = currentRevisions(db);
   return rows.map((row) => ({
@@ -162,6 +167,143 @@ export function listBatchSummaries(
       ([key, revision]) => revisions.get(key) !== revision,
     ),
     createdAt: row.created_at,
+    importedHistory: row.history_outcome_id !== null,
+  }));
+}
+
+/** One row of an imported history table, kept as a characterized batch of its campaign. */
+export interface NewHistoryBatch {
+  campaignId: number;
+  pairId: number | null;
+  historyOutcomeId: number;
+  importId: number;
+  fileName: string | null;
+  line: number;
+  elementA: string;
+  elementB: string;
+  xB: number;
+  diameterNm: number;
+  temperatureK: number;
+  route: string;
+  observed: string;
+  madeOn: string | null;
+  notes: string;
+}
+
+export const HISTORY_BATCH_MODEL_VERSION = 'imported history';
+
+/**
+ * Writes the batch of an imported history row: characterized, with the conditions of the row as its
+ * `computed` record (no reagents: it was not designed here) and the observed label as its target.
+ */
+export function insertHistoryBatch(db: SqliteDatabase, batch: NewHistoryBatch): number {
+  const now = nowIso();
+  const origin = { importedHistory: true, importId: batch.importId, line: batch.line };
+  const computed = {
+    ...origin,
+    fileName: batch.fileName,
+    elementA: batch.elementA,
+    elementB: batch.elementB,
+    target: batch.observed,
+    route: batch.route,
+    xB: batch.xB,
+    xBPct: batch.xB * 100,
+    diameterNm: batch.diameterNm,
+    temperatureK: batch.temperatureK,
+    temperatureC: batch.temperatureK - 273.15,
+    madeOn: batch.madeOn,
+    modelVersion: HISTORY_BATCH_MODEL_VERSION,
+  };
+  const info = db
+    .prepare(
+      `INSERT INTO batches (name, campaign_id, pair_id, element_a, element_b, target, route, status, inputs, computed,
+         model_version, catalog_revisions, notes, created_at, updated_at, history_outcome_id)
+       VALUES (?, ?, ?, ?, ?, ?, ?, 'characterized', ?, ?, ?, '{}', ?, ?, ?, ?)`,
+    )
+    .run(
+      `History ${batch.elementA}-${batch.elementB} line ${batch.line}`,
+      batch.campaignId,
+      batch.pairId,
+      batch.elementA,
+      batch.elementB,
+      batch.observed,
+      batch.route,
+      JSON.stringify(origin),
+      JSON.stringify(computed),
+      HISTORY_BATCH_MODEL_VERSION,
+      batch.notes,
+      now,
+      now,
+      batch.historyOutcomeId,
+    );
+  return Number(info.lastInsertRowid);
+}
+
+/** The batch id of each imported history row of a campaign (history outcome id → batch id). */
+export function historyBatchIds(db: SqliteDatabase, campaignId: number): Map<number, number> {
+  const rows = db
+    .prepare('SELECT id, history_outcome_id FROM batches WHERE campaign_id = ? AND history_outcome_id IS NOT NULL')
+    .all(campaignId) as { id: number; history_outcome_id: number }[];
+  return new Map(rows.map((r) => [r.history_outcome_id, r.id]));
+}
+
+/** Batches seeded from a batch of this history import (they keep an import from being removed). */
+export function batchesSeededFromImport(
+  db: SqliteDatabase,
+  historyOutcomeIds: readonly number[],
+): { id: number; name: string }[] {
+  return db
+    .prepare(
+      `SELECT c.id, c.name FROM batches c JOIN batches s ON s.id = c.seed_batch_id
+       WHERE s.history_outcome_id IN (SELECT value FROM json_each(?)) ORDER BY c.id`,
+    )
+    .all(JSON.stringify(historyOutcomeIds)) as { id: number; name: string }[];
+}
+
+/**
+ * The conditions of a campaign's own batches (not imported history) for learning: pair, route, planned
+ * size, nominal composition (xB, or xBPct of designs saved before the fraction) and highest temperature.
+ */
+export interface BatchConditions {
+  id: number;
+  elementA: string;
+  elementB: string;
+  route: string;
+  diameterNm: number | null;
+  xB: number | null;
+  temperatureC: number | null;
+  createdAt: string;
+}
+
+export function listOwnBatchConditions(db: SqliteDatabase, campaignId: number): BatchConditions[] {
+  const rows = db
+    .prepare(
+      `SELECT id, element_a, element_b, route, created_at,
+         json_extract(computed, '$.diameterNm') AS diameter_nm,
+         coalesce(json_extract(computed, '$.xB'), json_extract(computed, '$.xBPct') / 100.0) AS x_b,
+         json_extract(computed, '$.temperatureC') AS temperature_c
+       FROM batches WHERE campaign_id = ? AND history_outcome_id IS NULL ORDER BY id`,
+    )
+    .all(campaignId) as {
+    id: number;
+    element_a: string;
+    element_b: string;
+    route: string;
+    created_at: string;
+    diameter_nm: unknown;
+    x_b: unknown;
+    temperature_c: unknown;
+  }[];
+  const num = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+  return rows.map((r) => ({
+    id: r.id,
+    elementA: r.element_a,
+    elementB: r.element_b,
+    route: r.route,
+    diameterNm: num(r.diameter_nm),
+    xB: num(r.x_b),
+    temperatureC: num(r.temperature_c),
+    createdAt: r.created_at,
   }));
 }
 

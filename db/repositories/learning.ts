@@ -55,10 +55,11 @@ export function listHistoryImports(db: SqliteDatabase, campaignId: number): Hist
   return rows.map(toImport);
 }
 
+/** Writes the import and its rows in one transaction; `outcomeIds` are the row ids in the order of `rows`. */
 export function insertHistoryImport(
   db: SqliteDatabase,
   input: { campaignId: number; fileName: string | null; fingerprint: string; rows: readonly HistoryRow[] },
-): HistoryImportRecord {
+): HistoryImportRecord & { outcomeIds: number[] } {
   const id = db.transaction(() => {
     const info = db
       .prepare(
@@ -67,12 +68,13 @@ export function insertHistoryImport(
       )
       .run(input.campaignId, input.fileName, input.fingerprint, input.rows.length, nowIso());
     const importId = Number(info.lastInsertRowid);
+    const ids: number[] = [];
     const insert = db.prepare(
       `INSERT INTO history_outcomes (import_id, campaign_id, line, element_a, element_b, xb, diameter_nm, temperature_k,
          route, observed, made_on, notes) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
     );
     for (const r of input.rows) {
-      insert.run(
+      const row = insert.run(
         importId,
         input.campaignId,
         r.line,
@@ -86,11 +88,22 @@ export function insertHistoryImport(
         r.madeOn,
         r.notes,
       );
+      ids.push(Number(row.lastInsertRowid));
     }
-    return importId;
+    return { importId, ids };
   })();
-  const row = db.prepare('SELECT * FROM history_imports WHERE id = ?').get(id) as ImportRow;
-  return toImport(row);
+  const row = db.prepare('SELECT * FROM history_imports WHERE id = ?').get(id.importId) as ImportRow;
+  return { ...toImport(row), outcomeIds: id.ids };
+}
+
+/** The ids of the rows of one import (an unknown import is refused). */
+export function historyOutcomeIdsOfImport(db: SqliteDatabase, importId: number): number[] {
+  const found = db.prepare('SELECT id FROM history_imports WHERE id = ?').get(importId);
+  if (!found) throw new DomainError('not_found', `no history import with id ${importId}`, 'importId');
+  const rows = db.prepare('SELECT id FROM history_outcomes WHERE import_id = ? ORDER BY id').all(importId) as {
+    id: number;
+  }[];
+  return rows.map((r) => r.id);
 }
 
 export function removeHistoryImport(db: SqliteDatabase, importId: number): number {
@@ -115,6 +128,8 @@ interface OutcomeRow {
 }
 
 export interface HistoryOutcomeRecord extends LearningOutcome {
+  /** The row id in history_outcomes (the learning id is "h<rowId>"). */
+  rowId: number;
   importId: number;
   line: number;
   notes: string;
@@ -136,6 +151,7 @@ export function listHistoryOutcomes(db: SqliteDatabase, campaignId: number): His
     observed: r.observed,
     madeOn: r.made_on,
     notes: r.notes,
+    rowId: r.id,
     importId: r.import_id,
     line: r.line,
   }));

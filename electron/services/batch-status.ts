@@ -123,6 +123,13 @@ export function setBatchStatus(
 ): { batch: StoredBatch; inventoryEffect: InventoryEffect | null } {
   return db.transaction(() => {
     const current = getBatch(db, move.id);
+    if (current.importedHistory) {
+      throw invalid(
+        'status',
+        `batch #${current.id} "${current.name}" is a row of imported history: it stays characterized ` +
+          '(it was made elsewhere and took nothing from the inventory)',
+      );
+    }
     if (!statusMoveAllowed(current.status, move.status)) {
       throw invalid(
         'status',

@@ -39,6 +39,13 @@ export function resolveLineage(db: SqliteDatabase, input: BatchDesignInput): Bat
   const seeds = input.seeds;
   if (!seeds?.seedBatchId) return input;
   const seedBatch = getBatch(db, seeds.seedBatchId, 'seeds.seedBatchId');
+  if (seedBatch.importedHistory) {
+    throw invalid(
+      'seeds.seedBatchId',
+      `batch #${seedBatch.id} "${seedBatch.name}" is a row of imported history: it has no design or measured ` +
+        'seeds to grow on; choose a batch made here',
+    );
+  }
   if (seedBatch.status === 'planned') {
     throw invalid(
       'seeds.seedBatchId',
@@ -260,6 +267,15 @@ export const batchHandlers: HandlerMap<keyof typeof batchOperations> = {
   },
 
   'batches.remove': (input, { store }) => {
+    const batch = getBatch(store.db, input.id);
+    if (batch.importedHistory) {
+      throw new DomainError(
+        'conflict',
+        `batch #${batch.id} "${batch.name}" is a row of imported history; remove its import ` +
+          '(Results → Import history) to take its rows away',
+        'id',
+      );
+    }
     removeBatch(store.db, input.id);
     return { removed: input.id };
   },

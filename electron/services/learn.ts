@@ -4,9 +4,11 @@
  * stored as a model with its version and the ids of the outcomes it was trained on), the stored review,
  * and proposals from the stored model (stored with the model version and those ids).
  */
+import { batchesSeededFromImport, historyBatchIds, insertHistoryBatch } from '../../db/repositories/batches';
 import { getCampaign } from '../../db/repositories/campaigns';
 import {
   findImportByFingerprint,
+  historyOutcomeIdsOfImport,
   insertHistoryImport,
   insertMetalPrice,
   insertModel,
@@ -19,7 +21,8 @@ import {
   removeHistoryImport,
   type HistoryImportRecord,
 } from '../../db/repositories/learning';
-import { listPairs } from '../../db/repositories/pairs';
+import { setObservation, setOutcomeNotes } from '../../db/repositories/outcome-observations';
+import { findPair, listPairs } from '../../db/repositories/pairs';
 import type { Store } from '../../db/store';
 import type { HistoryImportSummary, learnOperations, ProposalSet, ReviewView } from '../../shared-model/api/learn';
 import { DomainError } from '../../shared-model/api/result';
@@ -43,7 +46,7 @@ const summaryOf = (r: HistoryImportRecord): HistoryImportSummary => ({
 
 /** The outcomes the campaign's model learns from: its imported history. */
 function campaignOutcomes(store: Store, campaignId: number): LearningOutcome[] {
-  return listHistoryOutcomes(store.db, campaignId).map(({ importId: _i, line: _l, notes: _n, ...o }) => o);
+  return listHistoryOutcomes(store.db, campaignId).map(({ importId: _i, line: _l, notes: _n, rowId: _r, ...o }) => o);
 }
 
 /** The campaign's elements: those of its candidate pairs and of its outcomes. */
@@ -83,12 +86,46 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
         'csvText',
       );
     }
-    const record = insertHistoryImport(store.db, {
-      campaignId,
-      fileName: fileName ?? null,
-      fingerprint: table.fingerprint,
-      rows: table.rows,
-    });
+    // The table, its rows and one characterized batch per row with its observation: all or none.
+    const { record, batchIds } = store.db.transaction(() => {
+      const stored = insertHistoryImport(store.db, {
+        campaignId,
+        fileName: fileName ?? null,
+        fingerprint: table.fingerprint,
+        rows: table.rows,
+      });
+      const ids = table.rows.map((row, i) => {
+        const batchId = insertHistoryBatch(store.db, {
+          campaignId,
+          pairId: findPair(store.db, campaignId, row.elementA, row.elementB)?.id ?? null,
+          historyOutcomeId: stored.outcomeIds[i] as number,
+          importId: stored.id,
+          fileName: stored.fileName,
+          line: row.line,
+          elementA: row.elementA,
+          elementB: row.elementB,
+          xB: row.xB,
+          diameterNm: row.diameterNm,
+          temperatureK: row.temperatureK,
+          route: row.route,
+          observed: row.observed,
+          madeOn: row.madeOn,
+          notes: row.notes,
+        });
+        if (row.observed === 'failed') {
+          setOutcomeNotes(store.db, batchId, 'imported history: the synthesis gave no usable particles (failed)');
+        } else {
+          setObservation(store.db, batchId, {
+            label: row.observed,
+            decision: 'override',
+            suggestedLabel: null,
+            reason: `imported history (line ${row.line})`,
+          });
+        }
+        return batchId;
+      });
+      return { record: stored, batchIds: ids };
+    })();
     const labels: Record<string, number> = {};
     for (const r of table.rows) labels[r.observed] = (labels[r.observed] ?? 0) + 1;
     return {
@@ -97,15 +134,18 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
       labels,
       notes: table.notes,
       duplicateOf: previous ? summaryOf(previous) : null,
+      batchIds,
     };
   },
 
   'learn.history': ({ campaignId }, { store }) => {
     getCampaign(store.db, campaignId);
+    const batchOf = historyBatchIds(store.db, campaignId);
     return {
       imports: listHistoryImports(store.db, campaignId).map(summaryOf),
       outcomes: listHistoryOutcomes(store.db, campaignId).map((o) => ({
         id: o.id,
+        batchId: batchOf.get(o.rowId) ?? null,
         importId: o.importId,
         line: o.line,
         pair: `${o.elementA}-${o.elementB}`,
@@ -120,7 +160,21 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
     };
   },
 
-  'learn.removeImport': ({ importId }, { store }) => ({ removed: removeHistoryImport(store.db, importId) }),
+  'learn.removeImport': ({ importId }, { store }) =>
+    store.db.transaction(() => {
+      const rowIds = historyOutcomeIdsOfImport(store.db, importId);
+      const seeded = batchesSeededFromImport(store.db, rowIds);
+      if (seeded.length > 0) {
+        throw new DomainError(
+          'conflict',
+          `batches of this import are the seed batches of ${seeded.map((b) => `#${b.id} ${b.name}`).join(', ')}; ` +
+            'remove those first',
+          'importId',
+        );
+      }
+      // The batches go with their rows (history_outcome_id ON DELETE CASCADE), and their observations with them.
+      return { removed: removeHistoryImport(store.db, importId), batchesRemoved: rowIds.length };
+    })(),
 
   'learn.setPrice': (input, { store }) => insertMetalPrice(store.db, input),
 

@@ -113,6 +113,8 @@ export interface BatchSummary {
   seedBatchId: number | null;
   catalogChanged: boolean;
   createdAt: string;
+  /** A row of an imported history table: characterized, its outcome observed, no design of ours. */
+  importedHistory: boolean;
 }
 
 export interface InventoryRecord extends InventoryItem {

@@ -27,10 +27,14 @@ export interface HistoryImportResult {
   notes: string[];
   /** Set when the same table had been imported before and duplicates were allowed. */
   duplicateOf: HistoryImportSummary | null;
+  /** The batch made of each row (characterized, marked imported history), in the order of the rows. */
+  batchIds: number[];
 }
 
 export interface HistoryOutcomeView {
   id: string;
+  /** The batch of this row (marked imported history). */
+  batchId: number | null;
   importId: number;
   line: number;
   pair: string;
@@ -116,9 +120,9 @@ export const learnOperations = {
     summary: 'Imported history tables and their outcomes of a campaign',
     input: z.object({ campaignId }),
   }),
-  'learn.removeImport': operation<{ removed: number }>()({
+  'learn.removeImport': operation<{ removed: number; batchesRemoved: number }>()({
     kind: 'command',
-    summary: 'Remove one imported history table with its rows',
+    summary: 'Remove one imported history table with its rows and their batches',
     input: z.object({ importId: idSchema }),
   }),
   'learn.setPrice': operation<MetalPriceView>()({
