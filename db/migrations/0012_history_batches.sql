@@ -17,7 +17,7 @@ SELECT
   h.element_a, h.element_b, h.observed, h.route, 'characterized',
   json_object('importedHistory', json('true'), 'importId', h.import_id, 'line', h.line),
   json_object('importedHistory', json('true'), 'elementA', h.element_a, 'elementB', h.element_b,
-    'target', h.observed, 'route', h.route, 'xB', h.xb, 'xBPct', h.xb * 100, 'diameterNm', h.diameter_nm,
+    'target', h.observed, 'route', h.route, 'xB', h.xb, 'diameterNm', h.diameter_nm,
     'temperatureK', h.temperature_k, 'temperatureC', h.temperature_k - 273.15, 'madeOn', h.made_on,
     'importId', h.import_id, 'line', h.line, 'fileName', i.file_name, 'modelVersion', 'imported history'),
   'imported history', '{}', h.notes, i.created_at, i.created_at, h.id

@@ -207,7 +207,6 @@ export function insertHistoryBatch(db: SqliteDatabase, batch: NewHistoryBatch): 
     target: batch.observed,
     route: batch.route,
     xB: batch.xB,
-    xBPct: batch.xB * 100,
     diameterNm: batch.diameterNm,
     temperatureK: batch.temperatureK,
     temperatureC: batch.temperatureK - 273.15,
