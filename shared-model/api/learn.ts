@@ -28,13 +28,13 @@ export interface HistoryImportResult {
   /** Set when the same table had been imported before and duplicates were allowed. */
   duplicateOf: HistoryImportSummary | null;
   /** The batch made of each row (characterized, marked imported history), in the order of the rows. */
-  batchIds: number[];
+  batchIds?: number[];
 }
 
 export interface HistoryOutcomeView {
   id: string;
   /** The batch of this row (marked imported history). */
-  batchId: number | null;
+  batchId?: number | null;
   importId: number;
   line: number;
   pair: string;

@@ -56,15 +56,16 @@ describe('imported history rows are batches', () => {
       fileName: 'history.csv',
     });
     expect(imported.batchIds).toHaveLength(3);
+    const batchIds = imported.batchIds ?? [];
 
     const list = await ok<BatchSummary[]>('batches.list', { campaignId: c.id });
-    expect(list.map((b) => b.id).sort()).toEqual([...imported.batchIds].sort());
+    expect(list.map((b) => b.id).sort()).toEqual([...batchIds].sort());
     expect(list.every((b) => b.status === 'characterized' && b.importedHistory)).toBe(true);
     const ptNi = list.find((b) => b.elementA === 'Pt');
     expect(ptNi?.diameterNm).toBe(5);
     expect(ptNi?.route).toBe('organic'); // the table's oleylamine route
 
-    const [first, second, third] = imported.batchIds as [number, number, number];
+    const [first, second, third] = batchIds as [number, number, number];
     const outcome = await ok<BatchOutcome>('outcomes.get', { batchId: second });
     expect(outcome.observed?.label).toBe('Ag@Au');
     expect(outcome.nominalXB).toBeCloseTo(0.5, 12);
@@ -86,7 +87,7 @@ describe('imported history rows are batches', () => {
     expect(confusion.unmatched).toBe(1);
 
     const history = await ok<{ outcomes: HistoryOutcomeView[] }>('learn.history', { campaignId: c.id });
-    expect(history.outcomes.map((o) => o.batchId)).toEqual(imported.batchIds);
+    expect(history.outcomes.map((o) => o.batchId)).toEqual(batchIds);
   });
 
   it('a bad row stores no batch; removing the import removes its batches and observations', async () => {
@@ -114,7 +115,7 @@ describe('imported history rows are batches', () => {
   it('an imported batch keeps its status, and is not removed alone', async () => {
     const c = await ok<Campaign>('campaigns.create', { name: 'Guards' });
     const imported = await ok<HistoryImportResult>('learn.importHistory', { campaignId: c.id, csvText: TABLE });
-    const id = imported.batchIds[0] as number;
+    const id = imported.batchIds?.[0] as number;
     const move = await failure('batches.setStatus', { id, status: 'planned' });
     expect(move.message).toContain('imported history');
     const remove = await failure('batches.remove', { id, confirm: true });
