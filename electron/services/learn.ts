@@ -4,7 +4,12 @@
  * stored as a model with its version and the ids of the outcomes it was trained on), the stored review,
  * and proposals from the stored model (stored with the model version and those ids).
  */
-import { batchesSeededFromImport, historyBatchIds, insertHistoryBatch } from '../../db/repositories/batches';
+import {
+  batchesSeededFromImport,
+  historyBatchIds,
+  insertHistoryBatch,
+  listOwnBatchConditions,
+} from '../../db/repositories/batches';
 import { getCampaign } from '../../db/repositories/campaigns';
 import {
   findImportByFingerprint,
@@ -21,7 +26,7 @@ import {
   removeHistoryImport,
   type HistoryImportRecord,
 } from '../../db/repositories/learning';
-import { setObservation, setOutcomeNotes } from '../../db/repositories/outcome-observations';
+import { getObservation, setObservation, setOutcomeNotes } from '../../db/repositories/outcome-observations';
 import { findPair, listPairs } from '../../db/repositories/pairs';
 import type { Store } from '../../db/store';
 import type { HistoryImportSummary, learnOperations, ProposalSet, ReviewView } from '../../shared-model/api/learn';
@@ -33,6 +38,7 @@ import { proposeBatches } from '../../shared-model/learn/proposals';
 import { DEFAULT_REVIEW_SETTINGS, type ModelReview, type ReviewSettings } from '../../shared-model/learn/review';
 import { LEARN_MODEL_VERSION } from '../../shared-model/learn/outcome-model';
 import { parseRankTarget } from '../../shared-model/prediction/rank';
+import { DEFAULT_TEMPERATURE_C, ROUTES, type SynthesisRoute } from '../../shared-model/recipes/design-input';
 import { learnJobsFor } from '../workers/learn-jobs';
 import type { HandlerMap } from './context';
 
@@ -44,9 +50,35 @@ const summaryOf = (r: HistoryImportRecord): HistoryImportSummary => ({
   createdAt: r.createdAt,
 });
 
-/** The outcomes the campaign's model learns from: its imported history. */
-function campaignOutcomes(store: Store, campaignId: number): LearningOutcome[] {
-  return listHistoryOutcomes(store.db, campaignId).map(({ importId: _i, line: _l, notes: _n, rowId: _r, ...o }) => o);
+/**
+ * The outcomes the campaign's model learns from: its imported history (ids "h<row>") and its own batches
+ * with a recorded observed architecture (outcomes.record; ids "b<batch id>"), at their planned size,
+ * nominal composition, route and highest temperature (the route's usual one when the design gives none),
+ * dated by the day the batch was saved. A batch whose design lacks the size or composition is left out.
+ */
+export function campaignOutcomes(store: Store, campaignId: number): LearningOutcome[] {
+  const history = listHistoryOutcomes(store.db, campaignId).map(
+    ({ importId: _i, line: _l, notes: _n, rowId: _r, ...o }) => o,
+  );
+  const own: LearningOutcome[] = [];
+  for (const b of listOwnBatchConditions(store.db, campaignId)) {
+    const label = getObservation(store.db, b.id).observed?.label ?? null;
+    if (label === null || b.diameterNm === null || b.xB === null || b.xB <= 0 || b.xB >= 1) continue;
+    if (!(ROUTES as readonly string[]).includes(b.route)) continue;
+    const route = b.route as SynthesisRoute;
+    own.push({
+      id: `b${b.id}`,
+      elementA: b.elementA,
+      elementB: b.elementB,
+      xB: b.xB,
+      diameterNm: b.diameterNm,
+      temperatureK: (b.temperatureC ?? DEFAULT_TEMPERATURE_C[route]) + 273.15,
+      route,
+      observed: label,
+      madeOn: b.createdAt.slice(0, 10),
+    });
+  }
+  return [...history, ...own];
 }
 
 /** The campaign's elements: those of its candidate pairs and of its outcomes. */
@@ -186,7 +218,8 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
     if (outcomes.length === 0) {
       throw new DomainError(
         'invalid_input',
-        'the campaign has no outcomes to learn from; import a history table first (Results → Import history)',
+        'the campaign has no outcomes to learn from; import a history table first (Results → Import history) ' +
+          'or record the observed architecture of a characterized batch',
         'campaignId',
       );
     }
