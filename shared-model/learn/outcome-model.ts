@@ -21,7 +21,8 @@ export const MIN_OUTCOMES = 12;
 /** Outcomes from which the prior weight is tuned by leave-one-pair-out log-loss (DOMAIN.md). */
 export const TUNE_PRIOR_FROM = 30;
 export const DEFAULT_PRIOR_WEIGHT = 0.05;
-export const PRIOR_WEIGHT_CHOICES: readonly number[] = [0.02, 0.05, 0.15];
+/** The grid the prior weight is tuned over (per pseudo-outcome; a real outcome weighs 1). */
+export const PRIOR_WEIGHT_CHOICES: readonly number[] = [0.01, 0.05, 0.15, 0.5];
 export const UNIFORM_FLOOR = 0.001;
 
 /** One outcome as the learning code reads it: a condition, the observed label (or "failed") and its date. */

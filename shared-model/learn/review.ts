@@ -110,6 +110,8 @@ export type ModelReview =
       pairs: number;
       priorWeight: number;
       priorWeightTuning: { weight: number; logLoss: number }[];
+      /** How the prior weight was chosen, in words (tuned or not; the tuning is not nested). */
+      priorWeightNote: string;
       model: ClassifierFigures;
       physics: ClassifierFigures;
       majority: ClassifierFigures;
@@ -281,6 +283,15 @@ export function reviewCampaign(
     tuning.push({ weight: w, logLoss: classifierFigures(predictions.model, observed, classes).logLoss, predictions });
   }
   const best = tuning.reduce((a, b) => (b.logLoss < a.logLoss - 1e-12 ? b : a));
+  const priorWeightNote =
+    settings.priorWeight !== 'tune'
+      ? `prior weight ${best.weight} per physics pseudo-outcome, as set`
+      : weights.length === 1
+        ? `prior weight ${best.weight} per physics pseudo-outcome (the default); it is tuned by ` +
+          `leave-one-pair-out log-loss once ${TUNE_PRIOR_FROM} labelled outcomes are logged (${labelled.length} now)`
+        : `prior weight ${best.weight} per physics pseudo-outcome, the lowest leave-one-pair-out log-loss of ` +
+          `${weights.join(', ')}; not nested: the same held-out pairs chose the weight and score the model, ` +
+          'so its figures may be slightly optimistic';
   const looPredictions = validate(labelled, loo, pseudoFolds, best.weight, classes, settings.C, hooks, step);
 
   report(0.86, 'weekly timeline');
@@ -393,6 +404,7 @@ export function reviewCampaign(
     pairs: pairs.size,
     priorWeight: best.weight,
     priorWeightTuning: tuning.map((t) => ({ weight: t.weight, logLoss: t.logLoss })),
+    priorWeightNote,
     model: classifierFigures(best.predictions.model, observed, classes),
     physics: classifierFigures(best.predictions.physics, observed, classes),
     majority: classifierFigures(best.predictions.majority, observed, classes),

@@ -58,6 +58,8 @@ function reviewJson(stored: StoredReview): Record<string, unknown> {
     pairs: r.pairs,
     priorWeight: r.priorWeight,
     priorWeightTuning: r.priorWeightTuning,
+    // models stored before the note was written have none
+    priorWeightNote: (r.priorWeightNote as string | undefined) ?? null,
     model: r.model,
     physics: r.physics,
     majority: r.majority,
@@ -83,6 +85,7 @@ function reviewText(stored: StoredReview): string {
       `${r.failed} failed; ` +
       `classes ${r.classes.map((c) => `${c.key} ${c.count}`).join(', ')}; physics prior weight ${r.priorWeight}`,
     'validation: leave-one-pair-out (every outcome of a pair held out together)',
+    ...((r.priorWeightNote as string | undefined) ? [r.priorWeightNote] : []),
     line('model', r.model),
     line('physics', r.physics),
     line('majority', r.majority),
