@@ -18,12 +18,12 @@ import {
   classifierProbabilities,
   floorProbabilities,
   successProbabilities,
+  UNIFORM_FLOOR,
   type PreparedOutcome,
 } from './outcome-model';
 import { physicsProbabilities } from './physics';
 import type { FittedCampaignModel } from './review';
 import { applyColumnScaler } from './standardise';
-import { predictLogistic } from './logistic';
 
 export interface MetalPrice {
   symbol: string;
@@ -99,6 +99,40 @@ function targetProbability(
   return p;
 }
 
+/**
+ * targetProbability(floorProbabilities(predictLogistic(params, row))) for one drawn parameter set, with the
+ * same operations in the same order, into preallocated arrays (the proposal's inner loop).
+ */
+function drawnTargetProbability(
+  params: { weights: number[][]; intercepts: number[] },
+  row: readonly number[],
+  wanted: Uint8Array,
+  scores: Float64Array,
+  probs: Float64Array,
+): number {
+  const K = params.intercepts.length;
+  let max = -Infinity;
+  for (let k = 0; k < K; k++) {
+    let z = params.intercepts[k] as number;
+    const w = params.weights[k] as number[];
+    for (let j = 0; j < w.length; j++) z += (w[j] as number) * (row[j] as number);
+    scores[k] = z;
+    if (z > max) max = z;
+  }
+  let sum = 0;
+  for (let k = 0; k < K; k++) {
+    const e = Math.exp((scores[k] as number) - max);
+    probs[k] = e;
+    sum += e;
+  }
+  let p = 0;
+  for (let k = 0; k < K; k++) {
+    if (wanted[k] !== 1) continue;
+    p += (1 - UNIFORM_FLOOR) * ((probs[k] as number) / sum) + UNIFORM_FLOOR / K;
+  }
+  return p;
+}
+
 function formatP(p: number): string {
   return p.toFixed(2);
 }
@@ -117,8 +151,17 @@ export function proposeBatches(
   let excludedTested = 0;
   let excludedFailed = 0;
   const open: Candidate[] = [];
+  // Outcomes by pair and route: a candidate is compared only with those (sameCondition needs both equal).
+  const byPairRoute = new Map<string, PreparedOutcome[]>();
+  for (const o of outcomes) {
+    const key = `${o.condition.pair}|${o.condition.route}`;
+    const list = byPairRoute.get(key);
+    if (list) list.push(o);
+    else byPairRoute.set(key, [o]);
+  }
   for (const c of candidates) {
-    const matches = outcomes.filter((o) => sameCondition(o.condition, c.condition));
+    const near = byPairRoute.get(`${c.condition.pair}|${c.condition.route}`) ?? [];
+    const matches = near.filter((o) => sameCondition(o.condition, c.condition));
     if (matches.some((o) => o.failed) && !settings.includeFailed) {
       excludedFailed++;
       continue;
@@ -152,16 +195,15 @@ export function proposeBatches(
   const z = applyColumnScaler(fitted.classifier.scaler, features);
   const canDraw = fitted.classifier.hessianCholesky.length > 0 && modelKnowsTarget;
   const draws: Float64Array[] = [];
+  const wantedMask = wanted.map((w) => Uint8Array.from(classes, (k) => (w.includes(k) ? 1 : 0)));
+  const scores = new Float64Array(classes.length);
+  const probs = new Float64Array(classes.length);
   for (let d = 0; d < POSTERIOR_DRAWS; d++) {
     const out = new Float64Array(open.length);
     if (canDraw) {
       const params = logisticParameterDraw(fitted.classifier, random);
       z.forEach((row, i) => {
-        out[i] = targetProbability(
-          floorProbabilities(predictLogistic(params, row), classes.length),
-          classes,
-          wanted[i] as ClassKey[],
-        );
+        out[i] = drawnTargetProbability(params, row, wantedMask[i] as Uint8Array, scores, probs);
       });
     } else {
       open.forEach((_, i) => {
