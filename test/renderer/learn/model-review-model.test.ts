@@ -57,6 +57,7 @@ function review(model: ClassifierFigures, physics: ClassifierFigures): Ready {
     pairs: 8,
     priorWeight: 0.05,
     priorWeightTuning: [{ weight: 0.05, logLoss: 0.8 }],
+    priorWeightNote: 'chosen by leave-one-pair-out log-loss; not nested',
     model,
     physics,
     majority: figures(1 / 3, 1.1),

@@ -211,7 +211,9 @@ export function priorWeightText(review: Ready): string {
   return (
     `Physics prior: each physics pseudo-outcome weighs ${review.priorWeight} of an observed outcome` +
     (tuned
-      ? `, chosen by leave-one-pair-out log-loss among ${review.priorWeightTuning.map((t) => t.weight).join(', ')}.`
+      ? `, chosen by leave-one-pair-out log-loss among ${review.priorWeightTuning.map((t) => t.weight).join(', ')}.` +
+        ' Not nested: the same held-out pairs chose the weight and score the model, so the figures may be slightly' +
+        ' optimistic.'
       : ' (the starting weight; tuned once 30 outcomes exist).')
   );
 }
