@@ -33,7 +33,10 @@ export default defineConfig({
     setupFiles: ['test/support/setup-temp-dirs.ts'],
     globalSetup: ['test/support/global-temp-root.ts'],
     projects: [
-      { extends: true, test: { name: 'unit', include: UNIT, exclude: UNIT_EXCLUDE } },
+      // The fast tier shares one module graph per worker (isolate: false): 102 files in 25 s on a quiet 2-core
+      // machine instead of 61 s, two thirds of which went to importing the same modules again for each file.
+      // Tests hold no module state between files; .ci/run's shuffled run would catch one that did.
+      { extends: true, test: { name: 'unit', include: UNIT, exclude: UNIT_EXCLUDE, isolate: false } },
       {
         extends: true,
         test: {
