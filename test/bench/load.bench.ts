@@ -1,17 +1,21 @@
 /**
  * Load figures on a large store: 50 campaigns, 5,000 batches (100 a campaign) and 20,000 outcome records with their
  * raw data (per batch: a size import with its diameters, a composition with its measurements, a line scan with its
- * points, an observed architecture), plus the demo history table in every campaign. The store is built fast: the
- * demo campaign is loaded through dispatch, then its rows are copied by direct inserts in one transaction. Then the
- * heaviest view queries, ranking and proposals are timed through dispatch (median of 5, target < 100 ms each), and
- * the peak resident memory of a queue of 20 Monte Carlo runs is read. Figures only; nothing is asserted.
+ * points, an observed architecture), plus the demo history table in every campaign (70 rows, each also stored as a
+ * characterized batch: 8,500 batches in all). The store is built fast: the demo campaign is loaded through dispatch,
+ * then its rows are copied by direct inserts in one transaction. Then the heaviest view queries, ranking and proposals
+ * are timed through dispatch (median of 5, target < 100 ms each), and the peak resident memory of a queue of 20 Monte
+ * Carlo runs is read. Figures only; nothing is asserted.
  */
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
+import type { Statement } from 'better-sqlite3';
+import { z } from 'zod';
 import { openStore, type SqliteDatabase, type Store } from '../../db/store';
-import { dispatch } from '../../electron/services/dispatch';
+import { dispatchKnown } from '../../electron/services/dispatch';
+import type { OperationName, OperationOutput } from '../../shared-model/api/contract';
 import { shutdownServices } from '../../electron/services/lifecycle';
 import { removeTempDir, tempDir } from '../support/temp-dirs';
 
@@ -19,25 +23,45 @@ const CAMPAIGNS = 50;
 const BATCHES_PER_CAMPAIGN = 100;
 const TARGET_MS = 100;
 
-async function value<T>(store: Store, name: string, input: unknown): Promise<T> {
-  const result = await dispatch({ store }, name, input);
+async function value<Name extends OperationName>(
+  store: Store,
+  name: Name,
+  input: unknown,
+): Promise<OperationOutput<Name>> {
+  const result = await dispatchKnown({ store }, name, input);
   if (!result.ok) throw new Error(`${name}: ${result.error.message}`);
-  return result.value as T;
+  return result.value;
 }
+
+/** Rows read back by the bench, checked with zod rather than cast. */
+const idRow = z.object({ id: z.number() });
+const countRow = z.object({ n: z.number() });
+const anyRow = z.record(z.string(), z.unknown());
+
+function all<T>(db: SqliteDatabase, sql: string, schema: z.ZodType<T>, ...params: unknown[]): T[] {
+  return z.array(schema).parse(db.prepare<unknown[]>(sql).all(...params));
+}
+
+function one<T>(db: SqliteDatabase, sql: string, schema: z.ZodType<T>, ...params: unknown[]): T {
+  return schema.parse(db.prepare<unknown[]>(sql).get(...params));
+}
+
+const ids = (db: SqliteDatabase, sql: string, ...params: unknown[]): number[] =>
+  all(db, sql, idRow, ...params).map((r) => r.id);
 
 /** Copies the rows of `table` matching `where` with some columns replaced; returns the new row ids in order. */
 function copier(db: SqliteDatabase, table: string, where: string) {
-  const columns = (db.prepare(`PRAGMA table_info("${table}")`).all() as { name: string; pk: number }[]).map((c) => c);
-  const rows = db.prepare(`SELECT * FROM "${table}" WHERE ${where}`);
-  const cache = new Map<string, ReturnType<SqliteDatabase['prepare']>>();
+  const columns = all(db, `PRAGMA table_info("${table}")`, z.object({ name: z.string() }));
+  const rows = db.prepare<unknown[]>(`SELECT * FROM "${table}" WHERE ${where}`);
+  const cache = new Map<string, Statement<unknown[]>>();
   return (params: unknown[], overrides: Record<string, unknown>, dropId = true): number[] => {
     const ids: number[] = [];
-    for (const row of rows.all(...params) as Record<string, unknown>[]) {
+    for (const row of z.array(anyRow).parse(rows.all(...params))) {
       const names = columns.map((c) => c.name).filter((n) => !(dropId && n === 'id'));
       const key = names.join(',');
       let insert = cache.get(key);
       if (!insert) {
-        insert = db.prepare(
+        insert = db.prepare<unknown[]>(
           `INSERT INTO "${table}" (${names.map((n) => `"${n}"`).join(', ')}) VALUES (${names.map(() => '?').join(', ')})`,
         );
         cache.set(key, insert);
@@ -60,16 +84,14 @@ async function buildStore(): Promise<Built> {
   const started = performance.now();
   const dataDir = tempDir('pairwright-bench-load-');
   const store = openStore({ dataDir, dailyBackup: false });
-  const demo = await value<{ id: number }>(store, 'campaigns.loadDemo', {});
+  const demo = await value(store, 'campaigns.loadDemo', {});
   const db = store.db;
-  const withOutcomes = (
-    db
-      .prepare(
-        `SELECT b.id FROM batches b WHERE b.campaign_id = ? AND EXISTS (SELECT 1 FROM outcome_size_imports s WHERE s.batch_id = b.id)
-           AND EXISTS (SELECT 1 FROM outcome_line_scans l WHERE l.batch_id = b.id)`,
-      )
-      .all(demo.id) as { id: number }[]
-  ).map((r) => r.id);
+  const withOutcomes = ids(
+    db,
+    `SELECT b.id FROM batches b WHERE b.campaign_id = ? AND EXISTS (SELECT 1 FROM outcome_size_imports s WHERE s.batch_id = b.id)
+       AND EXISTS (SELECT 1 FROM outcome_line_scans l WHERE l.batch_id = b.id)`,
+    demo.id,
+  );
   const model = withOutcomes[0];
   if (model === undefined) throw new Error('the demo has no batch with sizes and a line scan');
   const copy = {
@@ -85,21 +107,16 @@ async function buildStore(): Promise<Built> {
     observation: copier(db, 'outcome_observations', 'batch_id = ?'),
     predictions: copier(db, 'predictions', 'pair_id = ?'),
   };
-  const modelBatch = db.prepare('SELECT pair_id FROM batches WHERE id = ?').get(model) as { pair_id: number | null };
-  const sizeIds = (
-    db.prepare('SELECT id FROM outcome_size_imports WHERE batch_id = ?').all(model) as { id: number }[]
-  ).map((r) => r.id);
-  const compositionIds = (
-    db.prepare('SELECT id FROM outcome_compositions WHERE batch_id = ?').all(model) as { id: number }[]
-  ).map((r) => r.id);
-  const scanIds = (
-    db.prepare('SELECT id FROM outcome_line_scans WHERE batch_id = ?').all(model) as { id: number }[]
-  ).map((r) => r.id);
-  const demoPairs = db.prepare('SELECT id, element_a, element_b FROM pairs WHERE campaign_id = ?').all(demo.id) as {
-    id: number;
-    element_a: string;
-    element_b: string;
-  }[];
+  const modelBatch = one(
+    db,
+    'SELECT pair_id FROM batches WHERE id = ?',
+    z.object({ pair_id: z.number().nullable() }),
+    model,
+  );
+  const sizeIds = ids(db, 'SELECT id FROM outcome_size_imports WHERE batch_id = ?', model);
+  const compositionIds = ids(db, 'SELECT id FROM outcome_compositions WHERE batch_id = ?', model);
+  const scanIds = ids(db, 'SELECT id FROM outcome_line_scans WHERE batch_id = ?', model);
+  const demoPairs = all(db, 'SELECT id FROM pairs WHERE campaign_id = ?', idRow, demo.id);
   const modelPair = demoPairs.findIndex((p) => p.id === modelBatch.pair_id);
   const stamp = new Date().toISOString();
   db.transaction(() => {
@@ -111,9 +128,7 @@ async function buildStore(): Promise<Built> {
       const pairIds = c === 0 ? demoPairs.map((p) => p.id) : copy.pairs([demo.id], { campaign_id: campaignId });
       if (c > 0) pairIds.forEach((pairId, i) => copy.predictions([demoPairs[i]!.id], { pair_id: pairId }));
       const pairId = modelPair >= 0 ? pairIds[modelPair]! : null;
-      const existing = (
-        db.prepare('SELECT count(*) AS n FROM batches WHERE campaign_id = ?').get(campaignId) as { n: number }
-      ).n;
+      const existing = one(db, 'SELECT count(*) AS n FROM batches WHERE campaign_id = ?', countRow, campaignId).n;
       for (let b = existing; b < BATCHES_PER_CAMPAIGN; b++) {
         const batchId = copy.batch([model], {
           campaign_id: campaignId,
@@ -134,7 +149,7 @@ async function buildStore(): Promise<Built> {
     }
   })();
   const historyCsv = readFileSync(join(import.meta.dirname, '../../docs/demo-history.csv'), 'utf8');
-  for (const { id } of db.prepare('SELECT id FROM campaigns').all() as { id: number }[])
+  for (const id of ids(db, 'SELECT id FROM campaigns'))
     await value(store, 'learn.importHistory', { campaignId: id, csvText: historyCsv, fileName: 'demo-history.csv' });
   const counts: Record<string, number> = {};
   for (const table of [
@@ -149,11 +164,11 @@ async function buildStore(): Promise<Built> {
     'outcome_observations',
     'history_outcomes',
   ])
-    counts[table] = (db.prepare(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
+    counts[table] = one(db, `SELECT count(*) AS n FROM ${table}`, countRow).n;
   return { store, dataDir, counts, buildMs: performance.now() - started };
 }
 
-async function timeIt(store: Store, name: string, input: unknown): Promise<{ median: number; max: number }> {
+async function timeIt(store: Store, name: OperationName, input: unknown): Promise<{ median: number; max: number }> {
   await value(store, name, input); // warm
   const times: number[] = [];
   for (let i = 0; i < 5; i++) {
@@ -172,7 +187,7 @@ async function peakRssOfQueue(store: Store): Promise<{ peakMb: number; baseMb: n
   const started = performance.now();
   const ids: number[] = [];
   for (let i = 0; i < 20; i++) {
-    const run = await value<{ id: number }>(store, 'simulation.start', {
+    const run = await value(store, 'simulation.start', {
       elementA: 'Au',
       elementB: 'Pd',
       xB: 0.5,
@@ -187,7 +202,7 @@ async function peakRssOfQueue(store: Store): Promise<{ peakMb: number; baseMb: n
   }
   for (const id of ids) {
     for (;;) {
-      const status = await value<{ status: string }>(store, 'simulation.status', { id });
+      const status = await value(store, 'simulation.status', { id });
       if (status.status !== 'queued' && status.status !== 'running') break;
       await new Promise((r) => setTimeout(r, 50));
     }
@@ -207,15 +222,15 @@ export async function run(): Promise<void> {
   const { store } = built;
   try {
     console.log(`store built in ${(built.buildMs / 1000).toFixed(1)} s: ${JSON.stringify(built.counts)}`);
-    const firstCampaign = (store.db.prepare('SELECT min(id) AS id FROM campaigns').get() as { id: number }).id;
-    const job = await value<{ id: number }>(store, 'learn.retrain', { campaignId: firstCampaign });
+    const firstCampaign = one(store.db, 'SELECT min(id) AS id FROM campaigns', idRow).id;
+    const job = await value(store, 'learn.retrain', { campaignId: firstCampaign });
     for (;;) {
-      const state = await value<{ status: string }>(store, 'learn.job', { jobId: job.id });
+      const state = await value(store, 'learn.job', { jobId: job.id });
       if (state.status !== 'running') break;
       await new Promise((r) => setTimeout(r, 50));
     }
     const conditions = { xB: 0.5, diameterNm: 5, temperatureK: 473 };
-    const cases: [string, string, unknown][] = [
+    const cases: [string, OperationName, unknown][] = [
       ['batches.list (every campaign, archived too)', 'batches.list', { includeArchived: true }],
       ['batches.list (one campaign)', 'batches.list', { campaignId: firstCampaign }],
       ['batches.list (made and characterized)', 'batches.list', { statuses: ['made', 'characterized'] }],
