@@ -72,8 +72,42 @@ describe.skipIf(!available)('results in the browser host', () => {
       .poll(() => page.locator('[data-testid="size-histogram"] .recharts-reference-area').count())
       .toBeGreaterThan(2);
     await expect.poll(() => page.locator('[data-testid="size-histogram"] .recharts-line-curve').count()).toBe(1);
+    // The bins and their fit share one colour, each with a legend entry and its marker (issue: "each fitted line
+    // and its data share a colour and a legend entry with marker").
+    const legend = page.locator('[data-testid="size-histogram"] [data-testid="chart-legend"] li');
+    expect(await legend.count()).toBe(2);
+    const bar = legend.filter({ hasText: 'particles per' });
+    const fit = legend.filter({ hasText: 'log-normal fit' });
+    expect(await bar.locator('svg[data-marker="bar"]').count()).toBe(1);
+    expect(await fit.locator('svg[data-marker="line"]').count()).toBe(1);
+    const colour = await bar.getAttribute('data-legend-colour');
+    expect(await fit.getAttribute('data-legend-colour')).toBe(colour);
+    expect(await page.locator('[data-testid="size-histogram"] .recharts-line-curve').getAttribute('stroke')).toBe(
+      colour,
+    );
     expect(host.count('outcome_diameters')).toBe(15);
     await page.locator('[aria-label="TEM sizes"]').screenshot({ path: screenshotPath('results-sizes') });
+  });
+
+  it('says what recording an outcome moved: the batch and the campaign pair to characterized', async ({
+    page,
+    host,
+  }) => {
+    const batch = await openResultsOfPlannedBatch(page, host);
+    expect(await page.getByTestId('status-moves').count()).toBe(0);
+    const form = page.getByRole('form', { name: 'Record composition' });
+    await form.locator('input[name="xB-0"]').fill('48');
+    await form.locator('input[name="uncertainty-0"]').fill('2');
+    await form.getByRole('button', { name: 'Record composition' }).click();
+    // The batch was saved as planned and the pair added as a candidate (the statuses the API gives them).
+    await expect
+      .poll(() => page.getByTestId('status-moves').textContent())
+      .toMatch(
+        /batch "AuPd 10 nm" moved from planned to characterized; the campaign pair Au–Pd moved from \w[\w ]* to characterized/,
+      );
+    const batches = await host.api<Array<{ id: number; status: string }>>('batches.list', {});
+    expect(batches.find((b) => b.id === batch.id)?.status).toBe('characterized');
+    await page.getByTestId('status-moves').screenshot({ path: screenshotPath('results-status-moves') });
   });
 
   it('records composition, flags a deviation and warns about nothing for an Au-Pd pair on Cu', async ({
@@ -128,6 +162,19 @@ describe.skipIf(!available)('results in the browser host', () => {
     await page.getByLabel('Model fits shown').selectOption('all');
     // Two data series plus A and B fits of four models.
     await expect.poll(() => page.locator('[data-testid="line-scan-chart"] .recharts-line').count()).toBe(10);
+    // Each element's data and its fits share the element's colour, each with a legend entry and marker.
+    const entries = page.locator('[data-testid="line-scan-chart"] [data-testid="chart-legend"] li');
+    expect(await entries.count()).toBe(10);
+    for (const element of ['Au', 'Pd']) {
+      const data = entries.filter({ hasText: `${element} data` });
+      expect(await data.locator('svg[data-marker="dot"]').count()).toBe(1);
+      const colour = await data.getAttribute('data-legend-colour');
+      const fits = entries.filter({ hasText: new RegExp(`fit, ${element}`) });
+      expect(await fits.count()).toBe(4);
+      for (const c of await fits.evaluateAll((els) => els.map((e) => e.getAttribute('data-legend-colour'))))
+        expect(c).toBe(colour);
+    }
+    expect(await entries.filter({ hasText: '(chosen)' }).count()).toBe(2);
     await page.locator('[aria-label="EDX line scans"]').screenshot({ path: screenshotPath('results-line-scan') });
     await page.getByRole('button', { name: 'Confirm suggestion' }).click();
     await expect.poll(() => page.getByTestId('observed-label').textContent()).toMatch(/Pd@Au \(confirmed suggestion\)/);

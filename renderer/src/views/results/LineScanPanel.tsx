@@ -1,8 +1,10 @@
 /** EDX line scans of a batch: import, the four model fits over the data, the chosen model with radius, core and shell. */
 import { useState, type FormEvent } from 'react';
-import { CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { CartesianGrid, ComposedChart, Line, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { BatchOutcome, LineScanRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
+import { chartLegend, type LegendEntry } from '../../charts/ChartLegend';
+import { DATA_STYLE, dashPattern, ELEMENT, FIT_STYLE } from '../../charts/palette';
 import { useFieldErrors } from '../../api/hooks';
 import { optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import { Banner } from '../../components/Banner';
@@ -11,8 +13,6 @@ import { Field } from '../../components/Field';
 import { CsvFileField } from './CsvFileField';
 import { estimate, fixed } from './format';
 import { partError } from './part-error';
-
-const MODEL_COLOURS = ['#555555', '#1f77b4', '#d62728', '#2ca02c'];
 
 function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
   const { scan, shown } = props;
@@ -26,6 +26,27 @@ function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
     }
     return row;
   });
+  // Each element's data and its fits share the element's colour; the models differ by dash (chosen: solid, wider).
+  const element = { A: a.elementA, B: a.elementB };
+  const others = a.models.filter((m) => m.label !== a.chosenModel);
+  const dash = (label: string) =>
+    label === a.chosenModel ? '' : dashPattern(1 + others.findIndex((m) => m.label === label));
+  const legend: LegendEntry[] = [
+    ...(['A', 'B'] as const).map((side): LegendEntry => ({
+      label: `${element[side]} data`,
+      colour: ELEMENT[side],
+      marker: 'dot',
+    })),
+    ...models.flatMap((m) =>
+      (['A', 'B'] as const).map((side): LegendEntry => ({
+        label: `${m.label} fit, ${element[side]}${m.label === a.chosenModel ? ' (chosen)' : ''}`,
+        colour: ELEMENT[side],
+        marker: 'line',
+        dash: dash(m.label),
+        thin: m.label !== a.chosenModel,
+      })),
+    ),
+  ];
   return (
     <div className="chart-box" data-testid="line-scan-chart">
       <ResponsiveContainer width="100%" height="100%">
@@ -43,46 +64,31 @@ function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
             formatter={(value) => (typeof value === 'number' ? value.toFixed(1) : String(value))}
             labelFormatter={(v) => `${Number(v).toFixed(2)} nm`}
           />
-          <Legend verticalAlign="top" />
-          <Line
-            dataKey="dataA"
-            name={`${a.elementA} data`}
-            stroke="none"
-            dot={{ r: 2, fill: '#e08a1e' }}
-            isAnimationActive={false}
-          />
-          <Line
-            dataKey="dataB"
-            name={`${a.elementB} data`}
-            stroke="none"
-            dot={{ r: 2, fill: '#5b3fa3' }}
-            isAnimationActive={false}
-          />
-          {models.map((m) => {
-            const colour = MODEL_COLOURS[a.models.indexOf(m)] ?? '#333';
-            const width = m.label === a.chosenModel ? 2.5 : 1.2;
-            return [
+          {chartLegend(legend)}
+          {(['A', 'B'] as const).map((side) => (
+            <Line
+              key={`data${side}`}
+              dataKey={`data${side}`}
+              name={`${element[side]} data`}
+              stroke="none"
+              dot={{ r: DATA_STYLE.dotRadius, fill: ELEMENT[side], fillOpacity: DATA_STYLE.dotOpacity, stroke: 'none' }}
+              isAnimationActive={false}
+            />
+          ))}
+          {models.flatMap((m) =>
+            (['A', 'B'] as const).map((side) => (
               <Line
-                key={`${m.label}:A`}
-                dataKey={`${m.label}:A`}
-                name={`${m.label} fit ${a.elementA}`}
-                stroke={colour}
-                strokeWidth={width}
+                key={`${m.label}:${side}`}
+                dataKey={`${m.label}:${side}`}
+                name={`${m.label} fit ${element[side]}`}
+                stroke={ELEMENT[side]}
+                strokeDasharray={dash(m.label) || undefined}
+                strokeWidth={m.label === a.chosenModel ? FIT_STYLE.width : FIT_STYLE.otherWidth}
                 dot={false}
                 isAnimationActive={false}
-              />,
-              <Line
-                key={`${m.label}:B`}
-                dataKey={`${m.label}:B`}
-                name={`${m.label} fit ${a.elementB}`}
-                stroke={colour}
-                strokeDasharray="6 3"
-                strokeWidth={width}
-                dot={false}
-                isAnimationActive={false}
-              />,
-            ];
-          })}
+              />
+            )),
+          )}
         </ComposedChart>
       </ResponsiveContainer>
     </div>

@@ -3,7 +3,6 @@ import { useState, type FormEvent } from 'react';
 import {
   CartesianGrid,
   ComposedChart,
-  Legend,
   Line,
   ReferenceArea,
   ResponsiveContainer,
@@ -13,7 +12,9 @@ import {
 } from 'recharts';
 import type { BatchOutcome, SizeRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
-import { plusMinus } from '../../charts/chart-numbers';
+import { niceTicks, plusMinus } from '../../charts/chart-numbers';
+import { chartLegend } from '../../charts/ChartLegend';
+import { DATA_STYLE, FIT_STYLE, seriesColour } from '../../charts/palette';
 import { useFieldErrors } from '../../api/hooks';
 import { fieldNumber, optionalFieldNumber, readForm } from '../../forms/typed-numbers';
 import { Banner } from '../../components/Banner';
@@ -27,11 +28,15 @@ function SizeChart(props: { record: SizeRecord }) {
   const { histogram } = props.record;
   const lo = histogram.bins[0]?.fromNm ?? 0;
   const hi = histogram.bins[histogram.bins.length - 1]?.toNm ?? 1;
-  const from = Math.max(0, lo - histogram.binWidthNm);
-  const to = hi + histogram.binWidthNm;
+  // the axis runs between round ticks just outside one bin width either side of the bins
+  const xTicks = niceTicks(Math.max(0, lo - histogram.binWidthNm), hi + histogram.binWidthNm, 7).filter((t) => t >= 0);
+  const from = xTicks[0] ?? 0;
+  const to = xTicks[xTicks.length - 1] ?? hi + histogram.binWidthNm;
   const curve = histogram.curve.filter((c) => c.diameterNm >= from && c.diameterNm <= to);
   const top = Math.max(1, ...histogram.bins.map((b) => b.count), ...curve.map((c) => c.expectedCount)) * 1.1;
-  // Bins drawn as rectangles on the numeric diameter axis, the fitted density (scaled to counts) as a line.
+  const yTicks = niceTicks(0, Math.ceil(top), 6).filter((t) => Number.isInteger(t));
+  // Bins (pale) and the fitted density scaled to counts (solid line) share one colour.
+  const colour = seriesColour(0);
   return (
     <>
       <div className="chart-box" data-testid="size-histogram">
@@ -42,11 +47,13 @@ function SizeChart(props: { record: SizeRecord }) {
               dataKey="diameterNm"
               type="number"
               domain={[from, to]}
-              tickFormatter={(v: number) => v.toFixed(1)}
+              ticks={xTicks}
+              tickFormatter={(v: number) => String(Number(v.toPrecision(3)))}
               label={{ value: 'diameter (nm)', position: 'insideBottom', offset: -10 }}
             />
             <YAxis
-              domain={[0, Math.ceil(top)]}
+              domain={[0, Math.max(Math.ceil(top), yTicks[yTicks.length - 1] ?? 1)]}
+              ticks={yTicks}
               allowDecimals={false}
               label={{ value: 'particles', angle: -90, position: 'insideLeft' }}
             />
@@ -54,7 +61,14 @@ function SizeChart(props: { record: SizeRecord }) {
               formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))}
               labelFormatter={(v) => `${Number(v).toFixed(2)} nm`}
             />
-            <Legend verticalAlign="top" />
+            {chartLegend([
+              {
+                label: `particles per ${num(histogram.binWidthNm, 2)} nm bin (n = ${props.record.statistics.n})`,
+                colour,
+                marker: 'bar',
+              },
+              { label: 'log-normal fit (maximum likelihood)', colour, marker: 'line' },
+            ])}
             {histogram.bins.map((b) =>
               b.count > 0 ? (
                 <ReferenceArea
@@ -63,9 +77,9 @@ function SizeChart(props: { record: SizeRecord }) {
                   x2={b.toNm}
                   y1={0}
                   y2={b.count}
-                  fill="#7a9cc6"
-                  fillOpacity={0.75}
-                  stroke="#4f74a3"
+                  fill={colour}
+                  fillOpacity={DATA_STYLE.barOpacity}
+                  stroke={colour}
                   ifOverflow="visible"
                 />
               ) : null,
@@ -73,9 +87,9 @@ function SizeChart(props: { record: SizeRecord }) {
             <Line
               dataKey="expectedCount"
               name="log-normal fit (ML)"
-              stroke="#b5462c"
+              stroke={colour}
               dot={false}
-              strokeWidth={2}
+              strokeWidth={FIT_STYLE.width}
               isAnimationActive={false}
             />
           </ComposedChart>
