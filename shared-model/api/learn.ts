@@ -98,6 +98,11 @@ export interface ProposalSet {
   excludedFailed: number;
   costNote: string | null;
   targetNote: string | null;
+  /** Posterior mean P(target) from which a proposal meets the target; `meeting` of them do. */
+  threshold: number;
+  meeting: number;
+  /** Null when every non-exploration proposal meets the target; otherwise says how many do. */
+  meetingNote: string | null;
   metalMmolPerBatch: number;
 }
 

@@ -6,10 +6,19 @@
  * `explorationSlots` slots kept for exploration (untried pairs, or conditions where physics and the model
  * disagree), marked as such. A condition where a synthesis failed is left out unless asked.
  * P(target) ± is the mean and standard deviation over 64 posterior draws.
+ *
+ * The answer says plainly whether anything is likely to reach the target: a candidate meets it when its
+ * posterior mean P(target) is at least TARGET_PROBABILITY_THRESHOLD (0.5: the target more likely than not).
+ * Only those fill the proposal slots; when fewer pairs than slots have one, the remaining slots show the
+ * closest candidates (highest mean P(target), one per pair), marked `meetsTarget: false`, and `meetingNote`
+ * says how many are likely, in the words of rank's "nothing meets the target; the closest are shown".
+ * Order: proposals that meet the target, then the closest, then the exploration slots (which keep their own
+ * rule and carry `meetsTarget` too).
  */
 import { getElement } from '../elements/element-table';
-import type { RankTarget } from '../prediction/rank';
+import { describeRankTarget, type RankTarget } from '../prediction/rank';
 import { createRandom } from '../random';
+import { formatNumber } from '../text/number-format';
 import { classesForTarget, labelOfClass, type ClassKey } from './classes';
 import { sameCondition, type Candidate } from './candidates';
 import type { CanonicalCondition } from './conditions';
@@ -44,6 +53,8 @@ export interface ProposalSettings {
 }
 
 export const DEFAULT_METAL_MMOL_PER_BATCH = 0.1;
+/** Posterior mean P(target) from which a candidate counts as likely to reach the target. */
+export const TARGET_PROBABILITY_THRESHOLD = 0.5;
 const POSTERIOR_DRAWS = 64;
 
 export interface Proposal {
@@ -62,6 +73,8 @@ export interface Proposal {
   costPerBatch: number | null;
   currency: string | null;
   exploration: boolean;
+  /** Whether the posterior mean P(target) reaches the threshold (TARGET_PROBABILITY_THRESHOLD). */
+  meetsTarget: boolean;
   /** The architecture label the target means for this pair (e.g. "Ni@Pt"). */
   targetLabel: string;
   physicsLabel: string;
@@ -76,6 +89,39 @@ export interface ProposalResult {
   excludedFailed: number;
   costNote: string | null;
   targetNote: string | null;
+  /** P(target) from which a candidate meets the target. */
+  threshold: number;
+  /** Proposals (exploration slots included) that meet the target. */
+  meeting: number;
+  /** Null when every non-exploration slot meets the target; otherwise how many do and what fills the rest. */
+  meetingNote: string | null;
+}
+
+/** Cost of one batch with two significant digits ("0.26 EUR", "5.7 × 10⁻⁵ EUR"); "–" without a price. */
+export function formatCostPerBatch(cost: number | null, currency: string | null): string {
+  if (cost === null) return '–';
+  return `${formatNumber(cost, 2)} ${currency ?? ''}`.trim();
+}
+
+/** "yes", or "no (P < 0.5)" for one of the closest shown in place of a proposal that meets the target. */
+export function meetsTargetText(meetsTarget: boolean, threshold: number): string {
+  return meetsTarget ? 'yes' : `no (P < ${threshold})`;
+}
+
+function plural(n: number, one: string, many: string): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+/** The sentence for a shortfall: `likely` slots met the target of `slots`; `closest` were filled by the closest. */
+export function meetingNoteText(target: string, likely: number, closest: number, threshold: number): string {
+  const rule = `P(target) ≥ ${threshold}`;
+  const rest =
+    closest === 0
+      ? 'no other untested candidate comes close'
+      : `the closest ${plural(closest, 'candidate is', 'candidates are')} shown${likely > 0 ? ' after them' : ''}, ` +
+        'marked as not meeting it';
+  if (likely === 0) return `No untested candidate is likely to reach ${target} (${rule}); ${rest}.`;
+  return `Only ${plural(likely, 'candidate is', 'candidates are')} likely to reach ${target} (${rule}, one per pair); ${rest}.`;
 }
 
 function metalCost(c: CanonicalCondition, prices: ReadonlyMap<string, MetalPrice>, mmol: number): number | null {
@@ -226,28 +272,56 @@ export function proposeBatches(
 
   const count = Math.max(0, Math.floor(settings.count));
   const exploreSlots = Math.min(count, Math.max(0, Math.floor(settings.explorationSlots)));
+  const mainSlots = count - exploreSlots;
+  const threshold = TARGET_PROBABILITY_THRESHOLD;
+  const meets = mean.map((p) => p >= threshold);
   const usedPairs = new Set<string>();
   const chosen: { index: number; exploration: boolean }[] = [];
-  for (let slot = 0; slot < count; slot++) {
-    const exploration = slot >= count - exploreSlots;
+  const available = (i: number) =>
+    !usedPairs.has((open[i] as Candidate).condition.pair) && (wanted[i] as ClassKey[]).length > 0;
+  // One posterior draw per slot: the best P(target) × P(success) ÷ cost under that draw fills it.
+  const drawPick = (slot: number, allowed: (i: number) => boolean): number => {
     const draw = draws[slot % POSTERIOR_DRAWS] as Float64Array;
     let best = -1;
     let bestScore = -Infinity;
-    open.forEach((c, i) => {
-      if (usedPairs.has(c.condition.pair)) return;
-      if ((wanted[i] as ClassKey[]).length === 0) return;
-      if (exploration && !isExplorationCandidate[i]) return;
+    for (let i = 0; i < open.length; i++) {
+      if (!available(i) || !allowed(i)) continue;
       const cost = allPriced ? (costs[i] as number) : 1;
       const score = ((draw[i] as number) * (success[i] as number)) / Math.max(cost, 1e-9);
       if (score > bestScore) {
         bestScore = score;
         best = i;
       }
-    });
-    if (best < 0) continue;
-    usedPairs.add((open[best] as Candidate).condition.pair);
-    chosen.push({ index: best, exploration });
+    }
+    return best;
+  };
+  const take = (index: number, exploration: boolean) => {
+    usedPairs.add((open[index] as Candidate).condition.pair);
+    chosen.push({ index, exploration });
+  };
+  let slot = 0;
+  for (; slot < mainSlots; slot++) {
+    const best = drawPick(slot, (i) => meets[i] as boolean);
+    if (best < 0) break;
+    take(best, false);
   }
+  const likely = chosen.length;
+  // The closest for the slots left: the highest mean P(target), one per pair.
+  const byCloseness = open
+    .map((_, i) => i)
+    .filter((i) => !(meets[i] as boolean))
+    .sort((i, j) => (mean[j] as number) - (mean[i] as number) || i - j);
+  for (const i of byCloseness) {
+    if (chosen.length >= mainSlots) break;
+    if (available(i)) take(i, false);
+  }
+  const closest = chosen.length - likely;
+  for (slot = mainSlots; slot < count; slot++) {
+    const best = drawPick(slot, (i) => isExplorationCandidate[i] as boolean);
+    if (best >= 0) take(best, true);
+  }
+  const meetingNote =
+    likely < mainSlots ? meetingNoteText(describeRankTarget(settings.target), likely, closest, threshold) : null;
 
   const proposals = chosen.map(({ index, exploration }) => {
     const c = open[index] as Candidate;
@@ -275,11 +349,22 @@ export function proposeBatches(
       costPerBatch: cost,
       currency: cost === null ? null : (priceMap.get(a)?.currency ?? null),
       exploration,
+      meetsTarget: meets[index] as boolean,
       targetLabel,
       physicsLabel: c.physics.label,
       modelLabel: labelOfClass(modelTop[index] as ClassKey, a, b),
       reason: parts.join('; '),
     };
   });
-  return { proposals, candidatesConsidered: open.length, excludedTested, excludedFailed, costNote, targetNote };
+  return {
+    proposals,
+    candidatesConsidered: open.length,
+    excludedTested,
+    excludedFailed,
+    costNote,
+    targetNote,
+    threshold,
+    meeting: proposals.filter((p) => p.meetsTarget).length,
+    meetingNote,
+  };
 }

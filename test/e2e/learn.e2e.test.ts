@@ -88,8 +88,18 @@ describe.skipIf(!available)('learning from outcomes in the browser host', () => 
     for (let i = 0; i < 6; i++) {
       const row = rows.nth(i);
       expect(await row.locator('[data-cell="reason"]').textContent()).toMatch(/^P\(.+\) \d\.\d\d ± \d\.\d\d; /);
-      expect(await row.locator('[data-cell="cost"]').textContent()).toMatch(/^\d+(\.\d+)? EUR$/);
+      // two significant digits, printed scientific notation below 10⁻³ EUR (Cu at 0.009 EUR/g)
+      expect(await row.locator('[data-cell="cost"]').textContent()).toMatch(/^\d+(\.\d+)?( × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+)? EUR$/);
+      expect(await row.getAttribute('data-meets')).toBe('no');
+      expect(await row.locator('[data-cell="meets"]').textContent()).toBe('no (P < 0.5)');
     }
+    // Nothing is likely to be an alloy on this history (5 alloys among 61 labelled outcomes): the answer says so.
+    await expect
+      .poll(() => page.getByTestId('meeting-note').textContent())
+      .toMatch(/^No untested candidate is likely to reach alloy \(P\(target\) ≥ 0\.5\); the closest 5 /);
+    expect(await page.getByRole('region', { name: 'Proposed batches' }).locator('h2').textContent()).toBe(
+      '0 of 6 proposals likely to reach alloy: the closest',
+    );
     // The default exploration slot is the last one, marked.
     expect(await rows.nth(5).getAttribute('data-exploration')).toBe('yes');
     expect(await rows.nth(5).textContent()).toMatch(/exploration/);

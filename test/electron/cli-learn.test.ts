@@ -83,7 +83,26 @@ describe('pairwright learn and propose', () => {
         expect(p).toHaveProperty(key);
       }
       expect(p.costPerBatch as number).toBeGreaterThan(0);
+      expect(typeof p.meetsTarget).toBe('boolean');
     }
+
+    // Alloy on the demo history: nothing is likely (P(alloy) < 0.5 everywhere), and the answer says so.
+    const alloy = runPairwrightJson<{ threshold: number; meeting: number; meetingNote: string | null }>([
+      'propose',
+      String(campaign.id),
+      '--target',
+      'alloy',
+      ...data,
+    ]);
+    expect(alloy.threshold).toBe(0.5);
+    expect(alloy.meeting).toBe(0);
+    expect(alloy.meetingNote).toMatch(/^No untested candidate is likely to reach alloy/);
+    const text = runPairwright(['propose', String(campaign.id), '--target', 'alloy', ...data]);
+    expect(text.status).toBe(0);
+    expect(text.stdout).toMatch(/^target: alloy; 0 of 6 proposals meet it \(posterior mean P\(target\) ≥ 0\.5\)/);
+    expect(text.stdout).toContain('No untested candidate is likely to reach alloy (P(target) ≥ 0.5); the closest');
+    expect(text.stdout).toContain('no (P < 0.5)');
+    expect(text.stdout).not.toMatch(/\b0\.00 EUR/); // costs of a few cents or less keep two significant digits
   }, 120_000);
 
   it('a bad target names the field', () => {

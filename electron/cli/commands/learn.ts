@@ -6,6 +6,7 @@
  */
 import type { LearnJob, ProposalSet, StoredReview } from '../../../shared-model/api/learn';
 import { DEMO_HISTORY_ROWS, demoHistoryCsv } from '../../../shared-model/learn/demo-history';
+import { formatCostPerBatch, meetsTargetText } from '../../../shared-model/learn/proposals';
 import {
   CliError,
   optionalNumber,
@@ -219,18 +220,24 @@ export const learnCommands: CliCommand[] = [
         { header: 'route', value: (p) => p.route },
         { header: 'P', value: (p) => p.probability.toFixed(2), align: 'right' },
         { header: 'P ok', value: (p) => p.successProbability.toFixed(2), align: 'right' },
-        {
-          header: 'cost',
-          value: (p) => (p.costPerBatch === null ? '' : `${p.costPerBatch.toFixed(2)} ${p.currency ?? ''}`),
-          align: 'right',
-        },
+        { header: 'cost', value: (p) => formatCostPerBatch(p.costPerBatch, p.currency), align: 'right' },
+        { header: 'meets', value: (p) => meetsTargetText(p.meetsTarget, set.threshold) },
         { header: 'explore', value: (p) => (p.exploration ? 'yes' : '') },
         { header: 'reason', value: (p) => p.reason },
       ]);
       const notes = [set.costNote, set.targetNote].filter((n): n is string => n !== null);
+      const header =
+        `target: ${set.target}; ${set.meeting} of ${set.proposals.length} proposals meet it ` +
+        `(posterior mean P(target) ≥ ${set.threshold}); cost per batch for ${set.metalMmolPerBatch} mmol of metal`;
       return {
         json: set,
-        text: [table, ...notes, `model ${set.modelId} (${set.modelVersion}), proposal set ${set.id}`].join('\n'),
+        text: [
+          header,
+          ...(set.meetingNote ? [set.meetingNote] : []),
+          table,
+          ...notes,
+          `model ${set.modelId} (${set.modelVersion}), proposal set ${set.id}`,
+        ].join('\n'),
       };
     },
   },

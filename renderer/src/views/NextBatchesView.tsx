@@ -2,7 +2,8 @@
  * Next batches: what to make next week for a target (the syntax of rank: alloy, core@shell, core@shell:X,
  * Janus, intermetallic). Proposals come from the campaign's learned model (learn.propose: P(target) × P(success)
  * ÷ metal cost, Thompson sampling, at most one per pair, exploration slots marked), each with its one-line
- * reason and Plan this, which opens Batch design filled in. Metal prices per gram (with their date) are entered
+ * reason and Plan this, which opens Batch design filled in. A proposal meets the target when its posterior mean
+ * P(target) is at least 0.5; when fewer than asked do, the view says so and shows the closest, marked. Metal prices per gram (with their date) are entered
  * here; metals without a price are named. The form's model is next-batches/next-batches-form.ts.
  */
 import { useEffect, useState, type FormEvent } from 'react';
@@ -18,10 +19,12 @@ import {
   compositionText,
   costText,
   INITIAL_NEXT_BATCHES_FORM,
+  meetsText,
   metalsWithoutPrice,
   missingPriceText,
   planFromProposal,
   probabilityText,
+  proposalsTitle,
   readNextBatchesForm,
   routeText,
   TARGET_EXAMPLES,
@@ -43,13 +46,20 @@ function ProposalTable(props: { set: ProposalSet }) {
           <th title="posterior mean ± standard deviation">P(target)</th>
           <th>P(success)</th>
           <th title={`metal of one batch (${set.metalMmolPerBatch} mmol)`}>Cost per batch</th>
+          <th title={`posterior mean P(target) at least ${set.threshold}`}>Meets the target?</th>
           <th>Reason</th>
           <th />
         </tr>
       </thead>
       <tbody>
         {set.proposals.map((p, i) => (
-          <tr key={`${p.pair}:${i}`} data-proposal={p.pair} data-exploration={p.exploration ? 'yes' : 'no'}>
+          <tr
+            key={`${p.pair}:${i}`}
+            data-proposal={p.pair}
+            data-exploration={p.exploration ? 'yes' : 'no'}
+            data-meets={p.meetsTarget ? 'yes' : 'no'}
+            className={p.meetsTarget ? undefined : 'muted'}
+          >
             <td>{i + 1}</td>
             <td>
               {p.pair}
@@ -74,7 +84,12 @@ function ProposalTable(props: { set: ProposalSet }) {
               {probabilityText(p)} <span className="muted small">({p.targetLabel})</span>
             </td>
             <td>{p.successProbability.toFixed(2)}</td>
-            <td data-cell="cost">{costText(p)}</td>
+            <td data-cell="cost" style={{ whiteSpace: 'nowrap' }}>
+              {costText(p)}
+            </td>
+            <td className="small" data-cell="meets" style={{ whiteSpace: 'nowrap' }}>
+              {meetsText(p, set.threshold)}
+            </td>
             <td className="small" data-cell="reason">
               {p.reason}
             </td>
@@ -213,16 +228,19 @@ export function NextBatchesView() {
           ) : null}
           {proposalSet ? (
             <section className="card" aria-label="Proposed batches">
-              <h2 className="card__title">
-                {proposalSet.proposals.length} proposal{proposalSet.proposals.length === 1 ? '' : 's'} for{' '}
-                {proposalSet.target}
-              </h2>
+              <h2 className="card__title">{proposalsTitle(proposalSet)}</h2>
               <p className="muted small">
                 Ranked by P(target) × P(success) ÷ metal cost over {proposalSet.candidatesConsidered} untested
                 conditions ({proposalSet.excludedTested} already made, {proposalSet.excludedFailed} failed left out);
-                one posterior draw per slot, at most one proposal per pair. Model {proposalSet.modelVersion} (
+                one posterior draw per slot, at most one proposal per pair; a proposal meets the target when its
+                posterior mean P(target) is at least {proposalSet.threshold}. Model {proposalSet.modelVersion} (
                 {proposalSet.trainedOn.length} outcomes); cost for {proposalSet.metalMmolPerBatch} mmol of metal.
               </p>
+              {proposalSet.meetingNote ? (
+                <Banner tone="info" testId="meeting-note">
+                  {proposalSet.meetingNote}
+                </Banner>
+              ) : null}
               {proposalSet.targetNote ? <Banner tone="caution">{proposalSet.targetNote}</Banner> : null}
               {proposalSet.costNote ? <Banner tone="caution">{proposalSet.costNote}</Banner> : null}
               {proposalSet.proposals.length === 0 ? (

@@ -18,7 +18,9 @@ import {
   metalsWithoutPrice,
   missingPriceText,
   planFromProposal,
+  meetsText,
   probabilityText,
+  proposalsTitle,
   readNextBatchesForm,
   readPriceForm,
 } from '../../../renderer/src/views/next-batches/next-batches-form';
@@ -37,6 +39,7 @@ const proposal: Proposal = {
   costPerBatch: 1.2345,
   currency: 'EUR',
   exploration: false,
+  meetsTarget: true,
   targetLabel: 'alloy',
   physicsLabel: 'alloy',
   modelLabel: 'alloy',
@@ -93,10 +96,25 @@ describe('next batches form', () => {
   it('writes a proposal in the table’s words', () => {
     expect(compositionText(proposal)).toBe('Pt 65 / Ni 35 at.%');
     expect(probabilityText(proposal)).toBe('0.62 ± 0.15');
-    expect(costText(proposal)).toBe('1.23 EUR');
+    // two significant digits; below 10⁻³ in printed scientific notation (shared-model/text/number-format.ts)
+    expect(costText(proposal)).toBe('1.2 EUR');
     expect(costText({ costPerBatch: 0.04321, currency: 'EUR' })).toBe('0.043 EUR');
-    expect(costText({ costPerBatch: 0.000678, currency: 'EUR' })).toBe('0.00068 EUR');
+    expect(costText({ costPerBatch: 0.000076, currency: 'EUR' })).toBe('7.6 × 10⁻⁵ EUR');
+    expect(costText({ costPerBatch: 1234.5, currency: 'EUR' })).toBe('1,200 EUR');
     expect(costText({ costPerBatch: null, currency: null })).toBe('– (no price)');
+  });
+
+  it('marks a proposal that does not reach the threshold, and says so in the title', () => {
+    expect(meetsText(proposal, 0.5)).toBe('yes');
+    expect(meetsText({ meetsTarget: false }, 0.5)).toBe('no (P < 0.5)');
+    const miss = { ...proposal, meetsTarget: false };
+    expect(proposalsTitle({ target: 'alloy', proposals: [proposal, proposal] })).toBe('2 proposals for alloy');
+    expect(proposalsTitle({ target: 'alloy', proposals: [proposal, miss] })).toBe(
+      '1 of 2 proposals likely to reach alloy',
+    );
+    expect(proposalsTitle({ target: 'alloy', proposals: [miss, miss] })).toBe(
+      '0 of 2 proposals likely to reach alloy: the closest',
+    );
   });
 
   it('hands a proposal to Batch design, which reads it into the particle it proposes', () => {

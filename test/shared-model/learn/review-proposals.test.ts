@@ -9,7 +9,13 @@ import { buildCandidates, candidateConditions, sameCondition } from '../../../sh
 import { DEMO_HISTORY_ELEMENTS, demoHistoryCsv } from '../../../shared-model/learn/demo-history';
 import { parseHistoryTable } from '../../../shared-model/learn/history-table';
 import { MIN_OUTCOMES, prepareOutcomes, type LearningOutcome } from '../../../shared-model/learn/outcome-model';
-import { proposeBatches, type ProposalSettings } from '../../../shared-model/learn/proposals';
+import {
+  formatCostPerBatch,
+  meetingNoteText,
+  proposeBatches,
+  TARGET_PROBABILITY_THRESHOLD,
+  type ProposalSettings,
+} from '../../../shared-model/learn/proposals';
 import { reviewCampaign, type ModelReview } from '../../../shared-model/learn/review';
 import { parseRankTarget } from '../../../shared-model/prediction/rank';
 import { domainErrorOf } from '../../support/domain-error';
@@ -145,5 +151,47 @@ describe('proposeBatches', () => {
   it('without prices: ranked without cost, and says which prices are missing', () => {
     const result = proposeBatches(review.fitted, candidates, prepared, prices.slice(1), settings);
     expect(result.costNote).toContain(elements[0]);
+  });
+
+  it('lists first the proposals whose mean P(target) reaches the threshold, then the closest, marked', () => {
+    // On the demo history (5 alloys among 61 labelled outcomes) no untested condition reaches P(alloy) 0.5,
+    // so every slot but exploration is one of the closest, marked as not meeting it.
+    for (const target of ['alloy', 'core@shell', 'Janus']) {
+      const result = proposeBatches(review.fitted, candidates, prepared, prices, {
+        ...settings,
+        target: parseRankTarget(target),
+      });
+      expect(result.threshold).toBe(TARGET_PROBABILITY_THRESHOLD);
+      const main = result.proposals.filter((p) => !p.exploration);
+      for (const p of result.proposals) expect(p.meetsTarget).toBe(p.probability >= TARGET_PROBABILITY_THRESHOLD);
+      // meeting ones before the closest
+      const firstMiss = main.findIndex((p) => !p.meetsTarget);
+      if (firstMiss >= 0) expect(main.slice(firstMiss).every((p) => !p.meetsTarget)).toBe(true);
+      // the closest are ordered by P(target), highest first
+      const closest = main.filter((p) => !p.meetsTarget).map((p) => p.probability);
+      expect(closest).toEqual([...closest].sort((a, b) => b - a));
+      expect(result.meeting).toBe(result.proposals.filter((p) => p.meetsTarget).length);
+      expect(result.meetingNote === null).toBe(main.every((p) => p.meetsTarget));
+    }
+    const alloy = proposeBatches(review.fitted, candidates, prepared, prices, {
+      ...settings,
+      target: parseRankTarget('alloy'),
+    });
+    expect(alloy.proposals.filter((p) => !p.exploration && p.meetsTarget)).toHaveLength(0);
+    expect(alloy.meetingNote).toMatch(/^No untested candidate is likely to reach alloy \(P\(target\) ≥ 0\.5\); /);
+  });
+
+  it('states the shortfall and the cost in words people read', () => {
+    expect(meetingNoteText('alloy', 0, 4, 0.5)).toBe(
+      'No untested candidate is likely to reach alloy (P(target) ≥ 0.5); ' +
+        'the closest 4 candidates are shown, marked as not meeting it.',
+    );
+    expect(meetingNoteText('Janus', 1, 3, 0.5)).toBe(
+      'Only 1 candidate is likely to reach Janus (P(target) ≥ 0.5, one per pair); ' +
+        'the closest 3 candidates are shown after them, marked as not meeting it.',
+    );
+    expect(formatCostPerBatch(0.000076, 'EUR')).toBe('7.6 × 10⁻⁵ EUR');
+    expect(formatCostPerBatch(0.26, 'EUR')).toBe('0.26 EUR');
+    expect(formatCostPerBatch(null, null)).toBe('–');
   });
 });

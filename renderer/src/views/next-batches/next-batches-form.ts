@@ -7,7 +7,7 @@
  */
 import type { OperationInput } from '../../../../shared-model/api/contract';
 import type { MetalPriceView } from '../../../../shared-model/api/learn';
-import type { Proposal } from '../../../../shared-model/learn/proposals';
+import { formatCostPerBatch, meetsTargetText, type Proposal } from '../../../../shared-model/learn/proposals';
 import { ROUTE_LABELS } from '../../../../shared-model/recipes/design-input';
 import type { BatchPlanRequest } from '../../app-state';
 import { fieldNumber, readForm, type FormReading } from '../../forms/typed-numbers';
@@ -106,13 +106,23 @@ export function probabilityText(p: Pick<Proposal, 'probability' | 'probabilitySd
   return `${p.probability.toFixed(2)} ± ${p.probabilitySd.toFixed(2)}`;
 }
 
-/** Cost of one batch's metal, or a dash naming why there is none. */
+/** Cost of one batch's metal, two significant digits ("0.26 EUR", "5.7 × 10⁻⁵ EUR"), or a dash naming why there is none. */
 export function costText(p: Pick<Proposal, 'costPerBatch' | 'currency'>): string {
   if (p.costPerBatch === null) return '– (no price)';
-  const c = p.costPerBatch;
-  const number =
-    c >= 100 ? c.toFixed(0) : c >= 1 ? c.toFixed(2) : c >= 0.01 ? c.toFixed(3) : String(Number(c.toPrecision(2)));
-  return `${number} ${p.currency ?? ''}`.trim();
+  return formatCostPerBatch(p.costPerBatch, p.currency);
+}
+
+/** "yes", or "no (P < 0.5)" for a proposal shown as one of the closest. */
+export function meetsText(p: Pick<Proposal, 'meetsTarget'>, threshold: number): string {
+  return meetsTargetText(p.meetsTarget, threshold);
+}
+
+/** The card's title: "6 proposals for alloy", or "0 of 6 meet alloy: the closest" when some do not meet it. */
+export function proposalsTitle(set: { proposals: readonly Pick<Proposal, 'meetsTarget'>[]; target: string }): string {
+  const n = set.proposals.length;
+  const meeting = set.proposals.filter((p) => p.meetsTarget).length;
+  if (meeting === n) return `${n} proposal${n === 1 ? '' : 's'} for ${set.target}`;
+  return `${meeting} of ${n} proposals likely to reach ${set.target}${meeting === 0 ? ': the closest' : ''}`;
 }
 
 /** A proposal as the request Batch design opens with (target: the first label the target means here). */
