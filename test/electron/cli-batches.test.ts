@@ -4,7 +4,9 @@ import { describe, expect, it } from 'vitest';
 import type { CatalogReagent } from '../../shared-model/api/batches';
 import { REAGENT_SEED } from '../../shared-model/recipes/reagent-seed';
 import { runPairwright, runPairwrightJson } from '../support/cli';
+import { PT_NI_RECIPE as PT_NI, recipeArgs } from '../support/cli-batches';
 import { tempDataDir } from '../support/host-fixture';
+import { TIMEOUTS } from '../support/timeouts';
 
 interface RecipeJson {
   batchId?: number;
@@ -24,33 +26,6 @@ interface RecipeJson {
   checks: { kind: string; severity: string; message: string }[];
   hazards: { code: string; text: string }[];
 }
-
-const PT_NI = [
-  'recipe',
-  'Pt-Ni',
-  '--diameter',
-  '4',
-  '--composition',
-  '25',
-  '--total-metal',
-  '0.1',
-  '--volume',
-  '50',
-  '--precursor',
-  'Pt=h2ptcl6-6h2o@20',
-  '--precursor',
-  'Ni=nicl2-6h2o@20',
-  '--reducer',
-  'nabh4',
-  '--excess',
-  '5',
-  '--reducer-stock',
-  '100',
-];
-
-// Each child process starts Node with tsx; under a full parallel test run that takes seconds, so the tests
-// that spawn several get a longer timeout than the 30 s default.
-const SLOW = 180_000;
 
 describe('pairwright recipe / reagents / catalog', () => {
   it('designs a batch with the contract JSON fields', () => {
@@ -136,7 +111,7 @@ describe('pairwright recipe / reagents / catalog', () => {
       const after = runPairwrightJson<{ reagentKey: string; amount: number }[]>(['inventory', '--data', data]);
       expect(after.map((i) => i.amount)).toEqual([1, 5].map((v) => expect.closeTo(v, 9)));
     },
-    SLOW,
+    TIMEOUTS.cliSequenceMs,
   );
 
   it('lists the catalog as JSON', () => {
@@ -152,66 +127,29 @@ describe('pairwright recipe / reagents / catalog', () => {
     'exits 2 with one line naming the field for bad input',
     () => {
       const data = tempDataDir();
+      // Pt-Ni with stocks and the excess left to their defaults, one field wrong (or missing) each.
+      const PT_NI_BASE = { pair: 'Pt-Ni', diameterNm: '4', totalMetalMmol: '0.1', volumeMl: '50' };
       const cases: [string[], RegExp][] = [
         [
-          [
-            'recipe',
-            'Pt-Ni',
-            '--diameter',
-            '4',
-            '--composition',
-            '120',
-            '--total-metal',
-            '0.1',
-            '--volume',
-            '50',
-            '--precursor',
-            'Pt=h2ptcl6-6h2o',
-            '--precursor',
-            'Ni=nicl2-6h2o',
-            '--reducer',
-            'nabh4',
-          ],
+          recipeArgs({
+            ...PT_NI_BASE,
+            compositionPct: '120',
+            precursors: ['Pt=h2ptcl6-6h2o', 'Ni=nicl2-6h2o'],
+            reducer: 'nabh4',
+          }),
           /0 and 100 at\.%.*\(input field size\.xB\)/,
         ],
         [
-          [
-            'recipe',
-            'Pt-Ni',
-            '--diameter',
-            '4',
-            '--composition',
-            '25',
-            '--total-metal',
-            '0.1',
-            '--volume',
-            '50',
-            '--precursor',
-            'Pt=h2ptcl6-6h2o',
-            '--precursor',
-            'Ni=nicl2-6h2o',
-          ],
+          recipeArgs({ ...PT_NI_BASE, compositionPct: '25', precursors: ['Pt=h2ptcl6-6h2o', 'Ni=nicl2-6h2o'] }),
           /reducer/,
         ],
         [
-          [
-            'recipe',
-            'Pt-Ni',
-            '--diameter',
-            '4',
-            '--composition',
-            '25',
-            '--total-metal',
-            '0.1',
-            '--volume',
-            '50',
-            '--precursor',
-            'Pt=h2ptcl6-6h2o',
-            '--precursor',
-            'Ni=agno3',
-            '--reducer',
-            'nabh4',
-          ],
+          recipeArgs({
+            ...PT_NI_BASE,
+            compositionPct: '25',
+            precursors: ['Pt=h2ptcl6-6h2o', 'Ni=agno3'],
+            reducer: 'nabh4',
+          }),
           /Ag precursor, not a Ni precursor/,
         ],
         [['recipe', 'Pt-Ni', '--diameter', 'four'], /--diameter must be a number/],
@@ -229,6 +167,6 @@ describe('pairwright recipe / reagents / catalog', () => {
         expect(run.stderr).toMatch(message);
       }
     },
-    SLOW,
+    TIMEOUTS.cliSequenceMs,
   );
 });

@@ -3,47 +3,20 @@
  * text is read back with poppler's pdftotext (Debian poppler-utils; .ci/run installs both).
  */
 import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { browserAvailable } from '../support/browser';
 import { runPairwright, runPairwrightJson } from '../support/cli';
+import { PT_NI_RECIPE as PT_NI } from '../support/cli-batches';
+import { tempDataDir } from '../support/host-fixture';
 import { referenceAvailable } from '../support/reference-tools';
 
-const PT_NI = [
-  'recipe',
-  'Pt-Ni',
-  '--diameter',
-  '4',
-  '--composition',
-  '25',
-  '--total-metal',
-  '0.1',
-  '--volume',
-  '50',
-  '--precursor',
-  'Pt=h2ptcl6-6h2o@20',
-  '--precursor',
-  'Ni=nicl2-6h2o@20',
-  '--reducer',
-  'nabh4',
-  '--excess',
-  '5',
-  '--reducer-stock',
-  '100',
-];
-
 const available = browserAvailable() && referenceAvailable({ command: 'pdftotext' });
-let folder = '';
-afterEach(() => {
-  if (folder !== '') rmSync(folder, { recursive: true, force: true });
-  folder = '';
-});
 
 describe('pairwright batches sheet', () => {
   it('refuses a batch id that is not a number, and an unknown batch, in one line', () => {
-    folder = mkdtempSync(join(tmpdir(), 'pairwright-test-'));
+    const folder = tempDataDir();
     const bad = runPairwright(['batches', 'sheet', 'abc', '--data', folder]);
     expect(bad.status).toBe(2);
     expect(bad.stderr).toContain('<batch> must be a batch id');
@@ -55,7 +28,7 @@ describe('pairwright batches sheet', () => {
   it.skipIf(!available)(
     'writes the bench sheet as a PDF whose text carries the batch, H- and P-statements and the SDS reminder',
     () => {
-      folder = mkdtempSync(join(tmpdir(), 'pairwright-test-'));
+      const folder = tempDataDir();
       runPairwrightJson(['campaigns', 'create', 'Cathode screen', '--data', folder]);
       const recipe = runPairwrightJson<{ batchId: number }>([
         ...PT_NI,

@@ -14,6 +14,8 @@ export const TIMEOUTS = {
   pageActionMs: 15_000,
   /** A wait for background work seen through the page: a Monte Carlo run, a demo build, line-scan fits. */
   longWaitMs: 60_000,
+  /** A CLI test that runs several child processes in sequence (each starts Node; seconds on a busy machine). */
+  cliSequenceMs: 180_000,
   /** One operation's fuzz run in the trust suite (1,000 generated inputs in CI, each within its own 2 s budget). */
   fuzzOperationMs: 180_000,
 } as const;
