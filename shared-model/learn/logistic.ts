@@ -11,20 +11,31 @@
  * The inverse of the Hessian at the optimum is the Laplace approximation of the posterior covariance of the
  * parameters (the penalty read as a Gaussian prior with variance C), used for uncertainty and for Thompson
  * sampling.
+ *
+ * The work is in flat Float64Array kernels: one pass over the rows gives the objective and the class
+ * probabilities, which the gradient and the Hessian reuse; the Hessian is accumulated block by block (its
+ * K(K+1)/2 distinct q × q blocks Σ_i s_i p_ik (δ_kl − p_il) x̃_i x̃_iᵀ, upper triangles only) and factored by
+ * an in-place Cholesky decomposition (the same factor as ml-matrix's CholeskyDecomposition; a unit test
+ * compares them).
  */
-import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import type { SeededRandom } from '../random';
 
 export interface LogisticFitOptions {
   /** Inverse penalty strength C = 1/λ (scikit-learn's convention). */
   C: number;
   /** Per-row weights (default 1). */
-  sampleWeights?: readonly number[];
+  sampleWeights?: readonly number[] | Float64Array;
   maxIterations?: number;
-  /** Stop when the largest gradient component falls below this. */
+  /** Stop when the largest gradient component falls below this (times max(1, Σ sample weights)). */
   gradientTolerance?: number;
   /** Starting point (e.g. the fit on all rows, for cross-validation folds); zeros by default. */
   initial?: Pick<LogisticModel, 'weights' | 'intercepts'>;
+  /**
+   * Whether to factor the Hessian at the optimum for the Laplace posterior (default true). A
+   * cross-validation fold that only predicts its held-out rows does without it: the iterates and the
+   * optimum are the same, the last Hessian is not formed, and `hessianCholesky` is empty.
+   */
+  posterior?: boolean;
 }
 
 export interface LogisticModel {
@@ -37,7 +48,10 @@ export interface LogisticModel {
   objective: number;
   iterations: number;
   converged: boolean;
-  /** Lower-triangular Cholesky factor of the (made invertible) Hessian at the optimum, row-major. */
+  /**
+   * Lower-triangular Cholesky factor of the (made invertible) Hessian at the optimum, row-major d × d with
+   * d = K(p + 1); empty when fitted with `posterior: false`.
+   */
   hessianCholesky: Float64Array;
   C: number;
 }
@@ -55,7 +69,8 @@ function softmaxInto(scores: Float64Array, out: Float64Array): number {
   return max + Math.log(sum);
 }
 
-interface Problem {
+/** A fitting problem on flat arrays: rows x (n × p, row-major), classes y, sample weights s. */
+export interface FlatProblem {
   x: Float64Array;
   n: number;
   p: number;
@@ -65,74 +80,101 @@ interface Problem {
   C: number;
 }
 
-/** θ layout: class k's intercept at k(p+1), its weights at k(p+1)+1 … k(p+1)+p. */
-function objective(problem: Problem, theta: Float64Array): number {
+/**
+ * Objective at θ (layout: class k's intercept at k(p+1), its weights at k(p+1)+1 … k(p+1)+p); writes the
+ * class probabilities of every row into `probs` (n × K), which the gradient and Hessian then reuse.
+ */
+function objectiveInto(problem: FlatProblem, theta: Float64Array, probs: Float64Array): number {
   const { x, n, p, K, y, s, C } = problem;
   const q = p + 1;
   const scores = new Float64Array(K);
-  const probs = new Float64Array(K);
+  const row = new Float64Array(K);
   let f = 0;
   for (let i = 0; i < n; i++) {
+    const xi = i * p;
     for (let k = 0; k < K; k++) {
-      let z = theta[k * q] as number;
-      for (let j = 0; j < p; j++) z += (theta[k * q + 1 + j] as number) * (x[i * p + j] as number);
+      const tk = k * q;
+      let z = theta[tk] as number;
+      for (let j = 0; j < p; j++) z += (theta[tk + 1 + j] as number) * (x[xi + j] as number);
       scores[k] = z;
     }
-    const logSum = softmaxInto(scores, probs);
+    const logSum = softmaxInto(scores, row);
+    probs.set(row, i * K);
     f += (s[i] as number) * (logSum - (scores[y[i] as number] as number));
   }
   for (let k = 0; k < K; k++) for (let j = 0; j < p; j++) f += (theta[k * q + 1 + j] as number) ** 2 / (2 * C);
   return f;
 }
 
-function gradientAndHessian(problem: Problem, theta: Float64Array): { g: Float64Array; h: Float64Array } {
+/** Gradient at θ from the probabilities `probs` at θ. */
+function gradientOf(problem: FlatProblem, theta: Float64Array, probs: Float64Array): Float64Array {
   const { x, n, p, K, y, s, C } = problem;
   const q = p + 1;
-  const d = K * q;
-  const g = new Float64Array(d);
-  const h = new Float64Array(d * d);
-  const scores = new Float64Array(K);
-  const probs = new Float64Array(K);
-  const xt = new Float64Array(q);
-  // Per class pair (k ≤ l), accumulate Σ_i a_i x̃_i x̃_iᵀ in an upper triangle.
-  const blocks = new Float64Array(((K * (K + 1)) / 2) * q * q);
+  const g = new Float64Array(K * q);
   for (let i = 0; i < n; i++) {
-    xt[0] = 1;
-    for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
-    for (let k = 0; k < K; k++) {
-      let z = 0;
-      for (let j = 0; j < q; j++) z += (theta[k * q + j] as number) * (xt[j] as number);
-      scores[k] = z;
-    }
-    softmaxInto(scores, probs);
     const si = s[i] as number;
     const yi = y[i] as number;
-    let block = 0;
+    const xi = i * p;
     for (let k = 0; k < K; k++) {
-      const pk = probs[k] as number;
-      const r = si * (pk - (k === yi ? 1 : 0));
-      for (let j = 0; j < q; j++) g[k * q + j] = (g[k * q + j] as number) + r * (xt[j] as number);
-      for (let l = k; l < K; l++) {
-        const a = si * pk * ((k === l ? 1 : 0) - (probs[l] as number));
-        const base = block * q * q;
-        if (a !== 0) {
-          for (let j = 0; j < q; j++) {
-            const ax = a * (xt[j] as number);
-            const row = base + j * q;
-            for (let m = j; m < q; m++) blocks[row + m] = (blocks[row + m] as number) + ax * (xt[m] as number);
-          }
-        }
-        block++;
-      }
+      const r = si * ((probs[i * K + k] as number) - (k === yi ? 1 : 0));
+      if (r === 0) continue;
+      const gk = k * q;
+      g[gk] = (g[gk] as number) + r;
+      for (let j = 0; j < p; j++) g[gk + 1 + j] = (g[gk + 1 + j] as number) + r * (x[xi + j] as number);
     }
   }
-  let block = 0;
+  for (let k = 0; k < K; k++)
+    for (let j = 1; j < q; j++) g[k * q + j] = (g[k * q + j] as number) + (theta[k * q + j] as number) / C;
+  return g;
+}
+
+/**
+ * Exact Hessian (d × d, d = K(p+1)) from the probabilities at θ. The data part is block structured:
+ * block (k, l) = Σ_i s_i p_ik (δ_kl − p_il) x̃_i x̃_iᵀ with x̃ = (1, x); only the K(K+1)/2 blocks k ≤ l and
+ * the upper triangle of each are accumulated (one packed outer product per row, added to every block with
+ * its coefficient), then mirrored. Plus 1/C on the weights' diagonal and u uᵀ along the flat direction of
+ * the intercepts (u = intercept indicator / √K).
+ */
+function hessianOf(problem: FlatProblem, probs: Float64Array): Float64Array {
+  const { x, n, p, K, s, C } = problem;
+  const q = p + 1;
+  const d = K * q;
+  const T = (q * (q + 1)) / 2;
+  const blockCount = (K * (K + 1)) / 2;
+  const blocks = new Float64Array(blockCount * T);
+  const outer = new Float64Array(T);
+  const xt = new Float64Array(q);
+  const coefficients = new Float64Array(blockCount);
+  for (let i = 0; i < n; i++) {
+    const si = s[i] as number;
+    if (si === 0) continue;
+    xt[0] = 1;
+    for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
+    let t = 0;
+    for (let j = 0; j < q; j++) {
+      const xj = xt[j] as number;
+      for (let m = j; m < q; m++) outer[t++] = xj * (xt[m] as number);
+    }
+    let b = 0;
+    for (let k = 0; k < K; k++) {
+      const pk = si * (probs[i * K + k] as number);
+      for (let l = k; l < K; l++) coefficients[b++] = pk * ((k === l ? 1 : 0) - (probs[i * K + l] as number));
+    }
+    for (b = 0; b < blockCount; b++) {
+      const a = coefficients[b] as number;
+      if (a === 0) continue;
+      const base = b * T;
+      for (t = 0; t < T; t++) blocks[base + t] = (blocks[base + t] as number) + a * (outer[t] as number);
+    }
+  }
+  const h = new Float64Array(d * d);
+  let b = 0;
   for (let k = 0; k < K; k++) {
     for (let l = k; l < K; l++) {
-      const base = block * q * q;
+      let t = b * T;
       for (let j = 0; j < q; j++) {
         for (let m = j; m < q; m++) {
-          const v = blocks[base + j * q + m] as number;
+          const v = blocks[t++] as number;
           const r1 = k * q + j;
           const c1 = l * q + m;
           const r2 = k * q + m;
@@ -143,29 +185,56 @@ function gradientAndHessian(problem: Problem, theta: Float64Array): { g: Float64
           h[c2 * d + r2] = v;
         }
       }
-      block++;
+      b++;
     }
   }
   for (let k = 0; k < K; k++) {
     for (let j = 1; j < q; j++) {
       const index = k * q + j;
-      g[index] = (g[index] as number) + (theta[index] as number) / C;
       h[index * d + index] = (h[index * d + index] as number) + 1 / C;
     }
   }
-  // Along u (all intercepts together) the objective is flat: add u uᵀ, u = intercept indicator / √K.
   for (let k = 0; k < K; k++)
     for (let l = 0; l < K; l++) h[k * q * d + l * q] = (h[k * q * d + l * q] as number) + 1 / K;
-  return { g, h };
+  return h;
 }
 
-function choleskyOf(h: Float64Array, d: number): CholeskyDecomposition {
-  const rows: number[][] = [];
-  for (let r = 0; r < d; r++) rows.push(Array.from(h.subarray(r * d, r * d + d)));
-  const chol = new CholeskyDecomposition(new Matrix(rows));
-  if (!chol.isPositiveDefinite())
-    throw new RangeError('the Hessian of the logistic objective is not positive definite');
-  return chol;
+/**
+ * Cholesky factor H = L Lᵀ of a symmetric d × d matrix (row-major; the lower triangle is read), returned as
+ * the row-major lower triangle with zeros above.
+ */
+export function choleskyFactor(h: Float64Array, d: number): Float64Array {
+  const L = new Float64Array(d * d);
+  for (let r = 0; r < d; r++) {
+    const rowR = r * d;
+    for (let c = 0; c <= r; c++) {
+      const rowC = c * d;
+      let sum = h[rowR + c] as number;
+      for (let k = 0; k < c; k++) sum -= (L[rowR + k] as number) * (L[rowC + k] as number);
+      if (r === c) {
+        if (!(sum > 0)) throw new RangeError('the Hessian of the logistic objective is not positive definite');
+        L[rowR + r] = Math.sqrt(sum);
+      } else L[rowR + c] = sum / (L[rowC + c] as number);
+    }
+  }
+  return L;
+}
+
+/** Solves L Lᵀ x = g. */
+function choleskySolve(L: Float64Array, d: number, g: Float64Array): Float64Array {
+  const y = new Float64Array(d);
+  for (let r = 0; r < d; r++) {
+    let sum = g[r] as number;
+    for (let c = 0; c < r; c++) sum -= (L[r * d + c] as number) * (y[c] as number);
+    y[r] = sum / (L[r * d + r] as number);
+  }
+  const out = new Float64Array(d);
+  for (let r = d - 1; r >= 0; r--) {
+    let sum = y[r] as number;
+    for (let c = r + 1; c < d; c++) sum -= (L[c * d + r] as number) * (out[c] as number);
+    out[r] = sum / (L[r * d + r] as number);
+  }
+  return out;
 }
 
 function centreIntercepts(theta: Float64Array, K: number, q: number): void {
@@ -184,26 +253,37 @@ export function fitLogistic(
 ): LogisticModel {
   const n = x.length;
   if (n === 0) throw new RangeError('no rows to fit');
-  if (y.length !== n) throw new RangeError('one class index per row is needed');
-  if (!(options.C > 0)) throw new RangeError('C must be positive');
   const p = (x[0] as readonly number[]).length;
+  const flat = new Float64Array(n * p);
+  x.forEach((row, i) => flat.set(row, i * p));
+  return fitLogisticFlat(flat, n, p, Int32Array.from(y), classCount, options);
+}
+
+/** fitLogistic on a flat row-major table `x` (n × p) and class indices `y`. */
+export function fitLogisticFlat(
+  x: Float64Array,
+  n: number,
+  p: number,
+  y: Int32Array,
+  classCount: number,
+  options: LogisticFitOptions,
+): LogisticModel {
+  if (n === 0) throw new RangeError('no rows to fit');
+  if (y.length !== n) throw new RangeError('one class index per row is needed');
+  if (x.length !== n * p) throw new RangeError('every row needs the same number of features');
+  if (!(options.C > 0)) throw new RangeError('C must be positive');
   const K = classCount;
   if (K < 2) throw new RangeError('a classifier needs at least two classes');
-  const problem: Problem = {
-    x: Float64Array.from(x.flatMap((row) => [...row])),
-    n,
-    p,
-    K,
-    y: Int32Array.from(y),
-    s: Float64Array.from(options.sampleWeights ?? new Array<number>(n).fill(1)),
-    C: options.C,
-  };
+  const s = options.sampleWeights ? Float64Array.from(options.sampleWeights) : new Float64Array(n).fill(1);
+  if (s.length !== n) throw new RangeError('one sample weight per row is needed');
+  const problem: FlatProblem = { x, n, p, K, y, s, C: options.C };
   const q = p + 1;
   const d = K * q;
   let theta = new Float64Array(d);
   if (
     options.initial &&
     options.initial.intercepts.length === K &&
+    options.initial.weights.length === K &&
     options.initial.weights.every((w) => w.length === p)
   ) {
     for (let k = 0; k < K; k++) {
@@ -212,35 +292,31 @@ export function fitLogistic(
     }
     if (!theta.every(Number.isFinite)) theta = new Float64Array(d);
   }
-  let f = objective(problem, theta);
+  let probs = new Float64Array(n * K);
+  let probsNext = new Float64Array(n * K);
+  let f = objectiveInto(problem, theta, probs);
   const maxIterations = options.maxIterations ?? 100;
-  const tolerance = options.gradientTolerance ?? 1e-10;
+  let totalWeight = 0;
+  for (const v of s) totalWeight += v;
+  const tolerance = (options.gradientTolerance ?? 1e-10) * Math.max(1, totalWeight);
   let iterations = 0;
   let converged = false;
-  let chol: CholeskyDecomposition | null = null;
   for (; iterations < maxIterations; iterations++) {
-    const { g, h } = gradientAndHessian(problem, theta);
-    chol = choleskyOf(h, d);
+    const g = gradientOf(problem, theta, probs);
     let maxGradient = 0;
     for (const v of g) maxGradient = Math.max(maxGradient, Math.abs(v));
-    if (
-      maxGradient <
-      tolerance *
-        Math.max(
-          1,
-          problem.s.reduce((a, b) => a + b, 0),
-        )
-    ) {
+    if (maxGradient < tolerance) {
       converged = true;
       break;
     }
-    const step = chol.solve(Matrix.columnVector(Array.from(g))).getColumn(0);
+    const L = choleskyFactor(hessianOf(problem, probs), d);
+    const step = choleskySolve(L, d, g);
     let t = 1;
     let next = theta;
     let fNext = f;
     for (let halvings = 0; halvings < 60; halvings++) {
       next = theta.map((v, i) => v - t * (step[i] as number));
-      fNext = objective(problem, next);
+      fNext = objectiveInto(problem, next, probsNext);
       if (fNext <= f) break;
       t /= 2;
     }
@@ -250,26 +326,23 @@ export function fitLogistic(
     }
     const decrease = f - fNext;
     theta = next;
+    // Centring the intercepts moves every score of a row by the same amount: the probabilities stand.
     centreIntercepts(theta, K, q);
+    [probs, probsNext] = [probsNext, probs];
     f = fNext;
     if (decrease <= 1e-15 * Math.max(1, Math.abs(f)) && t < 1) {
       converged = true;
       break;
     }
   }
-  if (!chol || !converged) {
-    const { h } = gradientAndHessian(problem, theta);
-    chol = choleskyOf(h, d);
-  }
+  const hessianCholesky =
+    options.posterior === false ? new Float64Array(0) : choleskyFactor(hessianOf(problem, probs), d);
   const weights: number[][] = [];
   const intercepts: number[] = [];
   for (let k = 0; k < K; k++) {
     intercepts.push(theta[k * q] as number);
     weights.push(Array.from(theta.subarray(k * q + 1, k * q + q)));
   }
-  const L = chol.lowerTriangularMatrix;
-  const hessianCholesky = new Float64Array(d * d);
-  for (let r = 0; r < d; r++) for (let c = 0; c <= r; c++) hessianCholesky[r * d + c] = L.get(r, c);
   return {
     classCount: K,
     featureCount: p,

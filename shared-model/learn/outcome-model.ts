@@ -11,9 +11,9 @@ import { DomainError } from '../api/result';
 import { CLASS_KEYS, RARE_CLASSES, classOfLabel, type ClassKey } from './classes';
 import { canonicalCondition, type CanonicalCondition, type SynthesisCondition } from './conditions';
 import { featureRow } from './features';
-import { fitLogistic, predictLogistic, type LogisticModel } from './logistic';
+import { fitLogisticFlat, predictLogistic, type LogisticModel } from './logistic';
 import { physicsPrediction, type PhysicsCall } from './physics';
-import { applyColumnScaler, fitColumnScaler, type ColumnScaler } from './standardise';
+import { applyColumnScaler, applyColumnScalerFlat, fitColumnScaler, type ColumnScaler } from './standardise';
 
 export const LEARN_MODEL_VERSION = 'learn-1.0';
 /** Fewest labelled (not failed) outcomes before a learned model is shown. */
@@ -117,8 +117,37 @@ export interface FittedClassifier {
 }
 
 /**
+ * The starting point for a fit standardised by `scaler`, from a fit standardised by another scaler on the
+ * same kept columns: the same linear scores on raw rows (w'_j = w_j σ'_j / σ_j, b' = b + Σ_j w_j (μ'_j − μ_j) /
+ * σ_j), so a cross-validation fold starts at the all-rows optimum as its own standardisation sees it.
+ */
+function warmStartFor(
+  warm: FittedClassifier,
+  scaler: ColumnScaler,
+): Pick<LogisticModel, 'weights' | 'intercepts'> | null {
+  if (warm.scaler.kept.length !== scaler.kept.length || !warm.scaler.kept.every((c, i) => c === scaler.kept[i]))
+    return null;
+  if (!warm.intercepts.every((b) => Number.isFinite(b))) return null;
+  const weights = warm.weights.map((w) =>
+    w.map((v, j) => (v * (scaler.scales[j] as number)) / (warm.scaler.scales[j] as number)),
+  );
+  const intercepts = warm.intercepts.map((b, k) => {
+    let shift = 0;
+    (warm.weights[k] as number[]).forEach((v, j) => {
+      shift +=
+        (v * ((scaler.means[j] as number) - (warm.scaler.means[j] as number))) / (warm.scaler.scales[j] as number);
+    });
+    return b + shift;
+  });
+  return { weights, intercepts };
+}
+
+/**
  * Fits the classifier on labelled rows plus weighted pseudo rows. The classes are `classes`; any class
  * without a row in this training set (real or pseudo) is left out of the fit and gets only the floor.
+ * `warmStart` (a fit on the same classes, e.g. on all rows) only moves the starting point of Newton's
+ * method; `posterior: false` skips the Hessian factor at the optimum (a cross-validation fold needs only
+ * its predictions; `hessianCholesky` is then empty).
  */
 export function fitClassifier(
   rows: readonly { features: number[]; classKey: ClassKey }[],
@@ -127,6 +156,7 @@ export function fitClassifier(
   classes: readonly ClassKey[],
   C = 1,
   warmStart?: FittedClassifier,
+  options: { posterior?: boolean } = {},
 ): FittedClassifier {
   const present = classes.filter(
     (k) => rows.some((r) => r.classKey === k) || (priorWeight > 0 && pseudo.some((r) => r.classKey === k)),
@@ -138,26 +168,25 @@ export function fitClassifier(
       'outcomes',
     );
   const all = priorWeight > 0 ? [...rows, ...pseudo.filter((r) => present.includes(r.classKey))] : [...rows];
-  const weights = all.map((_, i) => (i < rows.length ? 1 : priorWeight));
-  const scaler = fitColumnScaler(all.map((r) => r.features));
-  const z = applyColumnScaler(
-    scaler,
-    all.map((r) => r.features),
-  );
-  const sameShape =
-    warmStart !== undefined &&
-    present.length === classes.length &&
-    warmStart.intercepts.every((b) => Number.isFinite(b)) &&
-    warmStart.scaler.kept.length === scaler.kept.length &&
-    warmStart.scaler.kept.every((c, i) => c === scaler.kept[i]);
-  const model: LogisticModel = fitLogistic(
+  const weights = Float64Array.from(all, (_, i) => (i < rows.length ? 1 : priorWeight));
+  const features = all.map((r) => r.features);
+  const scaler = fitColumnScaler(features);
+  const z = applyColumnScalerFlat(scaler, features);
+  const initial =
+    warmStart !== undefined && present.length === classes.length && warmStart.classes.length === classes.length
+      ? warmStartFor(warmStart, scaler)
+      : null;
+  const model: LogisticModel = fitLogisticFlat(
     z,
-    all.map((r) => present.indexOf(r.classKey)),
+    all.length,
+    scaler.kept.length,
+    Int32Array.from(all, (r) => present.indexOf(r.classKey)),
     present.length,
     {
       C,
       sampleWeights: weights,
-      ...(sameShape ? { initial: { weights: warmStart.weights, intercepts: warmStart.intercepts } } : {}),
+      ...(initial ? { initial } : {}),
+      ...(options.posterior === false ? { posterior: false } : {}),
     },
   );
   // Expand to the full class list: absent classes get −∞ scores (only the floor remains).
@@ -170,7 +199,7 @@ export function fitClassifier(
     present.includes(k) ? (model.intercepts[present.indexOf(k)] as number) : -Infinity,
   );
   return {
-    classes: present.length === classes.length ? [...classes] : [...classes],
+    classes: [...classes],
     scaler,
     weights: weightsFull,
     intercepts: interceptsFull,

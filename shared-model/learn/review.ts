@@ -166,13 +166,15 @@ function validate(
     weight,
     classes,
     C,
+    undefined,
+    { posterior: false },
   );
   const model = crossValidate(labelled.length, folds, (train, test) => {
     cancelled(hooks);
     const rows = train
       .map((i) => labelled[i] as PreparedOutcome)
       .map((o) => ({ features: o.features, classKey: o.classKey as ClassKey }));
-    const fit = fitClassifier(rows, pseudo, weight, classes, C, warm);
+    const fit = fitClassifier(rows, pseudo, weight, classes, C, warm, { posterior: false });
     progress(++done);
     return classifierProbabilities(
       fit,

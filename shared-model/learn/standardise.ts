@@ -16,16 +16,29 @@ export interface ColumnScaler {
 /** Relative size of a residual below which a column counts as a linear combination of earlier ones. */
 const COLLINEAR_TOLERANCE = 1e-9;
 
-function columnMeanAndScale(rows: readonly (readonly number[])[], column: number): { mean: number; scale: number } {
+function columnOf(rows: readonly (readonly number[])[], column: number): Float64Array {
+  const out = new Float64Array(rows.length);
+  for (let i = 0; i < rows.length; i++) out[i] = (rows[i] as readonly number[])[column] as number;
+  return out;
+}
+
+function columnMeanAndScale(values: Float64Array): { mean: number; scale: number } {
+  const n = values.length;
   let sum = 0;
-  for (const row of rows) sum += row[column] as number;
-  const mean = sum / rows.length;
+  for (let i = 0; i < n; i++) sum += values[i] as number;
+  const mean = sum / n;
   let squares = 0;
-  for (const row of rows) {
-    const d = (row[column] as number) - mean;
+  for (let i = 0; i < n; i++) {
+    const d = (values[i] as number) - mean;
     squares += d * d;
   }
-  return { mean, scale: Math.sqrt(squares / rows.length) };
+  return { mean, scale: Math.sqrt(squares / n) };
+}
+
+function sumOfSquares(v: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < v.length; i++) s += (v[i] as number) * (v[i] as number);
+  return s;
 }
 
 /**
@@ -45,25 +58,28 @@ export function fitColumnScaler(
   const dropped: ColumnScaler['dropped'] = [];
   const basis: Float64Array[] = [];
   for (let c = 0; c < columns; c++) {
-    const { mean, scale } = columnMeanAndScale(rows, c);
+    const values = columnOf(rows, c);
+    const { mean, scale } = columnMeanAndScale(values);
     if (!(scale > 1e-12 * Math.max(1, Math.abs(mean)))) {
       dropped.push({ column: c, reason: 'constant' });
       continue;
     }
     if (options.dropCollinear !== false) {
-      const v = Float64Array.from(rows, (row) => ((row[c] as number) - mean) / scale);
-      const norm0 = Math.sqrt(v.reduce((s, x) => s + x * x, 0));
+      const v = values;
+      for (let i = 0; i < v.length; i++) v[i] = ((v[i] as number) - mean) / scale;
+      const norm0 = Math.sqrt(sumOfSquares(v));
       for (const q of basis) {
         let dot = 0;
         for (let i = 0; i < v.length; i++) dot += (q[i] as number) * (v[i] as number);
         for (let i = 0; i < v.length; i++) v[i] = (v[i] as number) - dot * (q[i] as number);
       }
-      const norm = Math.sqrt(v.reduce((s, x) => s + x * x, 0));
+      const norm = Math.sqrt(sumOfSquares(v));
       if (norm < COLLINEAR_TOLERANCE * norm0) {
         dropped.push({ column: c, reason: 'collinear' });
         continue;
       }
-      basis.push(v.map((x) => x / norm));
+      for (let i = 0; i < v.length; i++) v[i] = (v[i] as number) / norm;
+      basis.push(v);
     }
     kept.push(c);
     means.push(mean);
@@ -76,4 +92,17 @@ export function applyColumnScaler(scaler: ColumnScaler, rows: readonly (readonly
   return rows.map((row) =>
     scaler.kept.map((c, j) => ((row[c] as number) - (scaler.means[j] as number)) / (scaler.scales[j] as number)),
   );
+}
+
+/** applyColumnScaler into one flat row-major table (rows × kept columns), the same values. */
+export function applyColumnScalerFlat(scaler: ColumnScaler, rows: readonly (readonly number[])[]): Float64Array {
+  const p = scaler.kept.length;
+  const out = new Float64Array(rows.length * p);
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i] as readonly number[];
+    for (let j = 0; j < p; j++)
+      out[i * p + j] =
+        ((row[scaler.kept[j] as number] as number) - (scaler.means[j] as number)) / (scaler.scales[j] as number);
+  }
+  return out;
 }
