@@ -25,6 +25,7 @@ import type { ReviewView } from '../../../shared-model/api/learn';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
+import { ChartCard } from './model-review/ChartCard';
 import { ModelStatus } from './next-batches/ModelStatus';
 import {
   figureText,
@@ -49,6 +50,11 @@ type TooFew = Extract<ReviewView, { status: 'too-few' }>;
 
 const UNIT_TICKS = roundTicks(0, 1, 0.2);
 const pctTick = (v: number) => `${Math.round(v * 100)} %`;
+/** Width of a value axis: room for the ticks and, left of them, the rotated axis title. */
+const Y_AXIS_WIDTH = 72;
+/** A value axis's title, rotated, centred on the axis at its left edge (clear of the tick labels). */
+const yLabel = (value: string) =>
+  ({ value, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle' } }) as const;
 
 function HeadlineTable(props: { review: Ready }) {
   return (
@@ -138,7 +144,8 @@ function ReliabilityChart(props: { review: Ready }) {
             ticks={UNIT_TICKS}
             tickFormatter={pctTick}
             name="observed"
-            label={{ value: 'right (fraction)', angle: -90, position: 'insideLeft' }}
+            width={Y_AXIS_WIDTH}
+            label={yLabel('right (fraction)')}
           />
           <ZAxis dataKey="count" range={[30, 200]} name="outcomes" />
           <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
@@ -188,7 +195,8 @@ function TimelineChart(props: { review: Ready }) {
             domain={[0, 1]}
             ticks={UNIT_TICKS}
             tickFormatter={pctTick}
-            label={{ value: 'accuracy (new pairs)', angle: -90, position: 'insideLeft' }}
+            width={Y_AXIS_WIDTH}
+            label={yLabel('accuracy (new pairs)')}
           />
           <Tooltip
             formatter={(v) => (typeof v === 'number' ? percentText(v) : String(v))}
@@ -227,7 +235,7 @@ function LdaPanel(props: { review: Ready }) {
   const bars = loadingBars(review);
   return (
     <>
-      <div className="chart-box" data-testid="lda-scatter">
+      <div className="chart-box" data-testid="lda-scatter" style={{ height: 400 }}>
         <ResponsiveContainer width="100%" height="100%">
           <ScatterChart margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
             <CartesianGrid strokeDasharray="3 3" />
@@ -243,7 +251,8 @@ function LdaPanel(props: { review: Ready }) {
               type="number"
               name={axes.y}
               tickFormatter={(v: number) => String(Number(v.toFixed(1)))}
-              label={{ value: axes.y, angle: -90, position: 'insideLeft' }}
+              width={Y_AXIS_WIDTH}
+              label={yLabel(axes.y)}
             />
             <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(2)) : String(v))} />
             <Legend verticalAlign="top" />
@@ -258,12 +267,12 @@ function LdaPanel(props: { review: Ready }) {
         Correlation of each standardised descriptor with the discriminant scores (structure correlations, −1 to 1),
         strongest first.
       </p>
-      <div className="chart-box" data-testid="loadings-chart" style={{ height: Math.max(220, bars.length * 28 + 60) }}>
+      <div className="chart-box" data-testid="loadings-chart" style={{ height: Math.max(240, bars.length * 44 + 70) }}>
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={bars} layout="vertical" margin={{ top: 10, right: 20, bottom: 10, left: 10 }}>
             <CartesianGrid strokeDasharray="3 3" />
             <XAxis type="number" domain={[-1, 1]} ticks={roundTicks(-1, 1, 0.5)} />
-            <YAxis type="category" dataKey="label" width={220} />
+            <YAxis type="category" dataKey="label" width={300} interval={0} tick={{ fontSize: 12 }} />
             <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
             <Legend verticalAlign="top" />
             <ReferenceLine x={0} stroke="#6b7280" />
@@ -282,11 +291,15 @@ function ReadyReview(props: { review: Ready }) {
   const { review } = props;
   return (
     <>
-      <section className="card" aria-label="Validation on new pairs">
-        <h2 className="card__title">
-          Validation on new pairs (leave-one-pair-out: {review.outcomes} outcomes, {review.pairs} pairs,{' '}
-          {review.classes.length} classes)
-        </h2>
+      <ChartCard
+        label="Validation on new pairs"
+        title={
+          <>
+            Validation on new pairs (leave-one-pair-out: {review.outcomes} outcomes, {review.pairs} pairs,{' '}
+            {review.classes.length} classes)
+          </>
+        }
+      >
         <p data-testid="verdict">{verdictText(review)}</p>
         <HeadlineTable review={review} />
         <p className="muted small" data-testid="prior-weight">
@@ -310,24 +323,23 @@ function ReadyReview(props: { review: Ready }) {
             {review.left.length > 3 ? '; …' : ''}
           </p>
         ) : null}
-      </section>
-      <section className="card" aria-label="Per-class recall">
-        <h2 className="card__title">Per-class recall (leave-one-pair-out)</h2>
+      </ChartCard>
+      <ChartCard label="Per-class recall" title="Per-class recall (leave-one-pair-out)">
         <RecallTable review={review} />
-      </section>
-      <section className="card" aria-label="Reliability">
-        <h2 className="card__title">Are the probabilities honest? (10 bins, pooled over the folds)</h2>
+      </ChartCard>
+      <ChartCard
+        label="Reliability"
+        title="Are the probabilities honest? (10 bins, pooled over the folds)"
+        note="Points on the dashed diagonal: a stated 70 % is right 70 % of the time."
+      >
         <ReliabilityChart review={review} />
-        <p className="muted small">Points on the dashed diagonal: a stated 70 % is right 70 % of the time.</p>
-      </section>
-      <section className="card" aria-label="Timeline">
-        <h2 className="card__title">Week by week: accuracy on new pairs with the outcomes up to each week</h2>
+      </ChartCard>
+      <ChartCard label="Timeline" title="Week by week: accuracy on new pairs with the outcomes up to each week">
         <TimelineChart review={review} />
-      </section>
-      <section className="card" aria-label="Discriminant view">
-        <h2 className="card__title">The outcomes on the first two discriminant axes</h2>
+      </ChartCard>
+      <ChartCard label="Discriminant view" title="The outcomes on the first two discriminant axes">
         <LdaPanel review={review} />
-      </section>
+      </ChartCard>
     </>
   );
 }
