@@ -25,14 +25,19 @@ afterAll(() => {
       .join(', ');
     return (
       `${s.name.padEnd(26)} ${String(s.inputs).padStart(5)} inputs, ${String(s.accepted).padStart(4)} accepted, ` +
-      `rejected: ${rejected || 'none'} (${s.fullDumps} with all tables compared); slowest ${s.slowestMs.toFixed(0)} ms, total ${(s.totalMs / 1000).toFixed(1)} s` +
+      `rejected: ${rejected || 'none'} (${s.fullDumps} with all tables compared); slowest ${s.slowestMs.toFixed(0)} ms, ` +
+      `calls ${(s.totalMs / 1000).toFixed(1)} s, dumps ${(s.dumpMs / 1000).toFixed(1)} s` +
       (s.bounded ? ` [bounded: ${s.bounded}]` : '')
     );
   });
-  const total = report.reduce((n, s) => n + s.inputs, 0);
+  const sum = (f: (s: OperationStats) => number): number => report.reduce((n, s) => n + f(s), 0);
+  const total = sum((s) => s.inputs);
+  const rejected = sum((s) => Object.values(s.rejected).reduce((a, b) => a + b, 0));
   const peak = Math.max(...report.map((s) => s.peakRssMb));
   console.log(
-    `fuzz (seed ${BASE_SEED}, ${RUNS_PER_OPERATION} per operation): ${total} inputs over ${report.length} operations, ` +
+    `[fuzz operations] seed ${BASE_SEED}, ${RUNS_PER_OPERATION} per operation: ${total} inputs over ${report.length} ` +
+      `operations, ${rejected} rejected (every one with no row written, ${sum((s) => s.fullDumps)} with all tables ` +
+      `compared), calls ${(sum((s) => s.totalMs) / 1000).toFixed(0)} s, dumps ${(sum((s) => s.dumpMs) / 1000).toFixed(0)} s, ` +
       `peak RSS ${peak.toFixed(0)} MB\n${lines.join('\n')}`,
   );
 });

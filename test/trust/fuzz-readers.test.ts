@@ -9,7 +9,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { parseDiameterCsv, parseLineScanCsv } from '../../shared-model/characterization/csv-import';
 import { DomainError } from '../../shared-model/api/result';
 import { parseHistoryTable } from '../../shared-model/learn/history-table';
@@ -147,6 +147,15 @@ const READERS: ReaderCase[] = [
 const ROW_WORDS = /\b(value|cell|diameter|position|atom line|row)\b/i;
 const NAMES_LINE = /\b(line|lines|row|column)s?\s+\d/i;
 
+const totals = { readers: 0, read: 0, refused: 0 };
+afterAll(() => {
+  if (totals.readers === 0) return;
+  console.log(
+    `[fuzz readers] ${totals.read + totals.refused} texts over ${totals.readers} readers: ${totals.read} read, ` +
+      `${totals.refused} refused with a field message, 0 other errors`,
+  );
+});
+
 describe(`every file reader, ${RUNS_PER_READER} generated texts each (seed ${BASE_SEED})`, () => {
   for (const reader of READERS) {
     it(
@@ -176,6 +185,9 @@ describe(`every file reader, ${RUNS_PER_READER} generated texts each (seed ${BAS
         );
         console.log(`${reader.name}: ${RUNS_PER_READER} texts, ${tally.read} read, ${tally.refused} refused`);
         expect(tally.read + tally.refused).toBe(RUNS_PER_READER);
+        totals.readers++;
+        totals.read += tally.read;
+        totals.refused += tally.refused;
       },
       TIMEOUTS.fuzzOperationMs,
     );
