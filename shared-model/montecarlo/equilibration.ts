@@ -6,8 +6,10 @@
  * taken as the reference: its mean and the spread of its block means. The run is called equilibrated
  * when the third and fourth quarters agree within three combined standard errors (no drift left), and
  * the equilibration point is the first block from which every later block mean stays within three
- * block standard deviations of the reference mean. Averages reported with a result use the samples
- * from that point on.
+ * block standard deviations of the reference mean; within that first block, leading samples more than three
+ * sample standard deviations from the reference mean (the last of a transient shorter than a block, such as
+ * the first sweeps of a random start) are cut as well. Averages reported with a result use the samples from
+ * that point on.
  */
 
 export interface EquilibrationReport {
@@ -85,7 +87,17 @@ export function detectEquilibration(trace: ArrayLike<number>, blocks = 20): Equi
   const driftTolerance = Math.max(3 * Math.sqrt(se3 * se3 + se4 * se4), scale);
   const lateDrift = m4 - m3;
 
-  const from = firstBlock === 0 ? 0 : offset + firstBlock * blockSize;
+  // Within the first kept block, a short transient (a random start relaxes in a few sweeps, well inside one
+  // block, and moves the block mean too little to reject the block) is cut too: the point is the first sample of
+  // that block inside three standard deviations of the reference samples.
+  const blockStart = firstBlock === 0 ? 0 : offset + firstBlock * blockSize;
+  const referenceFrom = offset + half * blockSize;
+  let sumSq = 0;
+  for (let k = referenceFrom; k < samples; k++) sumSq += (trace[k]! - refMean) ** 2;
+  const sampleBand = Math.max(3 * Math.sqrt(sumSq / Math.max(1, samples - referenceFrom - 1)), scale);
+  let from = blockStart;
+  const blockEnd = Math.min(samples - 1, offset + (firstBlock + 1) * blockSize - 1);
+  while (from < blockEnd && Math.abs(trace[from]! - refMean) > sampleBand) from++;
   const kept = blockMeans.slice(firstBlock);
   return {
     equilibrated: Math.abs(lateDrift) <= driftTolerance,

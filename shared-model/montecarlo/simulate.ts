@@ -35,8 +35,12 @@ import { OffLatticeGupta } from './offlattice-gupta';
 import { RelaxedEngine } from './relaxed-engine';
 import { analyseSeparation, type SeparationAnalysis } from './separation';
 
-export const ENGINE_VERSION = 'gupta-swap-mc-1';
-export const RELAXED_ENGINE_VERSION = 'gupta-relaxed-mc-1';
+/**
+ * Engine versions, stored with every run. -2: every reported average (surface share, energy, order) starts at
+ * one sweep, the detected equilibration point, which now also cuts a transient shorter than one block.
+ */
+export const ENGINE_VERSION = 'gupta-swap-mc-2';
+export const RELAXED_ENGINE_VERSION = 'gupta-relaxed-mc-2';
 
 export const RELAXATION_MODES = ['rigid', 'relaxed'] as const;
 export type RelaxationMode = (typeof RELAXATION_MODES)[number];
@@ -608,8 +612,14 @@ export function runSimulation(
     totalSweeps - 1,
     Math.max(annealSweeps + equilibration.equilibratedFromSample, Math.min(tuningEnd, totalSweeps - 1)),
   );
+  // Every average reported starts at the same sweep: the detected equilibration point (never sweep 1 of the
+  // random start), and not before the end of step tuning for a relaxed run.
   let surfaceSum = 0;
-  for (let s = fromSweep; s < totalSweeps; s++) surfaceSum += surfaceTrace[s]!;
+  let energySum = 0;
+  for (let s = fromSweep; s < totalSweeps; s++) {
+    surfaceSum += surfaceTrace[s]!;
+    energySum += energyTrace[s]!;
+  }
   const samples = totalSweeps - fromSweep;
   const surfaceXB = surfaceSum / samples;
   const surfaceReport = detectEquilibration(surfaceTrace.subarray(fromSweep, totalSweeps));
@@ -728,7 +738,7 @@ export function runSimulation(
     xB: x,
     energyEv: finalEnergy,
     energyPerAtomEv: finalEnergy / n,
-    meanEnergyEv: equilibration.mean,
+    meanEnergyEv: energySum / samples,
     mixingEnergyPerAtomEv,
     pureClusterEnergyPerAtomEv: { [elementA.symbol]: pureA, [elementB.symbol]: pureB },
     surfaceSites: engine.surfaceSites,

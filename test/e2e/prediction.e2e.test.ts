@@ -208,8 +208,31 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(435);
     const legend = (await chart.locator('.recharts-legend-wrapper').textContent()) ?? '';
     expect(legend).toMatch(/core@shell \(one element covers the other\)/);
+    // 435 points: no name is written unasked; hovering a point writes its name
+    expect(await chart.locator('[data-testid="pair-labels"] text').count()).toBe(0);
+    await chart.locator('.recharts-scatter-symbol').first().hover();
+    await expect.poll(() => chart.locator('[data-testid="hovered-label"]').count()).toBe(1);
     await page.locator('[data-testid="descriptor-map-view"] [name="elements"]').fill('Pt, Pd, Au, Ag');
     await expect.poll(() => chart.locator('.recharts-scatter-symbol').count()).toBe(6);
+    // a small map names its pairs where they fit: no two name boxes overlap
+    await expect
+      .poll(() => chart.locator('[data-testid="pair-labels"] text[data-label-box]').count())
+      .toBeGreaterThan(0);
+    const boxes = (
+      await chart
+        .locator('[data-testid="pair-labels"] text[data-label-box]')
+        .evaluateAll((els) => els.map((e) => (e.getAttribute('data-label-box') ?? '').split(' ').map(Number)))
+    ).map(([left, top, width, height]) => ({ left: left!, top: top!, width: width!, height: height! }));
+    for (let i = 0; i < boxes.length; i++)
+      for (let j = i + 1; j < boxes.length; j++) {
+        const [a, b] = [boxes[i]!, boxes[j]!];
+        const overlap =
+          a.left < b.left + b.width &&
+          b.left < a.left + a.width &&
+          a.top < b.top + b.height &&
+          b.top < a.top + a.height;
+        expect(overlap).toBe(false);
+      }
     await page.locator('[data-testid="descriptor-map-view"] [name="diameterNm"]').fill('-2');
     await expect
       .poll(() => page.locator('[data-testid="descriptor-map-view"] [data-error-for="diameterNm"]').textContent())

@@ -93,6 +93,17 @@ describe.skipIf(!available)('simulation in the browser host', () => {
     expect(
       await page.getByTestId('radial-profile').locator('.recharts-xAxis .recharts-cartesian-axis-tick').count(),
     ).toBe(5); // centre, S−3 … surface
+    // every bar carries its value
+    expect(await page.getByTestId('radial-profile').locator('.recharts-label-list text').count()).toBe(5);
+    // The averages start at the detected equilibration point, marked on the traces; the legend pairs each trace
+    // with its average in the trace's colour.
+    const averagedFrom = (await page.getByTestId('sim-result').textContent())?.match(/averages from sweep (\d+)/)?.[1];
+    expect(Number(averagedFrom)).toBeGreaterThan(1); // never sweep 1 of the random start
+    const surfaceLegend = page.getByTestId('sim-trace-surface').locator('[data-testid="chart-legend"] li');
+    await expect.poll(() => surfaceLegend.count()).toBe(4);
+    expect(await surfaceLegend.allTextContents()).toContain(`equilibrated from sweep ${averagedFrom}`);
+    const trace = await surfaceLegend.filter({ hasText: 'per sweep' }).getAttribute('data-legend-colour');
+    expect(await surfaceLegend.filter({ hasText: /^mean / }).getAttribute('data-legend-colour')).toBe(trace);
     expect(await page.getByTestId('particle-cross-section').locator('circle').count()).toBeGreaterThan(10);
     expect(await page.getByTestId('particle-surface').locator('circle').count()).toBeGreaterThan(50);
     expect(await page.getByTestId('particle-legend').textContent()).toMatch(/Ag.*Pd/);

@@ -40,7 +40,7 @@ export function architectureColour(kind: string): string {
 }
 
 /** Agreement colours of a confusion matrix: agree (diagonal) and disagree, as r, g, b. */
-export const AGREEMENT = { agree: [21, 128, 61], disagree: [190, 24, 93] } as const;
+export const AGREEMENT = { agree: [21, 128, 61], disagree: [185, 28, 28] } as const;
 
 /** Data drawn under a fit: dot radius and fill opacity of points, fill opacity of histogram bars. */
 export const DATA_STYLE = { dotRadius: 2.5, dotOpacity: 0.75, barOpacity: 0.35 } as const;

@@ -1,7 +1,8 @@
 /** A computed batch: particle numbers, reagent amounts, kinetic checks and the hazard block. */
-import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { Bar, BarChart, CartesianGrid, LabelList, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { BatchDesign } from '../../../shared-model/recipes/design';
 import { formatNumber } from '../../../shared-model/text/number-format';
+import { seriesColour } from '../charts/palette';
 import { HazardBlock } from './HazardBlock';
 
 function Stat(props: { label: string; value: string; testId?: string }) {
@@ -46,12 +47,20 @@ export function BatchResult(props: { design: BatchDesign }) {
         </div>
         <div className="chart" aria-label="Atoms in core and shell">
           <ResponsiveContainer width="100%" height={110}>
-            <BarChart data={atomsData} layout="vertical" margin={{ left: 40, right: 16, top: 4, bottom: 4 }}>
+            <BarChart data={atomsData} layout="vertical" margin={{ left: 40, right: 72, top: 4, bottom: 4 }}>
               <CartesianGrid strokeDasharray="3 3" horizontal={false} />
               <XAxis type="number" tickFormatter={(v: number) => formatNumber(v, 2)} />
-              <YAxis type="category" dataKey="part" width={90} />
+              <YAxis type="category" dataKey="part" width={90} interval={0} />
               <Tooltip formatter={(v) => formatNumber(Number(v))} />
-              <Bar dataKey="atoms" fill="#3f7f8c" isAnimationActive={false} />
+              <Bar dataKey="atoms" name="atoms" fill={seriesColour(4)} isAnimationActive={false}>
+                {/* every bar carries its value */}
+                <LabelList
+                  dataKey="atoms"
+                  position="right"
+                  fontSize={12}
+                  formatter={(v: unknown) => formatNumber(Number(v))}
+                />
+              </Bar>
             </BarChart>
           </ResponsiveContainer>
         </div>

@@ -8,12 +8,13 @@
 import { useMemo, useState } from 'react';
 import {
   CartesianGrid,
-  LabelList,
-  Legend,
   ResponsiveContainer,
   Scatter,
   ScatterChart,
   Tooltip,
+  usePlotArea,
+  useXAxisScale,
+  useYAxisScale,
   XAxis,
   YAxis,
   ZAxis,
@@ -35,6 +36,10 @@ import { recordProperty } from '../../../shared-model/elements/element-table';
 import { predictWithContext } from '../../../shared-model/prediction/predict';
 import { checkElementList, pairContexts } from '../../../shared-model/prediction/rank';
 import { useQuery } from '../api/hooks';
+import { niceTicks } from '../charts/chart-numbers';
+import { chartLegend, type LegendEntry } from '../charts/ChartLegend';
+import { placeLabels } from '../charts/label-placement';
+import { architectureColour } from '../charts/palette';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
@@ -72,16 +77,73 @@ const AXES: Array<{ key: AxisKey; short: string; label: string }> = [
   { key: 'unlikeNeighbourRatio', short: 'unlike neighbours / random', label: 'unlike neighbours relative to random' },
 ];
 
-const KIND_COLOURS: Record<string, string> = {
-  alloy: '#2563eb',
-  'surface-enriched alloy': '#0891b2',
-  'core@shell': '#c2410c',
-  Janus: '#7c3aed',
-  intermetallic: '#15803d',
-  unknown: '#6b7280',
-  hollow: '#be185d',
-  other: '#a16207',
-};
+/** At most this many pair names are written on the map; the rest show on hover. */
+const MAX_LABELS = 40;
+/** Above this many points only the campaign's logged pairs are candidates for a written name. */
+const LABEL_ALL_UP_TO = 60;
+
+const LABEL_STYLE = { fontSize: 11, fill: '#1f2937', stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' } as const;
+
+/**
+ * Pair names beside their points, placed so that no two overlap and none covers a marker
+ * (renderer/src/charts/label-placement.ts); the hovered pair's name is always written, on top.
+ */
+function PairLabels(props: {
+  labelled: Point[];
+  all: Point[];
+  hovered: Point | null;
+  /** Half-size of the outermost outcome square round a pair's point, px. */
+  outlines: Map<string, number>;
+}) {
+  const xScale = useXAxisScale();
+  const yScale = useYAxisScale();
+  const area = usePlotArea();
+  if (!xScale || !yScale || !area) return null;
+  const px = (p: Point) => ({
+    x: xScale(p.x) ?? NaN,
+    y: yScale(p.y) ?? NaN,
+    text: p.pair,
+    radius: props.outlines.get(p.pair),
+  });
+  const bounds = { left: area.x, top: area.y, width: area.width, height: area.height };
+  const labelled = new Set(props.labelled);
+  const placed = placeLabels(props.labelled.map(px), {
+    bounds,
+    obstacles: props.all.filter((p) => !labelled.has(p)).map(px),
+    maxLabels: MAX_LABELS,
+  });
+  const hover = props.hovered ? placeLabels([px(props.hovered)], { bounds })[0] : undefined;
+  return (
+    <g data-testid="pair-labels" pointerEvents="none">
+      {placed.map((label) => (
+        <text
+          key={label.text}
+          x={label.textX}
+          y={label.textY}
+          textAnchor="middle"
+          dominantBaseline="central"
+          data-label-box={`${label.box.left.toFixed(1)} ${label.box.top.toFixed(1)} ${label.box.width.toFixed(1)} ${label.box.height.toFixed(1)}`}
+          {...LABEL_STYLE}
+        >
+          {label.text}
+        </text>
+      ))}
+      {hover ? (
+        <text
+          x={hover.textX}
+          y={hover.textY}
+          textAnchor="middle"
+          dominantBaseline="central"
+          data-testid="hovered-label"
+          fontWeight={600}
+          {...LABEL_STYLE}
+        >
+          {hover.text}
+        </text>
+      ) : null}
+    </g>
+  );
+}
 
 interface Point {
   x: number;
@@ -121,7 +183,7 @@ function OutcomeSquare(props: { cx?: number; cy?: number; payload?: OutcomePoint
       width={2 * half}
       height={2 * half}
       fill="none"
-      stroke={KIND_COLOURS[payload.observedKind] ?? '#6b7280'}
+      stroke={architectureColour(payload.observedKind)}
       strokeWidth={2.5}
       data-testid="outcome-marker"
       data-batch={payload.batchName}
@@ -147,6 +209,7 @@ export function DescriptorMapView() {
   const [xKey, setXKey] = useState<AxisKey>('surfaceEnergy');
   const [yKey, setYKey] = useState<AxisKey>('metallicRadius');
   const [open, setOpen] = useState<{ a: string; b: string } | null>(null);
+  const [hovered, setHovered] = useState<Point | null>(null);
   const conditions = conditionsState.conditions;
   const { campaignId, revision } = useAppState();
   const outcomeRows = useQuery(
@@ -247,6 +310,32 @@ export function DescriptorMapView() {
     return { logged: logged.length, groups: [...byKind.entries()], offMap };
   }, [outcomeRows.data, result.points]);
 
+  // round ticks on both axes, the domain from the first to the last tick
+  const ticks = useMemo(() => {
+    const xs = result.points.map((p) => p.x).filter(Number.isFinite);
+    const ys = result.points.map((p) => p.y).filter(Number.isFinite);
+    const of = (values: number[]) => (values.length > 0 ? niceTicks(Math.min(...values), Math.max(...values), 7) : []);
+    return { x: of(xs), y: of(ys) };
+  }, [result.points]);
+  const domainOf = (t: number[]): [number, number] | ['auto', 'auto'] =>
+    t.length > 1 ? [t[0] as number, t[t.length - 1] as number] : ['auto', 'auto'];
+
+  // the outcome squares (OutcomeSquare: half 8 + 4 per further batch, 2.5 px stroke) keep names clear of them
+  const outlines = useMemo(() => {
+    const map = new Map<string, number>();
+    for (const [, points] of overlay.groups)
+      for (const p of points) map.set(p.pair, Math.max(map.get(p.pair) ?? 0, 8 + 4 * p.stack + 2));
+    return map;
+  }, [overlay.groups]);
+
+  // names written on the map: the campaign's logged pairs first, then (on a small map) every other pair
+  const labelled = useMemo(() => {
+    const logged = new Set(overlay.groups.flatMap(([, points]) => points.map((p) => p.pair)));
+    const first = result.points.filter((p) => logged.has(p.pair));
+    const rest = result.points.length <= LABEL_ALL_UP_TO ? result.points.filter((p) => !logged.has(p.pair)) : [];
+    return [...first, ...rest];
+  }, [overlay.groups, result.points]);
+
   const axisLabel = (key: AxisKey) => AXES.find((a) => a.key === key)?.label ?? key;
   const legendWords = (kind: ArchitectureKind, count: number) =>
     `${kind === 'core@shell' ? 'core@shell (one element covers the other)' : `${kind}: ${describeArchitecture(kind)}`} — ${count}`;
@@ -294,7 +383,10 @@ export function DescriptorMapView() {
       {conditions === null ? <Banner tone="error">Fix the highlighted condition to see the map.</Banner> : null}
       <div className="card" data-testid="descriptor-chart">
         <h2 className="card__title">
-          {result.points.length} pairs <span className="muted small">(click a point for its detail)</span>
+          {result.points.length} pairs{' '}
+          <span className="muted small">
+            (names written where they fit without overlapping; hover a point for its name, click it for its detail)
+          </span>
         </h2>
         <ResponsiveContainer width="100%" height={460}>
           <ScatterChart margin={{ left: 24, right: 24, top: 16, bottom: 32 }}>
@@ -304,6 +396,8 @@ export function DescriptorMapView() {
               type="number"
               name={axisLabel(xKey)}
               label={{ value: axisLabel(xKey), position: 'insideBottom', offset: -16 }}
+              domain={domainOf(ticks.x)}
+              ticks={ticks.x.length > 1 ? ticks.x : undefined}
               tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()}
             />
             <YAxis
@@ -312,6 +406,8 @@ export function DescriptorMapView() {
               name={axisLabel(yKey)}
               width={72}
               label={{ value: axisLabel(yKey), angle: -90, position: 'insideLeft', style: { textAnchor: 'middle' } }}
+              domain={domainOf(ticks.y)}
+              ticks={ticks.y.length > 1 ? ticks.y : undefined}
               tickFormatter={(v: number) => Number(v.toPrecision(3)).toString()}
             />
             <ZAxis range={[50, 50]} />
@@ -340,28 +436,39 @@ export function DescriptorMapView() {
                 );
               }}
             />
-            <Legend verticalAlign="top" height={48} />
+            {chartLegend([
+              ...groups.map(([kind, points]): LegendEntry => ({
+                label: legendWords(kind, points.length),
+                colour: architectureColour(kind),
+                marker: 'dot',
+              })),
+              ...overlay.groups.map(([kind, points]): LegendEntry => ({
+                label: `logged outcome: observed ${kind} — ${points.length}`,
+                colour: architectureColour(kind),
+                marker: 'square',
+              })),
+            ])}
             {groups.map(([kind, points]) => (
               <Scatter
                 key={kind}
                 name={legendWords(kind, points.length)}
                 data={points}
-                fill={KIND_COLOURS[kind] ?? '#6b7280'}
+                fill={architectureColour(kind)}
                 isAnimationActive={false}
                 onClick={(data: unknown) => {
                   const point = (data as { payload?: Point }).payload;
                   if (point) setOpen({ a: point.elementA, b: point.elementB });
                 }}
-              >
-                {result.points.length <= 60 ? <LabelList dataKey="pair" position="top" fontSize={11} /> : null}
-              </Scatter>
+                onMouseEnter={(data: unknown) => setHovered((data as { payload?: Point }).payload ?? null)}
+                onMouseLeave={() => setHovered(null)}
+              />
             ))}
             {overlay.groups.map(([kind, points]) => (
               <Scatter
                 key={`outcome-${kind}`}
                 name={`logged outcome: observed ${kind} — ${points.length}`}
                 data={points}
-                fill={KIND_COLOURS[kind] ?? '#6b7280'}
+                fill={architectureColour(kind)}
                 legendType="square"
                 shape={OutcomeSquare}
                 isAnimationActive={false}
@@ -371,6 +478,7 @@ export function DescriptorMapView() {
                 }}
               />
             ))}
+            <PairLabels labelled={labelled} all={result.points} hovered={hovered} outlines={outlines} />
           </ScatterChart>
         </ResponsiveContainer>
         <p className="small muted" data-testid="outcome-overlay-note">

@@ -5,17 +5,7 @@
  * conditions to the Simulation view (lattice Monte Carlo) when both metals have Gupta parameters.
  */
 import { useMemo, useState } from 'react';
-import {
-  CartesianGrid,
-  Legend,
-  Line,
-  LineChart,
-  ReferenceLine,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from 'recharts';
+import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { describeArchitecture } from '../../../shared-model/architecture/labels';
 import {
   CLOSED_SHELL_RULE,
@@ -27,6 +17,8 @@ import { computeIsotherm, type IsothermSweep } from '../../../shared-model/predi
 import { predictPair, type PredictionConditions } from '../../../shared-model/prediction/predict';
 import { call } from '../api/client';
 import { logTicks, niceTicks } from '../charts/chart-numbers';
+import { chartLegend } from '../charts/ChartLegend';
+import { dashPattern, ELEMENT, FIT_STYLE, NEUTRAL } from '../charts/palette';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
@@ -97,24 +89,40 @@ function IsothermChart(props: {
             formatter={(value) => `${Number(value).toFixed(1)} %`}
             labelFormatter={(v) => `${xLabel} ${Number(v).toPrecision(3)}`}
           />
-          <Legend verticalAlign="top" height={24} />
-          <ReferenceLine x={marker} stroke="#888" strokeDasharray="4 4" />
+          {chartLegend([
+            { label: `surface ${elementB}`, colour: ELEMENT.B, marker: 'line' },
+            { label: `core ${elementB}`, colour: ELEMENT.B, marker: 'line', dash: dashPattern(1), thin: true },
+            ...(sweep !== 'xB'
+              ? [
+                  {
+                    label: `overall ${elementB}`,
+                    colour: NEUTRAL.reference,
+                    marker: 'line' as const,
+                    dash: dashPattern(2),
+                    thin: true,
+                  },
+                ]
+              : []),
+            { label: 'these conditions', colour: NEUTRAL.reference, marker: 'line', dash: '4 4', thin: true },
+          ])}
+          <ReferenceLine x={marker} stroke={NEUTRAL.reference} strokeDasharray="4 4" />
           <Line
             type="monotone"
             dataKey="surface"
             name={`surface ${elementB}`}
-            stroke="#c2410c"
+            stroke={ELEMENT.B}
             dot={false}
-            strokeWidth={2}
+            strokeWidth={FIT_STYLE.width}
             isAnimationActive={false}
           />
           <Line
             type="monotone"
             dataKey="core"
             name={`core ${elementB}`}
-            stroke="#1d4ed8"
+            stroke={ELEMENT.B}
+            strokeDasharray={dashPattern(1)}
             dot={false}
-            strokeWidth={2}
+            strokeWidth={FIT_STYLE.otherWidth}
             isAnimationActive={false}
           />
           {sweep !== 'xB' ? (
@@ -122,9 +130,10 @@ function IsothermChart(props: {
               type="monotone"
               dataKey="overall"
               name="overall"
-              stroke="#6b7280"
+              stroke={NEUTRAL.reference}
               dot={false}
-              strokeDasharray="2 2"
+              strokeDasharray={dashPattern(2)}
+              strokeWidth={FIT_STYLE.otherWidth}
               isAnimationActive={false}
             />
           ) : null}

@@ -24,6 +24,19 @@ describe('equilibration by block averages', () => {
     expect(report.blockMeans).toHaveLength(20);
   });
 
+  it('a transient shorter than one block (a random start) is still cut from the mean', () => {
+    const rng = createRandom(4);
+    // Three samples 6, 5 and 4 σ above the level, then stationary noise (σ = 1): they move the first block's
+    // mean (50 samples) by 0.3, inside its band of 3 block SDs (≈ 0.42), yet they are not equilibrium samples.
+    const start = [6, 5, 4];
+    const trace = Array.from({ length: 1000 }, (_, t) => start[t] ?? rng.nextNormal());
+    const report = detectEquilibration(trace);
+    expect(report.equilibrated).toBe(true);
+    expect(report.blockSize).toBe(50);
+    expect(report.equilibratedFromSample).toBe(3);
+    expect(report.mean).toBeCloseTo(0, 1);
+  });
+
   it('a steady drift is reported as not equilibrated', () => {
     const rng = createRandom(3);
     const report = detectEquilibration(Array.from({ length: 1000 }, (_, t) => -0.05 * t + rng.nextNormal()));

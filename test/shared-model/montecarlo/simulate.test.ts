@@ -137,6 +137,27 @@ describe('a run', () => {
  * From memory. Each case is also compared with the analytic prediction of shared-model/prediction at
  * the same composition, size and temperature: both must name the same surface element.
  */
+describe('averages start at the detected equilibration point', () => {
+  // Block-averaged equilibration detection (Flyvbjerg & Petersen, J. Chem. Phys. 91, 461 (1989)): the
+  // transient of a random start is excluded from every average the result reports.
+  it('a random start of Ag–Pd: the surface share and mean energy average only the sweeps after the transient', () => {
+    const result = runSimulation({ ...base, sweeps: 400 }, createRandom(3));
+    const from = result.equilibration.equilibratedFromSample; // no anneal: production sample k is sweep k + 1
+    expect(result.traces.sweep).toHaveLength(400); // ≤ 500 sweeps: every sweep is kept
+    // Ag (lower surface energy) moves to the surface from the random start: a transient is detected
+    expect(from).toBeGreaterThan(0);
+    const mean = (values: number[]) => values.reduce((s, v) => s + v, 0) / values.length;
+    const surfaceAfter = mean(result.traces.surfaceXB.slice(from));
+    const energyAfter = mean(result.traces.energyEv.slice(from));
+    expect(result.surfaceXB).toBeCloseTo(surfaceAfter, 12);
+    expect(result.meanEnergyEv).toBeCloseTo(energyAfter, 9);
+    // from sweep 1 the averages would differ: the random start has more Pd at the surface and a higher energy
+    expect(mean(result.traces.surfaceXB)).toBeGreaterThan(result.surfaceXB);
+    expect(mean(result.traces.energyEv)).toBeGreaterThan(result.meanEnergyEv);
+    expect(result.traces.surfaceXB[0]!).toBeGreaterThan(result.surfaceXB + 0.05);
+  });
+});
+
 describe('surface enrichment direction vs published expectations and the analytic prediction', () => {
   const cases: { pair: [string, string]; surface: string; minimumShift: number }[] = [
     { pair: ['Pd', 'Ag'], surface: 'Ag', minimumShift: 0.2 },

@@ -1,6 +1,9 @@
 /** Confusion matrix as a heat-map (recharts scatter with square cells), the count written in each cell. */
 import { CartesianGrid, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import type { ConfusionMatrix } from '../../../../shared-model/characterization/confusion';
+import { AGREEMENT, NEUTRAL } from '../../charts/palette';
+
+const rgba = (rgb: readonly number[], alpha: number) => `rgba(${rgb.join(', ')}, ${alpha.toFixed(3)})`;
 
 const CELL_PX = 78;
 const Y_AXIS_PX = 150;
@@ -41,11 +44,7 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
     const strength = count / max;
     const diagonal = predicted === observed;
     const fill =
-      count === 0
-        ? '#f4f4f4'
-        : diagonal
-          ? `rgba(47, 111, 62, ${0.2 + 0.8 * strength})`
-          : `rgba(164, 38, 44, ${0.2 + 0.8 * strength})`;
+      count === 0 ? NEUTRAL.empty : rgba(diagonal ? AGREEMENT.agree : AGREEMENT.disagree, 0.2 + 0.8 * strength);
     return (
       <g data-cell={`${observed}|${predicted}`}>
         <rect
@@ -54,7 +53,7 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           width={CELL_PX - 2}
           height={CELL_PX - 2}
           fill={fill}
-          stroke="#ccc"
+          stroke={NEUTRAL.grid}
         />
         <text
           x={p.cx}
@@ -62,7 +61,7 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           textAnchor="middle"
           dominantBaseline="central"
           fontSize={18}
-          fill={strength > 0.6 ? '#fff' : '#222'}
+          fill={count > 0 && strength > 0.6 ? '#ffffff' : NEUTRAL.text}
         >
           {count}
         </text>

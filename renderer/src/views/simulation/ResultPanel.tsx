@@ -142,7 +142,16 @@ export function ResultPanel(props: { run: SimulationRun; result: SimulationResul
           positions={stored.finalPositionsAngstrom ?? null}
         />
       </div>
-      <Traces points={resultPoints(result)} elementB={result.elementB} xB={result.xB} />
+      <Traces
+        points={resultPoints(result)}
+        elementB={result.elementB}
+        xB={result.xB}
+        averages={{
+          fromSweep: eq.equilibratedFromSample + (run.spec.anneal?.sweeps ?? 0) + 1,
+          energyPerAtomEv: result.meanEnergyEv / result.atoms,
+          surfaceXB: result.surfaceXB,
+        }}
+      />
       <div className="form-actions">
         <button type="button" onClick={() => downloadXyz(run.id, setError)}>
           Export extended XYZ
