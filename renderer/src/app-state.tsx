@@ -1,7 +1,9 @@
 /**
  * App-wide selection: the campaign the user is working in (remembered between sessions), a revision
- * counter other views reload on, and hand-offs between views (a simulation requested from a pair's
- * detail, consumed once by the Simulation view; a batch planned from Next batches, consumed once by Batch design).
+ * counter other views reload on, and hand-offs between views: one pending request per target view, typed by
+ * HandOffRequests (a simulation requested from a pair's detail, taken once by the Simulation view; a batch planned
+ * from Next batches, taken once by Batch design). A view sends with useHandOffTo(target) and takes with
+ * usePendingHandOff(target).
  */
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
 import type { ParticleShape } from '../../shared-model/geometry/shapes';
@@ -36,6 +38,14 @@ export interface BatchPlanRequest {
   source: string;
 }
 
+/** What each view that takes a hand-off opens with, by its view id in navigation.tsx. */
+export interface HandOffRequests {
+  simulation: SimulationRequest;
+  'batch-design': BatchPlanRequest;
+}
+export type HandOffTarget = keyof HandOffRequests;
+type PendingHandOffs = { [K in HandOffTarget]?: HandOffRequests[K] };
+
 interface AppState {
   campaignId: number | null;
   selectCampaign: (id: number | null) => void;
@@ -44,18 +54,12 @@ interface AppState {
   bumpRevision: () => void;
   /** Switches to another view by its id in navigation.tsx (through the #/<id> address the shell follows). */
   navigate: (viewId: string) => void;
-  /** A simulation asked for by another view, waiting for the Simulation view to take it. */
-  pendingSimulation: SimulationRequest | null;
-  /** Stores the request and opens the Simulation view. */
-  requestSimulation: (request: SimulationRequest) => void;
-  /** Called by the Simulation view once it has copied the request into its form. */
-  clearPendingSimulation: () => void;
-  /** A batch asked for by another view, waiting for Batch design to take it. */
-  pendingBatchPlan: BatchPlanRequest | null;
-  /** Stores the request and opens Batch design. */
-  requestBatchPlan: (request: BatchPlanRequest) => void;
-  /** Called by Batch design once it has copied the request into its form. */
-  clearPendingBatchPlan: () => void;
+  /** Requests asked for by other views, each waiting for its target view to take it. */
+  pendingHandOffs: PendingHandOffs;
+  /** Stores the request for the target view and opens it. */
+  handOff: <K extends HandOffTarget>(target: K, request: HandOffRequests[K]) => void;
+  /** Called by the target view once it has copied the request into its form. */
+  clearHandOff: (target: HandOffTarget) => void;
 }
 
 const AppStateContext = createContext<AppState | null>(null);
@@ -70,8 +74,7 @@ function rememberedCampaign(): number | null {
 export function AppStateProvider(props: { children: ReactNode }) {
   const [campaignId, setCampaignId] = useState<number | null>(rememberedCampaign);
   const [revision, setRevision] = useState(0);
-  const [pendingSimulation, setPendingSimulation] = useState<SimulationRequest | null>(null);
-  const [pendingBatchPlan, setPendingBatchPlan] = useState<BatchPlanRequest | null>(null);
+  const [pendingHandOffs, setPendingHandOffs] = useState<PendingHandOffs>({});
   const selectCampaign = useCallback((id: number | null) => {
     setCampaignId(id);
     if (id === null) window.localStorage.removeItem(STORAGE_KEY);
@@ -82,22 +85,23 @@ export function AppStateProvider(props: { children: ReactNode }) {
     // The shell listens to hashchange and switches views; it ignores ids it does not know.
     window.location.hash = `#/${viewId}`;
   }, []);
-  const requestSimulation = useCallback(
-    (request: SimulationRequest) => {
-      setPendingSimulation(request);
-      navigate('simulation');
+  const handOff = useCallback(
+    <K extends HandOffTarget>(target: K, request: HandOffRequests[K]) => {
+      setPendingHandOffs((current) => ({ ...current, [target]: request }));
+      navigate(target);
     },
     [navigate],
   );
-  const clearPendingSimulation = useCallback(() => setPendingSimulation(null), []);
-  const requestBatchPlan = useCallback(
-    (request: BatchPlanRequest) => {
-      setPendingBatchPlan(request);
-      navigate('batch-design');
-    },
-    [navigate],
+  const clearHandOff = useCallback(
+    (target: HandOffTarget) =>
+      setPendingHandOffs((current) => {
+        if (current[target] === undefined) return current;
+        const next = { ...current };
+        delete next[target];
+        return next;
+      }),
+    [],
   );
-  const clearPendingBatchPlan = useCallback(() => setPendingBatchPlan(null), []);
   const value = useMemo(
     () => ({
       campaignId,
@@ -105,26 +109,11 @@ export function AppStateProvider(props: { children: ReactNode }) {
       revision,
       bumpRevision,
       navigate,
-      pendingSimulation,
-      requestSimulation,
-      clearPendingSimulation,
-      pendingBatchPlan,
-      requestBatchPlan,
-      clearPendingBatchPlan,
+      pendingHandOffs,
+      handOff,
+      clearHandOff,
     }),
-    [
-      campaignId,
-      selectCampaign,
-      revision,
-      bumpRevision,
-      navigate,
-      pendingSimulation,
-      requestSimulation,
-      clearPendingSimulation,
-      pendingBatchPlan,
-      requestBatchPlan,
-      clearPendingBatchPlan,
-    ],
+    [campaignId, selectCampaign, revision, bumpRevision, navigate, pendingHandOffs, handOff, clearHandOff],
   );
   return <AppStateContext.Provider value={value}>{props.children}</AppStateContext.Provider>;
 }
@@ -133,4 +122,20 @@ export function useAppState(): AppState {
   const state = useContext(AppStateContext);
   if (!state) throw new Error('useAppState must be used inside AppStateProvider');
   return state;
+}
+
+/** The sender's side of a hand-off: stores a request for the target view and opens it. */
+export function useHandOffTo<K extends HandOffTarget>(target: K): (request: HandOffRequests[K]) => void {
+  const { handOff } = useAppState();
+  return useCallback((request: HandOffRequests[K]) => handOff(target, request), [handOff, target]);
+}
+
+/** The target view's side: the request waiting for it (null when none), and `clear` once it is taken. */
+export function usePendingHandOff<K extends HandOffTarget>(
+  target: K,
+): { pending: HandOffRequests[K] | null; clear: () => void } {
+  const { pendingHandOffs, clearHandOff } = useAppState();
+  const pending: HandOffRequests[K] | null = pendingHandOffs[target] ?? null;
+  const clear = useCallback(() => clearHandOff(target), [clearHandOff, target]);
+  return { pending, clear };
 }

@@ -8,7 +8,7 @@ import type { BatchSummary, SavedBatch } from '../../../shared-model/api/batches
 import type { BatchDesign } from '../../../shared-model/recipes/design';
 import { call } from '../api/client';
 import { useFieldErrors, useQuery } from '../api/hooks';
-import { useAppState } from '../app-state';
+import { useAppState, usePendingHandOff } from '../app-state';
 import { Banner } from '../components/Banner';
 import { BatchForm } from './batch-design/BatchForm';
 import { BatchRecords } from './batch-design/BatchRecords';
@@ -51,7 +51,7 @@ export function BatchDesignView() {
   const { errors, general, show, clear } = useFieldErrors();
   const catalog = useMemo(() => catalogQuery.data ?? [], [catalogQuery.data]);
   // A batch planned from Next batches is taken once the catalog is read (for each metal's precursor).
-  const { pendingBatchPlan, clearPendingBatchPlan } = useAppState();
+  const { pending: pendingBatchPlan, clear: clearPendingBatchPlan } = usePendingHandOff('batch-design');
   const [prefilled, setPrefilled] = useState<string | null>(null);
   useEffect(() => {
     if (pendingBatchPlan === null || !catalogQuery.data) return;

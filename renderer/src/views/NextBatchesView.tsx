@@ -10,7 +10,7 @@ import { useEffect, useState, type FormEvent } from 'react';
 import type { ProposalSet } from '../../../shared-model/api/learn';
 import { call } from '../api/client';
 import { useFieldErrors, useQuery } from '../api/hooks';
-import { useAppState } from '../app-state';
+import { useAppState, useHandOffTo } from '../app-state';
 import { Banner } from '../components/Banner';
 import { Field } from '../components/Field';
 import { ModelStatus } from './next-batches/ModelStatus';
@@ -32,7 +32,7 @@ import {
 } from './next-batches/next-batches-form';
 
 function ProposalTable(props: { set: ProposalSet }) {
-  const { requestBatchPlan } = useAppState();
+  const requestBatchPlan = useHandOffTo('batch-design');
   const { set } = props;
   return (
     <table className="data-table" aria-label="Proposals">

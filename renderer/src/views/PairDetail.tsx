@@ -20,7 +20,7 @@ import { logTicks, niceTicks } from '../charts/chart-numbers';
 import { chartLegend } from '../charts/ChartLegend';
 import { dashPattern, ELEMENT, FIT_STYLE, NEUTRAL } from '../charts/palette';
 import { useQuery } from '../api/hooks';
-import { useAppState } from '../app-state';
+import { useAppState, useHandOffTo } from '../app-state';
 import { Banner } from '../components/Banner';
 import { FlaskTerms, FlaskVerdicts } from './FlaskTerms';
 
@@ -151,7 +151,8 @@ export function PairDetail(props: {
 }) {
   const { elementA, elementB, conditions } = props;
   const p = useMemo(() => predictPair(elementA, elementB, conditions), [elementA, elementB, conditions]);
-  const { campaignId, revision, bumpRevision, requestSimulation } = useAppState();
+  const { campaignId, revision, bumpRevision } = useAppState();
+  const requestSimulation = useHandOffTo('simulation');
   const pairs = useQuery('pairs.list', campaignId === null ? null : { campaignId }, `pairs-${campaignId}-${revision}`);
   const linked =
     (pairs.data ?? []).find(

@@ -5,7 +5,7 @@
  * composition traces follows it; Cancel stops it. The result: surface composition, radial profile,
  * Warren–Cowley order, the architecture label beside the analytic prediction, a picture of the
  * particle and an extended XYZ export. Stored runs can be re-opened from the list. A pair's detail in
- * the prediction views can hand its pair and conditions over (app state `pendingSimulation`): the form
+ * the prediction views can hand its pair and conditions over (app state `pendingHandOffs.simulation`): the form
  * takes them once and says where they came from. The parts live in ./simulation/ (the form's model in
  * run-form.ts, testable without a browser).
  */

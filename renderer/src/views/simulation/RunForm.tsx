@@ -1,13 +1,13 @@
 /**
  * The New run form: pair, composition, shape and size, temperature (or an annealing schedule), seed and
  * length. The planned size (or the first problem) shows while typing; Run queues the run. A request from a
- * pair's detail (app state `pendingSimulation`) is taken once and the form says where it came from.
+ * pair's detail (app state `pendingHandOffs.simulation`) is taken once and the form says where it came from.
  */
 import { useEffect, useMemo, useState, type FormEvent } from 'react';
 import type { SimulationRunSummary } from '../../../../shared-model/api/simulation';
 import { call } from '../../api/client';
 import { useFieldErrors } from '../../api/hooks';
-import { useAppState } from '../../app-state';
+import { usePendingHandOff } from '../../app-state';
 import { Banner } from '../../components/Banner';
 import { Field } from '../../components/Field';
 import { ShapeSelect } from '../../components/ShapeSelect';
@@ -29,7 +29,7 @@ export function RunForm(props: {
 }) {
   const [form, setForm] = useState<RunFormState>(INITIAL_RUN_FORM);
   const [prefilled, setPrefilled] = useState<string | null>(null);
-  const { pendingSimulation, clearPendingSimulation } = useAppState();
+  const { pending: pendingSimulation, clear: clearPendingSimulation } = usePendingHandOff('simulation');
   // A request from a pair's detail is taken once: copied into the form, then cleared from the app state.
   useEffect(() => {
     if (pendingSimulation === null) return;
