@@ -1,8 +1,10 @@
 /**
  * Cross-validation folds: leave-one-group-out (scikit-learn's LeaveOneGroupOut; for outcomes the group is the
  * pair, so every outcome of a pair is held out together) and leave-one-out. Folds come in the order of the
- * groups' first appearance; held-out predictions are pooled back in row order.
+ * groups' first appearance; held-out predictions are pooled back in row order. For large sets, a seeded
+ * k-fold over rows and a grouped k-fold cap the number of fits (review.ts states where they are used).
  */
+import { createRandom } from '../random';
 
 export interface Fold {
   /** What is held out (the group name, or the row number for leave-one-out). */
@@ -46,4 +48,43 @@ export function crossValidate<T>(
     if (v === undefined) throw new RangeError(`row ${i} was in no test fold`);
     return v;
   });
+}
+
+/**
+ * k-fold over rows (scikit-learn's KFold(shuffle=True) idea, with our own seeded shuffle): rows shuffled by
+ * `seed`, then cut into k folds of near-equal size; each test fold listed in row order.
+ */
+export function kFold(rowCount: number, k: number, seed: number): Fold[] {
+  const random = createRandom(seed);
+  const order = Array.from({ length: rowCount }, (_, i) => i);
+  for (let i = order.length - 1; i > 0; i--) {
+    const j = random.nextInt(i + 1);
+    [order[i], order[j]] = [order[j] as number, order[i] as number];
+  }
+  const folds = Math.min(k, rowCount);
+  const foldOf = new Int32Array(rowCount);
+  order.forEach((row, position) => (foldOf[row] = position % folds));
+  return Array.from({ length: folds }, (_, f) => {
+    const train: number[] = [];
+    const test: number[] = [];
+    for (let i = 0; i < rowCount; i++) (foldOf[i] === f ? test : train).push(i);
+    return { heldOut: `fold ${f + 1} of ${folds}`, train, test };
+  });
+}
+
+/**
+ * Grouped k-fold (every row of a group in the same test fold, the idea of scikit-learn's GroupKFold, which
+ * balances fold sizes instead): the groups in order of first appearance are dealt round-robin into at most k
+ * folds, so with k groups or fewer it is leave-one-group-out.
+ */
+export function groupKFold(groups: readonly string[], k: number): Fold[] {
+  const names: string[] = [];
+  for (const g of groups) if (!names.includes(g)) names.push(g);
+  if (names.length <= k) return leaveOneGroupOut(groups);
+  const foldOfGroup = new Map(names.map((name, i) => [name, i % k]));
+  return Array.from({ length: k }, (_, f) => ({
+    heldOut: names.filter((_, i) => i % k === f).join(', '),
+    train: groups.flatMap((g, i) => (foldOfGroup.get(g) === f ? [] : [i])),
+    test: groups.flatMap((g, i) => (foldOfGroup.get(g) === f ? [i] : [])),
+  }));
 }

@@ -9,7 +9,7 @@
 import { DomainError } from '../api/result';
 import { describeClass, type ClassKey } from './classes';
 import { buildCandidates, candidateConditions, DEFAULT_GRID, type Candidate, type CandidateGrid } from './candidates';
-import { crossValidate, leaveOneGroupOut, leaveOneOut, type Fold } from './cross-validation';
+import { crossValidate, groupKFold, kFold, leaveOneGroupOut, leaveOneOut, type Fold } from './cross-validation';
 import { FEATURE_LABELS, FEATURE_NAMES } from './features';
 import { fitLda, ldaTransform, structureCorrelations } from './lda';
 import { classifierFigures, type ClassifierFigures } from './metrics';
@@ -28,6 +28,7 @@ import {
   type FittedClassifier,
   type LearningOutcome,
   type PreparedOutcome,
+  type PreparedSet,
   type PseudoOutcome,
   type SuccessModel,
 } from './outcome-model';
@@ -49,6 +50,18 @@ export const DEFAULT_REVIEW_SETTINGS: ReviewSettings = {
   grid: DEFAULT_GRID,
   maxPseudoInFolds: 200,
 };
+
+/**
+ * Caps on the validation work (each fold is one Newton fit over the outcomes plus the pseudo-outcomes):
+ * "known pairs, new conditions" is leave-one-out up to this many labelled outcomes, a seeded 10-fold over
+ * outcomes above it.
+ */
+export const LEAVE_ONE_OUT_UP_TO = 100;
+export const KNOWN_PAIRS_FOLDS = 10;
+const KNOWN_PAIRS_SEED = 11;
+/** The timeline covers at most the last this many weeks; each week's model holds pairs out in ≤ 10 groups. */
+export const TIMELINE_WEEKS = 12;
+export const TIMELINE_PAIR_FOLDS = 10;
 
 export interface ReviewProgress {
   fraction: number;
@@ -115,7 +128,14 @@ export type ModelReview =
       model: ClassifierFigures;
       physics: ClassifierFigures;
       majority: ClassifierFigures;
-      knownPairsNewConditions: { model: ClassifierFigures; physics: ClassifierFigures };
+      knownPairsNewConditions: {
+        model: ClassifierFigures;
+        physics: ClassifierFigures;
+        /** How outcomes were held out, in words (absent in reviews stored before it was written). */
+        heldOut?: string;
+      };
+      /** The validation schemes and their caps, in words (absent in reviews stored before it was written). */
+      validationNote?: string;
       timeline: TimelinePoint[];
       lda: LdaView | null;
       ldaNote: string | null;
@@ -147,6 +167,8 @@ interface FoldPredictions {
   model: number[][];
   physics: number[][];
   majority: number[][];
+  /** The fit on all rows of the validation (the folds' warm start). */
+  warm: FittedClassifier;
 }
 
 function validate(
@@ -190,7 +212,7 @@ function validate(
       ),
     ),
   );
-  return { model, physics, majority };
+  return { model, physics, majority, warm };
 }
 
 function mondayOf(isoDate: string): string {
@@ -209,6 +231,56 @@ function classSummary(
     description: describeClass(key),
     count: outcomes.filter((o) => o.classKey === key).length,
   }));
+}
+
+function fitFinalModels(
+  prepared: PreparedSet,
+  pseudoAll: readonly PseudoOutcome[],
+  priorWeight: number,
+  C: number,
+  warm?: FittedClassifier,
+): { classifier: FittedClassifier; success: SuccessModel } {
+  const classifier = fitClassifier(
+    prepared.labelled.map((o) => ({ features: o.features, classKey: o.classKey as ClassKey })),
+    pseudoAll,
+    priorWeight,
+    prepared.classes,
+    C,
+    warm,
+  );
+  return { classifier, success: fitSuccessModel(prepared.all, C) };
+}
+
+/**
+ * The models that proposals and predictions use, at a given prior weight: the classifier on every labelled
+ * outcome plus the physics pseudo-outcomes over the whole candidate set, and the success model — the fit
+ * part of a retrain, without the validation that reviewCampaign adds. Null when there are too few data
+ * for a model (reviewCampaign says what is missing).
+ */
+export function fitCampaignModel(
+  outcomes: readonly LearningOutcome[],
+  elements: readonly string[],
+  priorWeight: number,
+  settings: Pick<ReviewSettings, 'C' | 'grid'> = DEFAULT_REVIEW_SETTINGS,
+): FittedCampaignModel | null {
+  const prepared = prepareOutcomes(outcomes);
+  const { labelled, classes } = prepared;
+  if (labelled.length < MIN_OUTCOMES || classes.length < 2) return null;
+  const allElements = [
+    ...new Set([...elements, ...labelled.flatMap((o) => [o.condition.elementA, o.condition.elementB])]),
+  ];
+  const pseudoAll = physicsPseudoOutcomes(buildCandidates(candidateConditions(allElements, settings.grid)), classes);
+  const { classifier, success } = fitFinalModels(prepared, pseudoAll, priorWeight, settings.C);
+  const trainedOn = prepared.all.map((o) => o.id);
+  return {
+    modelVersion: LEARN_MODEL_VERSION,
+    classes,
+    classifier,
+    success,
+    priorWeight,
+    trainedOn,
+    elements: allElements.sort(),
+  };
 }
 
 /** Builds the review; `elements` are the campaign's elements (the candidate set for the physics prior). */
@@ -268,7 +340,11 @@ export function reviewCampaign(
   const pseudoFolds = thin(pseudoAll, settings.maxPseudoInFolds);
   const observed = labelled.map((o) => classes.indexOf(o.classKey as ClassKey));
   const lopo = leaveOneGroupOut(labelled.map((o) => o.condition.pair));
-  const loo = leaveOneOut(labelled.length);
+  const plainLoo = labelled.length <= LEAVE_ONE_OUT_UP_TO;
+  const loo = plainLoo ? leaveOneOut(labelled.length) : kFold(labelled.length, KNOWN_PAIRS_FOLDS, KNOWN_PAIRS_SEED);
+  const knownPairsHeldOut = plainLoo
+    ? 'each outcome held out alone'
+    : `outcomes held out in ${loo.length} folds (seeded shuffle; leave-one-out up to ${LEAVE_ONE_OUT_UP_TO} outcomes)`;
 
   const weights =
     settings.priorWeight === 'tune'
@@ -299,7 +375,8 @@ export function reviewCampaign(
   report(0.86, 'weekly timeline');
   const timeline: TimelinePoint[] = [];
   const dated = labelled.filter((o) => o.madeOn);
-  const weeks = [...new Set(dated.map((o) => mondayOf(o.madeOn as string)))].sort();
+  const allWeeks = [...new Set(dated.map((o) => mondayOf(o.madeOn as string)))].sort();
+  const weeks = allWeeks.slice(-TIMELINE_WEEKS);
   for (const week of weeks) {
     cancelled(hooks);
     const end = new Date(`${week}T00:00:00Z`);
@@ -318,7 +395,10 @@ export function reviewCampaign(
     if (subset.length >= MIN_OUTCOMES && subsetClasses.length >= 2 && subsetPairs.size >= 3) {
       const p = validate(
         subset,
-        leaveOneGroupOut(subset.map((o) => o.condition.pair)),
+        groupKFold(
+          subset.map((o) => o.condition.pair),
+          TIMELINE_PAIR_FOLDS,
+        ),
         pseudoFolds,
         best.weight,
         classes,
@@ -386,14 +466,7 @@ export function reviewCampaign(
 
   report(0.96, 'final model');
   cancelled(hooks);
-  const classifier = fitClassifier(
-    labelled.map((o) => ({ features: o.features, classKey: o.classKey as ClassKey })),
-    pseudoAll,
-    best.weight,
-    classes,
-    settings.C,
-  );
-  const success = fitSuccessModel(prepared.all, settings.C);
+  const { classifier, success } = fitFinalModels(prepared, pseudoAll, best.weight, settings.C, best.predictions.warm);
   report(1, 'done');
   return {
     status: 'ready',
@@ -413,7 +486,13 @@ export function reviewCampaign(
     knownPairsNewConditions: {
       model: classifierFigures(looPredictions.model, observed, classes),
       physics: classifierFigures(looPredictions.physics, observed, classes),
+      heldOut: knownPairsHeldOut,
     },
+    validationNote:
+      `headline: leave-one-pair-out over ${lopo.length} pairs; known pairs, new conditions: ${knownPairsHeldOut}; ` +
+      `timeline: ${weeks.length < allWeeks.length ? `the last ${weeks.length} of ${allWeeks.length} weeks` : 'every week'}, ` +
+      `each week's model with pairs held out together in at most ${TIMELINE_PAIR_FOLDS} groups ` +
+      `(leave-one-pair-out up to ${TIMELINE_PAIR_FOLDS} pairs)`,
     timeline,
     lda,
     ldaNote,

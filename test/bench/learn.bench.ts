@@ -1,8 +1,10 @@
 /**
- * Learning from outcomes (issue 11): the retrain (the whole review — leave-one-pair-out validation with the
- * prior weight tuned, leave-one-out, weekly timeline, LDA view, final fit) on 500 outcomes with about 3,000
- * candidates (target < 2 s), and a proposal set from the fitted model over those candidates (< 200 ms).
- * Where the retrain time goes is printed by stage. The outcomes are invented (physics labels with 15 %
+ * Learning from outcomes (issue 11) on 500 outcomes with about 3,000 candidates, the retrain target < 2 s, in
+ * two figures: (a) fitting the models that proposals and predictions use (classifier on the outcomes plus the
+ * physics pseudo-outcomes over every candidate, and the success model) at a given prior weight; (b) the
+ * whole retrain job, i.e. (a) plus the Model review validation (leave-one-pair-out with the prior weight
+ * tuned, known pairs / new conditions, weekly timeline, LDA view), printed by stage with its CPU time. And a
+ * proposal set from the fitted model over those candidates (< 200 ms). The outcomes are invented (physics labels with 15 %
  * noise and 10 % failures, seeded), not measurements.
  */
 import { cpus, loadavg } from 'node:os';
@@ -13,7 +15,12 @@ import type { LearningOutcome } from '../../shared-model/learn/outcome-model';
 import { prepareOutcomes } from '../../shared-model/learn/outcome-model';
 import { physicsPrediction } from '../../shared-model/learn/physics';
 import { proposeBatches } from '../../shared-model/learn/proposals';
-import { DEFAULT_REVIEW_SETTINGS, reviewCampaign, type ReviewSettings } from '../../shared-model/learn/review';
+import {
+  DEFAULT_REVIEW_SETTINGS,
+  fitCampaignModel,
+  reviewCampaign,
+  type ReviewSettings,
+} from '../../shared-model/learn/review';
 import { createRandom } from '../../shared-model/random';
 
 /** 11 metals: 55 pairs × 5 compositions × 3 sizes × 4 routes = 3,300 candidates. */
@@ -63,12 +70,13 @@ export async function run(): Promise<void> {
   const outcomes = syntheticOutcomes(OUTCOMES);
   const settings: ReviewSettings = { ...DEFAULT_REVIEW_SETTINGS, grid: GRID };
   const candidates = buildCandidates(candidateConditions(ELEMENTS, GRID));
-  // Warm-up (JIT) on a fifth of the outcomes, then one timed retrain: a single one takes long enough.
+  // Warm-up (JIT) on a fifth of the outcomes, then one timed review.
   reviewCampaign(outcomes.slice(0, OUTCOMES / 5), ELEMENTS, settings);
   const stages = new Map<string, number>();
   let stage = 'start';
   let last = performance.now();
   const t0 = last;
+  const cpu0 = process.cpuUsage();
   const review = reviewCampaign(outcomes, ELEMENTS, settings, {
     onProgress: (progress) => {
       const now = performance.now();
@@ -77,8 +85,17 @@ export async function run(): Promise<void> {
       last = now;
     },
   });
-  const retrainMs = performance.now() - t0;
+  const reviewMs = performance.now() - t0;
+  const reviewCpu = process.cpuUsage(cpu0);
+  const reviewCpuMs = (reviewCpu.user + reviewCpu.system) / 1000;
   if (review.status !== 'ready') throw new Error(`the bench review is not ready: ${review.message}`);
+  // (a) The models proposals and predictions use, at the review's prior weight (median of 5).
+  const fitTimes: number[] = [];
+  for (let i = 0; i < 6; i++) {
+    const t = performance.now();
+    fitCampaignModel(outcomes, ELEMENTS, review.priorWeight, settings);
+    if (i > 0) fitTimes.push(performance.now() - t);
+  }
   const prepared = prepareOutcomes(outcomes).all;
   const propose = () =>
     proposeBatches(review.fitted, candidates, prepared, [], {
@@ -96,16 +113,20 @@ export async function run(): Promise<void> {
     propose();
     proposal.push(performance.now() - t0);
   }
-  const r = retrainMs;
+  const a = median(fitTimes);
+  const b = reviewMs;
   const p = median(proposal);
+  const verdict = (ms: number, target: number) => `target < ${target} ms ${ms < target ? 'MET' : 'MISSED'}`;
   console.log(
-    `retrain ${OUTCOMES} outcomes × ${candidates.length} candidates (${review.pairs} pairs, prior weight ` +
-      `${review.priorWeight}): ${r.toFixed(0)} ms (one run) — target < 2000 ms ${r < 2000 ? 'MET' : 'MISSED'}`,
+    `retrain (a) fit the models proposals and predictions use — ${OUTCOMES} outcomes + physics pseudo-outcomes ` +
+      `over ${candidates.length} candidates, prior weight ${review.priorWeight}: ${a.toFixed(0)} ms median of 5 — ` +
+      verdict(a, 2000),
   );
   console.log(
-    `propose 6 of ${candidates.length} candidates: ${p.toFixed(1)} ms median of 9 — target < 200 ms ` +
-      `${p < 200 ? 'MET' : 'MISSED'}`,
+    `retrain (b) the whole job: Model review validation (${review.pairs} pairs; ${review.validationNote ?? ''}) ` +
+      `plus (a): ${b.toFixed(0)} ms wall, ${reviewCpuMs.toFixed(0)} ms CPU (one run) — ${verdict(b, 2000)}`,
   );
   console.log(`  by stage: ${[...stages].map(([name, ms]) => `${name} ${ms.toFixed(0)} ms`).join(', ')}`);
+  console.log(`propose 6 of ${candidates.length} candidates: ${p.toFixed(1)} ms median of 9 — ${verdict(p, 200)}`);
   console.log(`(${cpus().length} cores, load ${loadavg()[0]?.toFixed(2)})`);
 }

@@ -64,9 +64,12 @@ function reviewJson(stored: StoredReview): Record<string, unknown> {
     model: r.model,
     physics: r.physics,
     majority: r.majority,
+    // reviews stored before the validation caps were written have no note
+    validationNote: r.validationNote ?? null,
     knownPairsNewConditions: {
       model: { accuracy: r.knownPairsNewConditions.model.accuracy },
       physics: { accuracy: r.knownPairsNewConditions.physics.accuracy },
+      heldOut: r.knownPairsNewConditions.heldOut ?? 'each outcome held out alone',
     },
     timeline: r.timeline,
     loadings: (r.lda?.loadings ?? []).map((l) => ({ descriptor: l.descriptor, weight: l.weight, weight2: l.weight2 })),
@@ -90,7 +93,9 @@ function reviewText(stored: StoredReview): string {
     line('model', r.model),
     line('physics', r.physics),
     line('majority', r.majority),
-    `known pairs, new conditions (leave-one-out): model ${pct(r.knownPairsNewConditions.model.accuracy)}`,
+    `known pairs, new conditions (${r.knownPairsNewConditions.heldOut ?? 'each outcome held out alone'}): ` +
+      `model ${pct(r.knownPairsNewConditions.model.accuracy)}`,
+    ...(r.validationNote ? [`validation: ${r.validationNote}`] : []),
     r.lda
       ? `descriptors that separate the architectures: ${r.lda.loadings
           .slice(0, 4)

@@ -100,7 +100,7 @@ export function verdictText(review: Ready): string {
 export function knownPairsText(review: Ready): string {
   const k = review.knownPairsNewConditions;
   return (
-    `Known pairs, new conditions (each outcome held out alone, its pair's other outcomes kept): learned model ` +
+    `Known pairs, new conditions (${k.heldOut ?? 'each outcome held out alone'}, its pair's other outcomes kept): learned model ` +
     `${percentText(k.model.accuracy)} right, log-loss ${figureText(k.model.logLoss)}; physics alone ` +
     `${percentText(k.physics.accuracy)}, ${figureText(k.physics.logLoss)}. Optimistic for new pairs.`
   );
