@@ -18,7 +18,7 @@ export function seriesColour(index: number): string {
 }
 
 /** Element A and element B of a pair. */
-export const ELEMENT = { A: '#1d4ed8', B: '#c2410c' } as const;
+export const ELEMENT = { A: '#4f7cc0', B: '#c2410c' } as const;
 
 /** Neutral colours: reference lines, grid, muted series. */
 export const NEUTRAL = { reference: '#6b7280', grid: '#d1d5db', text: '#1f2937', empty: '#f3f4f6' } as const;

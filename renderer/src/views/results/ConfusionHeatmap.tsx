@@ -98,7 +98,13 @@ export function ConfusionHeatmap(props: { matrix: ConfusionMatrix; predictedLabe
           interval={0}
           tickFormatter={(i: number) => labels[n - 1 - i] ?? ''}
           width={Y_AXIS_PX}
-          label={{ value: 'observed', angle: -90, position: 'insideLeft', fontSize: 12 }}
+          label={{
+            value: 'observed',
+            angle: -90,
+            position: 'insideLeft',
+            fontSize: 12,
+            style: { textAnchor: 'middle' },
+          }}
         />
         <Scatter data={cells} shape={shape} isAnimationActive={false} />
       </ScatterChart>

@@ -9,8 +9,10 @@ import { useMemo, useState } from 'react';
 import { buildNeighbourList, FIVE_SHELL_CUTOFF_FACTOR } from '../../../../shared-model/clusters/neighbours';
 import { surfaceSites } from '../../../../shared-model/montecarlo/analysis';
 import { rebuildGeometry, type SimulationSpec } from '../../../../shared-model/montecarlo/simulate';
+import { ELEMENT } from '../../charts/palette';
 
-export const ELEMENT_COLOURS = { A: '#9aa5b1', B: '#c2410c' } as const;
+/** The pair's two metals in the colours every chart gives them. */
+export const ELEMENT_COLOURS = ELEMENT;
 
 /** Surface picture only up to this size (the neighbour list is built in the page). */
 const MAX_SURFACE_ATOMS = 20_000;

@@ -6,10 +6,23 @@
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { chartLegend, type LegendEntry } from '../../charts/ChartLegend';
 import { niceTicks } from '../../charts/chart-numbers';
-import { dashPattern, ELEMENT, FIT_STYLE, NEUTRAL } from '../../charts/palette';
+import { dashPattern, ELEMENT, FIT_STYLE, NEUTRAL, seriesColour } from '../../charts/palette';
 import type { TracePoint } from './traces';
 
 const MARGIN = { left: 8, right: 16, top: 8, bottom: 8 };
+
+/** Decimals that write every tick exactly (round ticks: 0.005 steps need three). */
+function decimalsOf(ticks: number[]): number {
+  const step = Math.abs((ticks[1] as number) - (ticks[0] as number));
+  return Math.max(
+    0,
+    Math.min(
+      6,
+      Math.ceil(-Math.log10(step) - 1e-9) +
+        (Number((step / 10 ** Math.floor(Math.log10(step))).toFixed(6)) % 1 === 0 ? 0 : 1),
+    ),
+  );
+}
 
 /** What a finished run averaged: from which sweep (1-based), the mean energy per atom and surface share. */
 export interface TraceAverages {
@@ -18,7 +31,8 @@ export interface TraceAverages {
   surfaceXB: number;
 }
 
-const ENERGY = ELEMENT.A;
+/** The energy is no element's: a colour of its own; the surface share is B's. */
+const ENERGY = seriesColour(4);
 const SURFACE = ELEMENT.B;
 
 export function Traces(props: { points: TracePoint[]; elementB: string; xB: number; averages?: TraceAverages }) {
@@ -27,6 +41,9 @@ export function Traces(props: { points: TracePoint[]; elementB: string; xB: numb
   const first = props.points[0]?.sweep ?? 0;
   const sweepTicks = niceTicks(0, last, 6).filter((t) => t >= first - 1e-9 && t <= last + 1e-9);
   const averageDash = dashPattern(1);
+  const energies = props.points.map((p) => p.energyPerAtomEv).filter(Number.isFinite);
+  const energyTicks = energies.length > 1 ? niceTicks(Math.min(...energies), Math.max(...energies), 6) : [];
+  const energyDigits = energyTicks.length > 1 ? decimalsOf(energyTicks) : 3;
   const equilibration: LegendEntry[] = averages
     ? [
         {
@@ -58,7 +75,16 @@ export function Traces(props: { points: TracePoint[]; elementB: string; xB: numb
           <LineChart data={props.points} margin={MARGIN}>
             <CartesianGrid strokeDasharray="3 3" />
             {xAxis}
-            <YAxis domain={['auto', 'auto']} width={64} tickFormatter={(v: number) => v.toFixed(3)} />
+            <YAxis
+              domain={
+                energyTicks.length > 1
+                  ? [energyTicks[0] as number, energyTicks[energyTicks.length - 1] as number]
+                  : ['auto', 'auto']
+              }
+              ticks={energyTicks.length > 1 ? energyTicks : undefined}
+              width={64}
+              tickFormatter={(v: number) => v.toFixed(energyDigits)}
+            />
             <Tooltip formatter={(v) => `${Number(v).toFixed(4)} eV`} labelFormatter={(v) => `sweep ${v}`} />
             {chartLegend([
               { label: 'E/N per sweep', colour: ENERGY, marker: 'line', thin: true },
