@@ -69,6 +69,10 @@ describe.skipIf(!available)('Model review with a trained model', () => {
     const seenTwice = supports.filter((n) => Number(n) >= 2).length;
     expect(seenTwice).toBeGreaterThanOrEqual(2);
     await expect.poll(() => page.getByTestId('lda-scatter').locator('.recharts-scatter').count()).toBe(seenTwice);
+    if (seenTwice < classes)
+      expect(await page.getByTestId('lda-left-out').textContent()).toMatch(
+        /^Architectures seen only once are left out of the discriminant view: /,
+      );
     expect(await page.getByTestId('lda-scatter').locator('.recharts-scatter-symbol').count()).toBeGreaterThan(40);
     await expect
       .poll(() => page.getByTestId('loadings-chart').locator('.recharts-bar-rectangle').count())

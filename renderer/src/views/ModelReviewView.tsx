@@ -233,6 +233,7 @@ function LdaPanel(props: { review: Ready }) {
   const groups = ldaGroups(review);
   const axes = ldaAxisLabels(review);
   const bars = loadingBars(review);
+  const once = review.classes.filter((c) => c.count < 2).map((c) => c.description);
   return (
     <>
       <div className="chart-box" data-testid="lda-scatter" style={{ height: 400 }}>
@@ -262,6 +263,11 @@ function LdaPanel(props: { review: Ready }) {
           </ScatterChart>
         </ResponsiveContainer>
       </div>
+      {once.length > 0 ? (
+        <p className="muted small" data-testid="lda-left-out">
+          Architectures seen only once are left out of the discriminant view: {once.join(', ')}.
+        </p>
+      ) : null}
       <h3>Which descriptors separate the architectures</h3>
       <p className="muted small">
         Correlation of each standardised descriptor with the discriminant scores (structure correlations, −1 to 1),
