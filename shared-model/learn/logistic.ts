@@ -244,6 +244,108 @@ function centreIntercepts(theta: Float64Array, K: number, q: number): void {
   for (let k = 0; k < K; k++) theta[k * q] = (theta[k * q] as number) - mean;
 }
 
+/** Subtracts the mean over classes from the intercepts and from every weight column. */
+function centreClasses(theta: Float64Array, K: number, q: number): void {
+  for (let j = 0; j < q; j++) {
+    let mean = 0;
+    for (let k = 0; k < K; k++) mean += theta[k * q + j] as number;
+    mean /= K;
+    for (let k = 0; k < K; k++) theta[k * q + j] = (theta[k * q + j] as number) - mean;
+  }
+}
+
+/**
+ * The Newton step −H⁻¹g, computed in the sum-zero coordinates: the iterates keep every weight column and
+ * the intercepts at zero sum over classes (the gradient has zero class sums and the Hessian keeps that
+ * subspace), so θ = A φ with φ the first K − 1 classes and class K − 1 = −Σ φ_k. The reduced Hessian
+ * Aᵀ H A has (K−1)K/2 distinct blocks instead of K(K+1)/2, per row with the coefficients
+ * s_i [p_k δ_kl − p_k p_l + (p_k + p_l) p_K + p_K − p_K²] (K the last class), plus (I + 11ᵀ)/C on the weights;
+ * it is positive definite, so no u uᵀ is needed. Newton's method is affine invariant: the step is the one the
+ * full Hessian (made invertible along u) gives, at about (K−1)²/K² of the cost.
+ */
+function newtonStep(problem: FlatProblem, probs: Float64Array, g: Float64Array): Float64Array {
+  const { x, n, p, K, s, C } = problem;
+  const q = p + 1;
+  const R = K - 1;
+  const last = K - 1;
+  const dr = R * q;
+  const T = (q * (q + 1)) / 2;
+  const blockCount = (R * (R + 1)) / 2;
+  const blocks = new Float64Array(blockCount * T);
+  const outer = new Float64Array(T);
+  const xt = new Float64Array(q);
+  const coefficients = new Float64Array(blockCount);
+  for (let i = 0; i < n; i++) {
+    const si = s[i] as number;
+    if (si === 0) continue;
+    xt[0] = 1;
+    for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
+    let t = 0;
+    for (let j = 0; j < q; j++) {
+      const xj = xt[j] as number;
+      for (let m = j; m < q; m++) outer[t++] = xj * (xt[m] as number);
+    }
+    const pl = probs[i * K + last] as number;
+    const tail = pl - pl * pl;
+    let b = 0;
+    for (let k = 0; k < R; k++) {
+      const pk = probs[i * K + k] as number;
+      for (let l = k; l < R; l++) {
+        const pm = probs[i * K + l] as number;
+        coefficients[b++] = si * ((k === l ? pk : 0) - pk * pm + (pk + pm) * pl + tail);
+      }
+    }
+    for (b = 0; b < blockCount; b++) {
+      const a = coefficients[b] as number;
+      if (a === 0) continue;
+      const base = b * T;
+      for (t = 0; t < T; t++) blocks[base + t] = (blocks[base + t] as number) + a * (outer[t] as number);
+    }
+  }
+  const h = new Float64Array(dr * dr);
+  let b = 0;
+  for (let k = 0; k < R; k++) {
+    for (let l = k; l < R; l++) {
+      let t = b * T;
+      for (let j = 0; j < q; j++) {
+        for (let m = j; m < q; m++) {
+          const v = blocks[t++] as number;
+          const r1 = k * q + j;
+          const c1 = l * q + m;
+          const r2 = k * q + m;
+          const c2 = l * q + j;
+          h[r1 * dr + c1] = v;
+          h[c1 * dr + r1] = v;
+          h[r2 * dr + c2] = v;
+          h[c2 * dr + r2] = v;
+        }
+      }
+      b++;
+    }
+  }
+  for (let k = 0; k < R; k++)
+    for (let l = 0; l < R; l++)
+      for (let j = 1; j < q; j++) {
+        const index = (k * q + j) * dr + l * q + j;
+        h[index] = (h[index] as number) + (k === l ? 2 : 1) / C;
+      }
+  const gr = new Float64Array(dr);
+  for (let k = 0; k < R; k++)
+    for (let j = 0; j < q; j++) gr[k * q + j] = (g[k * q + j] as number) - (g[last * q + j] as number);
+  const phi = choleskySolve(choleskyFactor(h, dr), dr, gr);
+  const step = new Float64Array(K * q);
+  for (let j = 0; j < q; j++) {
+    let sum = 0;
+    for (let k = 0; k < R; k++) {
+      const v = phi[k * q + j] as number;
+      step[k * q + j] = v;
+      sum += v;
+    }
+    step[last * q + j] = -sum;
+  }
+  return step;
+}
+
 /** Fits the model to rows `x` (n × p) and class indices `y` in 0…K−1. */
 export function fitLogistic(
   x: readonly (readonly number[])[],
@@ -292,6 +394,9 @@ export function fitLogisticFlat(
     }
     if (!theta.every(Number.isFinite)) theta = new Float64Array(d);
   }
+  // Onto the sum-zero subspace (below): same scores up to a per-row constant, so the same probabilities, and a
+  // penalty no larger.
+  centreClasses(theta, K, q);
   let probs = new Float64Array(n * K);
   let probsNext = new Float64Array(n * K);
   let f = objectiveInto(problem, theta, probs);
@@ -309,8 +414,7 @@ export function fitLogisticFlat(
       converged = true;
       break;
     }
-    const L = choleskyFactor(hessianOf(problem, probs), d);
-    const step = choleskySolve(L, d, g);
+    const step = newtonStep(problem, probs, g);
     let t = 1;
     let next = theta;
     let fNext = f;
