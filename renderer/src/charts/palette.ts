@@ -54,3 +54,19 @@ export const DASHES = ['', '7 3', '2 3', '10 3 2 3'] as const;
 export function dashPattern(index: number): string {
   return DASHES[((index % DASHES.length) + DASHES.length) % DASHES.length] as string;
 }
+
+/** `colour` (#rrggbb) mixed with white: `share` of the colour (cell backgrounds that keep dark text readable). */
+export function tint(colour: string, share = 0.25): string {
+  const match = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(colour);
+  if (!match) throw new RangeError(`not a #rrggbb colour: ${colour}`);
+  const mix = (hex: string) =>
+    Math.round(255 - share * (255 - parseInt(hex, 16)))
+      .toString(16)
+      .padStart(2, '0');
+  return `#${mix(match[1]!)}${mix(match[2]!)}${mix(match[3]!)}`;
+}
+
+/** The light background of a cell that names an architecture (screens, tables). */
+export function architectureTint(kind: string): string {
+  return tint(architectureColour(kind));
+}

@@ -16,17 +16,7 @@ import { readUserNumber } from '../../../../shared-model/text/user-number';
 import { call } from '../../api/client';
 import { useAppState } from '../../app-state';
 import { Banner } from '../../components/Banner';
-
-const KIND_COLOURS: Record<ArchitectureKind, string> = {
-  alloy: '#dbeafe',
-  'surface-enriched alloy': '#a5c8f0',
-  'core@shell': '#fcd34d',
-  Janus: '#fca5a5',
-  intermetallic: '#bef264',
-  unknown: '#e5e7eb',
-  hollow: '#e5e7eb',
-  other: '#e5e7eb',
-};
+import { architectureColour, architectureTint } from '../../charts/palette';
 
 function kindOf(label: string | null): ArchitectureKind | null {
   return label === null ? null : (parseArchitecture(label)?.kind ?? null);
@@ -68,7 +58,7 @@ function Matrix(props: { status: ScreenStatus; diameterNm: number; x: number; on
               if (!cell) return <td key={column}>{row === column ? '·' : ''}</td>;
               const kind = kindOf(cell.status === 'done' ? cell.architecture : null);
               return (
-                <td key={column} style={{ background: kind ? KIND_COLOURS[kind] : undefined, padding: 4 }}>
+                <td key={column} style={{ background: kind ? architectureTint(kind) : undefined, padding: 4 }}>
                   <button
                     type="button"
                     className="button--link"
@@ -242,7 +232,8 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
                         display: 'inline-block',
                         width: 12,
                         height: 12,
-                        background: KIND_COLOURS[k],
+                        background: architectureTint(k),
+                        border: `1px solid ${architectureColour(k)}`,
                         verticalAlign: 'middle',
                         marginRight: 4,
                       }}
