@@ -11,6 +11,7 @@ import {
   OUTCOME_ONLY_KINDS,
   type ArchitectureLabel,
 } from '../architecture/labels';
+import { at } from '../indexed';
 
 export interface PredictionOutcomePair {
   predicted: ArchitectureLabel;
@@ -76,14 +77,14 @@ export function confusionMatrix(
   for (const p of normalised) {
     const row = counts[index.get(p.observed.label) as number] as number[];
     const col = index.get(p.predicted.label) as number;
-    row[col] = (row[col] as number) + 1;
+    row[col] = at(row, col) + 1;
     if (p.predicted.label === p.observed.label) exact++;
     if (p.predicted.kind === p.observed.kind) kind++;
   }
   const total = normalised.length;
   const perLabel = labels.map((label, i) => {
     const observed = (counts[i] as number[]).reduce((s, v) => s + v, 0);
-    const predicted = counts.reduce((s, row) => s + (row[i] as number), 0);
+    const predicted = counts.reduce((s, row) => s + at(row, i), 0);
     const correct = (counts[i] as number[])[i] as number;
     return {
       label,

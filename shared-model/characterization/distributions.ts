@@ -6,6 +6,7 @@
  * bisection on the CDF (monotone, so it always converges); erfc by the Chebyshev-fitted exponential of
  * Numerical Recipes §6.2 (fractional error < 1.2e-7), used only for probe-blur kernels.
  */
+import { at } from '../indexed';
 
 const LANCZOS = [
   0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059,
@@ -15,8 +16,8 @@ const LANCZOS = [
 export function logGamma(x: number): number {
   if (x < 0.5) return Math.log(Math.PI / Math.abs(Math.sin(Math.PI * x))) - logGamma(1 - x);
   const z = x - 1;
-  let sum = LANCZOS[0] as number;
-  for (let i = 1; i < 9; i++) sum += (LANCZOS[i] as number) / (z + i);
+  let sum = at(LANCZOS, 0);
+  for (let i = 1; i < 9; i++) sum += at(LANCZOS, i) / (z + i);
   const t = z + 7.5;
   return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(sum);
 }

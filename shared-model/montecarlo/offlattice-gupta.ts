@@ -193,7 +193,7 @@ export class VerletList {
       neighbours[cursor[i]!++] = j;
       neighbours[cursor[j]!++] = i;
     }
-    for (let i = 0; i < n; i++) neighbours.subarray(offsets[i]!, offsets[i + 1]!).sort();
+    for (let i = 0; i < n; i++) neighbours.subarray(offsets[i], offsets[i + 1]).sort();
     this.offsets = offsets;
     this.neighbours = neighbours;
   }
