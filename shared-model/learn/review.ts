@@ -180,6 +180,8 @@ function validate(
   C: number,
   hooks: ReviewHooks,
   progress: (done: number) => void,
+  /** A starting point for the all-rows fit (the previous prior weight's or week's); the optimum is the same. */
+  start?: FittedClassifier,
 ): FoldPredictions {
   let done = 0;
   const warm = fitClassifier(
@@ -188,7 +190,7 @@ function validate(
     weight,
     classes,
     C,
-    undefined,
+    start,
     { posterior: false },
   );
   const model = crossValidate(labelled.length, folds, (train, test) => {
@@ -357,7 +359,8 @@ export function reviewCampaign(
   const step = () => report(0.1 + (0.75 * ++fitsDone) / totalFits, 'cross-validation');
   const tuning: { weight: number; logLoss: number; predictions: FoldPredictions }[] = [];
   for (const w of weights) {
-    const predictions = validate(labelled, lopo, pseudoFolds, w, classes, settings.C, hooks, step);
+    const start = tuning.at(-1)?.predictions.warm;
+    const predictions = validate(labelled, lopo, pseudoFolds, w, classes, settings.C, hooks, step, start);
     tuning.push({ weight: w, logLoss: classifierFigures(predictions.model, observed, classes).logLoss, predictions });
   }
   const best = tuning.reduce((a, b) => (b.logLoss < a.logLoss - 1e-12 ? b : a));
@@ -370,13 +373,24 @@ export function reviewCampaign(
         : `prior weight ${best.weight} per physics pseudo-outcome, the lowest leave-one-pair-out log-loss of ` +
           `${weights.join(', ')}; not nested: the same held-out pairs chose the weight and score the model, ` +
           'so its figures may be slightly optimistic';
-  const looPredictions = validate(labelled, loo, pseudoFolds, best.weight, classes, settings.C, hooks, step);
+  const looPredictions = validate(
+    labelled,
+    loo,
+    pseudoFolds,
+    best.weight,
+    classes,
+    settings.C,
+    hooks,
+    step,
+    best.predictions.warm,
+  );
 
   report(0.86, 'weekly timeline');
   const timeline: TimelinePoint[] = [];
   const dated = labelled.filter((o) => o.madeOn);
   const allWeeks = [...new Set(dated.map((o) => mondayOf(o.madeOn as string)))].sort();
   const weeks = allWeeks.slice(-TIMELINE_WEEKS);
+  let previousWarm: FittedClassifier = best.predictions.warm;
   for (const week of weeks) {
     cancelled(hooks);
     const end = new Date(`${week}T00:00:00Z`);
@@ -405,7 +419,9 @@ export function reviewCampaign(
         settings.C,
         hooks,
         () => undefined,
+        previousWarm,
       );
+      previousWarm = p.warm;
       const f = classifierFigures(p.model, subObserved, classes);
       model = { accuracy: f.accuracy, logLoss: f.logLoss };
     }
