@@ -251,3 +251,48 @@ export function markOwnerRunsInterrupted(db: SqliteDatabase, owner: string, reas
     )
     .run(reason, nowIso(), owner).changes;
 }
+
+/** A finished run's inputs and classified architecture (for the learning prior). */
+export interface FinishedRunLabel {
+  id: number;
+  pairId: number | null;
+  label: string;
+  spec: SimulationSpec;
+  architecture: string;
+  createdAt: string;
+}
+
+/**
+ * Finished runs linked to one of `pairIds` or whose label starts with `labelPrefix` (exact, case-sensitive),
+ * oldest first; runs without a stored architecture are left out.
+ */
+export function listFinishedRunLabels(
+  db: SqliteDatabase,
+  query: { pairIds: readonly number[]; labelPrefix: string },
+): FinishedRunLabel[] {
+  const byPair = query.pairIds.length > 0 ? `pair_id IN (${query.pairIds.map(() => '?').join(', ')}) OR ` : '';
+  const rows = db
+    .prepare(
+      `SELECT id, pair_id, label, inputs_json, json_extract(result_json, '$.architecture') AS architecture, created_at
+       FROM simulation_runs WHERE status = 'done' AND (${byPair}substr(label, 1, ?) = ?)
+       ORDER BY created_at, id`,
+    )
+    .all(...query.pairIds, query.labelPrefix.length, query.labelPrefix) as {
+    id: number;
+    pair_id: number | null;
+    label: string;
+    inputs_json: string;
+    architecture: unknown;
+    created_at: string;
+  }[];
+  return rows
+    .filter((r) => typeof r.architecture === 'string')
+    .map((r) => ({
+      id: r.id,
+      pairId: r.pair_id,
+      label: r.label,
+      spec: JSON.parse(r.inputs_json) as SimulationSpec,
+      architecture: r.architecture as string,
+      createdAt: r.created_at,
+    }));
+}

@@ -41,6 +41,7 @@ import { parseRankTarget } from '../../shared-model/prediction/rank';
 import { DEFAULT_TEMPERATURE_C, ROUTES, type SynthesisRoute } from '../../shared-model/recipes/design-input';
 import { learnJobsFor } from '../workers/learn-jobs';
 import type { HandlerMap } from './context';
+import { campaignMonteCarloLabels } from './learn-screen-prior';
 
 const summaryOf = (r: HistoryImportRecord): HistoryImportSummary => ({
   id: r.id,
@@ -225,7 +226,11 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
     }
     const elements = campaignElements(store, campaignId, outcomes);
     const settings: ReviewSettings = { ...DEFAULT_REVIEW_SETTINGS, C, priorWeight, grid: DEFAULT_GRID };
-    return learnJobsFor(store).start(campaignId, { outcomes, elements, settings }, (review) =>
+    // Finished Monte Carlo runs of the campaign label the prior where they match; the model keeps the settings
+    // without them (the review's `prior` names the runs used).
+    const monteCarloRuns = campaignMonteCarloLabels(store, campaignId);
+    const input = { outcomes, elements, settings: { ...settings, monteCarloRuns } };
+    return learnJobsFor(store).start(campaignId, input, (review) =>
       insertModel(store.db, {
         campaignId,
         modelVersion: LEARN_MODEL_VERSION,

@@ -21,7 +21,6 @@ import {
   floorProbabilities,
   LEARN_MODEL_VERSION,
   MIN_OUTCOMES,
-  physicsPseudoOutcomes,
   prepareOutcomes,
   PRIOR_WEIGHT_CHOICES,
   TUNE_PRIOR_FROM,
@@ -33,6 +32,7 @@ import {
   type SuccessModel,
 } from './outcome-model';
 import { physicsProbabilities } from './physics';
+import { priorPseudoOutcomes, type MonteCarloLabel, type PriorSources } from './screen-prior';
 import { applyColumnScaler, fitColumnScaler } from './standardise';
 
 export interface ReviewSettings {
@@ -42,6 +42,8 @@ export interface ReviewSettings {
   grid: CandidateGrid;
   /** Largest pseudo-outcome set used inside cross-validation folds (every k-th candidate). */
   maxPseudoInFolds: number;
+  /** Finished Monte Carlo runs of the campaign: they label the prior where they match (screen-prior.ts). */
+  monteCarloRuns?: readonly MonteCarloLabel[];
 }
 
 export const DEFAULT_REVIEW_SETTINGS: ReviewSettings = {
@@ -125,6 +127,8 @@ export type ModelReview =
       priorWeightTuning: { weight: number; logLoss: number }[];
       /** How the prior weight was chosen, in words (tuned or not; the tuning is not nested). */
       priorWeightNote: string;
+      /** Which source labelled the prior's pseudo-outcomes (absent in models stored before it was kept). */
+      prior?: PriorSources;
       model: ClassifierFigures;
       physics: ClassifierFigures;
       majority: ClassifierFigures;
@@ -338,7 +342,8 @@ export function reviewCampaign(
     ...new Set([...elements, ...labelled.flatMap((o) => [o.condition.elementA, o.condition.elementB])]),
   ];
   const candidates: Candidate[] = buildCandidates(candidateConditions(allElements, settings.grid));
-  const pseudoAll = physicsPseudoOutcomes(candidates, classes);
+  const prior = priorPseudoOutcomes(candidates, classes, settings.monteCarloRuns ?? []);
+  const pseudoAll = prior.pseudo;
   const pseudoFolds = thin(pseudoAll, settings.maxPseudoInFolds);
   const observed = labelled.map((o) => classes.indexOf(o.classKey as ClassKey));
   const lopo = leaveOneGroupOut(labelled.map((o) => o.condition.pair));
@@ -496,6 +501,7 @@ export function reviewCampaign(
     priorWeight: best.weight,
     priorWeightTuning: tuning.map((t) => ({ weight: t.weight, logLoss: t.logLoss })),
     priorWeightNote,
+    prior: prior.sources,
     model: classifierFigures(best.predictions.model, observed, classes),
     physics: classifierFigures(best.predictions.physics, observed, classes),
     majority: classifierFigures(best.predictions.majority, observed, classes),

@@ -40,6 +40,7 @@ describe('pairwright learn and propose', () => {
       physics: { accuracy: number; logLoss: number };
       majority: { accuracy: number };
       loadings: { descriptor: string; weight: number }[];
+      prior: { pseudoOutcomes: number; fromMonteCarlo: number; fromAnalytic: number };
     }>(['learn', String(campaign.id), ...data]);
     expect(review.validation).toBe('leave-one-pair-out');
     expect(review.outcomes).toBeGreaterThan(50);
@@ -56,6 +57,9 @@ describe('pairwright learn and propose', () => {
       expect(Number.isFinite(v)).toBe(true);
     }
     expect(review.loadings.length).toBeGreaterThan(3);
+    // No Monte Carlo run in this store: every pseudo-outcome of the prior is labelled by the analytic prediction.
+    expect(review.prior.pseudoOutcomes).toBeGreaterThan(0);
+    expect(review.prior).toMatchObject({ fromMonteCarlo: 0, fromAnalytic: review.prior.pseudoOutcomes });
 
     const out = runPairwrightJson<{ proposals: Record<string, unknown>[] }>([
       'propose',

@@ -7,6 +7,7 @@
 import type { LearnJob, ProposalSet, StoredReview } from '../../../shared-model/api/learn';
 import { DEMO_HISTORY_ROWS, demoHistoryCsv } from '../../../shared-model/learn/demo-history';
 import { formatCostPerBatch, meetsTargetText } from '../../../shared-model/learn/proposals';
+import { priorSourcesText } from '../../../shared-model/learn/screen-prior';
 import {
   CliError,
   optionalNumber,
@@ -61,6 +62,8 @@ function reviewJson(stored: StoredReview): Record<string, unknown> {
     priorWeightTuning: r.priorWeightTuning,
     // models stored before the note was written have none
     priorWeightNote: (r.priorWeightNote as string | undefined) ?? null,
+    // which source labelled each pseudo-outcome (Monte Carlo runs or the analytic prediction); null in older models
+    prior: r.prior ?? null,
     model: r.model,
     physics: r.physics,
     majority: r.majority,
@@ -90,6 +93,7 @@ function reviewText(stored: StoredReview): string {
       `classes ${r.classes.map((c) => `${c.key} ${c.count}`).join(', ')}; physics prior weight ${r.priorWeight}`,
     'validation: leave-one-pair-out (every outcome of a pair held out together)',
     ...((r.priorWeightNote as string | undefined) ? [r.priorWeightNote] : []),
+    ...(r.prior ? [priorSourcesText(r.prior)] : []),
     line('model', r.model),
     line('physics', r.physics),
     line('majority', r.majority),

@@ -22,6 +22,7 @@ import {
   ZAxis,
 } from 'recharts';
 import type { ReviewView } from '../../../shared-model/api/learn';
+import { priorSourcesText } from '../../../shared-model/learn/screen-prior';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
@@ -55,6 +56,7 @@ const Y_AXIS_WIDTH = 72;
 /** A value axis's title, rotated, centred on the axis at its left edge (clear of the tick labels). */
 const yLabel = (value: string) =>
   ({ value, angle: -90, position: 'insideLeft', style: { textAnchor: 'middle' } }) as const;
+const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}.`;
 
 function HeadlineTable(props: { review: Ready }) {
   return (
@@ -311,6 +313,11 @@ function ReadyReview(props: { review: Ready }) {
         <p className="muted small" data-testid="prior-weight">
           {priorWeightText(review)}
         </p>
+        {review.prior ? (
+          <p className="muted small" data-testid="prior-sources">
+            {sentence(priorSourcesText(review.prior))}
+          </p>
+        ) : null}
         <p className="muted small" data-testid="known-pairs">
           {knownPairsText(review)}
         </p>
