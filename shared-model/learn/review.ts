@@ -267,7 +267,7 @@ export function fitCampaignModel(
   outcomes: readonly LearningOutcome[],
   elements: readonly string[],
   priorWeight: number,
-  settings: Pick<ReviewSettings, 'C' | 'grid'> = DEFAULT_REVIEW_SETTINGS,
+  settings: Pick<ReviewSettings, 'C' | 'grid' | 'monteCarloRuns'> = DEFAULT_REVIEW_SETTINGS,
 ): FittedCampaignModel | null {
   const prepared = prepareOutcomes(outcomes);
   const { labelled, classes } = prepared;
@@ -275,7 +275,8 @@ export function fitCampaignModel(
   const allElements = [
     ...new Set([...elements, ...labelled.flatMap((o) => [o.condition.elementA, o.condition.elementB])]),
   ];
-  const pseudoAll = physicsPseudoOutcomes(buildCandidates(candidateConditions(allElements, settings.grid)), classes);
+  const candidates = buildCandidates(candidateConditions(allElements, settings.grid));
+  const pseudoAll = priorPseudoOutcomes(candidates, classes, settings.monteCarloRuns ?? []).pseudo;
   const { classifier, success } = fitFinalModels(prepared, pseudoAll, priorWeight, settings.C);
   const trainedOn = prepared.all.map((o) => o.id);
   return {
