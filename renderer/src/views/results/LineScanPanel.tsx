@@ -4,6 +4,7 @@ import { CartesianGrid, ComposedChart, Line, ResponsiveContainer, Tooltip, XAxis
 import type { BatchOutcome, LineScanRecord, RecordedOutcome } from '../../../../shared-model/api/outcomes';
 import { call } from '../../api/client';
 import { chartLegend, type LegendEntry } from '../../charts/ChartLegend';
+import { niceTicks } from '../../charts/chart-numbers';
 import { DATA_STYLE, dashPattern, ELEMENT, FIT_STYLE } from '../../charts/palette';
 import { useFieldErrors } from '../../api/hooks';
 import { optionalFieldNumber, readForm } from '../../forms/typed-numbers';
@@ -26,6 +27,14 @@ function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
     }
     return row;
   });
+  // round ticks from 0 (or the lowest value, when noise or a fitted background goes below 0) to the highest
+  const values = data.flatMap((row) =>
+    Object.entries(row)
+      .filter(([k]) => k !== 'x')
+      .map(([, v]) => v),
+  );
+  const finite = values.filter(Number.isFinite);
+  const yTicks = finite.length > 0 ? niceTicks(Math.min(0, ...finite), Math.max(...finite), 6) : [];
   // Each element's data and its fits share the element's colour; the models differ by dash (chosen: solid, wider).
   const element = { A: a.elementA, B: a.elementB };
   const others = a.models.filter((m) => m.label !== a.chosenModel);
@@ -59,7 +68,11 @@ function LineScanChart(props: { scan: LineScanRecord; shown: string }) {
             tickFormatter={(v: number) => v.toFixed(0)}
             label={{ value: 'position (nm)', position: 'insideBottom', offset: -10 }}
           />
-          <YAxis label={{ value: scan.unit === 'counts' ? 'counts' : 'at.%', angle: -90, position: 'insideLeft' }} />
+          <YAxis
+            domain={yTicks.length > 1 ? [yTicks[0] as number, yTicks[yTicks.length - 1] as number] : ['auto', 'auto']}
+            ticks={yTicks.length > 1 ? yTicks : undefined}
+            label={{ value: scan.unit === 'counts' ? 'counts' : 'at.%', angle: -90, position: 'insideLeft' }}
+          />
           <Tooltip
             formatter={(value) => (typeof value === 'number' ? value.toFixed(1) : String(value))}
             labelFormatter={(v) => `${Number(v).toFixed(2)} nm`}
