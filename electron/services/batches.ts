@@ -175,8 +175,21 @@ function checkStocks(db: SqliteDatabase, stocks: readonly StockRecord[]): void {
   });
 }
 
+/** A batch designed here: a row of imported history has no design, so no reagent list or bench sheet. */
+export function getDesignedBatch(db: SqliteDatabase, id: number, field: string): StoredBatch {
+  const batch = getBatch(db, id, field);
+  if (batch.importedHistory) {
+    throw invalid(
+      field,
+      `batch #${batch.id} "${batch.name}" is a row of imported history: it has no design here, so no reagents ` +
+        'or bench sheet; choose a batch planned in Batch design',
+    );
+  }
+  return batch;
+}
+
 function reagentListFor(db: SqliteDatabase, batchIds: readonly number[]): ReagentList {
-  const batches = batchIds.map((id, index) => getBatch(db, id, `batchIds.${index}`));
+  const batches = batchIds.map((id, index) => getDesignedBatch(db, id, `batchIds.${index}`));
   return buildReagentList(
     batches.map((b) => ({
       batchId: b.id,

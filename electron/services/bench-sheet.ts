@@ -3,11 +3,12 @@ import { getCampaign } from '../../db/repositories/campaigns';
 import type { benchSheetOperations } from '../../shared-model/api/bench-sheet';
 import { benchSheet } from '../../shared-model/benchsheet/sheet';
 import { benchSheetHtml } from '../../shared-model/benchsheet/sheet-html';
-import { batchHandlers } from './batches';
+import { batchHandlers, getDesignedBatch } from './batches';
 import type { HandlerMap } from './context';
 
 export const benchSheetHandlers: HandlerMap<keyof typeof benchSheetOperations> = {
   'batches.sheet': async (input, context) => {
+    getDesignedBatch(context.store.db, input.id, 'id');
     const batch = await batchHandlers['batches.get']({ id: input.id }, context);
     const campaignName = batch.campaignId === null ? null : getCampaign(context.store.db, batch.campaignId).name;
     const sheet = benchSheet(batch, campaignName, input.printedOn ?? new Date().toISOString().slice(0, 10));

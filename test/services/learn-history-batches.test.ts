@@ -124,4 +124,22 @@ describe('imported history rows are batches', () => {
     const saved = await ok<SavedBatch>('batches.get', { id });
     expect(saved.status).toBe('characterized');
   });
+  it('an imported batch has no reagent list, CSV or bench sheet: each refuses, naming the batch and the field', async () => {
+    const c = await ok<Campaign>('campaigns.create', { name: 'History reagents' });
+    const imported = await ok<HistoryImportResult>('learn.importHistory', {
+      campaignId: c.id,
+      csvText: TABLE,
+      fileName: 'history.csv',
+    });
+    const [first] = imported.batchIds ?? [];
+    if (first === undefined) throw new Error('the import gave no batch ids');
+    for (const name of ['reagents.list', 'reagents.csv']) {
+      const error = await failure(name, { batchIds: [first] });
+      expect(error).toMatchObject({ code: 'invalid_input', field: 'batchIds.0' });
+      expect(error.message).toMatch(new RegExp(`batch #${first} .*imported history.*no design`));
+    }
+    const sheet = await failure('batches.sheet', { id: first });
+    expect(sheet).toMatchObject({ code: 'invalid_input', field: 'id' });
+    expect(sheet.message).toContain('imported history');
+  });
 });
