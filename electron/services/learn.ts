@@ -35,6 +35,7 @@ import { buildCandidates, candidateConditions, DEFAULT_GRID } from '../../shared
 import { parseHistoryTable } from '../../shared-model/learn/history-table';
 import { prepareOutcomes, type LearningOutcome } from '../../shared-model/learn/outcome-model';
 import { proposeBatches } from '../../shared-model/learn/proposals';
+import { withMonteCarloPhysics } from '../../shared-model/learn/screen-prior';
 import { DEFAULT_REVIEW_SETTINGS, type ModelReview, type ReviewSettings } from '../../shared-model/learn/review';
 import { LEARN_MODEL_VERSION } from '../../shared-model/learn/outcome-model';
 import { parseRankTarget } from '../../shared-model/prediction/rank';
@@ -279,7 +280,10 @@ export const learnHandlers: HandlerMap<keyof typeof learnOperations> = {
     }
     const fitted = (model.review as ReadyReview).fitted;
     const settingsUsed = model.settings as ReviewSettings;
-    const candidates = buildCandidates(candidateConditions(fitted.elements, settingsUsed.grid ?? DEFAULT_GRID));
+    const candidates = withMonteCarloPhysics(
+      buildCandidates(candidateConditions(fitted.elements, settingsUsed.grid ?? DEFAULT_GRID)),
+      campaignMonteCarloLabels(store, input.campaignId),
+    );
     const outcomes = prepareOutcomes(campaignOutcomes(store, input.campaignId)).all;
     const result = proposeBatches(fitted, candidates, outcomes, latestMetalPrices(store.db), {
       target,

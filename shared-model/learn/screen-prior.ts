@@ -205,3 +205,28 @@ export function priorSourcesText(s: PriorSources): string {
     `prediction${disagree}${outside}`
   );
 }
+
+/**
+ * Candidates whose physics call comes from a matching Monte Carlo run (MONTE_CARLO_MATCH), for proposals: the
+ * class is the run's, the label names the run and, where they differ, the analytic call ("Ni@Pt by Monte Carlo
+ * run 12 (analytic: surface-enriched alloy)"), so a reason's "physics predicts …" and the exploration rule
+ * "physics and model disagree" read the run. The confidence stays the analytic one (a run gives none).
+ * A run whose architecture is not a class (unknown) leaves the analytic call.
+ */
+export function withMonteCarloPhysics<C extends { condition: CanonicalCondition; physics: PhysicsCall }>(
+  candidates: readonly C[],
+  runs: readonly MonteCarloLabel[],
+): C[] {
+  if (runs.length === 0) return [...candidates];
+  const index = indexMonteCarloRuns(runs);
+  return candidates.map((c) => {
+    const match = matchMonteCarloRun(c.condition, index);
+    if (!match || match.classKey === null) return c;
+    const run = `Monte Carlo run ${match.run.runId}`;
+    const label =
+      match.classKey === c.physics.classKey
+        ? `${match.run.architecture} (analytic and ${run})`
+        : `${match.run.architecture} by ${run} (analytic: ${c.physics.label})`;
+    return { ...c, physics: { classKey: match.classKey, label, confidence: c.physics.confidence } };
+  });
+}

@@ -11,6 +11,7 @@ import {
   matchMonteCarloRun,
   priorPseudoOutcomes,
   priorSourcesText,
+  withMonteCarloPhysics,
   type MonteCarloLabel,
 } from '../../../shared-model/learn/screen-prior';
 
@@ -110,5 +111,29 @@ describe('priorPseudoOutcomes', () => {
     expect(sources.monteCarloOutsideClasses).toBe(2);
     expect(pseudo).toHaveLength(sources.fromAnalytic);
     expect(priorSourcesText(sources)).toContain('all from the analytic prediction');
+  });
+});
+
+describe('withMonteCarloPhysics', () => {
+  const grid = { xB: [0.8], diametersNm: [3], routes: ['polyol', 'co-reduction'] as const };
+  const candidates = buildCandidates(candidateConditions(['Ni', 'Pt'], grid));
+
+  it('gives matched candidates the run’s class and names the run and the analytic call', () => {
+    const [polyol, coReduction] = withMonteCarloPhysics(candidates, [run({ runId: 12 })]);
+    // candidateConditions orders routes as given: polyol (433 K, matched), co-reduction (298 K, not matched).
+    expect(polyol!.condition.route).toBe('polyol');
+    expect(polyol!.physics.classKey).toBe('A@B');
+    const analytic = candidates[0]!.physics;
+    expect(polyol!.physics.label).toBe(
+      analytic.classKey === 'A@B'
+        ? 'Ni@Pt (analytic and Monte Carlo run 12)'
+        : `Ni@Pt by Monte Carlo run 12 (analytic: ${analytic.label})`,
+    );
+    expect(polyol!.physics.confidence).toBe(analytic.confidence);
+    expect(coReduction).toBe(candidates[1]);
+  });
+
+  it('keeps the analytic call where the run found no class', () => {
+    expect(withMonteCarloPhysics(candidates, [run({ architecture: 'unknown' })])).toEqual(candidates);
   });
 });
