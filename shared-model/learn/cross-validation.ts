@@ -73,6 +73,13 @@ export function kFold(rowCount: number, k: number, seed: number): Fold[] {
 }
 
 /**
+ * Pairs held out together in at most this many groups (groupKFold; exactly leave-one-pair-out up to this many
+ * pairs): the Model review's prior-weight tuning and each week's timeline model. Its headline stays
+ * leave-one-pair-out.
+ */
+export const PAIR_GROUPS = 10;
+
+/**
  * Grouped k-fold (every row of a group in the same test fold, the idea of scikit-learn's GroupKFold, which
  * balances fold sizes instead): the groups in order of first appearance are dealt round-robin into at most k
  * folds, so with k groups or fewer it is leave-one-group-out.

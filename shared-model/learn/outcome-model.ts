@@ -18,7 +18,7 @@ import { applyColumnScaler, applyColumnScalerFlat, fitColumnScaler, type ColumnS
 export const LEARN_MODEL_VERSION = 'learn-1.0';
 /** Fewest labelled (not failed) outcomes before a learned model is shown. */
 export const MIN_OUTCOMES = 12;
-/** Outcomes from which the prior weight is tuned by leave-one-pair-out log-loss (DOMAIN.md). */
+/** Outcomes from which the prior weight is tuned by log-loss with pairs held out (see review.ts). */
 export const TUNE_PRIOR_FROM = 30;
 export const DEFAULT_PRIOR_WEIGHT = 0.05;
 /** The grid the prior weight is tuned over (per pseudo-outcome; a real outcome weighs 1). */

@@ -9,7 +9,15 @@
 import { DomainError } from '../api/result';
 import { describeClass, type ClassKey } from './classes';
 import { buildCandidates, candidateConditions, DEFAULT_GRID, type Candidate, type CandidateGrid } from './candidates';
-import { crossValidate, groupKFold, kFold, leaveOneGroupOut, leaveOneOut, type Fold } from './cross-validation';
+import {
+  crossValidate,
+  groupKFold,
+  kFold,
+  leaveOneGroupOut,
+  leaveOneOut,
+  PAIR_GROUPS,
+  type Fold,
+} from './cross-validation';
 import { FEATURE_LABELS, FEATURE_NAMES } from './features';
 import { fitLda, ldaTransform, structureCorrelations } from './lda';
 import { classifierFigures, type ClassifierFigures } from './metrics';
@@ -61,9 +69,8 @@ export const DEFAULT_REVIEW_SETTINGS: ReviewSettings = {
 export const LEAVE_ONE_OUT_UP_TO = 100;
 export const KNOWN_PAIRS_FOLDS = 10;
 const KNOWN_PAIRS_SEED = 11;
-/** The timeline covers at most the last this many weeks; each week's model holds pairs out in ≤ 10 groups. */
+/** The timeline covers at most the last this many weeks. */
 export const TIMELINE_WEEKS = 12;
-export const TIMELINE_PAIR_FOLDS = 10;
 
 export interface ReviewProgress {
   fraction: number;
@@ -173,6 +180,10 @@ interface FoldPredictions {
   majority: number[][];
   /** The fit on all rows of the validation (the folds' warm start). */
   warm: FittedClassifier;
+}
+
+function pairsOf(outcomes: readonly PreparedOutcome[]): string[] {
+  return outcomes.map((o) => o.condition.pair);
 }
 
 function validate(
@@ -347,7 +358,7 @@ export function reviewCampaign(
   const pseudoAll = prior.pseudo;
   const pseudoFolds = thin(pseudoAll, settings.maxPseudoInFolds);
   const observed = labelled.map((o) => classes.indexOf(o.classKey as ClassKey));
-  const lopo = leaveOneGroupOut(labelled.map((o) => o.condition.pair));
+  const lopo = leaveOneGroupOut(pairsOf(labelled));
   const plainLoo = labelled.length <= LEAVE_ONE_OUT_UP_TO;
   const loo = plainLoo ? leaveOneOut(labelled.length) : kFold(labelled.length, KNOWN_PAIRS_FOLDS, KNOWN_PAIRS_SEED);
   const knownPairsHeldOut = plainLoo
@@ -360,25 +371,39 @@ export function reviewCampaign(
         ? PRIOR_WEIGHT_CHOICES
         : [DEFAULT_PRIOR_WEIGHT]
       : [settings.priorWeight];
-  const totalFits = weights.length * lopo.length + loo.length;
+  // Tuning holds pairs out in at most PAIR_GROUPS groups (one fit per group and weight); the chosen weight is then
+  // scored leave-one-pair-out, which the grouping already is up to PAIR_GROUPS pairs.
+  const pairGroups = weights.length > 1 ? groupKFold(pairsOf(labelled), PAIR_GROUPS) : lopo;
+  const headlineRefit = pairGroups.length !== lopo.length;
+  const totalFits = weights.length * pairGroups.length + (headlineRefit ? lopo.length : 0) + loo.length;
   let fitsDone = 0;
   const step = () => report(0.1 + (0.75 * ++fitsDone) / totalFits, 'cross-validation');
   const tuning: { weight: number; logLoss: number; predictions: FoldPredictions }[] = [];
   for (const w of weights) {
     const start = tuning.at(-1)?.predictions.warm;
-    const predictions = validate(labelled, lopo, pseudoFolds, w, classes, settings.C, hooks, step, start);
+    const predictions = validate(labelled, pairGroups, pseudoFolds, w, classes, settings.C, hooks, step, start);
     tuning.push({ weight: w, logLoss: classifierFigures(predictions.model, observed, classes).logLoss, predictions });
   }
-  const best = tuning.reduce((a, b) => (b.logLoss < a.logLoss - 1e-12 ? b : a));
+  const chosen = tuning.reduce((a, b) => (b.logLoss < a.logLoss - 1e-12 ? b : a));
+  const best = {
+    weight: chosen.weight,
+    predictions: headlineRefit
+      ? validate(labelled, lopo, pseudoFolds, chosen.weight, classes, settings.C, hooks, step, chosen.predictions.warm)
+      : chosen.predictions,
+  };
+  const tunedBy =
+    pairGroups.length < lopo.length
+      ? `log-loss with the ${lopo.length} pairs held out together in ${pairGroups.length} groups`
+      : 'leave-one-pair-out log-loss';
   const priorWeightNote =
     settings.priorWeight !== 'tune'
       ? `prior weight ${best.weight} per physics pseudo-outcome, as set`
       : weights.length === 1
-        ? `prior weight ${best.weight} per physics pseudo-outcome (the default); it is tuned by ` +
-          `leave-one-pair-out log-loss once ${TUNE_PRIOR_FROM} labelled outcomes are logged (${labelled.length} now)`
-        : `prior weight ${best.weight} per physics pseudo-outcome, the lowest leave-one-pair-out log-loss of ` +
-          `${weights.join(', ')}; not nested: the same held-out pairs chose the weight and score the model, ` +
-          'so its figures may be slightly optimistic';
+        ? `prior weight ${best.weight} per physics pseudo-outcome (the default); it is tuned (log-loss with ` +
+          `pairs held out together) once ${TUNE_PRIOR_FROM} labelled outcomes are logged (${labelled.length} now)`
+        : `prior weight ${best.weight} per physics pseudo-outcome, the lowest ${tunedBy} of ` +
+          `${weights.join(', ')}, then scored leave-one-pair-out; not nested: the same outcomes chose the weight ` +
+          'and score the model, so its figures may be slightly optimistic';
   const looPredictions = validate(
     labelled,
     loo,
@@ -415,10 +440,7 @@ export function reviewCampaign(
     if (subset.length >= MIN_OUTCOMES && subsetClasses.length >= 2 && subsetPairs.size >= 3) {
       const p = validate(
         subset,
-        groupKFold(
-          subset.map((o) => o.condition.pair),
-          TIMELINE_PAIR_FOLDS,
-        ),
+        groupKFold(pairsOf(subset), PAIR_GROUPS),
         pseudoFolds,
         best.weight,
         classes,
@@ -514,8 +536,8 @@ export function reviewCampaign(
     validationNote:
       `headline: leave-one-pair-out over ${lopo.length} pairs; known pairs, new conditions: ${knownPairsHeldOut}; ` +
       `timeline: ${weeks.length < allWeeks.length ? `the last ${weeks.length} of ${allWeeks.length} weeks` : 'every week'}, ` +
-      `each week's model with pairs held out together in at most ${TIMELINE_PAIR_FOLDS} groups ` +
-      `(leave-one-pair-out up to ${TIMELINE_PAIR_FOLDS} pairs)`,
+      `each week's model with pairs held out together in at most ${PAIR_GROUPS} groups ` +
+      `(leave-one-pair-out up to ${PAIR_GROUPS} pairs); prior weight tuned with the same grouping`,
     timeline,
     lda,
     ldaNote,

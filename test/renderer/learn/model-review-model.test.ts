@@ -130,5 +130,17 @@ describe('model review model', () => {
   it('makes round ticks and states the prior weight', () => {
     expect(roundTicks(0, 1, 0.2)).toEqual([0, 0.2, 0.4, 0.6, 0.8, 1]);
     expect(priorWeightText(review(figures(0.8, 0.6), figures(0.5, 1)))).toMatch(/weighs 0\.05.*tuned once 30/);
+    // Tuned: the weight is chosen with pairs held out in groups, then scored leave-one-pair-out (review.ts).
+    const tuned: Ready = {
+      ...review(figures(0.8, 0.6), figures(0.5, 1)),
+      priorWeight: 0.15,
+      priorWeightTuning: [
+        { weight: 0.05, logLoss: 0.8 },
+        { weight: 0.15, logLoss: 0.7 },
+      ],
+    };
+    expect(priorWeightText(tuned)).toMatch(
+      /weighs 0\.15 .*pairs held out together \(in at most 10 groups\) among 0\.05, 0\.15, then scored leave-one-pair-out/,
+    );
   });
 });

@@ -8,6 +8,7 @@
 import type { ReviewView } from '../../../../shared-model/api/learn';
 import type { ClassKey } from '../../../../shared-model/learn/classes';
 import { describeClass } from '../../../../shared-model/learn/classes';
+import { PAIR_GROUPS } from '../../../../shared-model/learn/cross-validation';
 import type { ClassifierFigures } from '../../../../shared-model/learn/metrics';
 
 type Ready = Extract<ReviewView, { status: 'ready' }>;
@@ -211,8 +212,9 @@ export function priorWeightText(review: Ready): string {
   return (
     `Physics prior: each physics pseudo-outcome weighs ${review.priorWeight} of an observed outcome` +
     (tuned
-      ? `, chosen by leave-one-pair-out log-loss among ${review.priorWeightTuning.map((t) => t.weight).join(', ')}.` +
-        ' Not nested: the same held-out pairs chose the weight and score the model, so the figures may be slightly' +
+      ? `, chosen by log-loss with pairs held out together (in at most ${PAIR_GROUPS} groups) among ` +
+        `${review.priorWeightTuning.map((t) => t.weight).join(', ')}, then scored leave-one-pair-out.` +
+        ' Not nested: the same outcomes chose the weight and score the model, so the figures may be slightly' +
         ' optimistic.'
       : ' (the starting weight; tuned once 30 outcomes exist).')
   );
