@@ -38,6 +38,12 @@ describe.skipIf(!available)('campaign screen in the browser host', () => {
   it('screens the campaign, shows the matrix with the prediction and opens a cell', { timeout: 120_000 }, async () => {
     await page.goto(`${fixture.host.url}#/simulation`);
     const panel = page.getByTestId('screen-panel');
+    // An empty field is named in words under the field itself (DEVELOPERS.md: messages speak to the user).
+    await panel.locator('input[name="screenXB"]').fill('');
+    await panel.getByRole('button', { name: 'Screen this campaign' }).click();
+    await expect
+      .poll(() => panel.locator('[data-error-for="screenXB"]').textContent())
+      .toMatch(/Give at least one composition, e\.g\. 25 50 75/);
     await panel.locator('input[name="screenXB"]').fill('50');
     await panel.locator('input[name="screenDiameter"]').fill('1,2');
     await panel.getByRole('button', { name: 'Screen this campaign' }).click();
@@ -47,6 +53,16 @@ describe.skipIf(!available)('campaign screen in the browser host', () => {
     await expect
       .poll(() => page.getByTestId('screen-summary').textContent(), { timeout: 90_000 })
       .toMatch(/1 of 1 finished/);
+    // Every run finished: the bar reads 100 % and fills its track (from memory: WAI-ARIA progressbar valuenow).
+    const progress = page.getByTestId('screen-progress');
+    await expect.poll(() => progress.getAttribute('aria-valuenow')).toBe('100');
+    await expect
+      .poll(async () => {
+        const track = await progress.boundingBox();
+        const bar = await progress.locator('.sim-progress__bar').boundingBox();
+        return track && bar ? Math.round((100 * bar.width) / track.width) : -1;
+      })
+      .toBe(100);
     const matrix = page.getByTestId('screen-matrix-1.2-50');
     await expect.poll(() => matrix.textContent()).toMatch(/analytic: /);
     await expect.poll(() => page.getByTestId('screen-legend').textContent()).toMatch(/:/);

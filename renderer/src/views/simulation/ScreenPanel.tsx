@@ -22,15 +22,42 @@ function kindOf(label: string | null): ArchitectureKind | null {
   return label === null ? null : (parseArchitecture(label)?.kind ?? null);
 }
 
+type ScreenField = 'screenXB' | 'screenDiameter' | 'screenTemperature';
+
+/** What to say, in the user's words, when a field is left empty. */
+const EMPTY_FIELD: Record<ScreenField, string> = {
+  screenXB: 'Give at least one composition, e.g. 25 50 75 (at.% of the column element).',
+  screenDiameter: 'Give at least one diameter in nm, e.g. 3 or 2 4.',
+  screenTemperature: 'Give the temperature in K, e.g. 600.',
+};
+
+class FieldProblem extends Error {
+  constructor(
+    readonly field: ScreenField,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
 /** Numbers separated by spaces or semicolons (a comma may be a decimal comma). */
-function readList(text: string, field: string): number[] {
+function readList(text: string, field: ScreenField, label: string): number[] {
   const pieces = text.split(/[;\s]+/).filter((p) => p !== '');
-  if (pieces.length === 0) throw new Error(`${field}: enter at least one number`);
+  if (pieces.length === 0) throw new FieldProblem(field, EMPTY_FIELD[field]);
   return pieces.map((piece) => {
-    const read = readUserNumber(piece, field);
-    if (!read.ok) throw new Error(read.message);
+    const read = readUserNumber(piece, label);
+    if (!read.ok) throw new FieldProblem(field, read.message);
     return read.value;
   });
+}
+
+function FieldError(props: { field: ScreenField; problem: FieldProblem | null }) {
+  if (props.problem?.field !== props.field) return null;
+  return (
+    <span className="field__error" role="alert" data-error-for={props.field}>
+      {props.problem.message}
+    </span>
+  );
 }
 
 function Matrix(props: { status: ScreenStatus; diameterNm: number; x: number; onOpen: (runId: number) => void }) {
@@ -86,6 +113,7 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
   const [started, setStarted] = useState<ScreenStarted | null>(null);
   const [status, setStatus] = useState<ScreenStatus | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [fieldProblem, setFieldProblem] = useState<FieldProblem | null>(null);
   const runIds = started?.runs.map((r) => r.runId) ?? [];
   const active = status === null ? started !== null : status.finished < status.total;
 
@@ -110,16 +138,18 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
     event.preventDefault();
     if (campaignId === null) return;
     setError(null);
+    setFieldProblem(null);
     let xB: number[];
     let diameterNm: number[];
     let temperatureK: number;
     try {
-      const percents = readList(xText, 'compositions, at.%');
+      const percents = readList(xText, 'screenXB', 'compositions, at.%');
       xB = percents.map((v) => v / 100);
-      diameterNm = readList(dText, 'diameters, nm');
-      temperatureK = readList(tText, 'temperature, K')[0]!;
+      diameterNm = readList(dText, 'screenDiameter', 'diameters, nm');
+      temperatureK = readList(tText, 'screenTemperature', 'temperature, K')[0]!;
     } catch (problem) {
-      setError(problem instanceof Error ? problem.message : String(problem));
+      if (problem instanceof FieldProblem) setFieldProblem(problem);
+      else setError(problem instanceof Error ? problem.message : String(problem));
       return;
     }
     const result = await call('screen.start', { campaignId, xB, diameterNm, temperatureK });
@@ -136,6 +166,8 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
     if (!result.ok) setError(result.error.message);
   };
 
+  // All runs finished reads 100 %, whatever the last sweep count said.
+  const fraction = status === null ? 0 : status.finished >= status.total ? 1 : Math.min(1, status.progress);
   const kinds = status
     ? [
         ...new Set(
@@ -152,15 +184,33 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
         <form className="form-grid" onSubmit={submit} noValidate>
           <label>
             Compositions, at.% of the column element
-            <input name="screenXB" value={xText} onChange={(e) => setXText(e.target.value)} />
+            <input
+              name="screenXB"
+              value={xText}
+              onChange={(e) => setXText(e.target.value)}
+              aria-invalid={fieldProblem?.field === 'screenXB' ? true : undefined}
+            />
+            <FieldError field="screenXB" problem={fieldProblem} />
           </label>
           <label>
             Diameters, nm
-            <input name="screenDiameter" value={dText} onChange={(e) => setDText(e.target.value)} />
+            <input
+              name="screenDiameter"
+              value={dText}
+              onChange={(e) => setDText(e.target.value)}
+              aria-invalid={fieldProblem?.field === 'screenDiameter' ? true : undefined}
+            />
+            <FieldError field="screenDiameter" problem={fieldProblem} />
           </label>
           <label>
             Temperature, K
-            <input name="screenTemperature" value={tText} onChange={(e) => setTText(e.target.value)} />
+            <input
+              name="screenTemperature"
+              value={tText}
+              onChange={(e) => setTText(e.target.value)}
+              aria-invalid={fieldProblem?.field === 'screenTemperature' ? true : undefined}
+            />
+            <FieldError field="screenTemperature" problem={fieldProblem} />
           </label>
           <p className="small muted" style={{ gridColumn: '1 / -1', margin: 0 }}>
             Separate values by spaces. Every run stops at the answer and runs relaxed when the metals differ in size by
@@ -182,18 +232,20 @@ export function ScreenPanel(props: { onOpen: (runId: number) => void }) {
       {started ? (
         <div className="stack">
           <p className="small" data-testid="screen-summary">
-            {started.runs.length} runs for {started.elements.join(', ')} on {started.concurrency} worker(s)
+            {started.runs.length} run{started.runs.length === 1 ? '' : 's'} for {started.elements.join(', ')} on{' '}
+            {started.concurrency} worker(s)
             {status ? `: ${status.finished} of ${status.total} finished` : ''}
             {status?.elapsedMs ? `, ${(status.elapsedMs / 1000).toFixed(1)} s` : ''}.
           </p>
           <div
             className="sim-progress"
             role="progressbar"
-            aria-valuenow={Math.round(100 * (status?.progress ?? 0))}
+            data-testid="screen-progress"
+            aria-valuenow={Math.round(100 * fraction)}
             aria-valuemin={0}
             aria-valuemax={100}
           >
-            <div className="sim-progress__bar" style={{ width: `${100 * (status?.progress ?? 0)}%` }} />
+            <div className="sim-progress__bar" style={{ width: `${(100 * fraction).toFixed(1)}%` }} />
           </div>
           {started.skipped.length > 0 ? (
             <ul className="small" data-testid="screen-skipped">
