@@ -128,6 +128,57 @@ function gradientOf(problem: FlatProblem, theta: Float64Array, probs: Float64Arr
   return g;
 }
 
+/** Row i's upper-triangle outer products [1, x_i] ⊗ [1, x_i] (q = p + 1 entries per side) into `outer`. */
+function rowOuterProducts(x: Float64Array, i: number, p: number, xt: Float64Array, outer: Float64Array): void {
+  const q = p + 1;
+  xt[0] = 1;
+  for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
+  let t = 0;
+  for (let j = 0; j < q; j++) {
+    const xj = xt[j] as number;
+    for (let m = j; m < q; m++) outer[t++] = xj * (xt[m] as number);
+  }
+}
+
+/** blocks[b] += coefficients[b] · outer for every class-pair block b (each block an upper triangle). */
+function addBlocks(blocks: Float64Array, coefficients: Float64Array, outer: Float64Array): void {
+  const T = outer.length;
+  for (let b = 0; b < coefficients.length; b++) {
+    const a = coefficients[b] as number;
+    if (a === 0) continue;
+    const base = b * T;
+    for (let t = 0; t < T; t++) blocks[base + t] = (blocks[base + t] as number) + a * (outer[t] as number);
+  }
+}
+
+/** The symmetric (classes·q)² matrix from its class-pair blocks (k ≤ l), each stored as an upper triangle. */
+function blocksToMatrix(blocks: Float64Array, classes: number, q: number): Float64Array {
+  const T = (q * (q + 1)) / 2;
+  const d = classes * q;
+  const h = new Float64Array(d * d);
+  let b = 0;
+  for (let k = 0; k < classes; k++) {
+    for (let l = k; l < classes; l++) {
+      let t = b * T;
+      for (let j = 0; j < q; j++) {
+        for (let m = j; m < q; m++) {
+          const v = blocks[t++] as number;
+          const r1 = k * q + j;
+          const c1 = l * q + m;
+          const r2 = k * q + m;
+          const c2 = l * q + j;
+          h[r1 * d + c1] = v;
+          h[c1 * d + r1] = v;
+          h[r2 * d + c2] = v;
+          h[c2 * d + r2] = v;
+        }
+      }
+      b++;
+    }
+  }
+  return h;
+}
+
 /**
  * Exact Hessian (d × d, d = K(p+1)) from the probabilities at θ. The data part is block structured:
  * block (k, l) = Σ_i s_i p_ik (δ_kl − p_il) x̃_i x̃_iᵀ with x̃ = (1, x); only the K(K+1)/2 blocks k ≤ l and
@@ -148,46 +199,15 @@ function hessianOf(problem: FlatProblem, probs: Float64Array): Float64Array {
   for (let i = 0; i < n; i++) {
     const si = s[i] as number;
     if (si === 0) continue;
-    xt[0] = 1;
-    for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
-    let t = 0;
-    for (let j = 0; j < q; j++) {
-      const xj = xt[j] as number;
-      for (let m = j; m < q; m++) outer[t++] = xj * (xt[m] as number);
-    }
+    rowOuterProducts(x, i, p, xt, outer);
     let b = 0;
     for (let k = 0; k < K; k++) {
       const pk = si * (probs[i * K + k] as number);
       for (let l = k; l < K; l++) coefficients[b++] = pk * ((k === l ? 1 : 0) - (probs[i * K + l] as number));
     }
-    for (b = 0; b < blockCount; b++) {
-      const a = coefficients[b] as number;
-      if (a === 0) continue;
-      const base = b * T;
-      for (t = 0; t < T; t++) blocks[base + t] = (blocks[base + t] as number) + a * (outer[t] as number);
-    }
+    addBlocks(blocks, coefficients, outer);
   }
-  const h = new Float64Array(d * d);
-  let b = 0;
-  for (let k = 0; k < K; k++) {
-    for (let l = k; l < K; l++) {
-      let t = b * T;
-      for (let j = 0; j < q; j++) {
-        for (let m = j; m < q; m++) {
-          const v = blocks[t++] as number;
-          const r1 = k * q + j;
-          const c1 = l * q + m;
-          const r2 = k * q + m;
-          const c2 = l * q + j;
-          h[r1 * d + c1] = v;
-          h[c1 * d + r1] = v;
-          h[r2 * d + c2] = v;
-          h[c2 * d + r2] = v;
-        }
-      }
-      b++;
-    }
-  }
+  const h = blocksToMatrix(blocks, K, q);
   for (let k = 0; k < K; k++) {
     for (let j = 1; j < q; j++) {
       const index = k * q + j;
@@ -278,13 +298,7 @@ function newtonStep(problem: FlatProblem, probs: Float64Array, g: Float64Array):
   for (let i = 0; i < n; i++) {
     const si = s[i] as number;
     if (si === 0) continue;
-    xt[0] = 1;
-    for (let j = 0; j < p; j++) xt[j + 1] = x[i * p + j] as number;
-    let t = 0;
-    for (let j = 0; j < q; j++) {
-      const xj = xt[j] as number;
-      for (let m = j; m < q; m++) outer[t++] = xj * (xt[m] as number);
-    }
+    rowOuterProducts(x, i, p, xt, outer);
     const pl = probs[i * K + last] as number;
     const tail = pl - pl * pl;
     let b = 0;
@@ -295,34 +309,9 @@ function newtonStep(problem: FlatProblem, probs: Float64Array, g: Float64Array):
         coefficients[b++] = si * ((k === l ? pk : 0) - pk * pm + (pk + pm) * pl + tail);
       }
     }
-    for (b = 0; b < blockCount; b++) {
-      const a = coefficients[b] as number;
-      if (a === 0) continue;
-      const base = b * T;
-      for (t = 0; t < T; t++) blocks[base + t] = (blocks[base + t] as number) + a * (outer[t] as number);
-    }
+    addBlocks(blocks, coefficients, outer);
   }
-  const h = new Float64Array(dr * dr);
-  let b = 0;
-  for (let k = 0; k < R; k++) {
-    for (let l = k; l < R; l++) {
-      let t = b * T;
-      for (let j = 0; j < q; j++) {
-        for (let m = j; m < q; m++) {
-          const v = blocks[t++] as number;
-          const r1 = k * q + j;
-          const c1 = l * q + m;
-          const r2 = k * q + m;
-          const c2 = l * q + j;
-          h[r1 * dr + c1] = v;
-          h[c1 * dr + r1] = v;
-          h[r2 * dr + c2] = v;
-          h[c2 * dr + r2] = v;
-        }
-      }
-      b++;
-    }
-  }
+  const h = blocksToMatrix(blocks, R, q);
   for (let k = 0; k < R; k++)
     for (let l = 0; l < R; l++)
       for (let j = 1; j < q; j++) {
