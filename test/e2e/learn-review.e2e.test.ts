@@ -77,6 +77,17 @@ describe.skipIf(!available)('Model review with a trained model', () => {
     await expect
       .poll(() => page.getByTestId('loadings-chart').locator('.recharts-bar-rectangle').count())
       .toBeGreaterThan(3);
+    // Every loadings bar is labelled: one descriptor name per row (none skipped) and a value on each bar.
+    const loadings = page.getByTestId('loadings-chart');
+    const bars = await loadings.locator('.recharts-bar-rectangle').count();
+    const rows = await loadings.locator('.recharts-yAxis .recharts-cartesian-axis-tick').count();
+    const axes = await page.getByTestId('loadings-legend').locator('li').count();
+    expect(rows * axes).toBe(bars);
+    const values = await loadings.locator('.recharts-label-list text').allTextContents();
+    expect(values.length).toBe(bars);
+    for (const v of values) expect(v).toMatch(/^−?-?\d\.\d\d$/);
+    // One legend per chart, in the shared palette: the discriminant scatter names each class it draws.
+    expect(await page.getByTestId('lda-legend').locator('li').count()).toBe(seenTwice);
 
     const text = (await page.locator('main').textContent()) ?? '';
     expect(text).not.toMatch(/NaN|undefined|Infinity/);

@@ -9,7 +9,7 @@ import {
   Bar,
   BarChart,
   CartesianGrid,
-  Legend,
+  LabelList,
   Line,
   LineChart,
   ReferenceLine,
@@ -26,6 +26,8 @@ import { priorSourcesText } from '../../../shared-model/learn/screen-prior';
 import { useQuery } from '../api/hooks';
 import { useAppState } from '../app-state';
 import { Banner } from '../components/Banner';
+import { chartLegend } from '../charts/ChartLegend';
+import { DATA_STYLE, NEUTRAL, seriesColour } from '../charts/palette';
 import { ChartCard } from './model-review/ChartCard';
 import { ModelStatus } from './next-batches/ModelStatus';
 import {
@@ -151,13 +153,20 @@ function ReliabilityChart(props: { review: Ready }) {
           />
           <ZAxis dataKey="count" range={[30, 200]} name="outcomes" />
           <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
-          <Legend verticalAlign="top" />
+          {chartLegend(
+            [
+              { label: PREDICTOR_LABELS.model, colour: PREDICTOR_COLOURS.model, marker: 'line' },
+              { label: PREDICTOR_LABELS.physics, colour: PREDICTOR_COLOURS.physics, marker: 'line' },
+              { label: 'perfectly calibrated', colour: NEUTRAL.reference, marker: 'line', dash: '4 4', thin: true },
+            ],
+            'reliability-legend',
+          )}
           <ReferenceLine
             segment={[
               { x: 0, y: 0 },
               { x: 1, y: 1 },
             ]}
-            stroke="#9ca3af"
+            stroke={NEUTRAL.reference}
             strokeDasharray="4 4"
           />
           <Scatter
@@ -207,7 +216,13 @@ function TimelineChart(props: { review: Ready }) {
               return `week of ${String(w)}${r ? ` (${r.outcomes} outcomes)` : ''}`;
             }}
           />
-          <Legend verticalAlign="top" />
+          {chartLegend(
+            [
+              { label: PREDICTOR_LABELS.model, colour: PREDICTOR_COLOURS.model, marker: 'line' },
+              { label: PREDICTOR_LABELS.physics, colour: PREDICTOR_COLOURS.physics, marker: 'line' },
+            ],
+            'timeline-legend',
+          )}
           <Line
             dataKey="modelAccuracy"
             name={PREDICTOR_LABELS.model}
@@ -228,6 +243,12 @@ function TimelineChart(props: { review: Ready }) {
     </div>
   );
 }
+
+/** The loadings chart's two discriminant axes, in palette colours. */
+const LOADING_AXES = [
+  { key: 'axis1', name: 'axis 1', colour: seriesColour(0) },
+  { key: 'axis2', name: 'axis 2', colour: seriesColour(4) },
+] as const;
 
 function LdaPanel(props: { review: Ready }) {
   const { review } = props;
@@ -258,7 +279,10 @@ function LdaPanel(props: { review: Ready }) {
               label={yLabel(axes.y)}
             />
             <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(2)) : String(v))} />
-            <Legend verticalAlign="top" />
+            {chartLegend(
+              groups.map((g) => ({ label: g.name, colour: g.colour, marker: 'dot' as const })),
+              'lda-legend',
+            )}
             {groups.map((g) => (
               <Scatter key={g.classKey} name={g.name} data={g.points} fill={g.colour} isAnimationActive={false} />
             ))}
@@ -279,15 +303,38 @@ function LdaPanel(props: { review: Ready }) {
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={bars} layout="vertical" margin={{ top: 10, right: 20, bottom: 10, left: 10 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis type="number" domain={[-1, 1]} ticks={roundTicks(-1, 1, 0.5)} />
+            {/* Room beyond ±1 for the value labels at the bar ends. */}
+            <XAxis type="number" domain={[-1.25, 1.25]} ticks={roundTicks(-1, 1, 0.5)} />
             <YAxis type="category" dataKey="label" width={300} interval={0} tick={{ fontSize: 12 }} />
             <Tooltip formatter={(v) => (typeof v === 'number' ? Number(v.toFixed(3)) : String(v))} />
-            <Legend verticalAlign="top" />
-            <ReferenceLine x={0} stroke="#6b7280" />
-            <Bar dataKey="axis1" name="axis 1" fill="#2563eb" isAnimationActive={false} />
-            {review.lda.axes > 1 ? (
-              <Bar dataKey="axis2" name="axis 2" fill="#93c5fd" isAnimationActive={false} />
-            ) : null}
+            {chartLegend(
+              LOADING_AXES.slice(0, review.lda.axes > 1 ? 2 : 1).map((a) => ({
+                label: a.name,
+                colour: a.colour,
+                marker: 'bar' as const,
+              })),
+              'loadings-legend',
+            )}
+            <ReferenceLine x={0} stroke={NEUTRAL.reference} />
+            {LOADING_AXES.slice(0, review.lda.axes > 1 ? 2 : 1).map((a) => (
+              <Bar
+                key={a.key}
+                dataKey={a.key}
+                name={a.name}
+                fill={a.colour}
+                fillOpacity={DATA_STYLE.barOpacity}
+                stroke={a.colour}
+                isAnimationActive={false}
+              >
+                <LabelList
+                  dataKey={a.key}
+                  position="right"
+                  fontSize={11}
+                  fill={NEUTRAL.text}
+                  formatter={(v: unknown) => (typeof v === 'number' ? v.toFixed(2) : '')}
+                />
+              </Bar>
+            ))}
           </BarChart>
         </ResponsiveContainer>
       </div>

@@ -6,6 +6,7 @@
  * architecture and the structure-correlation bars. Colours of the architectures follow the Descriptor map.
  */
 import type { ReviewView } from '../../../../shared-model/api/learn';
+import { architectureColour, NEUTRAL, seriesColour, tint } from '../../charts/palette';
 import type { ClassKey } from '../../../../shared-model/learn/classes';
 import { describeClass } from '../../../../shared-model/learn/classes';
 import { PAIR_GROUPS } from '../../../../shared-model/learn/cross-validation';
@@ -13,20 +14,27 @@ import type { ClassifierFigures } from '../../../../shared-model/learn/metrics';
 
 type Ready = Extract<ReviewView, { status: 'ready' }>;
 
-/** One colour per class, the Descriptor map's where the kind is the same. */
+/**
+ * One colour per class from the shared palette (charts/palette.ts), the Descriptor map's where the kind is the
+ * same; B@A is the core@shell hue lighter, so the two core@shell classes read as one kind, two ways round.
+ */
 export const CLASS_COLOURS: Record<ClassKey, string> = {
-  alloy: '#2563eb',
-  'surface-enriched alloy': '#0891b2',
-  'A@B': '#c2410c',
-  'B@A': '#f59e0b',
-  Janus: '#7c3aed',
-  intermetallic: '#15803d',
-  hollow: '#be185d',
-  other: '#a16207',
+  alloy: architectureColour('alloy'),
+  'surface-enriched alloy': architectureColour('surface-enriched alloy'),
+  'A@B': architectureColour('core@shell'),
+  'B@A': tint(architectureColour('core@shell'), 0.55),
+  Janus: architectureColour('Janus'),
+  intermetallic: architectureColour('intermetallic'),
+  hollow: architectureColour('hollow'),
+  other: architectureColour('other'),
 };
 
 /** The three predictors of the table and charts, with their colours (the same in every chart). */
-export const PREDICTOR_COLOURS = { model: '#2563eb', physics: '#c2410c', majority: '#6b7280' } as const;
+export const PREDICTOR_COLOURS = {
+  model: seriesColour(0),
+  physics: seriesColour(1),
+  majority: NEUTRAL.reference,
+} as const;
 export const PREDICTOR_LABELS = {
   model: 'Learned model',
   physics: 'Physics alone',
