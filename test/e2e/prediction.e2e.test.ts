@@ -164,6 +164,14 @@ describe.skipIf(!available)('prediction views in the browser host', () => {
       .poll(() => detail.locator('[data-testid="isotherm-diameter"] svg .recharts-line').count())
       .toBeGreaterThan(0);
     expect(await detail.getByRole('table', { name: 'Segregation terms' }).textContent()).toMatch(/surface energy/);
+    // The ranked rows stay a few lines tall (the "why" column reads as lines), so the 480 px list shows several.
+    const heights = await rows().evaluateAll((trs) => trs.map((tr) => tr.getBoundingClientRect().height));
+    expect(Math.max(...heights)).toBeLessThan(200);
+    // What the user sees: opening the pair scrolls its detail to the top of the window.
+    await page.screenshot({ path: screenshotPath('candidates-pair-detail-opened') });
+    // The full page from the top: Chromium's full-page capture draws a sticky sidebar at the current scroll
+    // offset and leaves off-screen rows of an inner scroller unpainted, so capture it unscrolled.
+    await page.evaluate(() => window.scrollTo(0, 0));
     await page.screenshot({ path: screenshotPath('candidates-pair-detail'), fullPage: true });
   });
 

@@ -400,10 +400,13 @@ export function CandidatesView() {
                   <td>{fmt(row.p.terms.adsorbate)}</td>
                   <td>{fmt(row.p.mixingEnthalpyKjPerMol, 1)}</td>
                   <td>{airText(row)}</td>
-                  <td className="small" data-testid="meets">
+                  <td className="small" data-testid="meets" style={{ minWidth: 150 }}>
                     {row.miss === null ? 'yes' : `no: ${row.miss}`}
                   </td>
-                  <td className="notes-cell small">{row.p.reason}</td>
+                  {/* Wide enough to read as lines, not a word a line (which made each row ~500 px tall). */}
+                  <td className="notes-cell small" style={{ minWidth: 480 }}>
+                    {row.p.reason}
+                  </td>
                 </tr>
               ))}
             </tbody>
