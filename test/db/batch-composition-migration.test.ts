@@ -3,10 +3,9 @@
  * at.% (size.xBPct) opens, its inputs now state the atomic fraction (size.xB), and they read, validate and
  * design again as before.
  */
-import { cpSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { defaultMigrationsDir } from '../../db/migrate';
 import { openStore } from '../../db/store';
 import type { ServiceContext } from '../../electron/services/context';
@@ -16,20 +15,11 @@ import { batchDesignInputSchema } from '../../shared-model/recipes/design-input'
 import { dispatchValue } from '../support/dispatch';
 import { seededCatalog } from '../support/design-stages';
 import { auSeeds, ptNi } from '../support/sample-batches';
-
-const folders: string[] = [];
-const tempFolder = (prefix: string) => {
-  const folder = mkdtempSync(join(tmpdir(), prefix));
-  folders.push(folder);
-  return folder;
-};
-afterEach(() => {
-  for (const folder of folders.splice(0)) rmSync(folder, { recursive: true, force: true });
-});
+import { tempDir } from '../support/temp-dirs';
 
 /** A store at schema version 5, the last before inputs used x_B. */
 function storeBeforeMigration6(dataDir: string) {
-  const dir = tempFolder('pairwright-migrations-');
+  const dir = tempDir('pairwright-migrations-');
   for (const file of readdirSync(defaultMigrationsDir()).filter((f) => /^000[1-5]_/.test(f))) {
     cpSync(join(defaultMigrationsDir(), file), join(dir, file));
   }
@@ -46,7 +36,7 @@ function oldInputs(request: object, xBPct: number | null): string {
 
 describe('migration 0006: batch composition as a fraction', () => {
   it('rewrites saved inputs from at.% to x_B; they read, validate and design as before', async () => {
-    const dataDir = tempFolder('pairwright-test-');
+    const dataDir = tempDir('pairwright-test-');
     const old = storeBeforeMigration6(dataDir);
     expect(old.db.pragma('user_version', { simple: true })).toBe(5);
     const insert = old.db.prepare(

@@ -3,29 +3,19 @@
  * batches — characterized, marked imported history, the observed label as the observation (a failed row:
  * a note, no label) — and deleting the import then removes those batches.
  */
-import { cpSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { listBatchSummaries } from '../../db/repositories/batches';
 import { getObservation } from '../../db/repositories/outcome-observations';
 import { defaultMigrationsDir } from '../../db/migrate';
 import { openStore } from '../../db/store';
-
-const folders: string[] = [];
-const tempFolder = (prefix: string) => {
-  const folder = mkdtempSync(join(tmpdir(), prefix));
-  folders.push(folder);
-  return folder;
-};
-afterEach(() => {
-  for (const folder of folders.splice(0)) rmSync(folder, { recursive: true, force: true });
-});
+import { tempDir } from '../support/temp-dirs';
 
 describe('migration 0012: imported history rows become batches', () => {
   it('writes a batch and an observation for every row imported before it', () => {
-    const dataDir = tempFolder('pairwright-test-');
-    const dir = tempFolder('pairwright-migrations-');
+    const dataDir = tempDir('pairwright-test-');
+    const dir = tempDir('pairwright-migrations-');
     for (const file of readdirSync(defaultMigrationsDir()).filter((f) => /^00(0\d|1[01])_/.test(f))) {
       cpSync(join(defaultMigrationsDir(), file), join(dir, file));
     }

@@ -3,29 +3,19 @@
  * marked made may take more than was on hand); its rows keep their ids and values, and the batch history
  * table is there.
  */
-import { cpSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { ensureCatalogSeeded } from '../../db/repositories/catalog';
 import { listInventory } from '../../db/repositories/inventory';
 import { defaultMigrationsDir } from '../../db/migrate';
 import { openStore } from '../../db/store';
-
-const folders: string[] = [];
-const tempFolder = (prefix: string) => {
-  const folder = mkdtempSync(join(tmpdir(), prefix));
-  folders.push(folder);
-  return folder;
-};
-afterEach(() => {
-  for (const folder of folders.splice(0)) rmSync(folder, { recursive: true, force: true });
-});
+import { tempDir } from '../support/temp-dirs';
 
 describe('migration 0009: inventory may go below zero; batch history', () => {
   it('keeps every inventory row with its id and values', () => {
-    const dataDir = tempFolder('pairwright-test-');
-    const dir = tempFolder('pairwright-migrations-');
+    const dataDir = tempDir('pairwright-test-');
+    const dir = tempDir('pairwright-migrations-');
     for (const file of readdirSync(defaultMigrationsDir()).filter((f) => /^000[1-8]_/.test(f))) {
       cpSync(join(defaultMigrationsDir(), file), join(dir, file));
     }
